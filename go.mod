@@ -1,0 +1,28 @@
+module github.com/whittle-search/whittle
+
+go 1.26.8
+
+require (
+	github.com/alecthomas/participle/v2 v2.1.4
+	github.com/blevesearch/bleve/v2 v2.6.3
+	github.com/blevesearch/go-porterstemmer v1.0.3
+	github.com/bojanz/currency v1.4.2
+	github.com/google/go-cmp v0.7.0
+	golang.org/x/term v0.48.0
+	golang.org/x/text v0.44.0
+)
+
+require (
+	github.com/RoaringBitmap/roaring/v2 v2.14.5 // indirect
+	github.com/bits-and-blooms/bitset v1.24.2 // indirect
+	github.com/blevesearch/bleve_index_api v1.4.1 // indirect
+	github.com/blevesearch/geo v0.2.8 // indirect
+	github.com/blevesearch/segment v0.9.1 // indirect
+	github.com/blevesearch/snowballstem v0.9.0 // indirect
+	github.com/blevesearch/upsidedown_store_api v1.0.2 // indirect
+	github.com/cockroachdb/apd/v3 v3.2.1 // indirect
+	github.com/json-iterator/go v0.0.0-20171115153421-f7279a603ede // indirect
+	github.com/mschoch/smat v0.2.0 // indirect
+	go.etcd.io/bbolt v1.4.0 // indirect
+	golang.org/x/sys v0.50.0 // indirect
+)
