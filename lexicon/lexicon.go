@@ -1,0 +1,255 @@
+package lexicon
+
+import (
+	"embed"
+	"errors"
+	"fmt"
+	"io/fs"
+	"os"
+
+	"strings"
+	"sync"
+)
+
+//go:embed data/*.wlx
+var defaultFiles embed.FS
+
+// Lexicon is a loaded vocabulary with its matcher. It is immutable after
+// loading and safe for concurrent use.
+type Lexicon struct {
+	root   *node
+	byKind map[Kind][]*Entry
+	byName map[Kind]map[string]*Entry
+	maxLen int
+}
+
+// node is one step of the word trie: children by word key, and the entries
+// whose phrase ends here.
+type node struct {
+	next    map[string]*node
+	entries []*Entry
+}
+
+var (
+	defaultOnce sync.Once
+	defaultLex  *Lexicon
+	defaultErr  error
+)
+
+// Default returns the vocabulary embedded in whittle. It is loaded once;
+// an error in the embedded files is a build defect and panics.
+func Default() *Lexicon {
+	defaultOnce.Do(func() {
+		sub, err := fs.Sub(defaultFiles, "data")
+		if err == nil {
+			defaultLex, defaultErr = Load(sub)
+		} else {
+			defaultErr = err
+		}
+	})
+	if defaultErr != nil {
+		panic("whittle: embedded lexicon: " + defaultErr.Error())
+	}
+	return defaultLex
+}
+
+// LoadDir loads a lexicon from the .wlx files in dir. A kind whose file is
+// missing from dir is taken from the embedded default, so a shop can
+// replace only the files it cares about.
+func LoadDir(dir string) (*Lexicon, error) {
+	st, err := os.Stat(dir)
+	if err != nil {
+		return nil, fmt.Errorf("lexicon directory: %w", err)
+	}
+	if !st.IsDir() {
+		return nil, fmt.Errorf("lexicon directory: %s is not a directory", dir)
+	}
+	return Load(overlayFS{top: os.DirFS(dir), dir: dir})
+}
+
+// overlayFS serves a file from top when it is there, else the embedded one.
+type overlayFS struct {
+	top fs.FS
+	dir string
+}
+
+func (o overlayFS) Open(name string) (fs.File, error) {
+	f, err := o.top.Open(name)
+	if err == nil || !errors.Is(err, fs.ErrNotExist) {
+		return f, err
+	}
+	return defaultFiles.Open("data/" + name)
+}
+
+// Load reads one file per kind (named by [Kind.File]) from fsys and builds
+// the matcher. Errors are *FileError values where a line is at fault.
+func Load(fsys fs.FS) (*Lexicon, error) {
+	l := &Lexicon{
+		root:   &node{},
+		byKind: make(map[Kind][]*Entry),
+		byName: make(map[Kind]map[string]*Entry),
+	}
+	var errs []error
+	for _, k := range Kinds {
+		f, err := fsys.Open(k.File())
+		if err != nil {
+			errs = append(errs, fmt.Errorf("lexicon: %w", err))
+			continue
+		}
+		entries, err := ParseFile(k.File(), k, f)
+		f.Close()
+		if err != nil {
+			errs = append(errs, err)
+			continue
+		}
+		if err := l.add(k, entries); err != nil {
+			errs = append(errs, err)
+		}
+	}
+	if err := l.checkParents(); err != nil {
+		errs = append(errs, err)
+	}
+	if len(errs) > 0 {
+		return nil, errors.Join(errs...)
+	}
+	return l, nil
+}
+
+// add indexes the entries of one kind and refuses a phrase defined twice.
+func (l *Lexicon) add(k Kind, entries []*Entry) error {
+	names := make(map[string]*Entry)
+	type seenAt struct {
+		e      *Entry
+		phrase string
+	}
+	seen := make(map[string]seenAt)
+	for _, e := range entries {
+		for _, p := range append([]string{e.Name}, e.Aliases...) {
+			key := strings.Join(phraseKeys(p), " ")
+			if prev, dup := seen[key]; dup && prev.e != e {
+				how := "is already defined"
+				if prev.phrase != p {
+					how = fmt.Sprintf("matches the same stemmed words (%q) as %q", key, prev.phrase)
+				}
+				return &FileError{File: e.File, Line: e.Line, Column: 1,
+					Msg: fmt.Sprintf("%q %s on line %d", p, how, prev.e.Line)}
+			}
+			seen[key] = seenAt{e, p}
+			l.insert(p, e)
+		}
+		names[e.Name] = e
+	}
+	l.byKind[k] = entries
+	l.byName[k] = names
+	return nil
+}
+
+func (l *Lexicon) checkParents() error {
+	for _, e := range l.byKind[ProductType] {
+		if e.Parent != "" && l.byName[ProductType][e.Parent] == nil {
+			return &FileError{File: e.File, Line: e.Line, Column: 1,
+				Msg: fmt.Sprintf("parent %q of %q is not a product type", e.Parent, e.Name)}
+		}
+	}
+	return nil
+}
+
+// phraseKeys splits a phrase into word keys.
+func phraseKeys(p string) []string {
+	ws := Words(p)
+	keys := make([]string, len(ws))
+	for i, w := range ws {
+		keys[i] = Key(w)
+	}
+	return keys
+}
+
+// insert adds the phrase under its word keys and, for hyphenated or
+// multi-word phrases, under the joined form too ("v-neck" also as "vneck").
+func (l *Lexicon) insert(p string, e *Entry) {
+	keys := phraseKeys(p)
+	l.insertKeys(keys, e)
+	if ws := Words(p); len(ws) > 1 && len(ws) <= 3 {
+		l.insertKeys([]string{Key(strings.Join(ws, ""))}, e)
+	}
+}
+
+func (l *Lexicon) insertKeys(keys []string, e *Entry) {
+	if len(keys) == 0 {
+		return
+	}
+	n := l.root
+	for _, k := range keys {
+		if n.next == nil {
+			n.next = make(map[string]*node)
+		}
+		c := n.next[k]
+		if c == nil {
+			c = &node{}
+			n.next[k] = c
+		}
+		n = c
+	}
+	for _, have := range n.entries {
+		if have == e {
+			return
+		}
+	}
+	n.entries = append(n.entries, e)
+	if len(keys) > l.maxLen {
+		l.maxLen = len(keys)
+	}
+}
+
+// Match finds the longest phrase of the lexicon that starts at keys[0],
+// where keys are word keys as made by [Key]. It returns how many words the
+// phrase covers and the entries it names (several when the same phrase is,
+// say, both a colour and a material), or 0 and nil.
+func (l *Lexicon) Match(keys []string) (n int, entries []*Entry) {
+	cur := l.root
+	for i, k := range keys {
+		c := cur.next[k]
+		if c == nil {
+			break
+		}
+		cur = c
+		if len(c.entries) > 0 {
+			n, entries = i+1, c.entries
+		}
+	}
+	return n, entries
+}
+
+// MaxPhraseWords is the number of words in the longest phrase.
+func (l *Lexicon) MaxPhraseWords() int { return l.maxLen }
+
+// Entries returns the entries of kind k in file order. The slice is shared:
+// do not modify it.
+func (l *Lexicon) Entries(k Kind) []*Entry { return l.byKind[k] }
+
+// Lookup returns the entry of kind k whose canonical name is name.
+func (l *Lexicon) Lookup(k Kind, name string) (*Entry, bool) {
+	e, ok := l.byName[k][name]
+	return e, ok
+}
+
+// Counts returns how many entries each kind has, for reports.
+func (l *Lexicon) Counts() map[Kind]int {
+	out := make(map[Kind]int, len(l.byKind))
+	for k, es := range l.byKind {
+		out[k] = len(es)
+	}
+	return out
+}
+
+// SlotsOf returns the measure slots of a product type, inherited from the
+// nearest ancestor that has any.
+func (l *Lexicon) SlotsOf(e *Entry) []Slot {
+	for seen := 0; e != nil && seen < 32; seen++ {
+		if len(e.Slots) > 0 {
+			return e.Slots
+		}
+		e = l.byName[ProductType][e.Parent]
+	}
+	return nil
+}
