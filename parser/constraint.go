@@ -1,0 +1,120 @@
+package parser
+
+// Constraint is one tagged span of a query.
+type Constraint struct {
+	Kind Kind
+	// Start and End are byte offsets into the raw query: Text is
+	// query[Start:End].
+	Start, End int
+	Text       string
+	Strictness Strictness
+	// Excluded means the shopper asked for this NOT to be there
+	// ("-leather", "not white", "without hood").
+	Excluded bool
+	// Inferred means a value or unit was filled in by inference, not typed.
+	Inferred bool
+	// Evidence is a short reason for the reading, e.g. "unit from product
+	// type lens".
+	Evidence string
+
+	// Name is the canonical lexicon name, for product types, colours,
+	// patterns, silhouettes, materials, audiences and brands.
+	Name string
+	// Category and Parent describe a product type.
+	Category, Parent string
+	// Measure, Price, Size and Spec hold the value of a constraint of
+	// that kind; they are nil for other kinds.
+	Measure *Measure
+	Price   *Price
+	Size    *Size
+	Spec    *Spec
+	// Target is what a compatibility constraint must fit ("jx-10").
+	Target string
+	// Code is a part number, upper-cased ("XR-2200").
+	Code string
+}
+
+// Span returns the constraint's byte offsets.
+func (c Constraint) Span() (start, end int) { return c.Start, c.End }
+
+// Measure is a quantity with a unit: a point value, or a range where Min
+// or Max (or both) is set. Amounts are in Unit; Base amounts in BaseUnit.
+type Measure struct {
+	// Dimension names what is measured ("focal_length", "diagonal",
+	// "width"); it comes from the product type's slot where one fits, else
+	// it is the quantity's name.
+	Dimension string
+	// Quantity is the physical quantity: length, mass, volume, power,
+	// voltage, current, charge, data or time. Empty for a unitless number.
+	Quantity string
+	// Unit and BaseUnit are unit symbols ("in", "mm"). Unit is empty when
+	// no unit could be typed or inferred.
+	Unit, BaseUnit string
+	// Amount and BaseAmount are set for a point value.
+	Amount, BaseAmount *float64
+	// Min and Max bound a range (either may be nil), in Unit; BaseMin and
+	// BaseMax are the same bounds in BaseUnit.
+	Min, Max, BaseMin, BaseMax *float64
+}
+
+// Price is a bound on price. A bare price ("$40") is read as a ceiling.
+// Amounts are decimal strings rounded to the currency's minor unit
+// ("90.00"), never floats.
+type Price struct {
+	Min, Max *string
+	// Currency is the ISO 4217 code.
+	Currency string
+}
+
+// Size is a garment or shoe size.
+type Size struct {
+	// System is one of: letter (xs..5xl), numeric, waist_inseam, shoe, fit
+	// (petite, tall, plus).
+	System string
+	// Value is the normalised size: "l", "8", "32x30", "9.5", "petite".
+	Value string
+	// Width is a shoe width ("wide", "narrow"), if given.
+	Width string
+}
+
+// Spec is a standard designation: a nominal lumber size, a tyre code, a
+// wire gauge, a screw thread, a paper size or a battery size.
+type Spec struct {
+	// System is one of: lumber, tyre, awg, metric_thread, unified_thread,
+	// paper, battery.
+	System string
+	// Designation is the normalised code ("2x4", "225/45R17", "M8x1.25").
+	Designation string
+	// Dimensions are the standard's sizes in millimetres ("thickness",
+	// "width" for lumber; "overall_diameter" for tyres).
+	Dimensions map[string]float64
+	// Attributes are other facts the standard gives (voltage, pitch kind).
+	Attributes map[string]string
+	// Standard names the standard the values come from ("PS 20").
+	Standard string
+}
+
+// Result is what [Parse] understood of one query.
+type Result struct {
+	Query string
+	// Category is the product category the query is about, from its product
+	// type or its standard designations, or "" when nothing says.
+	Category    string
+	Constraints []Constraint
+	// Unrecognised lists the words that no lexicon entry or rule tagged;
+	// they are kept as keyword constraints too. Unknown is not an error.
+	Unrecognised []string
+	// Errors are the parts of the query that are badly formed.
+	Errors ErrorList
+}
+
+// Of returns the constraints of kind k, in query order.
+func (r *Result) Of(k Kind) []Constraint {
+	var out []Constraint
+	for _, c := range r.Constraints {
+		if c.Kind == k {
+			out = append(out, c)
+		}
+	}
+	return out
+}

@@ -1,0 +1,116 @@
+package parser_test
+
+import (
+	"encoding/json"
+	"fmt"
+	"os"
+
+	"github.com/whittle-search/whittle/parser"
+)
+
+func ExampleParse() {
+	r := parser.Parse("charcoal merino crew sweater size l under $90")
+	fmt.Println("category:", r.Category)
+	for _, c := range r.Constraints {
+		fmt.Printf("%-12s %-10q %-12s %s\n", c.Kind, c.Text, c.Value(), c.Strictness)
+	}
+	// Output:
+	// category: apparel
+	// colour       "charcoal" charcoal     firm
+	// material     "merino"   merino       soft
+	// silhouette   "crew"     crew         soft
+	// product_type "sweater"  sweater      firm
+	// size         "size l"   l (letter)   hard
+	// price        "under $90" ≤ 90.00 USD  firm
+}
+
+func ExampleParse_inferredUnit() {
+	r := parser.Parse("85 lens")
+	m := r.Of(parser.KindMeasure)[0]
+	fmt.Println(m.Value(), m.Measure.Dimension, m.Inferred)
+	fmt.Println(m.Evidence)
+	// Output:
+	// 85 mm focal_length true
+	// unit mm from product type lens (focal_length 4..1200)
+}
+
+func ExampleParse_errors() {
+	r := parser.Parse("1/0 lens")
+	fmt.Println(r.Errors[0].Render())
+	fmt.Println(r.Of(parser.KindProductType)[0].Name)
+	// Output:
+	// 1/0 lens
+	// ^^^
+	// 1/0 divides by zero
+	// lens
+}
+
+func ExampleParseWith() {
+	r := parser.ParseWith("under $50 rain jacket", parser.Options{Currency: "CAD"})
+	p := r.Of(parser.KindPrice)[0].Price
+	fmt.Println(*p.Max, p.Currency)
+	// Output: 50.00 CAD
+}
+
+func ExampleDefaultStrictness() {
+	fmt.Println(parser.DefaultStrictness(parser.KindSize), parser.DefaultStrictness(parser.KindColour), parser.DefaultStrictness(parser.KindPattern))
+	// Output: hard firm soft
+}
+
+func ExampleStrictness_Down() {
+	for s := parser.Hard; ; s = s.Down() {
+		fmt.Print(s, " ")
+		if s == parser.Filler {
+			break
+		}
+	}
+	fmt.Println()
+	// Output: hard firm soft filler
+}
+
+func ExampleParseStrictness() {
+	s, err := parser.ParseStrictness("firm")
+	fmt.Println(s, s > parser.Soft, err)
+	_, err = parser.ParseStrictness("strict")
+	fmt.Println(err)
+	// Output:
+	// firm true <nil>
+	// unknown strictness "strict" (want filler, soft, firm or hard)
+}
+
+func ExampleResult_Of() {
+	r := parser.Parse("2x6 12 ft")
+	s := r.Of(parser.KindSpec)[0].Spec
+	fmt.Println(s.System, s.Designation, s.Dimensions["thickness"], s.Dimensions["width"], "mm")
+	// Output: lumber 2x6 38 140 mm
+}
+
+func ExampleResult_WriteText() {
+	parser.Parse("not white -leather sneakers").WriteText(os.Stdout, parser.TextStyle{})
+	// Output:
+	// query     not white -leather sneakers
+	// spans     1──────── 2─────── 3───────
+	// category  footwear
+	//
+	// #  span       kind          value        strictness  evidence
+	// 1  not white  colour        not white    firm        colour lexicon; excluded by "not"
+	// 2  -leather   material      not leather  soft        material lexicon; excluded by "-"
+	// 3  sneakers   product_type  sneaker      firm        product_type lexicon; head product type
+}
+
+func ExampleResult_MarshalJSON() {
+	b, _ := json.Marshal(parser.Parse("under €35"))
+	fmt.Println(string(b))
+	// Output:
+	// {"query":"under €35","category":"","constraints":[{"kind":"price","text":"under €35","start":0,"end":11,"strictness":"firm","excluded":false,"inferred":false,"evidence":"\"under\" sets a ceiling","min":null,"max":"35.00","currency":"EUR"}],"unrecognised":[],"errors":[]}
+}
+
+func ExampleConstraint_Value() {
+	for _, c := range parser.Parse("225/45r17 tyres for korvane jx-10").Constraints {
+		fmt.Println(c.Kind, "→", c.Value())
+	}
+	// Output:
+	// spec → 225/45R17 (tyre)
+	// product_type → tyre
+	// compatibility → fits korvane jx-10
+}

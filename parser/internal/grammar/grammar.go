@@ -1,0 +1,358 @@
+package grammar
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/alecthomas/participle/v2"
+	"github.com/alecthomas/participle/v2/lexer"
+)
+
+// Item is one structured piece of a query; exactly one field is set. A
+// query is a sequence of items and plain tokens: plain words never reach
+// the grammar (see [Starts]). Space is a token of its own, so the grammar
+// can tell "50mm" and "xr-2200" (no space inside) from a number and a word
+// that merely follow each other.
+type Item struct {
+	Quoted  *Quoted
+	Between *Between
+	Compare *Compare
+	Tyre    *Tyre
+	Value   *Value
+	Code    *Code
+	Exclude *Exclude
+}
+
+// numeric is what may start with a number: a tyre size or a value.
+type numeric struct {
+	Tyre  *Tyre  `parser:"  @@"`
+	Value *Value `parser:"| @@"`
+}
+
+// Quoted is a phrase in quotation marks. Closed is false when the query
+// ends before the closing mark.
+type Quoted struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Open   string   `parser:"@Quote"`
+	Inner  []string `parser:"@~Quote*"`
+	Closed bool     `parser:"@Quote?"`
+}
+
+// Exclude is a minus sign stuck to a word or phrase: "-leather".
+type Exclude struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Dash   string  `parser:"@Dash"`
+	Quoted *Quoted `parser:"( @@"`
+	Word   string  `parser:"| @(Word | Unit | CurWord) )"`
+}
+
+// Between is "between A and B".
+type Between struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	From *Single `parser:"'between' Space @@"`
+	To   *Single `parser:"Space 'and' Space @@"`
+}
+
+// Compare is a comparison word or sign before a value: "under $90",
+// "at least 2 tb", "<= 30".
+type Compare struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Op  string  `parser:"@( 'under' | 'below' | 'over' | 'above' | 'max' | 'min' | 'maximum' | 'minimum' | 'upto' | 'within' | Op | 'less' Space 'than' | 'more' Space 'than' | 'fewer' Space 'than' | 'greater' Space 'than' | 'at' Space ('least' | 'most') | 'up' Space 'to' | 'no' Space ('more' | 'less') Space 'than')"`
+	Val *Single `parser:"Space? @@"`
+}
+
+// Tyre is an ISO metric tyre size: "225/45R17", "225/45 r17".
+type Tyre struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Width        string `parser:"@Number Slash"`
+	Aspect       string `parser:"@Number Space?"`
+	Construction string `parser:"@('r' | 'zr' | 'd' | 'b' | 'rf')"`
+	Rim          string `parser:"Space? @Number"`
+}
+
+// Value is a single value, or a range of two, with an optional trailing
+// bound word: "20-30 mm", "$20 to $30", "$90 max", "2 tb or more".
+type Value struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	From *Single `parser:"@@"`
+	To   *Single `parser:"( Space? (Dash | 'to') Space? @@ )?"`
+	Post string  `parser:"( Space? @('max' | 'min' | 'maximum' | 'minimum' | 'or' Space ('less' | 'more' | 'under' | 'over' | 'fewer' | 'lower' | 'higher' | 'below' | 'above' | 'cheaper') | 'and' Space ('under' | 'up' | 'over' | 'below' | 'above')) | @Plus )?"`
+}
+
+// Single is a price or a quantity (possibly a dimension of several).
+type Single struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Money *Money `parser:"  @@"`
+	Dims  *Dims  `parser:"| @@"`
+}
+
+// Money is an amount after a currency symbol: "$90", "€ 35". An amount
+// with the currency after it ("35 eur", "35€") is a [Quant] with Currency
+// set.
+type Money struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Symbol string `parser:"@Cur Space?"`
+	Amount *Num   `parser:"@@"`
+}
+
+// Dims is one quantity or several joined by "x": "18x18", "2x4x8",
+// `24"w x 36"h`, "10' x 12'".
+type Dims struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Parts []*Quant `parser:"@@ ( Space? ('x' | Times | 'by') Space? @@ )*"`
+}
+
+// Quant is a number with an optional unit, mark or currency after it, and
+// an optional one-letter label after a mark or unit (`24"w`).
+type Quant struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Num      *Num   `parser:"@@"`
+	Mark     string `parser:"( @Mark"`
+	Unit     string `parser:"| (Space | Dash)? @Unit"`
+	Currency string `parser:"| Space? @(CurWord | Cur) )?"`
+	Label    string `parser:"@('w' | 'h' | 'd' | 'l')?"`
+}
+
+// Num is a number: whole or decimal, a fraction ("3/4", "½"), or a mixed
+// number ("3 1/2", "3-1/2", "3½").
+type Num struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Only  *Frac  `parser:"(  @@"`
+	Whole string `parser:"| @Number"`
+	Frac  *Frac  `parser:"   ( (Space | Dash)? @@ )? )"`
+}
+
+// Frac is a fraction: "n/d" or a vulgar fraction character.
+type Frac struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Num    string `parser:"(  @Number Slash"`
+	Den    string `parser:"   @Number"`
+	Vulgar string `parser:"| @Vulgar )"`
+}
+
+// Code is a run of letters and digits with no space inside, that starts
+// with letters and holds a digit: "xr-2200", "cr2032", "m8x1.25", "a4".
+type Code struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Parts []string `parser:"@(Word | Unit | CurWord) @(Dash | '.')? @Number ( @(Dash | '.' | Slash)? @(Number | Word | Unit | CurWord) )*"`
+}
+
+func build[T any]() *participle.Parser[T] {
+	return participle.MustBuild[T](
+		participle.Lexer(newDefinition()),
+		participle.UseLookahead(12),
+	)
+}
+
+// One parser per kind of opening token, built once: dispatching on the
+// first token spares the grammar from trying alternatives that cannot
+// match, which is most of participle's cost.
+var (
+	numericParser = build[numeric]()
+	valueParser   = build[Value]()
+	quotedParser  = build[Quoted]()
+	excludeParser = build[Exclude]()
+	compareParser = build[Compare]()
+	betweenParser = build[Between]()
+	codeParser    = build[Code]()
+)
+
+// String returns the grammar in EBNF, one parser after another, for the
+// golden test.
+func String() string {
+	var b strings.Builder
+	for _, p := range []struct {
+		name string
+		s    fmt.Stringer
+	}{
+		{"number", numericParser}, {"currency", valueParser}, {"quote", quotedParser},
+		{"dash", excludeParser}, {"comparison", compareParser}, {"between", betweenParser},
+		{"code", codeParser},
+	} {
+		fmt.Fprintf(&b, "# item opened by a %s\n%s\n\n", p.name, p.s)
+	}
+	return b.String()
+}
+
+// window bounds how many tokens one item may span; a longer run is parsed
+// as several items.
+const window = 24
+
+// ParseItem parses the structured item that starts at toks[0] and returns
+// it with the number of tokens it covers. toks is a tail of what [Tokens]
+// returned, so it ends with the EOF token. It returns nil and 0 when no
+// structure starts there (the caller then treats toks[0] as a plain
+// token).
+func ParseItem(toks []lexer.Token) (*Item, int) {
+	if len(toks) < 2 {
+		return nil, 0
+	}
+	if len(toks) > window+1 {
+		cut := make([]lexer.Token, window+1)
+		copy(cut, toks[:window])
+		cut[window] = lexer.Token{Type: lexer.EOF, Pos: toks[window].Pos}
+		toks = cut
+	}
+	var (
+		it  Item
+		end int
+		ok  bool
+	)
+	t := toks[0]
+	if v, n := quickQuant(toks); n > 0 {
+		return &Item{Value: v}, n
+	}
+	switch {
+	case t.Type == tyNumber || t.Type == tyVulgar:
+		var n *numeric
+		if n, end, ok = run(numericParser, toks); ok {
+			it.Tyre, it.Value = n.Tyre, n.Value
+		}
+	case t.Type == tyCur:
+		it.Value, end, ok = run(valueParser, toks)
+	case t.Type == tyQuote:
+		it.Quoted, end, ok = run(quotedParser, toks)
+	case t.Type == tyDash:
+		it.Exclude, end, ok = run(excludeParser, toks)
+	case t.Value == "between":
+		it.Between, end, ok = run(betweenParser, toks)
+	case t.Type == tyOp || itemWords[t.Value]:
+		if it.Compare, end, ok = run(compareParser, toks); !ok {
+			it.Code, end, ok = run(codeParser, toks)
+		}
+	default:
+		it.Code, end, ok = run(codeParser, toks)
+	}
+	if !ok {
+		return nil, 0
+	}
+	n := 0
+	for n < len(toks) && toks[n].Pos.Offset < end {
+		n++
+	}
+	if n == 0 {
+		return nil, 0
+	}
+	return &it, n
+}
+
+// run parses one T from the front of toks (which ends with EOF), and
+// returns it with the byte offset where it ends.
+func run[T any](p *participle.Parser[T], toks []lexer.Token) (*T, int, bool) {
+	peek, err := lexer.Upgrade(&sliceLexer{toks: toks})
+	if err != nil {
+		return nil, 0, false
+	}
+	v, err := p.ParseFromLexer(peek, participle.AllowTrailing(true))
+	if err != nil || v == nil {
+		return nil, 0, false
+	}
+	return v, peek.Peek().Pos.Offset, true
+}
+
+// sliceLexer replays a token slice.
+type sliceLexer struct {
+	toks []lexer.Token
+	i    int
+}
+
+func (l *sliceLexer) Next() (lexer.Token, error) {
+	if l.i >= len(l.toks) {
+		return lexer.Token{Type: lexer.EOF}, nil
+	}
+	t := l.toks[l.i]
+	l.i++
+	return t, nil
+}
+
+// newDefinition makes the lexer definition; calling it (rather than naming
+// Definition{}) makes the token table initialise before Parser.
+func newDefinition() Definition {
+	_ = symbols
+	return Definition{}
+}
+
+// quickQuant builds, without the grammar, the tree the grammar gives for
+// the commonest numeric item: a whole or decimal number with an optional
+// unit ("85", "50mm", "12 ft", "60-inch") that nothing after it extends.
+// A test checks that it agrees with the grammar wherever it answers.
+func quickQuant(toks []lexer.Token) (*Value, int) {
+	if toks[0].Type != tyNumber {
+		return nil, 0
+	}
+	n := 1
+	unit := ""
+	at := func(i int) lexer.Token {
+		if i < len(toks) {
+			return toks[i]
+		}
+		return toks[len(toks)-1]
+	}
+	if u := at(n); u.Type == tyUnit {
+		unit, n = u.Value, n+1
+	} else if (u.Type == tySpace || u.Type == tyDash) && at(n+1).Type == tyUnit {
+		unit, n = at(n+1).Value, n+2
+	}
+	next := at(n)
+	switch next.Type {
+	case lexer.EOF:
+	case tySpace:
+		after := at(n + 1)
+		switch after.Type {
+		case lexer.EOF, tyQuote, tyPunct:
+		case tyWord:
+			if extenders[after.Value] {
+				return nil, 0
+			}
+		default:
+			return nil, 0
+		}
+	default:
+		return nil, 0
+	}
+	if n > 1 && unit == "" {
+		return nil, 0
+	}
+	pos := func(i int) lexer.Position { return at(i).Pos }
+	end := pos(n)
+	num := &Num{Pos: pos(0), EndPos: pos(1), Whole: toks[0].Value}
+	if n == 1 {
+		num.EndPos = end
+	}
+	q := &Quant{Pos: pos(0), EndPos: end, Num: num, Unit: unit}
+	d := &Dims{Pos: pos(0), EndPos: end, Parts: []*Quant{q}}
+	return &Value{Pos: pos(0), EndPos: end, From: &Single{Pos: pos(0), EndPos: end, Dims: d}}, n
+}
+
+// extenders are words that may continue a numeric item after a space.
+var extenders = map[string]bool{
+	"x": true, "by": true, "to": true, "and": true, "or": true, "max": true,
+	"min": true, "maximum": true, "minimum": true, "w": true, "h": true,
+	"d": true, "l": true, "r": true, "zr": true, "rf": true, "b": true,
+}

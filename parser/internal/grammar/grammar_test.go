@@ -1,0 +1,110 @@
+package grammar
+
+import (
+	"flag"
+	"os"
+	"path/filepath"
+	"testing"
+
+	"github.com/alecthomas/participle/v2/lexer"
+	"github.com/google/go-cmp/cmp"
+)
+
+var update = flag.Bool("update", false, "rewrite the golden files")
+
+// The printed grammar is pinned: a change to it must be deliberate, and
+// shows up in review as a change to testdata/grammar.ebnf.
+func TestGrammarGolden(t *testing.T) {
+	path := filepath.Join("..", "..", "..", "testdata", "grammar.ebnf")
+	got := String()
+	if *update {
+		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run go test ./parser/internal/grammar -update)", err)
+	}
+	if diff := cmp.Diff(string(want), got); diff != "" {
+		t.Errorf("grammar changed (-golden +now):\n%s", diff)
+	}
+}
+
+func TestTokensCoverEveryByte(t *testing.T) {
+	for _, q := range []string{"", "a", "  2x4  ", "€35,99", "3½\"", "１２ｖ", "\xff\x00a", "t-shirt's", "a–b"} {
+		toks := Tokens(q)
+		if len(toks) == 0 || toks[len(toks)-1].Type != lexer.EOF || toks[len(toks)-1].Pos.Offset != len(q) {
+			t.Fatalf("%q: tokens do not end with EOF at %d", q, len(q))
+		}
+		prev := 0
+		for i, tk := range toks {
+			if tk.Pos.Offset != prev && i > 0 || tk.Pos.Offset < prev {
+				t.Fatalf("%q: token %d at %d, want %d", q, i, tk.Pos.Offset, prev)
+			}
+			if i+1 < len(toks) {
+				prev = toks[i+1].Pos.Offset
+				if prev <= tk.Pos.Offset {
+					t.Fatalf("%q: token %d is empty", q, i)
+				}
+			}
+		}
+	}
+}
+
+func TestTokenKinds(t *testing.T) {
+	for _, tc := range []struct {
+		name, in string
+		want     []string
+		reason   string
+	}{
+		{"unit attached", "50mm", []string{TNumber, TUnit}, "letters after digits split off"},
+		{"inch mark", `36"`, []string{TNumber, TMark}, `" after a number is the inch mark`},
+		{"quote", `"red"`, []string{TQuote, TWord, TQuote}, `" elsewhere opens or closes a phrase`},
+		{"foot mark", "8'", []string{TNumber, TMark}, "' after a number is the foot mark"},
+		{"hyphenated word", "t-shirt", []string{TWord}, "a hyphen between letters stays in the word"},
+		{"code", "xr-2200", []string{TWord, TDash, TNumber}, "a hyphen before digits splits"},
+		{"decimal comma", "35,99", []string{TNumber}, "comma between digits stays in the number"},
+		{"full width digits", "１２", []string{TNumber}, "unicode digits are digits"},
+		{"currency", "€35", []string{TCur, TNumber}, "currency symbols"},
+		{"vulgar", "3½", []string{TNumber, TVulgar}, "vulgar fractions"},
+		{"ops", "<=5", []string{TOp, TNumber}, "two-character comparison"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			var got []string
+			names := lexer.SymbolsByRune(Definition{})
+			for _, tk := range Tokens(tc.in) {
+				if tk.Type != lexer.EOF {
+					got = append(got, names[tk.Type])
+				}
+			}
+			if diff := cmp.Diff(tc.want, got); diff != "" {
+				t.Errorf("%s (-want +got):\n%s", tc.reason, diff)
+			}
+		})
+	}
+}
+
+// quickQuant answers only where the grammar gives the same tree.
+func TestQuickQuantAgreesWithGrammar(t *testing.T) {
+	for _, q := range []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
+		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m"} {
+		toks := Tokens(q)
+		quick, n := quickQuant(toks)
+		if n == 0 {
+			continue
+		}
+		var full *numeric
+		full, end, ok := run(numericParser, toks)
+		if !ok || full.Value == nil {
+			t.Errorf("%q: quick path answered, grammar did not", q)
+			continue
+		}
+		if diff := cmp.Diff(full.Value, quick); diff != "" {
+			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
+		}
+		if qn := toks[n].Pos.Offset; qn != end {
+			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
+		}
+	}
+}

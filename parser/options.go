@@ -1,0 +1,54 @@
+package parser
+
+import (
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/units"
+)
+
+// MaxQueryBytes is the longest query Parse accepts by default.
+const MaxQueryBytes = 1024
+
+// Options change how a query is read. The zero value is ready to use:
+// default lexicon, US dollars, US customary volume, no category forced.
+type Options struct {
+	// Lexicon is the vocabulary; nil means lexicon.Default().
+	Lexicon *lexicon.Lexicon
+	// Currency is the ISO 4217 code a bare "$" or "dollars" means when it
+	// is a dollar currency (USD, CAD, AUD, NZD, SGD, HKD, MXN); default USD.
+	// A bare number next to a price word takes this currency too.
+	Currency string
+	// Volume selects US customary (default) or imperial gallons, quarts,
+	// pints, cups and fluid ounces.
+	Volume units.VolumeSystem
+	// Category, when set, is used instead of the category found in the
+	// query: the caller knows the shopper is on, say, the apparel pages.
+	Category string
+	// MaxBytes overrides MaxQueryBytes when positive.
+	MaxBytes int
+}
+
+func (o *Options) lexicon() *lexicon.Lexicon {
+	if o.Lexicon != nil {
+		return o.Lexicon
+	}
+	return lexicon.Default()
+}
+
+func (o *Options) maxBytes() int {
+	if o.MaxBytes > 0 {
+		return o.MaxBytes
+	}
+	return MaxQueryBytes
+}
+
+// dollarCurrencies are the currencies a "$" may stand for.
+var dollarCurrencies = map[string]bool{
+	"USD": true, "CAD": true, "AUD": true, "NZD": true, "SGD": true, "HKD": true, "MXN": true,
+}
+
+func (o *Options) dollar() string {
+	if dollarCurrencies[o.Currency] {
+		return o.Currency
+	}
+	return "USD"
+}

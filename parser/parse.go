@@ -1,0 +1,131 @@
+package parser
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+	"unicode/utf8"
+
+	"github.com/alecthomas/participle/v2/lexer"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser/internal/grammar"
+)
+
+// Parse reads one query with the default options. See [ParseWith].
+func Parse(query string) *Result {
+	return ParseWith(query, Options{})
+}
+
+// ParseWith reads one query and returns everything it understood, with
+// the problems it found in Result.Errors. It never panics and never
+// returns nil.
+//
+// The rules that settle competing readings, each named in the
+// constraint's Evidence:
+//
+//   - Product type first: the last product type in the query that is not
+//     part of a compatibility target is the head; its category (or
+//     Options.Category) is the query's category.
+//   - AxB of whole numbers with no unit is a nominal lumber size when PS 20
+//     lists it and the category is lumber or hardware, or there is no
+//     product type; on trousers, jeans and shorts it is waist by inseam;
+//     otherwise it is a dimension.
+//   - A bare number takes the unit of the head product type's first
+//     measure slot whose typical range holds it (inferred). In apparel and
+//     footwear a bare number that no slot holds is a size. Otherwise it
+//     stays unitless and the evidence says so.
+//   - "m", "s" and "l" are letter sizes only in apparel and footwear, and
+//     "m" right after a number is metres.
+//   - A code like "m8" is a metric thread, "a4" a paper size, "cr2032" a
+//     battery, when the standard lists it and the category does not say
+//     otherwise; else it is a part number.
+//   - A bare price ("$40") is a ceiling.
+//   - The target of "for", "fits", "compatible with", "works with" or
+//     "replacement for" runs to the next tagged span or the end.
+//   - "-", "not", "no", "without", "except" and "excluding" exclude the
+//     next span.
+//   - A quoted phrase is hard, whatever its kind.
+func ParseWith(query string, opts Options) *Result {
+	r := &Result{Query: query}
+	if len(query) > opts.maxBytes() {
+		r.Errors = append(r.Errors, &Error{Start: opts.maxBytes(), End: len(query), Query: query,
+			Msg: fmt.Sprintf("query is %d bytes; the limit is %d", len(query), opts.maxBytes())})
+		return r
+	}
+	if strings.TrimFunc(query, isBlank) == "" {
+		r.Errors = append(r.Errors, &Error{Start: 0, End: len(query), Query: query, Msg: "query is empty"})
+		return r
+	}
+	p := &tagger{q: query, opts: &opts, lex: opts.lexicon(), res: r}
+	p.checkUTF8()
+	p.run()
+	sort.SliceStable(r.Errors, func(i, j int) bool { return r.Errors[i].Start < r.Errors[j].Start })
+	for _, e := range r.Errors {
+		e.Query = query
+	}
+	return r
+}
+
+func isBlank(r rune) bool {
+	return r == utf8.RuneError || r <= ' ' || r == 0x7f || (r >= 0x80 && r < 0xa0) || r == ' ' || r == '\u3000' || r == '\u200b' || r == '\ufeff'
+}
+
+// tagger holds the state of one parse.
+type tagger struct {
+	q    string
+	opts *Options
+	lex  *lexicon.Lexicon
+	res  *Result
+
+	toks  []lexer.Token
+	units []unit
+
+	head     *lexicon.Entry // the head product type
+	category string
+
+	// neg is the start of a pending exclusion mark ("not", "-"), or -1;
+	// negEnd its end, negIdx the number of constraints when it was seen.
+	neg, negEnd, negIdx int
+	negText             string
+}
+
+func (p *tagger) errorf(start, end int, format string, args ...any) {
+	p.res.Errors = append(p.res.Errors, &Error{Start: start, End: end, Msg: fmt.Sprintf(format, args...)})
+}
+
+func (p *tagger) checkUTF8() {
+	for i := 0; i < len(p.q); {
+		r, n := utf8.DecodeRuneInString(p.q[i:])
+		if r == utf8.RuneError && n <= 1 {
+			j := i + 1
+			for j < len(p.q) {
+				r2, n2 := utf8.DecodeRuneInString(p.q[j:])
+				if !(r2 == utf8.RuneError && n2 <= 1) {
+					break
+				}
+				j++
+			}
+			p.errorf(i, j, "invalid UTF-8 at byte %d", i)
+			i = j
+			continue
+		}
+		i += n
+	}
+}
+
+// tokEnd returns the raw end offset of token i: where token i+1 starts.
+func (p *tagger) tokEnd(i int) int {
+	if i+1 < len(p.toks) {
+		return p.toks[i+1].Pos.Offset
+	}
+	return len(p.q)
+}
+
+func (p *tagger) run() {
+	p.toks = grammar.Tokens(p.q)
+	p.units = p.segment()
+	p.findHead()
+	p.tag()
+	p.finish()
+}

@@ -1,0 +1,368 @@
+package parser
+
+import (
+	"strings"
+	"testing"
+
+	"github.com/google/go-cmp/cmp"
+)
+
+// tagged is the part of a constraint the table tests compare.
+type tagged struct {
+	Kind       Kind
+	Text       string
+	Value      string
+	Strictness Strictness
+	Excluded   bool
+	Inferred   bool
+}
+
+func project(r *Result) []tagged {
+	out := make([]tagged, 0, len(r.Constraints))
+	for _, c := range r.Constraints {
+		if c.Kind == KindFiller {
+			continue
+		}
+		out = append(out, tagged{c.Kind, c.Text, c.Value(), c.Strictness, c.Excluded, c.Inferred})
+	}
+	return out
+}
+
+// t builds an expected constraint at its default strictness.
+func tg(k Kind, text, value string) tagged {
+	return tagged{Kind: k, Text: text, Value: value, Strictness: DefaultStrictness(k)}
+}
+
+func (x tagged) excluded() tagged { x.Excluded = true; return x }
+func (x tagged) inferred() tagged { x.Inferred = true; return x }
+func (x tagged) hard() tagged     { x.Strictness = Hard; return x }
+
+type parseCase struct {
+	name, query, reason string
+	category            string
+	want                []tagged
+}
+
+// parseCases are the hand-checked readings. The reason says where the
+// expected reading comes from: a standard, a fact of the trade (common
+// practice), or a rule of whittle's documented on ParseWith.
+var parseCases = []parseCase{
+	{
+		name: "sweater with size and price", query: "charcoal merino crew sweater size l under $90",
+		reason: "every word of a typical apparel query is tagged; size is hard, price a ceiling in USD (common practice)", category: "apparel",
+		want: []tagged{tg(KindColour, "charcoal", "charcoal"), tg(KindMaterial, "merino", "merino"), tg(KindSilhouette, "crew", "crew"),
+			tg(KindProductType, "sweater", "sweater"), tg(KindSize, "size l", "l (letter)"), tg(KindPrice, "under $90", "≤ 90.00 USD")},
+	},
+	{
+		name: "lens focal length", query: "85 lens", category: "camera",
+		reason: "a lens is sold by focal length in millimetres (common practice)",
+		want:   []tagged{tg(KindMeasure, "85", "85 mm").inferred(), tg(KindProductType, "lens", "lens")},
+	},
+	{
+		name: "tv diagonal", query: "43 tv", category: "electronics",
+		reason: "TV screens are sold by diagonal in inches (common practice)",
+		want:   []tagged{tg(KindMeasure, "43", "43 in").inferred(), tg(KindProductType, "tv", "tv")},
+	},
+	{
+		name: "cushion cover dimensions", query: "20x20 cushion cover", category: "home",
+		reason: "cushion covers are sold by side in inches in the US (common practice)",
+		want: []tagged{tg(KindMeasure, "20", "20 in").inferred(), tg(KindMeasure, "20", "20 in").inferred(),
+			tg(KindProductType, "cushion cover", "cushion cover")},
+	},
+	{
+		name: "lumber with length", query: "2x6 12 ft", category: "lumber",
+		reason: "2x6 is a PS 20 nominal size; the length is typed",
+		want:   []tagged{tg(KindSpec, "2x6", "2x6 (lumber)"), tg(KindMeasure, "12 ft", "12 ft")},
+	},
+	{
+		name: "lumber with bare length", query: "2x4x8", category: "lumber",
+		reason: "a third number after a nominal size is the length in feet (common practice)",
+		want:   []tagged{tg(KindSpec, "2x4", "2x4 (lumber)"), tg(KindMeasure, "8", "8 ft").inferred()},
+	},
+	{
+		name: "dimension with inch marks and labels", query: `24"w x 36"h rug`, category: "home",
+		reason: `" is the inch mark; w and h label width and height`,
+		want:   []tagged{tg(KindMeasure, `24"w`, "24 in"), tg(KindMeasure, `36"h`, "36 in"), tg(KindProductType, "rug", "rug")},
+	},
+	{
+		name: "dimension with foot marks", query: "10' x 12' rug", category: "home",
+		reason: "' is the foot mark",
+		want:   []tagged{tg(KindMeasure, "10'", "10 ft"), tg(KindMeasure, "12'", "12 ft"), tg(KindProductType, "rug", "rug")},
+	},
+	{
+		name: "exclusions", query: "not white -leather sweater without hood", category: "apparel",
+		reason: "not, -, without exclude the next span and the mark is part of its span",
+		want: []tagged{tg(KindColour, "not white", "not white").excluded(), tg(KindMaterial, "-leather", "not leather").excluded(),
+			tg(KindProductType, "sweater", "sweater"), tg(KindSilhouette, "without hood", "not hooded").excluded()},
+	},
+	{
+		name: "no zip", query: "hoodie no zip", category: "apparel",
+		reason: "no excludes the next span",
+		want:   []tagged{tg(KindProductType, "hoodie", "hoodie"), tg(KindSilhouette, "no zip", "not zip").excluded()},
+	},
+	{
+		name: "hyphen inside a word is not an exclusion", query: "3-ply toilet paper", category: "home",
+		reason: "a dash stuck to the word before it joins, it does not exclude",
+	},
+	{
+		name: "compatibility target", query: "phone case for jx-10", category: "electronics",
+		reason: "the target of for runs to the end",
+		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for jx-10", "fits jx-10")},
+	},
+	{
+		name: "compatible with, then a colour", query: "phone case compatible with jx-10 black", category: "electronics",
+		reason: "the target stops at the next tagged span (the colour)",
+		want: []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "compatible with jx-10", "fits jx-10"),
+			tg(KindColour, "black", "black")},
+	},
+	{
+		name: "for an audience is not a target", query: "running shoes for women", category: "footwear",
+		reason: "for followed straight away by a tagged span has no target",
+		want:   []tagged{tg(KindProductType, "running shoes", "running shoe"), tg(KindAudience, "women", "women")},
+	},
+	{
+		name: "range with unit", query: "20-30 mm", reason: "the unit after a range applies to both ends",
+		want: []tagged{tg(KindMeasure, "20-30 mm", "20..30 mm")},
+	},
+	{
+		name: "range with to", query: "20 to 30 mm", reason: "to joins a range",
+		want: []tagged{tg(KindMeasure, "20 to 30 mm", "20..30 mm")},
+	},
+	{
+		name: "between", query: "between 2 and 4 tb", reason: "between A and B is a range",
+		want: []tagged{tg(KindMeasure, "between 2 and 4 tb", "2..4 tb")},
+	},
+	{
+		name: "at least", query: "at least 2 tb", reason: "at least sets a floor",
+		want: []tagged{tg(KindMeasure, "at least 2 tb", "≥ 2 tb")},
+	},
+	{
+		name: "comparison signs", query: "<= 30 w", reason: "<= sets a ceiling",
+		want: []tagged{tg(KindMeasure, "<= 30 w", "≤ 30 w")},
+	},
+	{
+		name: "price range in dollars", query: "$20-$30", reason: "a range of prices",
+		want: []tagged{tg(KindPrice, "$20-$30", "20.00..30.00 USD")},
+	},
+	{
+		name: "price range, symbol once", query: "$20-30", reason: "the currency of one end applies to both",
+		want: []tagged{tg(KindPrice, "$20-30", "20.00..30.00 USD")},
+	},
+	{
+		name: "price max after", query: "$90 max", reason: "max after a price sets a ceiling",
+		want: []tagged{tg(KindPrice, "$90 max", "≤ 90.00 USD")},
+	},
+	{
+		name: "price plus", query: "$40+", reason: "+ after a price sets a floor",
+		want: []tagged{tg(KindPrice, "$40+", "≥ 40.00 USD")},
+	},
+	{
+		name: "bare price", query: "$40", reason: "a bare price is a ceiling (whittle's rule)",
+		want: []tagged{tg(KindPrice, "$40", "≤ 40.00 USD")},
+	},
+	{name: "usd code", query: "40 usd", reason: "ISO 4217 code after the amount", want: []tagged{tg(KindPrice, "40 usd", "≤ 40.00 USD")}},
+	{name: "euro sign", query: "€35", reason: "€ is EUR", want: []tagged{tg(KindPrice, "€35", "≤ 35.00 EUR")}},
+	{name: "euros word", query: "35 euros", reason: "euros is EUR", want: []tagged{tg(KindPrice, "35 euros", "≤ 35.00 EUR")}},
+	{name: "pound sign", query: "£20", reason: "£ is GBP", want: []tagged{tg(KindPrice, "£20", "≤ 20.00 GBP")}},
+	{name: "yen sign", query: "¥3000", reason: "¥ is JPY, which has no minor unit (ISO 4217)", want: []tagged{tg(KindPrice, "¥3000", "≤ 3000 JPY")}},
+	{name: "decimal comma", query: "35,99 €", reason: "a comma before two digits is a decimal comma, as euro locales write it",
+		want: []tagged{tg(KindPrice, "35,99 €", "≤ 35.99 EUR")}},
+	{name: "thousands comma", query: "under $1,299", reason: "a comma before three digits groups thousands",
+		want: []tagged{tg(KindPrice, "under $1,299", "≤ 1299.00 USD")}},
+	{name: "fraction", query: "3/4 in", reason: "fraction with a unit", want: []tagged{tg(KindMeasure, "3/4 in", "0.75 in")}},
+	{name: "mixed number spaced", query: "3 1/2 in", reason: "mixed number", want: []tagged{tg(KindMeasure, "3 1/2 in", "3.5 in")}},
+	{name: "mixed number dashed", query: "3-3/4 in", reason: "mixed number with a dash", want: []tagged{tg(KindMeasure, "3-3/4 in", "3.75 in")}},
+	{name: "vulgar fraction", query: "½ in", reason: "unicode fraction", want: []tagged{tg(KindMeasure, "½ in", "0.5 in")}},
+	{name: "number and vulgar fraction", query: "3½ ft", reason: "unicode mixed number", want: []tagged{tg(KindMeasure, "3½ ft", "3.5 ft")}},
+	{name: "unit attached", query: "50mm", reason: "unit stuck to the number", want: []tagged{tg(KindMeasure, "50mm", "50 mm")}},
+	{name: "quarts", query: "7qt", reason: "qt is the US quart by default", want: []tagged{tg(KindMeasure, "7qt", "7 qt")}},
+	{name: "gigabytes", query: "64gb", reason: "data size", want: []tagged{tg(KindMeasure, "64gb", "64 gb")}},
+	{name: "volts", query: "12v", reason: "voltage", want: []tagged{tg(KindMeasure, "12v", "12 v")}},
+	{name: "milliamp hours", query: "2500mah", reason: "charge", want: []tagged{tg(KindMeasure, "2500mah", "2500 mah")}},
+	{name: "inches spelt out", query: "24 inches", reason: "unit word", want: []tagged{tg(KindMeasure, "24 inches", "24 in")}},
+	{name: "inch mark", query: `36"`, reason: `" after a number is the inch mark`, want: []tagged{tg(KindMeasure, `36"`, "36 in")}},
+	{name: "prime marks", query: "8′ 36″", reason: "prime is feet, double prime inches", want: []tagged{tg(KindMeasure, "8′", "8 ft"), tg(KindMeasure, "36″", "36 in")}},
+	{name: "two apostrophes", query: "36''", reason: "two apostrophes stand for the inch mark", want: []tagged{tg(KindMeasure, "36''", "36 in")}},
+	{
+		name: "metres after a number", query: "5 m extension cord", category: "electrical",
+		reason: "m right after a number is metres",
+		want:   []tagged{tg(KindMeasure, "5 m", "5 m"), tg(KindProductType, "extension cord", "extension cord")},
+	},
+	{
+		name: "m alone in apparel is a size", query: "polo shirt m", category: "apparel",
+		reason: "a lone m in apparel is the letter size",
+		want:   []tagged{tg(KindProductType, "polo shirt", "polo shirt"), tg(KindSize, "m", "m (letter)")},
+	},
+	{name: "sz", query: "sz 8 dress", category: "apparel", reason: "sz marks a size",
+		want: []tagged{tg(KindSize, "sz 8", "8 (numeric)"), tg(KindProductType, "dress", "dress")}},
+	{name: "3xl", query: "3xl hoodie", category: "apparel", reason: "letter size with a count",
+		want: []tagged{tg(KindSize, "3xl", "3xl (letter)"), tg(KindProductType, "hoodie", "hoodie")}},
+	{name: "xs", query: "xs blazer", category: "apparel", reason: "letter size",
+		want: []tagged{tg(KindSize, "xs", "xs (letter)"), tg(KindProductType, "blazer", "blazer")}},
+	{name: "petite", query: "petite jeans", category: "apparel", reason: "petite is a fit size",
+		want: []tagged{tg(KindSize, "petite", "petite (fit)"), tg(KindProductType, "jeans", "jeans")}},
+	{name: "waist by inseam", query: "jeans 32x30", category: "apparel", reason: "WxL on jeans is waist by inseam (common practice)",
+		want: []tagged{tg(KindProductType, "jeans", "jeans"), tg(KindSize, "32x30", "32x30 (waist_inseam)")}},
+	{name: "waist and inseam letters", query: "jeans 32w 30l", category: "apparel", reason: "w and l after numbers on jeans are waist and inseam",
+		want: []tagged{tg(KindProductType, "jeans", "jeans"), tg(KindSize, "32w 30l", "32x30 (waist_inseam)")}},
+	{name: "shoe size with width", query: "boots 9.5 wide", category: "footwear", reason: "a shoe size may carry a width",
+		want: []tagged{tg(KindProductType, "boots", "boot"), tg(KindSize, "9.5 wide", "9.5 (shoe, wide)")}},
+	{name: "8w shoes", query: "8w sneakers", category: "footwear", reason: "8w on shoes is size 8 wide (common practice)",
+		want: []tagged{tg(KindSize, "8w", "8 (shoe, wide)"), tg(KindProductType, "sneakers", "sneaker")}},
+	{name: "tyre joined", query: "225/45R17", category: "tyres", reason: "ISO metric tyre code",
+		want: []tagged{tg(KindSpec, "225/45R17", "225/45R17 (tyre)")}},
+	{name: "tyre spaced", query: "225/45 r17 tyres", category: "tyres", reason: "the construction letter may be spaced",
+		want: []tagged{tg(KindSpec, "225/45 r17", "225/45R17 (tyre)"), tg(KindProductType, "tyres", "tyre")}},
+	{name: "gauge", query: "14 gauge wire", category: "electrical", reason: "AWG by gauge",
+		want: []tagged{tg(KindSpec, "14 gauge", "14 AWG (awg)"), tg(KindProductType, "wire", "electrical wire")}},
+	{name: "cable gauge", query: "14/2 wire", category: "electrical", reason: "14/2 is 14 AWG with two conductors (common practice)",
+		want: []tagged{tg(KindSpec, "14/2", "14/2 AWG (awg)"), tg(KindProductType, "wire", "electrical wire")}},
+	{name: "metric thread", query: "m8 bolts", category: "hardware", reason: "ISO 261 designation",
+		want: []tagged{tg(KindSpec, "m8", "M8x1.25 (metric_thread)"), tg(KindProductType, "bolts", "bolt")}},
+	{name: "metric fine thread", query: "M8x1 bolts", category: "hardware", reason: "ISO 261 fine pitch",
+		want: []tagged{tg(KindSpec, "M8x1", "M8x1 (metric_thread)"), tg(KindProductType, "bolts", "bolt")}},
+	{name: "unified thread", query: "1/4-20 bolts", category: "hardware", reason: "ASME B1.1 designation",
+		want: []tagged{tg(KindSpec, "1/4-20", "1/4-20 UNC (unified_thread)"), tg(KindProductType, "bolts", "bolt")}},
+	{name: "paper", query: "a4 paper", category: "office", reason: "ISO 216 size",
+		want: []tagged{tg(KindSpec, "a4", "A4 (paper)"), tg(KindProductType, "paper", "paper")}},
+	{name: "aa batteries", query: "aa batteries", category: "batteries", reason: "IEC 60086 size",
+		want: []tagged{tg(KindSpec, "aa", "AA (battery)"), tg(KindProductType, "batteries", "battery")}},
+	{name: "9v battery", query: "9v battery", category: "batteries", reason: "9V is a battery size, not only a voltage",
+		want: []tagged{tg(KindSpec, "9v", "9V (battery)"), tg(KindProductType, "battery", "battery")}},
+	{name: "coin cell", query: "cr2032", category: "batteries", reason: "IEC 60086 coin cell",
+		want: []tagged{tg(KindSpec, "cr2032", "CR2032 (battery)")}},
+	{name: "part number", query: "xr-2200", reason: "letters and digits joined by a dash",
+		want: []tagged{tg(KindPartNumber, "xr-2200", "XR-2200")}},
+	{name: "sku", query: "sku 88-1042", reason: "sku marks a code",
+		want: []tagged{tg(KindPartNumber, "sku 88-1042", "88-1042")}},
+	{name: "quoted phrase", query: `"off the shoulder" dress`, category: "apparel", reason: "a quoted phrase is hard",
+		want: []tagged{tg(KindSilhouette, `"off the shoulder"`, "off the shoulder").hard(), tg(KindProductType, "dress", "dress")}},
+	{name: "plural and stem", query: "dresses", category: "apparel", reason: "stemming finds dress",
+		want: []tagged{tg(KindProductType, "dresses", "dress")}},
+	{name: "british spelling", query: "grey jumper", category: "apparel", reason: "jumper is a sweater in British English",
+		want: []tagged{tg(KindColour, "grey", "grey"), tg(KindProductType, "jumper", "sweater")}},
+	{name: "american spelling", query: "gray sweater", category: "apparel", reason: "gray is grey",
+		want: []tagged{tg(KindColour, "gray", "grey"), tg(KindProductType, "sweater", "sweater")}},
+	{name: "abbreviation", query: "blk tee", category: "apparel", reason: "blk is black",
+		want: []tagged{tg(KindColour, "blk", "black"), tg(KindProductType, "tee", "t-shirt")}},
+	{name: "multi-word colour", query: "navy blue chinos", category: "apparel", reason: "two-word colours match as one span",
+		want: []tagged{tg(KindColour, "navy blue", "navy"), tg(KindProductType, "chinos", "chinos")}},
+	{name: "unknown word", query: "zorblax dress", category: "apparel", reason: "unknown words are kept as keywords",
+		want: []tagged{tg(KindKeyword, "zorblax", "zorblax"), tg(KindProductType, "dress", "dress")}},
+	{name: "unitless number", query: "500 lens", category: "camera", reason: "500 mm is within a lens's focal lengths",
+		want: []tagged{tg(KindMeasure, "500", "500 mm").inferred(), tg(KindProductType, "lens", "lens")}},
+	{name: "out of every slot", query: "5000 lens", category: "camera", reason: "no focal length slot holds 5000: stays unitless",
+		want: []tagged{tg(KindMeasure, "5000", "5000"), tg(KindProductType, "lens", "lens")}},
+}
+
+func TestParse(t *testing.T) {
+	for _, tc := range parseCases {
+		t.Run(tc.name, func(t *testing.T) {
+			r := Parse(tc.query)
+			checkInvariants(t, tc.query, r)
+			if len(r.Errors) > 0 {
+				t.Errorf("unexpected errors: %v", r.Errors)
+			}
+			if r.Category != tc.category {
+				t.Errorf("category = %q, want %q", r.Category, tc.category)
+			}
+			if tc.want == nil {
+				return
+			}
+			if diff := cmp.Diff(tc.want, project(r)); diff != "" {
+				t.Errorf("%s\n(-want +got):\n%s", tc.reason, diff)
+			}
+		})
+	}
+}
+
+// errorCase is a badly formed query: the errors expected, by span and a
+// part of the message, and what must still be understood around them.
+type errorCase struct {
+	name, query, reason string
+	errs                []wantErr
+	want                []tagged
+}
+
+type wantErr struct {
+	start, end int
+	msg        string
+}
+
+var errorCases = []errorCase{
+	{name: "empty", query: "", reason: "nothing to parse", errs: []wantErr{{0, 0, "empty"}}},
+	{name: "all space", query: "   \t ", reason: "nothing to parse", errs: []wantErr{{0, 5, "empty"}}},
+	{name: "too long", query: strings.Repeat("a", 1025), reason: "over the limit, named in the message", errs: []wantErr{{1024, 1025, "1024"}}},
+	{name: "invalid utf-8", query: "red \xff\xfe dress", reason: "the error gives the byte offset, the rest is read",
+		errs: []wantErr{{4, 6, "byte 4"}},
+		want: []tagged{tg(KindColour, "red", "red"), tg(KindProductType, "dress", "dress")}},
+	{name: "division by zero", query: "1/0 lens", reason: "a positioned error, the rest is read", errs: []wantErr{{0, 3, "divides by zero"}},
+		want: []tagged{tg(KindProductType, "lens", "lens")}},
+	{name: "zero over zero", query: "0/0 mm", reason: "not a number", errs: []wantErr{{0, 3, "not a number"}}},
+	{name: "overflow", query: "99999999999999999999 mm bolt", reason: "more digits than a float holds exactly",
+		errs: []wantErr{{0, 20, "significant digits"}}, want: []tagged{tg(KindProductType, "bolt", "bolt")}},
+	{name: "unclosed quote", query: `"faux fur coat`, reason: "the phrase runs to the end", errs: []wantErr{{0, 1, "never closed"}},
+		want: []tagged{tg(KindKeyword, `"faux fur coat`, "faux fur coat").hard()}},
+	{name: "not a tyre", query: "999/45r17", reason: "a tyre code outside ISO widths", errs: []wantErr{{0, 9, "width"}},
+		want: []tagged{tg(KindKeyword, "999/45r17", "999/45r17")}},
+}
+
+func TestParseErrors(t *testing.T) {
+	for _, tc := range errorCases {
+		t.Run(tc.name, func(t *testing.T) {
+			r := Parse(tc.query)
+			checkInvariants(t, tc.query, r)
+			if len(r.Errors) != len(tc.errs) {
+				t.Fatalf("%s: got errors %v, want %d", tc.reason, r.Errors, len(tc.errs))
+			}
+			for i, w := range tc.errs {
+				e := r.Errors[i]
+				if e.Start != w.start || e.End != w.end || !strings.Contains(e.Msg, w.msg) {
+					t.Errorf("error %d = %d-%d %q, want %d-%d containing %q", i, e.Start, e.End, e.Msg, w.start, w.end, w.msg)
+				}
+			}
+			if tc.want != nil {
+				if diff := cmp.Diff(tc.want, project(r)); diff != "" {
+					t.Errorf("%s\n(-want +got):\n%s", tc.reason, diff)
+				}
+			}
+		})
+	}
+}
+
+// Control characters are spaces: "red\x00dress" reads as "red dress".
+func TestControlCharactersAreSpaces(t *testing.T) {
+	r := Parse("red\x00dress")
+	want := []tagged{tg(KindColour, "red", "red"), tg(KindProductType, "dress", "dress")}
+	if diff := cmp.Diff(want, project(r)); diff != "" {
+		t.Errorf("(-want +got):\n%s", diff)
+	}
+}
+
+func TestOptions(t *testing.T) {
+	r := ParseWith("under $50 shirt", Options{Currency: "CAD"})
+	if c := only(t, r, KindPrice); c.Price.Currency != "CAD" {
+		t.Errorf("$ with Currency CAD read as %s", c.Price.Currency)
+	}
+	r = ParseWith("under $50 shirt", Options{Currency: "EUR"})
+	if c := only(t, r, KindPrice); c.Price.Currency != "USD" {
+		t.Errorf("$ with Currency EUR (not a dollar) read as %s, want USD", c.Price.Currency)
+	}
+	r = ParseWith("85 lens", Options{Category: "apparel"})
+	if r.Category != "apparel" {
+		t.Errorf("forced category = %q", r.Category)
+	}
+}
+
+// US and imperial gallons: 3.785411784 l and 4.54609 l (NIST SP 811; UK
+// Weights and Measures Act 1985, via testdata/reference/unit_conversions.tsv).
+func TestVolumeSystem(t *testing.T) {
+	us := only(t, Parse("5 gal"), KindMeasure)
+	imp := only(t, ParseWith("5 gal", Options{Volume: 1}), KindMeasure)
+	if !near(*us.Measure.BaseAmount, 5*3785.411784, 1e-9) {
+		t.Errorf("US 5 gal = %v ml", *us.Measure.BaseAmount)
+	}
+	if !near(*imp.Measure.BaseAmount, 5*4546.09, 1e-9) {
+		t.Errorf("imperial 5 gal = %v ml", *imp.Measure.BaseAmount)
+	}
+}

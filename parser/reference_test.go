@@ -1,0 +1,256 @@
+package parser
+
+// End-to-end checks of the parser against published tables. Each table is
+// read from testdata/reference (see lexicon/reference); each test names
+// the standard its numbers come from. The parser must read a query the way
+// the standard defines the designation or unit.
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+	"testing"
+
+	"github.com/bojanz/currency"
+
+	"github.com/whittle-search/whittle/lexicon/reference"
+)
+
+func table(t *testing.T, name string) *reference.Table {
+	t.Helper()
+	tb, err := reference.Read(name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return tb
+}
+
+func float(t *testing.T, r reference.Row, col string) float64 {
+	t.Helper()
+	v, err := r.Float(col)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return v
+}
+
+// only returns the single constraint of kind k in r, failing otherwise.
+func only(t *testing.T, r *Result, k Kind) Constraint {
+	t.Helper()
+	cs := r.Of(k)
+	if len(cs) != 1 {
+		t.Fatalf("%q: want one %s constraint, got %d in %s", r.Query, k, len(cs), summary(r))
+	}
+	return cs[0]
+}
+
+func summary(r *Result) string {
+	var parts []string
+	for _, c := range r.Constraints {
+		parts = append(parts, fmt.Sprintf("%s[%s]=%s", c.Kind, c.Text, c.Value()))
+	}
+	for _, e := range r.Errors {
+		parts = append(parts, "error: "+e.Error())
+	}
+	return strings.Join(parts, ", ")
+}
+
+func near(a, b, tol float64) bool { return math.Abs(a-b) <= tol }
+
+// PS 20 (American Softwood Lumber Standard) dry dressed sizes:
+// testdata/reference/lumber_ps20_sizes.tsv. "2x4 stud" must name the
+// nominal size and carry its dressed millimetres.
+func TestLumberSizesPS20(t *testing.T) {
+	for _, row := range table(t, "lumber_ps20_sizes.tsv").Rows {
+		q := row["nominal"] + " stud"
+		r := Parse(q)
+		c := only(t, r, KindSpec)
+		if c.Spec.System != "lumber" || c.Spec.Designation != row["nominal"] {
+			t.Errorf("%q: got %s %s, want lumber %s", q, c.Spec.System, c.Spec.Designation, row["nominal"])
+			continue
+		}
+		if got, want := c.Spec.Dimensions["thickness"], float(t, row, "dry_thickness_mm"); got != want {
+			t.Errorf("%q: thickness %v mm, PS 20 gives %v", q, got, want)
+		}
+		if got, want := c.Spec.Dimensions["width"], float(t, row, "dry_width_mm"); got != want {
+			t.Errorf("%q: width %v mm, PS 20 gives %v", q, got, want)
+		}
+		if c.Strictness != Hard {
+			t.Errorf("%q: a lumber size must be hard, got %s", q, c.Strictness)
+		}
+	}
+}
+
+// ISO metric tyre designations (ISO 4000-1 / ETRTO), worked examples in
+// testdata/reference/tyre_size_examples.tsv, written both "205/55 R16"
+// and "205/55r16".
+func TestTyreSizesISO(t *testing.T) {
+	for _, row := range table(t, "tyre_size_examples.tsv").Rows {
+		joined := strings.ToLower(strings.ReplaceAll(row["designation"], " ", ""))
+		for _, q := range []string{row["designation"] + " tyres", joined} {
+			c := only(t, Parse(q), KindSpec)
+			if c.Spec.System != "tyre" {
+				t.Errorf("%q: system %s, want tyre", q, c.Spec.System)
+				continue
+			}
+			if got, want := c.Spec.Dimensions["overall_diameter"], float(t, row, "overall_diameter_mm"); !near(got, want, 0.05) {
+				t.Errorf("%q: overall diameter %.2f mm, reference gives %.2f", q, got, want)
+			}
+			if got, want := c.Spec.Dimensions["sidewall_height"], float(t, row, "sidewall_height_mm"); !near(got, want, 0.05) {
+				t.Errorf("%q: sidewall %.2f mm, reference gives %.2f", q, got, want)
+			}
+		}
+	}
+}
+
+// ASTM B258 American Wire Gauge diameters:
+// testdata/reference/awg_wire_diameters.tsv, for "N awg" and "N gauge".
+func TestWireGaugeASTMB258(t *testing.T) {
+	for _, row := range table(t, "awg_wire_diameters.tsv").Rows {
+		n, err := strconv.Atoi(row["n"])
+		if err != nil || n < 0 {
+			continue // 0000..00 are written 4/0..2/0, which read as fractions
+		}
+		for _, q := range []string{row["n"] + " awg wire", row["n"] + " gauge wire"} {
+			c := only(t, Parse(q), KindSpec)
+			if got, want := c.Spec.Dimensions["diameter"], float(t, row, "d_formula_mm"); !near(got, want, 1e-4) {
+				t.Errorf("%q: diameter %.5f mm, ASTM B258 formula gives %.5f", q, got, want)
+			}
+			if c.Strictness != Hard {
+				t.Errorf("%q: a wire gauge must be hard, got %s", q, c.Strictness)
+			}
+		}
+	}
+}
+
+// ISO 261 metric coarse threads: testdata/reference/threads_metric_iso261_262.tsv.
+func TestMetricThreadsISO261(t *testing.T) {
+	for _, row := range table(t, "threads_metric_iso261_262.tsv").Rows {
+		q := strings.ToLower(row["designation"]) + " bolt"
+		c := only(t, Parse(q), KindSpec)
+		if c.Spec.System != "metric_thread" {
+			t.Errorf("%q: system %s, want metric_thread", q, c.Spec.System)
+			continue
+		}
+		if got, want := c.Spec.Dimensions["pitch"], float(t, row, "coarse_pitch_mm"); !near(got, want, 1e-9) {
+			t.Errorf("%q: pitch %v mm, ISO 261 coarse pitch is %v", q, got, want)
+		}
+		if got, want := c.Spec.Dimensions["major_diameter"], float(t, row, "nominal_diameter_mm"); !near(got, want, 1e-9) {
+			t.Errorf("%q: diameter %v mm, want %v", q, got, want)
+		}
+	}
+}
+
+// ASME B1.1 unified coarse threads: testdata/reference/threads_unified_asme_b1_1.tsv,
+// fractional sizes as "1/4-20" and numbered sizes as "#10-24".
+func TestUnifiedThreadsASMEB11(t *testing.T) {
+	for _, row := range table(t, "threads_unified_asme_b1_1.tsv").Rows {
+		size := row["size"]
+		if strings.HasPrefix(size, "No. ") {
+			size = "#" + strings.TrimPrefix(size, "No. ")
+		}
+		if size == "1" {
+			continue // "1-8" is a plain range; the standard writes it the same way
+		}
+		q := size + "-" + row["unc_tpi"] + " screws"
+		c := only(t, Parse(q), KindSpec)
+		if c.Spec.System != "unified_thread" {
+			t.Errorf("%q: system %s, want unified_thread", q, c.Spec.System)
+			continue
+		}
+		if got, want := c.Spec.Dimensions["major_diameter"], float(t, row, "major_diameter_mm"); !near(got, want, 1e-6) {
+			t.Errorf("%q: major diameter %v mm, ASME B1.1 gives %v", q, got, want)
+		}
+	}
+}
+
+// ISO 216 A and B paper sizes: testdata/reference/iso216_paper_sizes.tsv.
+func TestPaperSizesISO216(t *testing.T) {
+	for _, row := range table(t, "iso216_paper_sizes.tsv").Rows {
+		q := strings.ToLower(row["size"]) + " paper"
+		c := only(t, Parse(q), KindSpec)
+		if c.Spec.System != "paper" || c.Spec.Designation != row["size"] {
+			t.Errorf("%q: got %s %s", q, c.Spec.System, c.Spec.Designation)
+			continue
+		}
+		if c.Spec.Dimensions["width"] != float(t, row, "width_mm") || c.Spec.Dimensions["height"] != float(t, row, "height_mm") {
+			t.Errorf("%q: %v x %v mm, ISO 216 gives %s x %s", q, c.Spec.Dimensions["width"], c.Spec.Dimensions["height"], row["width_mm"], row["height_mm"])
+		}
+	}
+}
+
+// IEC 60086 battery sizes: testdata/reference/iec60086_batteries.tsv.
+func TestBatterySizesIEC60086(t *testing.T) {
+	for _, row := range table(t, "iec60086_batteries.tsv").Rows {
+		name := strings.ToLower(strings.Fields(row["common_name"])[0])
+		q := name + " batteries"
+		c := only(t, Parse(q), KindSpec)
+		if c.Spec.System != "battery" {
+			t.Errorf("%q: system %s, want battery", q, c.Spec.System)
+			continue
+		}
+		for _, dim := range []string{"diameter", "height", "width", "depth"} {
+			if row[dim+"_mm"] == "" {
+				continue
+			}
+			if got, want := c.Spec.Dimensions[dim], float(t, row, dim+"_mm"); !near(got, want, 1e-9) {
+				t.Errorf("%q: %s %v mm, IEC 60086 table gives %v", q, dim, got, want)
+			}
+		}
+	}
+}
+
+// NIST SP 811 unit factors: testdata/reference/unit_conversions.tsv. "12
+// <unit>" must report base_amount = 12 x factor, in whittle's base units
+// (mm, g, ml).
+func TestUnitFactorsNISTSP811(t *testing.T) {
+	toBase := map[string]float64{"m": 1000, "kg": 1000, "m^3": 1e6}
+	spell := map[string]string{"in": "in", "ft": "ft", "yd": "yd", "mi": "mi", "lb": "lb", "oz": "oz",
+		"L": "l", "gal": "gal", "qt": "qt", "pt": "pt", "cup": "cups", "fl oz": "fl oz", "tbsp": "tbsp", "tsp": "tsp"}
+	checked := 0
+	for _, row := range table(t, "unit_conversions.tsv").Rows {
+		word, ok := spell[row["symbol"]]
+		if !ok {
+			continue
+		}
+		mult, ok := toBase[row["si_unit"]]
+		if !ok {
+			continue
+		}
+		q := "12 " + word
+		c := only(t, Parse(q), KindMeasure)
+		want := 12 * float(t, row, "factor_to_si") * mult
+		if c.Measure.BaseAmount == nil || !near(*c.Measure.BaseAmount, want, want*1e-12) {
+			t.Errorf("%q: base amount %v, NIST SP 811 factor gives %v", q, c.Measure.BaseAmount, want)
+		}
+		checked++
+	}
+	if checked < 12 {
+		t.Errorf("only %d units checked", checked)
+	}
+}
+
+// ISO 4217 minor units, from bojanz/currency's CLDR data: a price is
+// rounded to the currency's digits ("90" USD is "90.00", "3000" JPY is
+// "3000").
+func TestPriceMinorUnitsISO4217(t *testing.T) {
+	for _, tc := range []struct{ q, code string }{
+		{"under 40 usd", "USD"}, {"under 35 eur", "EUR"}, {"under £20", "GBP"},
+		{"under ¥3000", "JPY"}, {"under 500 sek", "SEK"}, {"under 90 chf", "CHF"},
+	} {
+		c := only(t, Parse(tc.q), KindPrice)
+		if c.Price.Currency != tc.code || c.Price.Max == nil {
+			t.Errorf("%q: got %+v, want a ceiling in %s", tc.q, c.Price, tc.code)
+			continue
+		}
+		digits, ok := currency.GetDigits(tc.code)
+		if !ok {
+			t.Fatalf("CLDR data lacks %s", tc.code)
+		}
+		_, frac, _ := strings.Cut(*c.Price.Max, ".")
+		if len(frac) != int(digits) {
+			t.Errorf("%q: %s has %d decimals, ISO 4217 gives %s %d", tc.q, *c.Price.Max, len(frac), tc.code, digits)
+		}
+	}
+}

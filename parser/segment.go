@@ -1,0 +1,195 @@
+package parser
+
+import (
+	"strings"
+	"unicode/utf8"
+
+	"github.com/alecthomas/participle/v2/lexer"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser/internal/grammar"
+)
+
+type unitKind uint8
+
+const (
+	uWord unitKind = iota // a lexicon phrase, or one plain word
+	uItem                 // a structured item from the grammar
+	uSym                  // a punctuation token
+	uNeg                  // an exclusion mark stuck to the next span ("-")
+)
+
+// unit is one piece of the query as the tagger walks it.
+type unit struct {
+	kind       unitKind
+	start, end int
+	// text is the normalised text of a word unit, words joined by spaces.
+	text    string
+	entries []*lexicon.Entry
+	item    *grammar.Item
+	tok     lexer.Token
+	// spaceBefore is false when nothing separates the unit from the one
+	// before it ("3xl", "8w").
+	spaceBefore bool
+	done        bool
+}
+
+// word is one matchable word: a lexer word, or one part of a hyphenated
+// word.
+type word struct {
+	start, end  int
+	norm, key   string
+	piece       int // index of the lexer word it came from
+	first       bool
+	spaceBefore bool
+}
+
+// segment walks the tokens, hands every place where a structure may start
+// to the grammar, and matches runs of words against the lexicon.
+func (p *tagger) segment() []unit {
+	var (
+		out   []unit
+		words []word
+		space = true
+		piece = 0
+	)
+	flush := func() {
+		out = append(out, p.match(words)...)
+		words = words[:0]
+	}
+	toks := p.toks
+	for i := 0; i < len(toks) && toks[i].Type != lexer.EOF; {
+		t := toks[i]
+		if t.Type == grammar.Type(grammar.TSpace) {
+			space = true
+			i++
+			continue
+		}
+		if grammar.Starts(toks[i:]) {
+			it, n := grammar.ParseItem(toks[i:])
+			if it != nil && it.Exclude != nil && !space {
+				it = nil // "3-ply": a hyphen, not an exclusion
+			}
+			if it != nil {
+				flush()
+				start, end := t.Pos.Offset, p.tokEnd(i+n-1)
+				if ex := it.Exclude; ex != nil {
+					out = append(out, unit{kind: uNeg, start: start, end: start + 1, spaceBefore: space})
+					if ex.Quoted != nil {
+						out = append(out, unit{kind: uItem, start: ex.Quoted.Pos.Offset, end: end, item: &grammar.Item{Quoted: ex.Quoted}})
+					} else {
+						words = p.addWord(words, i+1, piece, false)
+						piece++
+					}
+				} else {
+					out = append(out, unit{kind: uItem, start: start, end: end, item: it, spaceBefore: space})
+				}
+				i += n
+				space = false
+				continue
+			}
+		}
+		if isWordType(t.Type) {
+			words = p.addWord(words, i, piece, space)
+			piece++
+		} else {
+			flush()
+			out = append(out, unit{kind: uSym, start: t.Pos.Offset, end: p.tokEnd(i), tok: t, spaceBefore: space})
+		}
+		space = false
+		i++
+	}
+	flush()
+	return out
+}
+
+func isWordType(t lexer.TokenType) bool {
+	return t == grammar.Type(grammar.TWord) || t == grammar.Type(grammar.TUnit) || t == grammar.Type(grammar.TCurWord)
+}
+
+// addWord splits lexer word i at its hyphens into matchable words.
+func (p *tagger) addWord(words []word, i, piece int, space bool) []word {
+	start, end := p.toks[i].Pos.Offset, p.tokEnd(i)
+	raw := p.q[start:end]
+	first := true
+	for off := 0; off < len(raw); {
+		j := off
+		for j < len(raw) {
+			r, n := utf8.DecodeRuneInString(raw[j:])
+			if r == '-' || r == '‐' {
+				break
+			}
+			j += n
+		}
+		if j > off {
+			n := lexicon.Normalise(raw[off:j])
+			words = append(words, word{start: start + off, end: start + j, norm: n, key: lexicon.Key(n), piece: piece, first: first, spaceBefore: space && first})
+			first = false
+		}
+		_, n := utf8.DecodeRuneInString(raw[j:])
+		off = j + n
+	}
+	return words
+}
+
+// match finds lexicon phrases in a run of words, longest first, left to
+// right. A hyphenated word none of whose parts starts a phrase stays one
+// plain word.
+func (p *tagger) match(ws []word) []unit {
+	if len(ws) == 0 {
+		return nil
+	}
+	keys := make([]string, len(ws))
+	for i, w := range ws {
+		keys[i] = w.key
+	}
+	var out []unit
+	for j := 0; j < len(ws); {
+		n, entries := p.lex.Match(keys[j:])
+		if n == 0 && ws[j].first {
+			// Try the hyphenated word joined up: "t-shirt" as "tshirt".
+			k := j
+			for k+1 < len(ws) && ws[k+1].piece == ws[j].piece {
+				k++
+			}
+			if k > j {
+				var b strings.Builder
+				for _, w := range ws[j : k+1] {
+					b.WriteString(w.norm)
+				}
+				if m, es := p.lex.Match([]string{lexicon.Key(b.String())}); m == 1 {
+					n, entries = k-j+1, es
+				} else if !p.anyMatch(keys[j+1 : k+1]) {
+					n = k - j + 1 // keep "ultra-soft" whole
+				}
+			}
+		}
+		if n == 0 {
+			n = 1
+		}
+		last := ws[j+n-1]
+		var b strings.Builder
+		for x, w := range ws[j : j+n] {
+			if x > 0 {
+				if w.piece == ws[j+x-1].piece {
+					b.WriteByte('-')
+				} else {
+					b.WriteByte(' ')
+				}
+			}
+			b.WriteString(w.norm)
+		}
+		out = append(out, unit{kind: uWord, start: ws[j].start, end: last.end, text: b.String(), entries: entries, spaceBefore: ws[j].spaceBefore})
+		j += n
+	}
+	return out
+}
+
+func (p *tagger) anyMatch(keys []string) bool {
+	for i := range keys {
+		if n, _ := p.lex.Match(keys[i:]); n > 0 {
+			return true
+		}
+	}
+	return false
+}

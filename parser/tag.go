@@ -1,0 +1,433 @@
+package parser
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/whittle-search/whittle/lexicon"
+)
+
+// Words the grammar of shopping gives a role to.
+var (
+	negators    = map[string]bool{"not": true, "no": true, "without": true, "except": true, "excluding": true, "exclude": true, "minus": true, "non": true}
+	sizeMarkers = map[string]bool{"size": true, "sz": true, "sizes": true, "sized": true}
+	codeMarkers = map[string]bool{"sku": true, "part": true, "model": true, "mpn": true, "item": true, "ref": true, "pn": true, "p/n": true}
+	// structural words carry no constraint of their own when left over.
+	structural = map[string]bool{"with": true, "and": true, "or": true, "for": true, "to": true, "by": true,
+		"x": true, "at": true, "from": true, "in": true, "of": true, "on": true, "fits": true, "fit": true,
+		"compatible": true, "works": true, "replacement": true, "between": true, "than": true, "number": true, "no": true, "not": true}
+	letterSizes = map[string]string{
+		"xxs": "xxs", "2xs": "xxs", "xs": "xs", "s": "s", "m": "m", "l": "l", "xl": "xl",
+		"xxl": "xxl", "2xl": "xxl", "xxxl": "3xl", "3xl": "3xl", "4xl": "4xl", "5xl": "5xl",
+		"small": "s", "medium": "m", "large": "l", "x-large": "xl", "xlarge": "xl",
+		"extra large": "xl", "extra small": "xs", "x-small": "xs", "xsmall": "xs",
+		"xx-large": "xxl", "sm": "s", "med": "m", "lg": "l", "lrg": "l",
+	}
+	// ambiguousLetters are letter sizes that are also units or words.
+	ambiguousLetters = map[string]bool{"s": true, "m": true, "l": true, "small": true, "medium": true, "large": true, "sm": true, "med": true, "lg": true}
+	fitSizes         = map[string]bool{"petite": true, "tall": true, "plus": true, "plus size": true, "big and tall": true, "maternity": true, "husky": true, "slim": false}
+	widths           = map[string]string{"wide": "wide", "narrow": "narrow", "extra wide": "extra wide", "ww": "extra wide", "xw": "extra wide", "w": "wide", "n": "narrow", "medium": "medium", "regular": "medium"}
+)
+
+// kindOrder ranks the lexicon kinds when one phrase is several things.
+var kindOrder = []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern,
+	lexicon.Silhouette, lexicon.Audience, lexicon.Brand, lexicon.Filler}
+
+func pick(entries []*lexicon.Entry) *lexicon.Entry {
+	for _, k := range kindOrder {
+		for _, e := range entries {
+			if e.Kind == k {
+				return e
+			}
+		}
+	}
+	return nil
+}
+
+func (u *unit) entry(k lexicon.Kind) *lexicon.Entry {
+	for _, e := range u.entries {
+		if e.Kind == k {
+			return e
+		}
+	}
+	return nil
+}
+
+// compatAt reports whether a compatibility phrase starts at unit k, and
+// how many units it takes.
+func (p *tagger) compatAt(k int) int {
+	u := &p.units[k]
+	if u.kind != uWord || u.entries != nil {
+		return 0
+	}
+	next := func(i int) string {
+		if k+i < len(p.units) && p.units[k+i].kind == uWord {
+			return p.units[k+i].text
+		}
+		return ""
+	}
+	switch u.text {
+	case "for", "fits":
+		return 1
+	case "compatible", "works", "made", "designed":
+		if w := next(1); w == "with" || w == "for" {
+			return 2
+		}
+		if u.text == "compatible" {
+			return 1
+		}
+	case "replacement", "replaces":
+		if next(1) == "for" {
+			return 2
+		}
+	}
+	return 0
+}
+
+// findHead picks the head product type: the last one before the first
+// compatibility phrase, else the last one in the query.
+func (p *tagger) findHead() {
+	var last *lexicon.Entry
+	for k := range p.units {
+		if p.compatAt(k) > 0 && last != nil {
+			break
+		}
+		if e := p.units[k].entry(lexicon.ProductType); e != nil && !p.negatedAt(k) {
+			last = e
+		}
+	}
+	p.head = last
+	switch {
+	case p.opts.Category != "":
+		p.category = p.opts.Category
+	case last != nil:
+		p.category = last.Category
+	}
+}
+
+// negatedAt reports whether unit k follows an exclusion word or mark.
+func (p *tagger) negatedAt(k int) bool {
+	if k == 0 {
+		return false
+	}
+	prev := &p.units[k-1]
+	return prev.kind == uNeg || (prev.kind == uWord && prev.entries == nil && negators[prev.text])
+}
+
+func (p *tagger) apparel() bool {
+	return p.category == "apparel" || p.category == "footwear"
+}
+
+// add appends a constraint for units [from, to] and applies a pending
+// exclusion.
+func (p *tagger) add(c Constraint) {
+	if c.Strictness == 0 && c.Kind != KindFiller {
+		c.Strictness = DefaultStrictness(c.Kind)
+	}
+	c.Text = p.q[c.Start:c.End]
+	if p.neg >= 0 && c.Kind != KindFiller {
+		c.Excluded = true
+		c.Evidence = join(c.Evidence, "excluded by "+fmt.Sprintf("%q", p.negText))
+		if len(p.res.Constraints) == p.negIdx {
+			// The mark is part of the span: "-leather", "not white".
+			c.Start = p.neg
+			c.Text = p.q[c.Start:c.End]
+		} else {
+			p.negFiller()
+		}
+		p.neg = -1
+	}
+	p.res.Constraints = append(p.res.Constraints, c)
+}
+
+// negFiller records a pending exclusion mark that could not join the span
+// it excludes (a filler came between) as a filler of its own, in place.
+func (p *tagger) negFiller() {
+	f := Constraint{Kind: KindFiller, Start: p.neg, End: p.negEnd, Text: p.q[p.neg:p.negEnd], Strictness: Filler,
+		Evidence: "exclusion mark"}
+	cs := p.res.Constraints
+	cs = append(cs, Constraint{})
+	copy(cs[p.negIdx+1:], cs[p.negIdx:])
+	cs[p.negIdx] = f
+	p.res.Constraints = cs
+}
+
+func join(a, b string) string {
+	if a == "" {
+		return b
+	}
+	if b == "" {
+		return a
+	}
+	return a + "; " + b
+}
+
+// tag walks the units and turns each into constraints.
+func (p *tagger) tag() {
+	p.neg = -1
+	for k := 0; k < len(p.units); k++ {
+		u := &p.units[k]
+		switch u.kind {
+		case uNeg:
+			p.setNeg(u.start, u.end, "-")
+		case uSym:
+			k += p.symbol(k)
+		case uItem:
+			k += p.item(k)
+		case uWord:
+			k += p.wordUnit(k)
+		}
+	}
+	if p.neg >= 0 {
+		// An exclusion with nothing after it to exclude.
+		p.negFiller()
+		p.neg = -1
+	}
+}
+
+// setNeg records an exclusion mark at [start, end). A second mark while
+// one is pending is a filler ("not not white").
+func (p *tagger) setNeg(start, end int, text string) {
+	if p.neg >= 0 {
+		p.add(Constraint{Kind: KindFiller, Start: start, End: end, Strictness: Filler, Evidence: "repeated exclusion mark"})
+		return
+	}
+	p.neg, p.negEnd, p.negText, p.negIdx = start, end, text, len(p.res.Constraints)
+}
+
+// wordUnit tags a word unit and returns how many extra units it used.
+func (p *tagger) wordUnit(k int) int {
+	u := &p.units[k]
+	if u.entries == nil {
+		switch {
+		case negators[u.text] && k+1 < len(p.units):
+			p.setNeg(u.start, u.end, u.text)
+			return 0
+		case sizeMarkers[u.text]:
+			if n := p.sizeAfter(k); n > 0 {
+				return n
+			}
+		case codeMarkers[u.text]:
+			if n := p.codeAfter(k); n > 0 {
+				return n
+			}
+		}
+		if n := p.compatAt(k); n > 0 {
+			if used := p.compat(k, n); used > 0 {
+				return used
+			}
+		}
+		if n := p.letterSize(k); n >= 0 {
+			return n
+		}
+		if d, ok := p.batteryWord(u.text); ok {
+			p.add(specConstraint(u.start, u.end, d, "battery size word"))
+			return 0
+		}
+	}
+	e := pick(u.entries)
+	if e == nil {
+		if structural[u.text] {
+			p.add(Constraint{Kind: KindFiller, Start: u.start, End: u.end, Strictness: Filler, Evidence: "connecting word"})
+			return 0
+		}
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Evidence: "not in the lexicon"})
+		p.res.Unrecognised = append(p.res.Unrecognised, u.text)
+		return 0
+	}
+	if e.Kind == lexicon.Audience || e.Kind == lexicon.Silhouette || e.Kind == lexicon.Filler {
+		if n := p.letterSize(k); n >= 0 {
+			return n
+		}
+	}
+	c := Constraint{Start: u.start, End: u.end, Name: e.Name, Evidence: fmt.Sprintf("%s lexicon", e.Kind)}
+	switch e.Kind {
+	case lexicon.ProductType:
+		c.Kind, c.Category, c.Parent = KindProductType, e.Category, e.Parent
+		if e == p.head {
+			c.Evidence = join(c.Evidence, "head product type")
+		}
+	case lexicon.Colour:
+		c.Kind = KindColour
+	case lexicon.Pattern:
+		c.Kind = KindPattern
+	case lexicon.Silhouette:
+		c.Kind = KindSilhouette
+	case lexicon.Material:
+		c.Kind = KindMaterial
+	case lexicon.Audience:
+		c.Kind = KindAudience
+	case lexicon.Brand:
+		c.Kind = KindBrand
+	case lexicon.Filler:
+		c.Kind, c.Strictness, c.Name = KindFiller, Filler, ""
+	}
+	p.add(c)
+	return 0
+}
+
+// letterSize tags a letter or fit size at unit k; -1 when it is none.
+func (p *tagger) letterSize(k int) int {
+	u := &p.units[k]
+	if v, ok := letterSizes[u.text]; ok {
+		if ambiguousLetters[u.text] && !p.apparel() {
+			return -1
+		}
+		p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "letter", Value: v},
+			Evidence: sizeEvidence(u.text, p.category)})
+		return 0
+	}
+	if fitSizes[u.text] && (p.apparel() || p.head == nil) {
+		p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "fit", Value: u.text}, Evidence: "fit size"})
+		return 0
+	}
+	return -1
+}
+
+func sizeEvidence(w, category string) string {
+	if ambiguousLetters[w] {
+		return fmt.Sprintf("letter size, since the category is %s", category)
+	}
+	return "letter size"
+}
+
+// sizeAfter reads "size X" at unit k.
+func (p *tagger) sizeAfter(k int) int {
+	if k+1 >= len(p.units) {
+		return 0
+	}
+	u, v := &p.units[k], &p.units[k+1]
+	c := Constraint{Kind: KindSize, Start: u.start, End: v.end, Evidence: "after \"" + u.text + "\""}
+	used := 1
+	switch v.kind {
+	case uWord:
+		if s, ok := letterSizes[v.text]; ok {
+			c.Size = &Size{System: "letter", Value: s}
+		} else if fitSizes[v.text] {
+			c.Size = &Size{System: "fit", Value: v.text}
+		} else {
+			c.Size = &Size{System: "named", Value: v.text}
+		}
+	case uItem:
+		s, ok := p.sizeValue(v)
+		if !ok {
+			return 0
+		}
+		c.Size = s
+	default:
+		return 0
+	}
+	// A shoe width may follow: "size 9.5 wide".
+	if k+2 < len(p.units) && p.units[k+2].kind == uWord {
+		next := &p.units[k+2]
+		if w, ok := widths[next.text]; ok && (c.Size.System == "numeric" || c.Size.System == "shoe") {
+			c.Size.Width = w
+			c.End = p.units[k+2].end
+			used++
+			if c.Size.System == "numeric" {
+				c.Size.System = "shoe"
+			}
+		}
+	}
+	p.add(c)
+	return used
+}
+
+// codeAfter reads "sku 88-1042" at unit k.
+func (p *tagger) codeAfter(k int) int {
+	j := k + 1
+	if j < len(p.units) && p.units[j].kind == uWord && (p.units[j].text == "number" || p.units[j].text == "no") {
+		j++
+	}
+	if j < len(p.units) && p.units[j].kind == uSym && p.units[j].tok.Value == "#" {
+		j++
+	}
+	if j >= len(p.units) || p.units[j].kind != uItem || p.units[j].item.Quoted != nil {
+		return 0
+	}
+	v := &p.units[j]
+	p.add(Constraint{Kind: KindPartNumber, Start: p.units[k].start, End: v.end, Code: strings.ToUpper(p.q[v.start:v.end]),
+		Evidence: "after \"" + p.units[k].text + "\""})
+	return j - k
+}
+
+// compat reads a compatibility phrase of n units at k and its target.
+func (p *tagger) compat(k, n int) int {
+	j := k + n
+	end := -1
+	var parts []string
+	for ; j < len(p.units); j++ {
+		v := &p.units[j]
+		if v.kind == uWord {
+			if v.entries != nil {
+				e := pick(v.entries)
+				if e.Kind == lexicon.Brand {
+					parts, end = append(parts, v.text), v.end
+					continue
+				}
+				if e.Kind == lexicon.Filler && len(parts) == 0 {
+					continue
+				}
+				if e.Kind == lexicon.ProductType && len(parts) > 0 && p.head != nil && e != p.head {
+					// "filter for dyno vacuum": the vacuum is what it fits.
+					parts, end = append(parts, v.text), v.end
+					j++
+				}
+				break
+			}
+			if negators[v.text] || sizeMarkers[v.text] || p.compatAt(j) > 0 || structural[v.text] {
+				break
+			}
+			if _, ok := letterSizes[v.text]; ok {
+				break
+			}
+			parts, end = append(parts, v.text), v.end
+			continue
+		}
+		if v.kind == uItem && (v.item.Code != nil || (len(parts) > 0 && p.bareNumber(v))) {
+			parts, end = append(parts, strings.ToLower(p.q[v.start:v.end])), v.end
+			continue
+		}
+		break
+	}
+	if end < 0 {
+		return 0
+	}
+	p.add(Constraint{Kind: KindCompatibility, Start: p.units[k].start, End: end, Target: strings.Join(parts, " "),
+		Evidence: fmt.Sprintf("target after %q", p.q[p.units[k].start:p.units[k+n-1].end])})
+	return j - k - 1
+}
+
+// symbol handles punctuation: "#10-24" opens a unified thread.
+func (p *tagger) symbol(k int) int {
+	u := &p.units[k]
+	if u.tok.Value == "#" && k+1 < len(p.units) && !p.units[k+1].spaceBefore && p.units[k+1].kind == uItem {
+		if c, ok := p.numberedThread(u.start, &p.units[k+1]); ok {
+			p.add(c)
+			return 1
+		}
+	}
+	return 0
+}
+
+// finish sets the category from standard designations when no product
+// type gave one.
+func (p *tagger) finish() {
+	p.res.Category = p.category
+	if p.category != "" {
+		return
+	}
+	for _, c := range p.res.Constraints {
+		if c.Kind == KindSpec && !c.Excluded {
+			if cat, ok := specCategory[c.Spec.System]; ok {
+				p.res.Category = cat
+				return
+			}
+		}
+	}
+}
+
+var specCategory = map[string]string{
+	"lumber": "lumber", "tyre": "tyres", "awg": "electrical", "metric_thread": "hardware",
+	"unified_thread": "hardware", "paper": "office", "battery": "batteries",
+}

@@ -1,0 +1,674 @@
+package parser
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/spec"
+	"github.com/whittle-search/whittle/lexicon/units"
+	"github.com/whittle-search/whittle/parser/internal/grammar"
+)
+
+// quantity is one number with what was written after it.
+type quantity struct {
+	num      number
+	unit     units.Unit
+	hasUnit  bool
+	currency string // ISO code when a currency was written after the number
+	label    string // w, h, d or l after a mark or unit
+	start    int
+	end      int
+}
+
+// single is a price or one or more quantities.
+type single struct {
+	price    bool
+	currency string
+	amount   number
+	parts    []quantity
+	start    int
+	end      int
+}
+
+func (p *tagger) readSingle(s *grammar.Single) (single, bool) {
+	out := single{start: s.Pos.Offset, end: s.EndPos.Offset}
+	if m := s.Money; m != nil {
+		n, err := parseNum(m.Amount)
+		if err != nil {
+			p.res.Errors = append(p.res.Errors, err)
+			return out, false
+		}
+		code, ok := p.symbolCurrency(m.Symbol)
+		if !ok {
+			p.errorf(m.Pos.Offset, m.Amount.Pos.Offset, "unknown currency symbol %q", m.Symbol)
+			return out, false
+		}
+		out.price, out.currency, out.amount = true, code, n
+		return out, true
+	}
+	for _, q := range s.Dims.Parts {
+		n, err := parseNum(q.Num)
+		if err != nil {
+			p.res.Errors = append(p.res.Errors, err)
+			return out, false
+		}
+		qt := quantity{num: n, label: q.Label, start: q.Pos.Offset, end: q.EndPos.Offset}
+		switch {
+		case q.Mark == `"`:
+			qt.unit, qt.hasUnit = mustUnit("in"), true
+		case q.Mark == "'":
+			qt.unit, qt.hasUnit = mustUnit("ft"), true
+		case q.Unit != "":
+			qt.unit, qt.hasUnit = units.Lookup(q.Unit, p.opts.Volume)
+		case q.Currency != "":
+			code, ok := p.wordCurrency(q.Currency)
+			if !ok {
+				p.errorf(qt.start, qt.end, "unknown currency %q", q.Currency)
+				return out, false
+			}
+			qt.currency = code
+		}
+		out.parts = append(out.parts, qt)
+	}
+	if len(out.parts) == 1 && out.parts[0].currency != "" {
+		out.price, out.currency, out.amount = true, out.parts[0].currency, out.parts[0].num
+	}
+	return out, true
+}
+
+func mustUnit(sym string) units.Unit {
+	u, ok := units.BySymbol(sym)
+	if !ok {
+		panic("whittle: unit table lacks " + sym)
+	}
+	return u
+}
+
+// symbols maps currency signs to ISO 4217 codes; "$" is the option's
+// dollar.
+var currencySigns = map[string]string{
+	"€": "EUR", "£": "GBP", "¥": "JPY", "₹": "INR", "₩": "KRW", "₽": "RUB", "₺": "TRY",
+	"₪": "ILS", "₫": "VND", "฿": "THB", "₱": "PHP", "₴": "UAH", "₦": "NGN", "₡": "CRC",
+	"₲": "PYG", "₵": "GHS", "₸": "KZT", "₼": "AZN", "₾": "GEL", "zł": "PLN", "¢": "",
+}
+
+func (p *tagger) symbolCurrency(sym string) (string, bool) {
+	if sym == "$" {
+		return p.opts.dollar(), true
+	}
+	code, ok := currencySigns[sym]
+	return code, ok && code != ""
+}
+
+func (p *tagger) wordCurrency(w string) (string, bool) {
+	if code, ok := currencySigns[w]; ok {
+		return code, code != ""
+	}
+	if w == "$" {
+		return p.opts.dollar(), true
+	}
+	code, ok := grammar.CurrencyWord(w)
+	if ok && code == "" {
+		code = p.opts.dollar()
+	}
+	return code, ok
+}
+
+// item tags a structured item at unit k; it returns the extra units used.
+func (p *tagger) item(k int) int {
+	u := &p.units[k]
+	it := u.item
+	switch {
+	case it.Quoted != nil:
+		p.quoted(u)
+	case it.Tyre != nil:
+		p.tyre(u)
+	case it.Code != nil:
+		p.code(u)
+	case it.Between != nil:
+		a, ok1 := p.readSingle(it.Between.From)
+		b, ok2 := p.readSingle(it.Between.To)
+		if ok1 && ok2 {
+			p.rangeOf(u.start, u.end, a, b, "between")
+		}
+	case it.Compare != nil:
+		s, ok := p.readSingle(it.Compare.Val)
+		if ok {
+			p.bound(u.start, u.end, s, it.Compare.Op)
+		}
+	case it.Value != nil:
+		return p.value(k)
+	}
+	return 0
+}
+
+func (p *tagger) value(k int) int {
+	u := &p.units[k]
+	v := u.item.Value
+	from, ok := p.readSingle(v.From)
+	if !ok {
+		return 0
+	}
+	if v.To != nil {
+		to, ok := p.readSingle(v.To)
+		if !ok {
+			return 0
+		}
+		if c, ok := p.unifiedThread(u, from, to); ok {
+			p.add(c)
+			return 0
+		}
+		p.rangeOf(u.start, u.end, from, to, "range")
+		return 0
+	}
+	if v.Post != "" {
+		p.bound(u.start, u.end, from, v.Post)
+		return 0
+	}
+	if from.price {
+		p.price(u.start, u.end, from, nil, &from.amount, "a bare price reads as a ceiling")
+		return 0
+	}
+	if len(from.parts) > 1 {
+		p.dims(u.start, u.end, from)
+		return 0
+	}
+	return p.point(k, from.parts[0])
+}
+
+// next returns unit k+1 when it is a word, and whether a space comes before it.
+func (p *tagger) nextWord(k int) (*unit, bool) {
+	if k+1 < len(p.units) && p.units[k+1].kind == uWord {
+		return &p.units[k+1], p.units[k+1].spaceBefore
+	}
+	return nil, false
+}
+
+// point tags one quantity; it returns the extra units used.
+func (p *tagger) point(k int, q quantity) int {
+	u := &p.units[k]
+	w, spaced := p.nextWord(k)
+	// Wire gauge: "14 awg", "12 gauge", "14/2 awg".
+	if w != nil && (w.text == "awg" || w.text == "gauge" || w.text == "ga") && !q.hasUnit {
+		if c, ok := p.wireGauge(u.start, w.end, q, u.item.Value.From.Dims.Parts[0].Num); ok {
+			p.add(c)
+			return 1
+		}
+	}
+	if q.num.fraction && !q.hasUnit && p.category == "electrical" {
+		if c, ok := p.wireGauge(u.start, u.end, q, u.item.Value.From.Dims.Parts[0].Num); ok {
+			p.add(c)
+			return 0
+		}
+	}
+	// A letter size stuck to a number: "3xl", "2xl".
+	if w != nil && !spaced && !q.hasUnit && q.num.integer {
+		if s, ok := letterSizes[q.num.decimal+w.text]; ok {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "letter", Value: s}, Evidence: "letter size"})
+			return 1
+		}
+	}
+	// A shoe size with its width: "9.5 wide".
+	if w != nil && p.category == "footwear" && !q.hasUnit {
+		if width, ok := widths[w.text]; ok {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "shoe", Value: q.num.decimal, Width: width},
+				Evidence: "shoe size with its width"})
+			return 1
+		}
+	}
+	if q.hasUnit && p.isTrousers() && (q.unit.Symbol == "w" || q.unit.Symbol == "l") && q.num.integer {
+		return p.waistInseam(k, q)
+	}
+	if q.hasUnit {
+		if c, ok := p.unitAsSize(u, q); ok {
+			p.add(c)
+			return 0
+		}
+		if q.unit.Symbol == "v" && (p.category == "batteries" || p.head == nil) {
+			if d, ok := spec.BatterySize(q.num.decimal + "v"); ok {
+				p.add(specConstraint(u.start, u.end, d, "battery size"))
+				return 0
+			}
+		}
+		p.add(p.measure(u.start, u.end, q, q.label, nil, nil, q.unit))
+		return 0
+	}
+	p.bare(u.start, u.end, q)
+	return 0
+}
+
+// waistInseam reads "32w 30l" (or "32w" or "30l" alone) on trousers.
+func (p *tagger) waistInseam(k int, q quantity) int {
+	u := &p.units[k]
+	if q.unit.Symbol == "w" && k+1 < len(p.units) && p.units[k+1].kind == uItem && p.bareOrUnit(&p.units[k+1], "l") {
+		v := &p.units[k+1]
+		inseam := v.item.Value.From.Dims.Parts[0].Num.Whole
+		p.add(Constraint{Kind: KindSize, Start: u.start, End: v.end, Size: &Size{System: "waist_inseam", Value: q.num.decimal + "x" + inseam},
+			Evidence: "waist (w) and inseam (l) on " + p.head.Name})
+		return 1
+	}
+	sys := map[string]string{"w": "waist", "l": "inseam"}[q.unit.Symbol]
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: sys, Value: q.num.decimal},
+		Evidence: sys + " on " + p.head.Name})
+	return 0
+}
+
+// bareOrUnit reports whether unit v is one whole number with unit sym.
+func (p *tagger) bareOrUnit(v *unit, sym string) bool {
+	it := v.item
+	if it.Value == nil || it.Value.To != nil || it.Value.Post != "" || it.Value.From.Dims == nil || len(it.Value.From.Dims.Parts) != 1 {
+		return false
+	}
+	q := it.Value.From.Dims.Parts[0]
+	return q.Unit == sym && q.Num.Whole != "" && q.Num.Frac == nil && !strings.ContainsAny(q.Num.Whole, ".,")
+}
+
+// unitAsSize reads "8w" on footwear and apparel as a size.
+func (p *tagger) unitAsSize(u *unit, q quantity) (Constraint, bool) {
+	if !p.apparel() || q.unit.Symbol != "w" || u.end-u.start > len(q.num.decimal)+1 {
+		return Constraint{}, false
+	}
+	c := Constraint{Kind: KindSize, Start: u.start, End: u.end, Evidence: "number with w in " + p.category}
+	if p.category == "footwear" {
+		c.Size = &Size{System: "shoe", Value: q.num.decimal, Width: "wide"}
+	} else {
+		c.Size = &Size{System: "numeric", Value: q.num.decimal + "w"}
+	}
+	return c, true
+}
+
+// bare tags a number written without a unit.
+func (p *tagger) bare(start, end int, q quantity) {
+	slots := p.lex.SlotsOf(p.head)
+	for _, s := range slots {
+		if s.Holds(q.num.value) {
+			c := p.measure(start, end, q, s.Dimension, nil, nil, s.Unit)
+			c.Inferred = true
+			c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", s.Unit.Symbol, p.head.Name, s.Dimension, rangeText(s))
+			p.add(c)
+			return
+		}
+	}
+	if p.apparel() {
+		sys := "numeric"
+		if p.category == "footwear" {
+			sys = "shoe"
+		}
+		p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: sys, Value: q.num.decimal},
+			Evidence: "a bare number in " + p.category + " reads as a size"})
+		return
+	}
+	c := Constraint{Kind: KindMeasure, Start: start, End: end, Measure: &Measure{Dimension: "number", Amount: ptr(q.num.value)}}
+	switch {
+	case p.head == nil:
+		c.Evidence = "unitless: no product type to take a unit from"
+	case len(slots) == 0:
+		c.Evidence = fmt.Sprintf("unitless: product type %s has no measure slots", p.head.Name)
+	default:
+		c.Evidence = fmt.Sprintf("unitless: no measure slot of %s holds %s", p.head.Name, q.num.decimal)
+	}
+	p.add(c)
+}
+
+func rangeText(s lexicon.Slot) string {
+	return strconv.FormatFloat(s.Min, 'f', -1, 64) + ".." + strconv.FormatFloat(s.Max, 'f', -1, 64)
+}
+
+func ptr[T any](v T) *T { return &v }
+
+// tidy rounds a computed amount to 12 significant digits, so that binary
+// noise (24 in = 609.5999999999999 mm) does not reach the output.
+func tidy(x float64) float64 {
+	v, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 12, 64), 64)
+	if err != nil {
+		return x
+	}
+	return v
+}
+
+// slotFor names the dimension of a quantity with a unit.
+func (p *tagger) slotFor(q units.Quantity, nth int) (lexicon.Slot, bool) {
+	seen := 0
+	for _, s := range p.lex.SlotsOf(p.head) {
+		if s.Quantity == q {
+			if seen == nth {
+				return s, true
+			}
+			seen++
+		}
+	}
+	return lexicon.Slot{}, false
+}
+
+var labels = map[string]string{"w": "width", "h": "height", "d": "depth", "l": "length"}
+
+// measure builds a measure constraint: a point (min and max nil) or a
+// range, in unit u. dim may be a label letter, a dimension name or "".
+func (p *tagger) measure(start, end int, q quantity, dim string, min, max *float64, u units.Unit) Constraint {
+	if l, ok := labels[dim]; ok {
+		dim = l
+	}
+	if dim == "" {
+		if s, ok := p.slotFor(u.Quantity, 0); ok {
+			dim = s.Dimension
+		} else {
+			dim = string(u.Quantity)
+		}
+	}
+	m := &Measure{Dimension: dim, Quantity: string(u.Quantity), Unit: u.Symbol, BaseUnit: units.Base(u.Quantity)}
+	if min == nil && max == nil {
+		m.Amount, m.BaseAmount = ptr(q.num.value), ptr(tidy(q.num.value*u.ToBase))
+	} else {
+		if min != nil {
+			m.Min, m.BaseMin = ptr(*min), ptr(tidy(*min*u.ToBase))
+		}
+		if max != nil {
+			m.Max, m.BaseMax = ptr(*max), ptr(tidy(*max*u.ToBase))
+		}
+	}
+	return Constraint{Kind: KindMeasure, Start: start, End: end, Measure: m, Evidence: "unit as typed"}
+}
+
+// price adds a price constraint with the given bounds.
+func (p *tagger) price(start, end int, s single, min, max *number, evidence string) {
+	pr := &Price{Currency: s.currency}
+	for _, b := range []struct {
+		n   *number
+		dst **string
+	}{{min, &pr.Min}, {max, &pr.Max}} {
+		if b.n == nil {
+			continue
+		}
+		amt, err := amountText(b.n.decimal, s.currency)
+		if err != nil {
+			p.errorf(b.n.start, b.n.end, "%v", err)
+			return
+		}
+		*b.dst = &amt
+	}
+	p.add(Constraint{Kind: KindPrice, Start: start, End: end, Price: pr, Evidence: evidence})
+}
+
+// bound applies a comparison word to a single value.
+func (p *tagger) bound(start, end int, s single, op string) {
+	isMin := minOps[op]
+	if !isMin && !maxOps[op] {
+		p.errorf(start, end, "unknown comparison %q", op)
+		return
+	}
+	ev := fmt.Sprintf("%q sets a %s", op, map[bool]string{true: "floor", false: "ceiling"}[isMin])
+	if s.price {
+		if isMin {
+			p.price(start, end, s, &s.amount, nil, ev)
+		} else {
+			p.price(start, end, s, nil, &s.amount, ev)
+		}
+		return
+	}
+	if len(s.parts) != 1 {
+		p.errorf(start, end, "a comparison needs one value, not a dimension")
+		return
+	}
+	q := s.parts[0]
+	v := q.num.value
+	var lo, hi *float64
+	if isMin {
+		lo = &v
+	} else {
+		hi = &v
+	}
+	if q.hasUnit {
+		c := p.measure(start, end, q, q.label, lo, hi, q.unit)
+		c.Evidence = ev
+		p.add(c)
+		return
+	}
+	for _, sl := range p.lex.SlotsOf(p.head) {
+		if sl.Holds(v) {
+			c := p.measure(start, end, q, sl.Dimension, lo, hi, sl.Unit)
+			c.Inferred = true
+			c.Evidence = join(ev, fmt.Sprintf("unit %s from product type %s", sl.Unit.Symbol, p.head.Name))
+			p.add(c)
+			return
+		}
+	}
+	// A bound on a bare number with no slot is most often a price.
+	cur := p.opts.Currency
+	if cur == "" {
+		cur = "USD"
+	}
+	s.price, s.currency, s.amount = true, cur, q.num
+	if isMin {
+		p.price(start, end, s, &s.amount, nil, join(ev, "bare number after a comparison read as a price"))
+	} else {
+		p.price(start, end, s, nil, &s.amount, join(ev, "bare number after a comparison read as a price"))
+	}
+	p.res.Constraints[len(p.res.Constraints)-1].Inferred = true
+}
+
+var (
+	maxOps = map[string]bool{"under": true, "below": true, "max": true, "maximum": true, "upto": true, "up to": true,
+		"less than": true, "fewer than": true, "at most": true, "no more than": true, "within": true, "<": true, "<=": true,
+		"or less": true, "or under": true, "or below": true, "or fewer": true, "or lower": true, "or cheaper": true,
+		"and under": true, "and below": true}
+	minOps = map[string]bool{"over": true, "above": true, "min": true, "minimum": true, "more than": true, "greater than": true,
+		"at least": true, "no less than": true, ">": true, ">=": true, "or more": true, "or over": true, "or above": true,
+		"or higher": true, "and up": true, "and over": true, "and above": true, "+": true}
+)
+
+// rangeOf tags "20-30 mm", "$20 to $30", "between 2 and 3 tb".
+func (p *tagger) rangeOf(start, end int, a, b single, how string) {
+	if a.price || b.price {
+		cur := a.currency
+		if cur == "" {
+			cur = b.currency
+		}
+		if a.price && b.price && a.currency != b.currency {
+			p.errorf(start, end, "a price range in two currencies (%s, %s)", a.currency, b.currency)
+			return
+		}
+		lo, hi := p.singleNumber(a), p.singleNumber(b)
+		if lo == nil || hi == nil {
+			p.errorf(start, end, "a price range needs one amount on each side")
+			return
+		}
+		lo, hi = ordered(lo, hi)
+		p.price(start, end, single{price: true, currency: cur}, lo, hi, how+" of prices")
+		return
+	}
+	if len(a.parts) != 1 || len(b.parts) != 1 {
+		p.errorf(start, end, "a range of dimensions is not supported; give one range per dimension")
+		return
+	}
+	qa, qb := a.parts[0], b.parts[0]
+	u, has := qb.unit, qb.hasUnit
+	if !has {
+		u, has = qa.unit, qa.hasUnit
+	}
+	lo, hi := qa.num.value, qb.num.value
+	if qa.hasUnit && qb.hasUnit && qa.unit.Symbol != qb.unit.Symbol {
+		if qa.unit.Quantity != qb.unit.Quantity {
+			p.errorf(start, end, "range from %s to %s mixes quantities", qa.unit.Symbol, qb.unit.Symbol)
+			return
+		}
+		lo = qa.num.value * qa.unit.ToBase / u.ToBase
+	}
+	if lo > hi {
+		lo, hi = hi, lo
+	}
+	if has {
+		c := p.measure(start, end, qb, qb.label, &lo, &hi, u)
+		c.Evidence = how + ", unit as typed"
+		p.add(c)
+		return
+	}
+	for _, sl := range p.lex.SlotsOf(p.head) {
+		if sl.Holds(lo) && sl.Holds(hi) {
+			c := p.measure(start, end, qb, sl.Dimension, &lo, &hi, sl.Unit)
+			c.Inferred = true
+			c.Evidence = fmt.Sprintf("%s; unit %s from product type %s", how, sl.Unit.Symbol, p.head.Name)
+			p.add(c)
+			return
+		}
+	}
+	p.add(Constraint{Kind: KindMeasure, Start: start, End: end, Measure: &Measure{Dimension: "number", Min: &lo, Max: &hi},
+		Evidence: how + "; unitless: no unit typed or inferred"})
+}
+
+func (p *tagger) singleNumber(s single) *number {
+	if s.price {
+		return &s.amount
+	}
+	if len(s.parts) == 1 && !s.parts[0].hasUnit {
+		return &s.parts[0].num
+	}
+	return nil
+}
+
+func ordered(a, b *number) (*number, *number) {
+	if a.value > b.value {
+		return b, a
+	}
+	return a, b
+}
+
+// dims tags AxB(xC): a lumber size, a waist by inseam, or a dimension.
+func (p *tagger) dims(start, end int, s single) {
+	anyUnit := false
+	allInts := true
+	for _, q := range s.parts {
+		anyUnit = anyUnit || q.hasUnit || q.currency != ""
+		allInts = allInts && q.num.integer
+	}
+	if !anyUnit && allInts && len(s.parts) <= 3 {
+		a, b := int(s.parts[0].num.value), int(s.parts[1].num.value)
+		if d, ok := spec.LumberNominal(a, b); ok && (p.category == "lumber" || p.category == "hardware" || p.head == nil) {
+			endLumber := s.parts[1].end
+			if len(s.parts) == 2 {
+				endLumber = end
+			}
+			p.add(specConstraint(start, endLumber, d, "nominal lumber size"))
+			if len(s.parts) == 3 {
+				q := s.parts[2]
+				c := p.measure(q.start, end, q, "length", nil, nil, mustUnit("ft"))
+				c.Inferred = true
+				c.Evidence = "third number of a lumber size is the length in feet (common practice)"
+				p.add(c)
+			}
+			return
+		}
+		if len(s.parts) == 2 && p.isTrousers() && a >= 22 && a <= 60 && b >= 24 && b <= 40 {
+			p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: "waist_inseam", Value: fmt.Sprintf("%dx%d", a, b)},
+				Evidence: "waist by inseam on " + p.head.Name})
+			return
+		}
+	}
+	// A unit written only on the last part applies to all.
+	var shared *units.Unit
+	if last := s.parts[len(s.parts)-1]; last.hasUnit {
+		shared = &last.unit
+	}
+	lengthSlots := 0
+	generic := []string{"width", "height", "depth"}
+	for i, q := range s.parts {
+		qEnd := q.end
+		if i == len(s.parts)-1 {
+			qEnd = end
+		}
+		u, has := q.unit, q.hasUnit
+		if !has && shared != nil {
+			u, has = *shared, true
+		}
+		var c Constraint
+		switch {
+		case has:
+			dim := q.label
+			if dim == "" {
+				if sl, ok := p.slotFor(u.Quantity, lengthSlots); ok {
+					dim = sl.Dimension
+				} else if i < len(generic) {
+					dim = generic[i]
+				}
+			}
+			lengthSlots++
+			c = p.measure(q.start, qEnd, q, dim, nil, nil, u)
+			if !q.hasUnit {
+				c.Evidence = "unit from the last part of the dimension"
+			}
+		default:
+			sl, ok := p.slotFor(units.Length, lengthSlots)
+			lengthSlots++
+			if ok && sl.Holds(q.num.value) {
+				c = p.measure(q.start, qEnd, q, sl.Dimension, nil, nil, sl.Unit)
+				c.Inferred = true
+				c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", sl.Unit.Symbol, p.head.Name, sl.Dimension, rangeText(sl))
+			} else {
+				dim := "dimension"
+				if i < len(generic) {
+					dim = generic[i]
+				}
+				c = Constraint{Kind: KindMeasure, Start: q.start, End: qEnd, Measure: &Measure{Dimension: dim, Amount: ptr(q.num.value)},
+					Evidence: "unitless part of a dimension"}
+			}
+		}
+		p.add(c)
+	}
+}
+
+func (p *tagger) isTrousers() bool {
+	for e, n := p.head, 0; e != nil && n < 16; n++ {
+		switch e.Name {
+		case "trousers", "jeans", "pants", "shorts", "chinos", "slacks":
+			return true
+		}
+		next, ok := p.lex.Lookup(lexicon.ProductType, e.Parent)
+		if !ok {
+			break
+		}
+		e = next
+	}
+	return false
+}
+
+// sizeValue reads the value after "size".
+func (p *tagger) sizeValue(v *unit) (*Size, bool) {
+	it := v.item
+	if it.Value == nil || it.Value.To != nil || it.Value.Post != "" {
+		return nil, false
+	}
+	s, ok := p.readSingle(it.Value.From)
+	if !ok || s.price {
+		return nil, false
+	}
+	if len(s.parts) == 2 && s.parts[0].num.integer && s.parts[1].num.integer {
+		return &Size{System: "waist_inseam", Value: s.parts[0].num.decimal + "x" + s.parts[1].num.decimal}, true
+	}
+	if len(s.parts) != 1 {
+		return nil, false
+	}
+	q := s.parts[0]
+	sys := "numeric"
+	if p.category == "footwear" {
+		sys = "shoe"
+	}
+	val := q.num.decimal
+	if q.hasUnit {
+		if q.unit.Symbol == "w" && p.category == "footwear" {
+			return &Size{System: "shoe", Value: val, Width: "wide"}, true
+		}
+		val = strings.ToLower(strings.TrimSpace(p.q[q.start:q.end]))
+	}
+	return &Size{System: sys, Value: val}, true
+}
+
+// bareNumber reports whether a unit holds just a number with no unit.
+func (p *tagger) bareNumber(v *unit) bool {
+	it := v.item
+	if it.Value == nil || it.Value.To != nil || it.Value.Post != "" || it.Value.From.Dims == nil || len(it.Value.From.Dims.Parts) != 1 {
+		return false
+	}
+	q := it.Value.From.Dims.Parts[0]
+	return q.Unit == "" && q.Mark == "" && q.Currency == ""
+}
