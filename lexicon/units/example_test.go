@@ -67,3 +67,8 @@ func ExampleUnits() {
 	// tb 1000
 	// pb 1e+06
 }
+
+func ExampleOpensPhrase() {
+	fmt.Println(units.OpensPhrase("fl"), units.OpensPhrase("imperial"), units.OpensPhrase("mm"))
+	// Output: true true false
+}

@@ -108,3 +108,9 @@ func isSeparator(r rune) bool {
 	}
 	return false
 }
+
+// OpensPhrase reports whether word (lower case, no full stops) is the
+// first word of a unit spelled in several words, such as "fl" in "fl oz"
+// or "imperial" in "imperial gallon". A tokenizer uses it to try a longer
+// spelling only where one can start.
+func OpensPhrase(word string) bool { return openers[word] }

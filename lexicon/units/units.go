@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math/big"
+	"strings"
 	"sync"
 )
 
@@ -234,6 +235,8 @@ var (
 	table    []Unit
 	bySymbol map[string]int
 	spelled  map[string]spelling
+	// openers holds the first word of every spelling of several words.
+	openers map[string]bool
 	// exactToBase[i] is table[i]'s factor to its base unit as an exact
 	// rational; read only after build.
 	exactToBase []*big.Rat
@@ -323,6 +326,7 @@ func build() {
 	exactToBase = exact
 
 	spelled = make(map[string]spelling, 8*n)
+	openers = make(map[string]bool)
 	add := func(s string, us, imp int) {
 		var buf [maxKey]byte
 		k, ok := normalise(s, &buf)
@@ -334,6 +338,9 @@ func build() {
 			panic("units: spelling " + s + " is claimed twice")
 		}
 		spelled[key] = spelling{us: uint8(us), imp: uint8(imp)}
+		if first, _, several := strings.Cut(key, " "); several {
+			openers[first] = true
+		}
 	}
 	// The US symbols of split volumes ("gal", "floz", ...) are also the
 	// everyday spellings, so they follow the volume system like the rest.
