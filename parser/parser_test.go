@@ -249,6 +249,29 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindColour, "navy blue", "navy"), tg(KindProductType, "chinos", "chinos")}},
 	{name: "unknown word", query: "zorblax dress", category: "apparel", reason: "unknown words are kept as keywords",
 		want: []tagged{tg(KindKeyword, "zorblax", "zorblax"), tg(KindProductType, "dress", "dress")}},
+	{name: "works with", query: "works with jx-10 charger 65w", category: "electronics", reason: "works with opens a target; the charger after it is the head",
+		want: []tagged{tg(KindCompatibility, "works with jx-10", "fits jx-10"), tg(KindProductType, "charger", "charger"), tg(KindMeasure, "65w", "65 w")}},
+	{name: "replacement for", query: "usb cable replacement for jx-10", category: "electronics", reason: "replacement for opens a target",
+		want: []tagged{tg(KindProductType, "usb cable", "usb cable"), tg(KindCompatibility, "replacement for jx-10", "fits jx-10")}},
+	{name: "fits", query: "fits vt-200 belt", category: "accessories", reason: "fits opens a target that stops at the product type",
+		want: []tagged{tg(KindCompatibility, "fits vt-200", "fits vt-200"), tg(KindProductType, "belt", "belt")}},
+	{name: "target takes the product it fits", query: "replacement filter for vt-200 vacuum", category: "home",
+		reason: "a product type right after a target, other than the head, is what the target is",
+		want:   []tagged{tg(KindProductType, "replacement filter", "filter"), tg(KindCompatibility, "for vt-200 vacuum", "fits vt-200 vacuum")}},
+	{name: "pack size", query: "aaa batteries 8 pack", category: "batteries", reason: "a number before pack is a count",
+		want: []tagged{tg(KindSpec, "aaa", "AAA (battery)"), tg(KindProductType, "batteries", "battery"), tg(KindMeasure, "8 pack", "8 count")}},
+	{name: "pack of", query: "pack of 12 aa batteries", category: "batteries", reason: "pack of N is a count",
+		want: []tagged{tg(KindMeasure, "pack of 12", "12 count"), tg(KindSpec, "aa", "AA (battery)"), tg(KindProductType, "batteries", "battery")}},
+	{name: "hyphenated pack", query: "12-pack cr2032", category: "batteries", reason: "N-pack is a count",
+		want: []tagged{tg(KindMeasure, "12-pack", "12 count"), tg(KindSpec, "cr2032", "CR2032 (battery)")}},
+	{name: "explicit unit picks its slot", query: "m8 bolts 40mm", category: "hardware", reason: "40 mm is no bolt diameter (0.125..1.5 in) but a bolt length",
+		want: []tagged{tg(KindSpec, "m8", "M8x1.25 (metric_thread)"), tg(KindProductType, "bolts", "bolt"), tg(KindMeasure, "40mm", "40 mm")}},
+	{name: "b5", query: "b5 notebook", category: "office", reason: "ISO 216 B series",
+		want: []tagged{tg(KindSpec, "b5", "B5 (paper)"), tg(KindProductType, "notebook", "notebook")}},
+	{name: "aaa", query: "aaa batteries", category: "batteries", reason: "IEC 60086 size",
+		want: []tagged{tg(KindSpec, "aaa", "AAA (battery)"), tg(KindProductType, "batteries", "battery")}},
+	{name: "awg", query: "14 awg", category: "electrical", reason: "AWG by its own name; the category comes from the standard",
+		want: []tagged{tg(KindSpec, "14 awg", "14 AWG (awg)")}},
 	{name: "unitless number", query: "500 lens", category: "camera", reason: "500 mm is within a lens's focal lengths",
 		want: []tagged{tg(KindMeasure, "500", "500 mm").inferred(), tg(KindProductType, "lens", "lens")}},
 	{name: "out of every slot", query: "5000 lens", category: "camera", reason: "no focal length slot holds 5000: stays unitless",
@@ -364,5 +387,30 @@ func TestVolumeSystem(t *testing.T) {
 	}
 	if !near(*imp.Measure.BaseAmount, 5*4546.09, 1e-9) {
 		t.Errorf("imperial 5 gal = %v ml", *imp.Measure.BaseAmount)
+	}
+}
+
+// The dimension a measure names comes from a label, the product type's
+// slots, or the quantity.
+func TestMeasureDimensions(t *testing.T) {
+	for _, tc := range []struct {
+		query, reason string
+		want          []string
+	}{
+		{"85 lens", "the lens slot", []string{"focal_length"}},
+		{"43 tv", "the tv slot", []string{"diagonal"}},
+		{"m8 bolts 40mm", "40 mm fits the bolt's length slot, not its diameter", []string{"length"}},
+		{`24"w x 36"h rug`, "labels w and h", []string{"width", "height"}},
+		{"20x20 cushion cover", "the cover's two slots in order", []string{"width", "height"}},
+		{"2x4x8", "the third number of a lumber size", []string{"length"}},
+		{"64gb", "no product type: the quantity's name", []string{"data"}},
+	} {
+		var got []string
+		for _, c := range Parse(tc.query).Of(KindMeasure) {
+			got = append(got, c.Measure.Dimension)
+		}
+		if diff := cmp.Diff(tc.want, got); diff != "" {
+			t.Errorf("%q: %s (-want +got):\n%s", tc.query, tc.reason, diff)
+		}
 	}
 }

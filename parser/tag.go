@@ -212,6 +212,9 @@ func (p *tagger) wordUnit(k int) int {
 				return n
 			}
 		}
+		if n := p.packOf(k); n > 0 {
+			return n
+		}
 		if n := p.compatAt(k); n > 0 {
 			if used := p.compat(k, n); used > 0 {
 				return used
@@ -430,4 +433,26 @@ func (p *tagger) finish() {
 var specCategory = map[string]string{
 	"lumber": "lumber", "tyre": "tyres", "awg": "electrical", "metric_thread": "hardware",
 	"unified_thread": "hardware", "paper": "office", "battery": "batteries",
+}
+
+// packOf reads "pack of 8" at unit k.
+func (p *tagger) packOf(k int) int {
+	u := &p.units[k]
+	if !countWords[u.text] || k+2 >= len(p.units) || p.units[k+1].kind != uWord || p.units[k+1].text != "of" {
+		return 0
+	}
+	v := &p.units[k+2]
+	if v.kind != uItem || !p.bareNumber(v) {
+		return 0
+	}
+	n := v.item.Value.From.Dims.Parts[0].Num
+	if n.Whole == "" || n.Frac != nil {
+		return 0
+	}
+	val, _, err := parseWhole(n.Whole)
+	if err != nil || val != float64(int64(val)) {
+		return 0
+	}
+	p.add(countConstraint(u.start, v.end, val, "number after \""+u.text+" of\""))
+	return 2
 }

@@ -210,6 +210,18 @@ func (p *tagger) point(k int, q quantity) int {
 			return 1
 		}
 	}
+	// A count: "8 pack", "12-pack", "50 pcs".
+	if !q.hasUnit && q.num.integer {
+		if w != nil && countWords[w.text] {
+			p.add(countConstraint(u.start, w.end, q.num.value, "number before \""+w.text+"\""))
+			return 1
+		}
+		if k+2 < len(p.units) && p.units[k+1].kind == uSym && p.units[k+1].tok.Value == "-" && !p.units[k+1].spaceBefore &&
+			p.units[k+2].kind == uWord && !p.units[k+2].spaceBefore && countWords[p.units[k+2].text] {
+			p.add(countConstraint(u.start, p.units[k+2].end, q.num.value, "number before \""+p.units[k+2].text+"\""))
+			return 2
+		}
+	}
 	// A shoe size with its width: "9.5 wide".
 	if w != nil && p.category == "footwear" && !q.hasUnit {
 		if width, ok := widths[w.text]; ok {
@@ -342,6 +354,28 @@ func (p *tagger) slotFor(q units.Quantity, nth int) (lexicon.Slot, bool) {
 	return lexicon.Slot{}, false
 }
 
+// dimensionFor names what amount (in unit u) measures: the first slot of
+// the head product type, of the same quantity, whose range holds it; else
+// the first slot of that quantity; else the quantity's own name.
+func (p *tagger) dimensionFor(u units.Unit, amount float64) string {
+	first := ""
+	for _, s := range p.lex.SlotsOf(p.head) {
+		if s.Quantity != u.Quantity {
+			continue
+		}
+		if first == "" {
+			first = s.Dimension
+		}
+		if v, err := units.Convert(amount, u, s.Unit); err == nil && s.Holds(v) {
+			return s.Dimension
+		}
+	}
+	if first != "" {
+		return first
+	}
+	return string(u.Quantity)
+}
+
 var labels = map[string]string{"w": "width", "h": "height", "d": "depth", "l": "length"}
 
 // measure builds a measure constraint: a point (min and max nil) or a
@@ -351,11 +385,13 @@ func (p *tagger) measure(start, end int, q quantity, dim string, min, max *float
 		dim = l
 	}
 	if dim == "" {
-		if s, ok := p.slotFor(u.Quantity, 0); ok {
-			dim = s.Dimension
-		} else {
-			dim = string(u.Quantity)
+		v := q.num.value
+		if min != nil {
+			v = *min
+		} else if max != nil {
+			v = *max
 		}
+		dim = p.dimensionFor(u, v)
 	}
 	m := &Measure{Dimension: dim, Quantity: string(u.Quantity), Unit: u.Symbol, BaseUnit: units.Base(u.Quantity)}
 	if min == nil && max == nil {
@@ -671,4 +707,14 @@ func (p *tagger) bareNumber(v *unit) bool {
 	}
 	q := it.Value.From.Dims.Parts[0]
 	return q.Unit == "" && q.Mark == "" && q.Currency == ""
+}
+
+// countWords name a number of items in one package.
+var countWords = map[string]bool{"pack": true, "pk": true, "packs": true, "ct": true, "count": true, "pcs": true,
+	"pc": true, "piece": true, "pieces": true, "pairs": true, "pair": true, "set": true, "rolls": true, "roll": true}
+
+// countConstraint is a pack size: a measure of quantity "count".
+func countConstraint(start, end int, n float64, evidence string) Constraint {
+	return Constraint{Kind: KindMeasure, Start: start, End: end, Evidence: evidence,
+		Measure: &Measure{Dimension: "pack_size", Quantity: "count", Unit: "count", BaseUnit: "count", Amount: ptr(n), BaseAmount: ptr(n)}}
 }

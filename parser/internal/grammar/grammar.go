@@ -299,32 +299,49 @@ func newDefinition() Definition {
 }
 
 // quickQuant builds, without the grammar, the tree the grammar gives for
-// the commonest numeric item: a whole or decimal number with an optional
-// unit ("85", "50mm", "12 ft", "60-inch") that nothing after it extends.
-// A test checks that it agrees with the grammar wherever it answers.
+// the commonest numeric items: a whole or decimal number with an optional
+// unit ("85", "50mm", "12 ft", "60-inch"), or whole numbers joined by x
+// with no space ("2x4", "18x18", "2x4x8"), when nothing after the item
+// extends it. TestQuickQuantAgreesWithGrammar checks that it agrees with
+// the grammar wherever it answers.
 func quickQuant(toks []lexer.Token) (*Value, int) {
 	if toks[0].Type != tyNumber {
 		return nil, 0
 	}
-	n := 1
-	unit := ""
 	at := func(i int) lexer.Token {
 		if i < len(toks) {
 			return toks[i]
 		}
 		return toks[len(toks)-1]
 	}
-	if u := at(n); u.Type == tyUnit {
-		unit, n = u.Value, n+1
-	} else if (u.Type == tySpace || u.Type == tyDash) && at(n+1).Type == tyUnit {
-		unit, n = at(n+1).Value, n+2
+	pos := func(i int) lexer.Position { return at(i).Pos }
+	var parts []*Quant
+	n := 0
+	for {
+		start := n
+		n++
+		unit := ""
+		if u := at(n); u.Type == tyUnit {
+			unit, n = u.Value, n+1
+		} else if (u.Type == tySpace || u.Type == tyDash) && at(n+1).Type == tyUnit {
+			unit, n = at(n+1).Value, n+2
+		}
+		num := &Num{Pos: pos(start), EndPos: pos(start + 1), Whole: at(start).Value}
+		parts = append(parts, &Quant{Pos: pos(start), EndPos: pos(n), Num: num, Unit: unit})
+		// Another part: "x" stuck between two numbers, no units.
+		if unit == "" && at(n).Value == "x" && at(n+1).Type == tyNumber && len(parts) < 3 {
+			n++
+			continue
+		}
+		break
 	}
-	next := at(n)
-	switch next.Type {
+	if len(parts) > 1 && parts[len(parts)-1].Unit != "" {
+		return nil, 0
+	}
+	switch next := at(n); next.Type {
 	case lexer.EOF:
 	case tySpace:
-		after := at(n + 1)
-		switch after.Type {
+		switch after := at(n + 1); after.Type {
 		case lexer.EOF, tyQuote, tyPunct:
 		case tyWord:
 			if extenders[after.Value] {
@@ -336,17 +353,8 @@ func quickQuant(toks []lexer.Token) (*Value, int) {
 	default:
 		return nil, 0
 	}
-	if n > 1 && unit == "" {
-		return nil, 0
-	}
-	pos := func(i int) lexer.Position { return at(i).Pos }
 	end := pos(n)
-	num := &Num{Pos: pos(0), EndPos: pos(1), Whole: toks[0].Value}
-	if n == 1 {
-		num.EndPos = end
-	}
-	q := &Quant{Pos: pos(0), EndPos: end, Num: num, Unit: unit}
-	d := &Dims{Pos: pos(0), EndPos: end, Parts: []*Quant{q}}
+	d := &Dims{Pos: pos(0), EndPos: end, Parts: parts}
 	return &Value{Pos: pos(0), EndPos: end, From: &Single{Pos: pos(0), EndPos: end, Dims: d}}, n
 }
 

@@ -88,7 +88,8 @@ func TestTokenKinds(t *testing.T) {
 // quickQuant answers only where the grammar gives the same tree.
 func TestQuickQuantAgreesWithGrammar(t *testing.T) {
 	for _, q := range []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
-		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m"} {
+		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m",
+		"2x4", "2x4x8", "18x18 pillow", "2x4x8x10", "2x4 ft", "2x4mm", "2 x 4", "2x4-6", "32x30 jeans", "2x4\"", "2x4 x 6", "1.5x2", "2x4,", "2x4 x"} {
 		toks := Tokens(q)
 		quick, n := quickQuant(toks)
 		if n == 0 {

@@ -385,6 +385,9 @@ func Starts(toks []lexer.Token) bool {
 // It returns where the longest such unit ends and its normalised name, or
 // i when there is none.
 func multiWordUnit(s string, i int, w string) (int, string) {
+	if !units.OpensPhrase(strings.TrimSuffix(w, ".")) {
+		return i, ""
+	}
 	end, name := i, ""
 	cur := w
 	j := i
