@@ -1,0 +1,128 @@
+package main
+
+import (
+	"bufio"
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"os"
+	"strings"
+
+	"golang.org/x/term"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/units"
+	"github.com/whittle-search/whittle/parser"
+)
+
+// maxLine bounds one line of standard input.
+const maxLine = 16 << 20
+
+func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("explain", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	asJSON := fs.Bool("json", false, "write the JSON contract (one object a line) instead of the table")
+	category := fs.String("category", "", "read every query as being in this category (e.g. apparel)")
+	cur := fs.String("currency", "USD", `ISO 4217 code a bare "$" or "dollars" means, when it is a dollar currency`)
+	imperial := fs.Bool("imperial", false, "read gallons, quarts, pints, cups and fluid ounces as imperial")
+	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones (missing files fall back)")
+	colour := fs.String("colour", "auto", "colour the table: auto (on a terminal), always or never")
+	fs.Usage = func() {
+		fmt.Fprint(stderr, "usage: whittle explain [flags] QUERY...\n       whittle explain [flags] -   (one query a line from standard input)\n\nflags:\n")
+		fs.PrintDefaults()
+	}
+	if err := fs.Parse(args); err != nil {
+		if err == flag.ErrHelp {
+			return 0
+		}
+		return 2
+	}
+	if fs.NArg() == 0 {
+		fmt.Fprintln(stderr, "whittle explain: give a query, or - to read queries from standard input")
+		fs.Usage()
+		return 2
+	}
+	opts := parser.Options{Category: *category, Currency: strings.ToUpper(*cur)}
+	if *imperial {
+		opts.Volume = units.Imperial
+	}
+	if *category != "" && !known(lexicon.Categories, *category) {
+		fmt.Fprintf(stderr, "whittle explain: unknown category %q (known: %s)\n", *category, strings.Join(lexicon.Categories, ", "))
+		return 2
+	}
+	if *lexDir != "" {
+		lx, err := lexicon.LoadDir(*lexDir)
+		if err != nil {
+			fmt.Fprintf(stderr, "whittle explain: %v\n", err)
+			return 2
+		}
+		opts.Lexicon = lx
+	}
+	var style parser.TextStyle
+	switch *colour {
+	case "always":
+		style.Colour = true
+	case "never":
+	case "auto":
+		if f, ok := stdout.(*os.File); ok && term.IsTerminal(int(f.Fd())) && os.Getenv("NO_COLOR") == "" {
+			style.Colour = true
+		}
+	default:
+		fmt.Fprintf(stderr, "whittle explain: -colour must be auto, always or never, not %q\n", *colour)
+		return 2
+	}
+
+	out := bufio.NewWriter(stdout)
+	defer out.Flush()
+	status := 0
+	emit := func(q string, first bool) {
+		r := parser.ParseWith(q, opts)
+		if len(r.Errors) > 0 {
+			status = 1
+		}
+		if *asJSON {
+			b, err := json.Marshal(r)
+			if err != nil {
+				fmt.Fprintf(stderr, "whittle explain: %v\n", err)
+				status = 1
+				return
+			}
+			out.Write(b)
+			out.WriteByte('\n')
+			return
+		}
+		if !first {
+			out.WriteString("\n")
+		}
+		r.WriteText(out, style)
+	}
+	if fs.NArg() == 1 && fs.Arg(0) == "-" {
+		sc := bufio.NewScanner(stdin)
+		sc.Buffer(make([]byte, 64<<10), maxLine)
+		first := true
+		for sc.Scan() {
+			emit(strings.TrimSuffix(sc.Text(), "\r"), first)
+			first = false
+		}
+		if err := sc.Err(); err != nil {
+			out.Flush()
+			fmt.Fprintf(stderr, "whittle explain: reading standard input: %v\n", err)
+			return 1
+		}
+		return status
+	}
+	for i, q := range fs.Args() {
+		emit(q, i == 0)
+	}
+	return status
+}
+
+func known(list []string, s string) bool {
+	for _, x := range list {
+		if x == s {
+			return true
+		}
+	}
+	return false
+}

@@ -1,0 +1,46 @@
+// Command whittle explains how whittle reads shopping queries.
+//
+//	whittle explain [flags] QUERY...
+//	whittle explain [flags] -        one query a line from standard input
+//
+// Run "whittle help" for the commands and "whittle explain -h" for flags.
+package main
+
+import (
+	"fmt"
+	"io"
+	"os"
+)
+
+const usage = `whittle reads long shopping queries into typed constraints.
+
+usage:
+  whittle explain [flags] QUERY...   show how each query is read
+  whittle explain [flags] -          read one query a line from standard input
+  whittle help                       show this text
+
+Run "whittle explain -h" for the flags of explain.
+
+exit status: 0 parsed, 1 a query had an error, 2 bad usage.
+`
+
+func main() {
+	os.Exit(run(os.Args[1:], os.Stdin, os.Stdout, os.Stderr))
+}
+
+// run is main without the process: it returns the exit status.
+func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	if len(args) == 0 {
+		fmt.Fprint(stderr, usage)
+		return 2
+	}
+	switch args[0] {
+	case "explain":
+		return explain(args[1:], stdin, stdout, stderr)
+	case "help", "-h", "-help", "--help":
+		fmt.Fprint(stdout, usage)
+		return 0
+	}
+	fmt.Fprintf(stderr, "whittle: unknown command %q\n\n%s", args[0], usage)
+	return 2
+}

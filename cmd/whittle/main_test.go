@@ -1,0 +1,108 @@
+package main
+
+import (
+	"bufio"
+	"bytes"
+	"encoding/json"
+	"strings"
+	"testing"
+)
+
+func runCLI(stdin string, args ...string) (int, string, string) {
+	var out, errOut bytes.Buffer
+	code := run(args, strings.NewReader(stdin), &out, &errOut)
+	return code, out.String(), errOut.String()
+}
+
+func TestExitCodes(t *testing.T) {
+	for _, tc := range []struct {
+		name   string
+		args   []string
+		stdin  string
+		want   int
+		reason string
+	}{
+		{"parsed", []string{"explain", "85 lens"}, "", 0, "a query that parses exits 0"},
+		{"error in input", []string{"explain", "1/0 lens"}, "", 1, "a positioned error exits 1"},
+		{"empty query", []string{"explain", ""}, "", 1, "an empty query is an error in input"},
+		{"no command", nil, "", 2, "usage"},
+		{"unknown command", []string{"frobnicate"}, "", 2, "usage"},
+		{"no query", []string{"explain"}, "", 2, "explain needs a query"},
+		{"bad flag", []string{"explain", "--nope", "x"}, "", 2, "unknown flag"},
+		{"bad category", []string{"explain", "--category", "toys", "x"}, "", 2, "category must be known"},
+		{"bad colour", []string{"explain", "--colour", "pink", "x"}, "", 2, "colour must be auto, always or never"},
+		{"bad lexicon dir", []string{"explain", "--lexicon", "/no/such/dir", "x"}, "", 2, "lexicon directory must exist"},
+		{"help", []string{"help"}, "", 0, "help is not an error"},
+		{"explain help", []string{"explain", "-h"}, "", 0, "help is not an error"},
+		{"stdin ok", []string{"explain", "-"}, "85 lens\n2x6 12 ft\n", 0, "every line parses"},
+		{"stdin with an error", []string{"explain", "-"}, "85 lens\n\n", 1, "an empty line is an empty query"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			if code, _, stderr := runCLI(tc.stdin, tc.args...); code != tc.want {
+				t.Errorf("exit %d, want %d (%s); stderr: %s", code, tc.want, tc.reason, stderr)
+			}
+		})
+	}
+}
+
+// With --json and "-", each input line gives one JSON object, in order,
+// with the keys of the documented contract.
+func TestJSONLines(t *testing.T) {
+	code, out, _ := runCLI("85 lens\nunder €35\n\n", "explain", "--json", "-")
+	if code != 1 {
+		t.Errorf("exit %d, want 1 for the empty line", code)
+	}
+	sc := bufio.NewScanner(strings.NewReader(out))
+	var queries []string
+	for sc.Scan() {
+		var obj map[string]json.RawMessage
+		if err := json.Unmarshal(sc.Bytes(), &obj); err != nil {
+			t.Fatalf("line %q is not JSON: %v", sc.Text(), err)
+		}
+		for _, k := range []string{"query", "category", "constraints", "unrecognised", "errors"} {
+			if _, ok := obj[k]; !ok {
+				t.Errorf("line %q lacks %q", sc.Text(), k)
+			}
+		}
+		var q string
+		json.Unmarshal(obj["query"], &q)
+		queries = append(queries, q)
+	}
+	if strings.Join(queries, "|") != "85 lens|under €35|" {
+		t.Errorf("queries out of order or missing: %q", queries)
+	}
+}
+
+func TestTableOutput(t *testing.T) {
+	code, out, _ := runCLI("", "explain", "--colour", "never", "85 lens")
+	if code != 0 {
+		t.Fatalf("exit %d", code)
+	}
+	for _, want := range []string{"query     85 lens", "spans     1─ 2───", "category  camera", "85 mm (inferred)", "focal_length"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	if strings.Contains(out, "\x1b[") {
+		t.Error("colour codes with --colour never")
+	}
+	_, out, _ = runCLI("", "explain", "--colour", "always", "85 lens")
+	if !strings.Contains(out, "\x1b[") {
+		t.Error("no colour codes with --colour always")
+	}
+}
+
+func TestFlagsReachTheParser(t *testing.T) {
+	_, out, _ := runCLI("", "explain", "--json", "--currency", "cad", "under $50")
+	if !strings.Contains(out, `"currency":"CAD"`) {
+		t.Errorf("--currency cad not applied: %s", out)
+	}
+	_, out, _ = runCLI("", "explain", "--json", "--imperial", "5 gal")
+	if !strings.Contains(out, `"base_amount":22730.45`) {
+		t.Errorf("--imperial not applied (5 imperial gallons = 22730.45 ml): %s", out)
+	}
+	_, out, _ = runCLI("", "explain", "--json", "--category", "apparel", "85 lens")
+	if !strings.Contains(out, `"category":"apparel"`) {
+		t.Errorf("--category not applied: %s", out)
+	}
+}

@@ -1,0 +1,42 @@
+package rewrite
+
+import (
+	"testing"
+
+	"github.com/google/go-cmp/cmp"
+
+	"github.com/whittle-search/whittle/parser"
+)
+
+func TestRelaxOrder(t *testing.T) {
+	for _, tc := range []struct {
+		name, query, reason string
+		want                []string
+	}{
+		{
+			name: "size and price stay", query: "nice charcoal merino crew sweater size l under $90",
+			reason: "the size is hard; filler goes first, then soft words from the end, then firm ones from the end",
+			want:   []string{"nice", "crew", "merino", "under $90", "sweater", "charcoal"},
+		},
+		{
+			name: "wire gauge is never relaxed", query: "14 awg wire 50 ft",
+			reason: "a wire gauge is hard: substituting it could hurt someone",
+			want:   []string{"50 ft", "wire"},
+		},
+		{
+			name: "exclusions are kept", query: "sweater without hood",
+			reason: "an exclusion only narrows; dropping it would show what the shopper refused",
+			want:   []string{"sweater"},
+		},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			var got []string
+			for _, c := range RelaxOrder(parser.Parse(tc.query)) {
+				got = append(got, c.Text)
+			}
+			if diff := cmp.Diff(tc.want, got); diff != "" {
+				t.Errorf("%s (-want +got):\n%s", tc.reason, diff)
+			}
+		})
+	}
+}
