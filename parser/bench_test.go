@@ -36,31 +36,39 @@ func BenchmarkBleveQueryString(b *testing.B) {
 }
 
 // BenchmarkParseMedian reports the median time per query over the corpus
-// for whittle and for bleve's query-string parser, and their ratio. Each
-// query is timed over many runs, so one slow query does not hide in a mean.
+// for whittle and for bleve's query-string parser, and the median of the
+// per-query ratios. Each query is timed over many runs, whittle and bleve
+// back to back, so one slow query does not hide in a mean and a busy
+// machine slows both alike.
 func BenchmarkParseMedian(b *testing.B) {
 	qs := corpus(b)
 	lexicon.Default()
-	const reps = 50
-	per := func(f func(string)) float64 {
-		times := make([]float64, len(qs))
-		for i, q := range qs {
-			start := time.Now()
-			for r := 0; r < reps; r++ {
-				f(q)
-			}
-			times[i] = float64(time.Since(start).Nanoseconds()) / reps
+	const reps = 64
+	timeIt := func(f func()) float64 {
+		start := time.Now()
+		for r := 0; r < reps; r++ {
+			f()
 		}
-		sort.Float64s(times)
-		return times[len(times)/2]
+		return float64(time.Since(start).Nanoseconds()) / reps
 	}
-	var ours, theirs float64
+	median := func(xs []float64) float64 {
+		sort.Float64s(xs)
+		return xs[len(xs)/2]
+	}
+	var ours, theirs, ratio float64
 	for i := 0; i < b.N; i++ {
-		ours = per(func(q string) { Parse(q) })
-		theirs = per(func(q string) { _, _ = query.NewQueryStringQuery(q).Parse() })
+		w := make([]float64, len(qs))
+		bl := make([]float64, len(qs))
+		rs := make([]float64, len(qs))
+		for j, q := range qs {
+			w[j] = timeIt(func() { Parse(q) })
+			bl[j] = timeIt(func() { _, _ = query.NewQueryStringQuery(q).Parse() })
+			rs[j] = w[j] / bl[j]
+		}
+		ours, theirs, ratio = median(w), median(bl), median(rs)
 	}
 	b.ReportMetric(ours, "whittle-ns/query")
 	b.ReportMetric(theirs, "bleve-ns/query")
-	b.ReportMetric(ours/theirs, "ratio")
+	b.ReportMetric(ratio, "ratio")
 	b.ReportMetric(0, "ns/op")
 }
