@@ -3,6 +3,7 @@ package parser
 import (
 	"errors"
 	"fmt"
+	"regexp"
 	"strconv"
 	"strings"
 
@@ -32,19 +33,70 @@ func (p *tagger) tyre(u *unit) {
 		p.errorf(u.start, u.end, "cannot read %q as a tyre size", p.q[u.start:u.end])
 		return
 	}
-	d, err := spec.TyreSize(w, a, t.Construction[0], rim)
+	d, err := spec.TyreSize(w, a, constructionLetter(t.Construction), rim)
 	if err != nil {
 		p.errorf(u.start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Evidence: "looks like a tyre size but is not one"})
 		return
 	}
+	if t.Load != "" {
+		if li, err := strconv.Atoi(t.Load); err != nil || li < 50 || li > 150 {
+			p.errorf(u.start, u.end, "load index %s is outside 50..150", t.Load)
+		} else {
+			d.Code += " " + t.Load + strings.ToUpper(t.Speed)
+			d.Attributes["load_index"] = t.Load
+			d.Attributes["speed_symbol"] = strings.ToUpper(t.Speed)
+		}
+	}
+	if t.Construction == "zr" || t.Construction == "rf" {
+		d.Attributes["construction_written"] = strings.ToUpper(t.Construction)
+	}
 	p.add(specConstraint(u.start, u.end, d, "ISO metric tyre size"))
 }
 
-// code tags a run like "xr-2200", "m8x1.25", "a4", "cr2032".
-func (p *tagger) code(u *unit) {
+// codeUnit tags the code at unit k; it returns the extra units used.
+func (p *tagger) codeUnit(k int) int {
+	u := &p.units[k]
+	parts := u.item.Code.Parts
+	// "M8 x 1.0": a metric thread with its pitch after a spaced x.
+	if len(parts) == 2 && parts[0] == "m" && k+2 < len(p.units) && p.units[k+1].kind == uWord && p.units[k+1].text == "x" &&
+		p.units[k+2].kind == uItem && p.bareNumber(&p.units[k+2]) && (p.category == "" || p.category == "hardware") {
+		dia, err1 := strconv.ParseFloat(parts[1], 64)
+		pitch, err2 := strconv.ParseFloat(p.units[k+2].item.Value.From.Dims.Parts[0].Num.Whole, 64)
+		if err1 == nil && err2 == nil {
+			if d, err := spec.MetricThreadSize(dia, pitch); err == nil {
+				p.add(specConstraint(u.start, p.units[k+2].end, d, "ISO metric thread"))
+				return 2
+			}
+		}
+	}
+	p.code(u.start, u)
+	return 0
+}
+
+// tyreCode matches tyre sizes written as one code with a service prefix:
+// "lt265/70r17", "p215/65r15", "st205/75r15".
+var tyreCode = regexp.MustCompile(`^(p|lt|st|t)(\d{3})/(\d{2})(zr|r|d|b|rf)(\d{2}(?:\.5)?)$`)
+
+// code tags a run like "xr-2200", "m8x1.25", "a4", "cr2032" that starts
+// at start and ends with unit u.
+func (p *tagger) code(start int, u *unit) {
 	parts := u.item.Code.Parts
 	text := strings.Join(parts, "")
+	if start < u.start {
+		text = strings.ToLower(p.q[start:u.start]) + text
+	}
+	if m := tyreCode.FindStringSubmatch(text); m != nil && (p.category == "" || p.category == "tyres") {
+		w, _ := strconv.Atoi(m[2])
+		a, _ := strconv.Atoi(m[3])
+		rim, _ := strconv.ParseFloat(m[5], 64)
+		if d, err := spec.TyreSize(w, a, constructionLetter(m[4]), rim); err == nil {
+			d.Code = strings.ToUpper(m[1]) + d.Code
+			d.Attributes["service_type"] = strings.ToUpper(m[1])
+			p.add(specConstraint(start, u.end, d, "ISO metric tyre size with a service type"))
+			return
+		}
+	}
 	// Metric thread: m8, m8x1.25.
 	if parts[0] == "m" && len(parts) >= 2 && (p.category == "" || p.category == "hardware") {
 		dia, err := strconv.ParseFloat(parts[1], 64)
@@ -56,41 +108,50 @@ func (p *tagger) code(u *unit) {
 		}
 		if ok {
 			if d, err := spec.MetricThreadSize(dia, pitch); err == nil {
-				p.add(specConstraint(u.start, u.end, d, "ISO metric thread"))
+				p.add(specConstraint(start, u.end, d, "ISO metric thread"))
 				return
 			} else if p.category == "hardware" {
-				p.errorf(u.start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
+				p.errorf(start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 			}
 		}
 	}
 	if len(parts) == 2 && (parts[0] == "a" || parts[0] == "b") && (p.category == "" || p.category == "office") {
 		if d, ok := spec.PaperSize(text); ok {
-			p.add(specConstraint(u.start, u.end, d, "ISO 216 paper size"))
+			p.add(specConstraint(start, u.end, d, "ISO 216 paper size"))
 			return
 		}
 	}
 	if p.category == "" || p.category == "batteries" || p.category == "electronics" {
 		if d, ok := spec.BatterySize(text); ok {
-			p.add(specConstraint(u.start, u.end, d, "battery size"))
+			p.add(specConstraint(start, u.end, d, "battery size"))
 			return
 		}
 	}
-	p.add(Constraint{Kind: KindPartNumber, Start: u.start, End: u.end, Code: strings.ToUpper(p.q[u.start:u.end]),
+	p.add(Constraint{Kind: KindPartNumber, Start: start, End: u.end, Code: strings.ToUpper(p.q[start:u.end]),
 		Evidence: "letters and digits with no space: a code"})
 }
 
-// batteryWord reads "aa", "aaa" and the IEC names as battery sizes.
-func (p *tagger) batteryWord(w string) (spec.Designation, bool) {
-	switch w {
+// batteryWord reads the word unit k as a battery size: "aa", "aaa" and
+// "pp3" anywhere; "c", "d" and "n" in batteries or before "cell".
+func (p *tagger) batteryWord(k int) (spec.Designation, bool) {
+	u := &p.units[k]
+	if u.kind != uWord || u.entries != nil {
+		return spec.Designation{}, false
+	}
+	switch u.text {
 	case "aa", "aaa", "pp3":
 	case "c", "d", "n":
-		if p.category != "batteries" {
+		next := ""
+		if k+1 < len(p.units) && p.units[k+1].kind == uWord {
+			next = p.units[k+1].text
+		}
+		if p.category != "batteries" && next != "cell" && next != "cells" && next != "battery" && next != "batteries" {
 			return spec.Designation{}, false
 		}
 	default:
 		return spec.Designation{}, false
 	}
-	return spec.BatterySize(w)
+	return spec.BatterySize(u.text)
 }
 
 // wireGauge tags "14 awg", "12 gauge" and "14/2".
@@ -118,47 +179,72 @@ func (p *tagger) wireGauge(start, end int, q quantity, n *grammar.Num) (Constrai
 }
 
 // unifiedThread tags "1/4-20" (a fraction, a dash, a thread count, no
-// spaces) as a unified inch thread.
-func (p *tagger) unifiedThread(u *unit, a, b single) (Constraint, bool) {
-	if strings.ContainsAny(p.q[u.start:u.end], " \t") || len(a.parts) != 1 || len(b.parts) != 1 {
+// spaces) between start and end as a unified inch thread.
+func (p *tagger) unifiedThread(start, end int, from *grammar.Single, tpi quantity) (Constraint, bool) {
+	if strings.ContainsAny(p.q[start:end], " \t") || from.Dims == nil || len(from.Dims.Parts) != 1 || tpi.hasUnit || !tpi.num.integer {
 		return Constraint{}, false
 	}
-	f := u.item.Value.From.Dims
-	if f == nil || f.Parts[0].Num.Only == nil || !b.parts[0].num.integer || a.parts[0].hasUnit || b.parts[0].hasUnit {
+	q := from.Dims.Parts[0]
+	fr := q.Num.Only
+	if fr == nil || q.Unit != "" || q.Mark != "" {
 		return Constraint{}, false
 	}
-	fr := f.Parts[0].Num.Only
 	size := fr.Vulgar
 	if size == "" {
 		size = fr.Num + "/" + fr.Den
 	}
-	d, err := spec.UnifiedThreadSize(size, int(b.parts[0].num.value))
+	d, err := spec.UnifiedThreadSize(size, int(tpi.num.value))
 	if err != nil {
 		if p.category == "hardware" {
-			p.errorf(u.start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
+			p.errorf(start, end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 		}
 		return Constraint{}, false
 	}
-	return specConstraint(u.start, u.end, d, "unified inch thread"), true
+	return specConstraint(start, end, d, "unified inch thread"), true
 }
 
-// numberedThread tags "#10-24".
-func (p *tagger) numberedThread(start int, v *unit) (Constraint, bool) {
+// numbered tags what follows "#": a numbered unified thread ("#10-24",
+// "#10-24 x 3/4"), or a number size ("#8 x 1-1/2" wood screws, "#10"
+// envelopes) with any dimensions after it. It returns the extra units
+// used, or -1 when it reads nothing.
+func (p *tagger) numbered(start int, v *unit) int {
 	val := v.item.Value
-	if val == nil || val.To == nil || strings.ContainsAny(p.q[v.start:v.end], " \t") {
-		return Constraint{}, false
+	if val == nil || val.Post != "" {
+		return -1
 	}
-	a, ok1 := p.readSingle(val.From)
-	b, ok2 := p.readSingle(val.To)
-	if !ok1 || !ok2 || len(a.parts) != 1 || len(b.parts) != 1 || !a.parts[0].num.integer || !b.parts[0].num.integer {
-		return Constraint{}, false
+	a, ok := p.readSingle(val.From)
+	if !ok || a.price || !a.parts[0].num.integer || a.parts[0].hasUnit {
+		return -1
 	}
-	d, err := spec.UnifiedThreadSize("#"+a.parts[0].num.decimal, int(b.parts[0].num.value))
-	if err != nil {
-		p.errorf(start, v.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
-		return Constraint{}, false
+	if val.To != nil {
+		b, ok := p.readSingle(val.To)
+		if !ok || b.price || !b.parts[0].num.integer || b.parts[0].hasUnit || len(a.parts) != 1 {
+			return -1
+		}
+		end := b.parts[0].end
+		if len(b.parts) == 1 {
+			end = v.end
+		}
+		if strings.ContainsAny(p.q[start:end], " \t") {
+			return -1
+		}
+		d, err := spec.UnifiedThreadSize("#"+a.parts[0].num.decimal, int(b.parts[0].num.value))
+		if err != nil {
+			p.errorf(start, end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
+			return -1
+		}
+		p.add(specConstraint(start, end, d, "unified inch thread"))
+		p.lengths(b, 1, v.end, p.lengthSlot())
+		return 0
 	}
-	return specConstraint(start, v.end, d, "unified inch thread"), true
+	end := a.parts[0].end
+	if len(a.parts) == 1 {
+		end = v.end
+	}
+	p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: "number", Value: "#" + a.parts[0].num.decimal},
+		Evidence: "a number size after #"})
+	p.lengths(a, 1, v.end, p.lengthSlot())
+	return 0
 }
 
 // quoted tags a quoted phrase: one hard constraint.
@@ -233,4 +319,15 @@ func amountText(dec, code string) (string, error) {
 		return "", err
 	}
 	return a.Round().Number(), nil
+}
+
+// constructionLetter maps the letters written between aspect and rim to
+// the construction code: "zr" (a speed-rated radial) and "rf" (run-flat)
+// are radials.
+func constructionLetter(s string) byte {
+	switch s {
+	case "zr", "rf":
+		return 'R'
+	}
+	return strings.ToUpper(s)[0]
 }

@@ -125,6 +125,8 @@ func (p *tagger) tokEnd(i int) int {
 func (p *tagger) run() {
 	p.toks = grammar.Tokens(p.q)
 	p.units = p.segment()
+	p.choose()
+	p.compounds()
 	p.findHead()
 	p.tag()
 	p.finish()

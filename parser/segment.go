@@ -31,7 +31,12 @@ type unit struct {
 	// spaceBefore is false when nothing separates the unit from the one
 	// before it ("3xl", "8w").
 	spaceBefore bool
-	done        bool
+	// chosen is the entry the unit is read as, when it has several.
+	chosen *lexicon.Entry
+	// modifier marks a product type that qualifies the one after it
+	// ("saucepan lid"); feature marks one that describes a part ("with
+	// lid", "marble top"). Neither can be the head.
+	modifier, feature bool
 }
 
 // word is one matchable word: a lexer word, or one part of a hyphenated

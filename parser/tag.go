@@ -2,6 +2,7 @@ package parser
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -9,11 +10,11 @@ import (
 
 // Words the grammar of shopping gives a role to.
 var (
-	negators    = map[string]bool{"not": true, "no": true, "without": true, "except": true, "excluding": true, "exclude": true, "minus": true, "non": true}
+	negators    = map[string]bool{"not": true, "no": true, "without": true, "w/o": true, "except": true, "excluding": true, "exclude": true, "minus": true, "non": true}
 	sizeMarkers = map[string]bool{"size": true, "sz": true, "sizes": true, "sized": true}
 	codeMarkers = map[string]bool{"sku": true, "part": true, "model": true, "mpn": true, "item": true, "ref": true, "pn": true, "p/n": true}
 	// structural words carry no constraint of their own when left over.
-	structural = map[string]bool{"with": true, "and": true, "or": true, "for": true, "to": true, "by": true,
+	structural = map[string]bool{"with": true, "w/": true, "and": true, "or": true, "for": true, "to": true, "by": true,
 		"x": true, "at": true, "from": true, "in": true, "of": true, "on": true, "fits": true, "fit": true,
 		"compatible": true, "works": true, "replacement": true, "between": true, "than": true, "number": true, "no": true, "not": true}
 	letterSizes = map[string]string{
@@ -22,11 +23,16 @@ var (
 		"small": "s", "medium": "m", "large": "l", "x-large": "xl", "xlarge": "xl",
 		"extra large": "xl", "extra small": "xs", "x-small": "xs", "xsmall": "xs",
 		"xx-large": "xxl", "sm": "s", "med": "m", "lg": "l", "lrg": "l",
+		"1x": "1x", "2x": "2x", "3x": "3x", "4x": "4x", "5x": "5x",
 	}
 	// ambiguousLetters are letter sizes that are also units or words.
 	ambiguousLetters = map[string]bool{"s": true, "m": true, "l": true, "small": true, "medium": true, "large": true, "sm": true, "med": true, "lg": true}
 	fitSizes         = map[string]bool{"petite": true, "tall": true, "plus": true, "plus size": true, "big and tall": true, "maternity": true, "husky": true, "slim": false}
-	widths           = map[string]string{"wide": "wide", "narrow": "narrow", "extra wide": "extra wide", "ww": "extra wide", "xw": "extra wide", "w": "wide", "n": "narrow", "medium": "medium", "regular": "medium"}
+	widths           = map[string]string{"wide": "wide", "narrow": "narrow", "extra wide": "extra wide", "ww": "extra wide", "xw": "extra wide", "w": "wide", "n": "narrow", "medium": "medium", "regular": "medium",
+		"ee": "wide", "eee": "extra wide", "eeee": "extra wide"}
+	// plusLetters are the plus-size letter sizes "1x".."5x", read only in
+	// apparel ("2x" elsewhere is a magnification or a count).
+	plusLetters = map[string]bool{"1x": true, "2x": true, "3x": true, "4x": true, "5x": true}
 )
 
 // kindOrder ranks the lexicon kinds when one phrase is several things.
@@ -44,13 +50,115 @@ func pick(entries []*lexicon.Entry) *lexicon.Entry {
 	return nil
 }
 
-func (u *unit) entry(k lexicon.Kind) *lexicon.Entry {
-	for _, e := range u.entries {
-		if e.Kind == k {
-			return e
+// choose settles, for each word unit whose phrase is several entries,
+// which one it is: an entry that the surface spells exactly beats one
+// found only through stemming ("studded" is the silhouette, not the stud
+// it stems to); a product type yields to the other kinds when the query
+// has another product type ("flat" in "ceiling paint flat white"); then
+// the kinds rank as kindOrder says.
+func (p *tagger) choose() {
+	withPT := 0
+	for i := range p.units {
+		if hasKind(p.units[i].entries, lexicon.ProductType) {
+			withPT++
 		}
 	}
-	return nil
+	for i := range p.units {
+		u := &p.units[i]
+		es := u.entries
+		if len(es) > 1 {
+			var exact []*lexicon.Entry
+			for _, e := range es {
+				if e.Name == u.text || slices.Contains(e.Aliases, u.text) {
+					exact = append(exact, e)
+				}
+			}
+			if len(exact) > 0 {
+				es = exact
+			}
+		}
+		if len(es) > 1 && withPT > 1 && hasKind(es, lexicon.ProductType) {
+			var rest []*lexicon.Entry
+			for _, e := range es {
+				if e.Kind != lexicon.ProductType {
+					rest = append(rest, e)
+				}
+			}
+			if len(rest) > 0 {
+				es = rest
+			}
+		}
+		u.chosen = pick(es)
+	}
+}
+
+func hasKind(es []*lexicon.Entry, k lexicon.Kind) bool {
+	for _, e := range es {
+		if e.Kind == k {
+			return true
+		}
+	}
+	return false
+}
+
+// isPT reports whether unit i is read as a product type.
+func (p *tagger) isPT(i int) bool {
+	return i >= 0 && i < len(p.units) && p.units[i].kind == uWord && p.units[i].chosen != nil && p.units[i].chosen.Kind == lexicon.ProductType
+}
+
+// compounds settles product types that stand next to each other: the
+// same type twice ("thermal base layer"), or a type and a broader one
+// ("variable nd filter"), become one span; otherwise the first qualifies
+// the second ("saucepan lid") and is a modifier. A product type after
+// "with", or after a material once a product type was named ("marble
+// top"), is a feature of the product.
+func (p *tagger) compounds() {
+	seenPT := false
+	for i := 0; i < len(p.units); i++ {
+		if !p.isPT(i) {
+			continue
+		}
+		u := &p.units[i]
+		if i > 0 && p.units[i-1].kind == uWord && (p.units[i-1].text == "with" || p.units[i-1].text == "w/" ||
+			seenPT && (p.units[i-1].text == "in" || p.units[i-1].text == "on")) {
+			u.feature = true // "with lid"; "plant in pot"
+			continue
+		}
+		if i > 0 && seenPT && p.units[i-1].chosen != nil && p.units[i-1].chosen.Kind == lexicon.Material {
+			u.feature = true
+			continue
+		}
+		seenPT = true
+		for p.isPT(i + 1) {
+			v := &p.units[i+1]
+			if v.chosen == u.chosen || p.broader(v.chosen, u.chosen) {
+				u.end, u.text = v.end, u.text+" "+v.text
+				p.units = append(p.units[:i+1], p.units[i+2:]...)
+				continue
+			}
+			u.modifier = true
+			break
+		}
+	}
+}
+
+// broader reports whether b is a or an ancestor of a, or names the last
+// word of a's name ("filter" for "nd filter").
+func (p *tagger) broader(b, a *lexicon.Entry) bool {
+	if strings.HasSuffix(a.Name, " "+b.Name) {
+		return true
+	}
+	for e, n := a, 0; e != nil && n < 16; n++ {
+		if e == b {
+			return true
+		}
+		next, ok := p.lex.Lookup(lexicon.ProductType, e.Parent)
+		if !ok {
+			break
+		}
+		e = next
+	}
+	return false
 }
 
 // compatAt reports whether a compatibility phrase starts at unit k, and
@@ -92,8 +200,8 @@ func (p *tagger) findHead() {
 		if p.compatAt(k) > 0 && last != nil {
 			break
 		}
-		if e := p.units[k].entry(lexicon.ProductType); e != nil && !p.negatedAt(k) {
-			last = e
+		if u := &p.units[k]; p.isPT(k) && !u.modifier && !u.feature && !p.negatedAt(k) {
+			last = u.chosen
 		}
 	}
 	p.head = last
@@ -116,6 +224,12 @@ func (p *tagger) negatedAt(k int) bool {
 
 func (p *tagger) apparel() bool {
 	return p.category == "apparel" || p.category == "footwear"
+}
+
+// sized reports whether the category's goods come in letter sizes
+// (clothes, shoes, gloves, hats, belts).
+func (p *tagger) sized() bool {
+	return p.apparel() || p.category == "accessories"
 }
 
 // add appends a constraint for units [from, to] and applies a pending
@@ -223,19 +337,27 @@ func (p *tagger) wordUnit(k int) int {
 		if n := p.letterSize(k); n >= 0 {
 			return n
 		}
-		if d, ok := p.batteryWord(u.text); ok {
+		if d, ok := p.batteryWord(k); ok {
 			p.add(specConstraint(u.start, u.end, d, "battery size word"))
 			return 0
 		}
 	}
-	e := pick(u.entries)
+	e := u.chosen
 	if e == nil {
 		if structural[u.text] {
 			p.add(Constraint{Kind: KindFiller, Start: u.start, End: u.end, Strictness: Filler, Evidence: "connecting word"})
 			return 0
 		}
-		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Evidence: "not in the lexicon"})
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: u.text, Evidence: "not in the lexicon"})
 		p.res.Unrecognised = append(p.res.Unrecognised, u.text)
+		return 0
+	}
+	if e.Kind == lexicon.ProductType && (u.modifier || u.feature) {
+		ev := "product type before another: a modifier"
+		if u.feature {
+			ev = "product type naming a part of the product: a feature"
+		}
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: e.Name, Evidence: ev})
 		return 0
 	}
 	if e.Kind == lexicon.Audience || e.Kind == lexicon.Silhouette || e.Kind == lexicon.Filler {
@@ -273,7 +395,7 @@ func (p *tagger) wordUnit(k int) int {
 func (p *tagger) letterSize(k int) int {
 	u := &p.units[k]
 	if v, ok := letterSizes[u.text]; ok {
-		if ambiguousLetters[u.text] && !p.apparel() {
+		if ambiguousLetters[u.text] && !p.sized() || plusLetters[u.text] && !p.apparel() {
 			return -1
 		}
 		p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "letter", Value: v},
@@ -281,11 +403,70 @@ func (p *tagger) letterSize(k int) int {
 		return 0
 	}
 	if fitSizes[u.text] && (p.apparel() || p.head == nil) {
-		p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "fit", Value: u.text}, Evidence: "fit size"})
-		return 0
+		c := Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "fit", Value: u.text}, Evidence: "fit size"}
+		used := 0
+		if k+1 < len(p.units) && p.units[k+1].kind == uWord && sizeMarkers[p.units[k+1].text] {
+			c.End, used = p.units[k+1].end, 1 // "plus size", "petite sizes"
+		}
+		p.add(c)
+		return used
+	}
+	if n := p.regionalSize(k); n > 0 {
+		return n
+	}
+	if n := p.bedSize(k); n >= 0 {
+		return n
 	}
 	return -1
 }
+
+// bedSizes are the mattress sizes that name bedding and beds.
+var bedSizes = map[string]string{"twin": "twin", "twin xl": "twin xl", "full": "full", "double": "double", "queen": "queen",
+	"king": "king", "california king": "california king", "cal king": "california king", "super king": "super king",
+	"single": "single", "small double": "small double"}
+
+// bedSize reads "queen", "king", "twin xl", "california king" in home and
+// furniture (or with no product type) as a bed size.
+func (p *tagger) bedSize(k int) int {
+	u := &p.units[k]
+	if p.category != "home" && p.category != "furniture" && p.head != nil {
+		return -1
+	}
+	used, text, end := 0, u.text, u.end
+	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.units[k+1].entries == nil {
+		if v, ok := bedSizes[u.text+" "+p.units[k+1].text]; ok {
+			used, text, end = 1, v, p.units[k+1].end
+		}
+	}
+	v, ok := bedSizes[text]
+	if !ok {
+		return -1
+	}
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: end, Size: &Size{System: "bed", Value: v}, Evidence: "bed size"})
+	return used
+}
+
+// regionalSize reads "eu 42", "uk 9", "us 10" as a size in that system.
+func (p *tagger) regionalSize(k int) int {
+	u := &p.units[k]
+	if !regions[u.text] || !p.sized() || k+1 >= len(p.units) || p.units[k+1].kind != uItem || !p.bareNumber(&p.units[k+1]) {
+		return 0
+	}
+	v := &p.units[k+1]
+	n := v.item.Value.From.Dims.Parts[0].Num
+	if n.Whole == "" {
+		return 0
+	}
+	val, dec, err := parseWhole(n.Whole)
+	if err != nil || val <= 0 {
+		return 0
+	}
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: v.end, Size: &Size{System: u.text, Value: dec},
+		Evidence: "size in the " + strings.ToUpper(u.text) + " system"})
+	return 1
+}
+
+var regions = map[string]bool{"eu": true, "uk": true, "us": true, "fr": true, "it": true, "jp": true, "au": true, "mx": true, "cn": true}
 
 func sizeEvidence(w, category string) string {
 	if ambiguousLetters[w] {
@@ -304,12 +485,15 @@ func (p *tagger) sizeAfter(k int) int {
 	used := 1
 	switch v.kind {
 	case uWord:
-		if s, ok := letterSizes[v.text]; ok {
+		switch s, ok := letterSizes[v.text]; {
+		case ok:
 			c.Size = &Size{System: "letter", Value: s}
-		} else if fitSizes[v.text] {
+		case fitSizes[v.text]:
 			c.Size = &Size{System: "fit", Value: v.text}
-		} else {
+		case v.entries == nil && !structural[v.text] && !negators[v.text]:
 			c.Size = &Size{System: "named", Value: v.text}
+		default:
+			return 0 // "letter size copy paper": the next word is no size
 		}
 	case uItem:
 		s, ok := p.sizeValue(v)
@@ -349,7 +533,12 @@ func (p *tagger) codeAfter(k int) int {
 		return 0
 	}
 	v := &p.units[j]
-	p.add(Constraint{Kind: KindPartNumber, Start: p.units[k].start, End: v.end, Code: strings.ToUpper(p.q[v.start:v.end]),
+	end := v.end
+	for j+1 < len(p.units) && !p.units[j+1].spaceBefore && p.units[j+1].kind != uNeg {
+		j++
+		end = p.units[j].end // "4471-b": the code runs to the next space
+	}
+	p.add(Constraint{Kind: KindPartNumber, Start: p.units[k].start, End: end, Code: strings.ToUpper(p.q[v.start:end]),
 		Evidence: "after \"" + p.units[k].text + "\""})
 	return j - k
 }
@@ -362,8 +551,8 @@ func (p *tagger) compat(k, n int) int {
 	for ; j < len(p.units); j++ {
 		v := &p.units[j]
 		if v.kind == uWord {
-			if v.entries != nil {
-				e := pick(v.entries)
+			if v.chosen != nil {
+				e := v.chosen
 				if e.Kind == lexicon.Brand {
 					parts, end = append(parts, v.text), v.end
 					continue
@@ -378,7 +567,7 @@ func (p *tagger) compat(k, n int) int {
 				}
 				break
 			}
-			if negators[v.text] || sizeMarkers[v.text] || p.compatAt(j) > 0 || structural[v.text] {
+			if _, ok := p.batteryWord(j); ok || negators[v.text] || sizeMarkers[v.text] || p.compatAt(j) > 0 || structural[v.text] {
 				break
 			}
 			if _, ok := letterSizes[v.text]; ok {
@@ -387,9 +576,15 @@ func (p *tagger) compat(k, n int) int {
 			parts, end = append(parts, v.text), v.end
 			continue
 		}
-		if v.kind == uItem && (v.item.Code != nil || (len(parts) > 0 && p.bareNumber(v))) {
+		if v.kind == uItem && (v.item.Code != nil || (len(parts) > 0 && p.bareNumber(v) && !p.countAfter(j))) {
 			parts, end = append(parts, strings.ToLower(p.q[v.start:v.end])), v.end
 			continue
+		}
+		// "stand for 65 inch tv": a measure and the product it measures.
+		if v.kind == uItem && len(parts) == 0 && p.head != nil && v.item.Value != nil && p.isPT(j+1) && p.units[j+1].chosen != p.head {
+			parts = append(parts, strings.ToLower(p.q[v.start:v.end]), p.units[j+1].text)
+			end = p.units[j+1].end
+			j += 2
 		}
 		break
 	}
@@ -405,9 +600,8 @@ func (p *tagger) compat(k, n int) int {
 func (p *tagger) symbol(k int) int {
 	u := &p.units[k]
 	if u.tok.Value == "#" && k+1 < len(p.units) && !p.units[k+1].spaceBefore && p.units[k+1].kind == uItem {
-		if c, ok := p.numberedThread(u.start, &p.units[k+1]); ok {
-			p.add(c)
-			return 1
+		if n := p.numbered(u.start, &p.units[k+1]); n >= 0 {
+			return 1 + n
 		}
 	}
 	return 0
@@ -438,7 +632,7 @@ var specCategory = map[string]string{
 // packOf reads "pack of 8" at unit k.
 func (p *tagger) packOf(k int) int {
 	u := &p.units[k]
-	if !countWords[u.text] || k+2 >= len(p.units) || p.units[k+1].kind != uWord || p.units[k+1].text != "of" {
+	if countWords[u.text] == "" || k+2 >= len(p.units) || p.units[k+1].kind != uWord || p.units[k+1].text != "of" {
 		return 0
 	}
 	v := &p.units[k+2]
@@ -453,6 +647,6 @@ func (p *tagger) packOf(k int) int {
 	if err != nil || val != float64(int64(val)) {
 		return 0
 	}
-	p.add(countConstraint(u.start, v.end, val, "number after \""+u.text+" of\""))
+	p.add(countConstraint(u.start, v.end, val, countWords[u.text], "number after \""+u.text+" of\""))
 	return 2
 }

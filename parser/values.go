@@ -126,7 +126,7 @@ func (p *tagger) item(k int) int {
 	case it.Tyre != nil:
 		p.tyre(u)
 	case it.Code != nil:
-		p.code(u)
+		return p.codeUnit(k)
 	case it.Between != nil:
 		a, ok1 := p.readSingle(it.Between.From)
 		b, ok2 := p.readSingle(it.Between.To)
@@ -156,8 +156,37 @@ func (p *tagger) value(k int) int {
 		if !ok {
 			return 0
 		}
-		if c, ok := p.unifiedThread(u, from, to); ok {
-			p.add(c)
+		if len(from.parts) == 1 && len(to.parts) >= 1 && !to.price {
+			// "1/4-20", "1/4-20 x 1": a thread, then perhaps its length.
+			threadEnd := to.parts[0].end
+			if len(to.parts) == 1 {
+				threadEnd = u.end
+			}
+			if c, ok := p.unifiedThread(u.start, threadEnd, v.From, to.parts[0]); ok {
+				p.add(c)
+				p.lengths(to, 1, u.end, p.lengthSlot())
+				return 0
+			}
+		}
+		if len(from.parts) == 1 && len(to.parts) > 1 && !from.price {
+			// "6-8 x 10": a range, then the other dimensions.
+			first := single{parts: to.parts[:1], start: to.start, end: to.parts[0].end}
+			p.rangeOf(u.start, to.parts[0].end, from, first, "range")
+			p.lengths(to, 1, u.end, 1)
+			return 0
+		}
+		if len(from.parts) > 1 || len(to.parts) > 1 {
+			// "2x4-2x6": two dimensions, read one after the other.
+			for _, side := range []struct {
+				s   single
+				end int
+			}{{from, from.end}, {to, u.end}} {
+				if side.s.price {
+					p.price(side.s.start, side.end, side.s, nil, &side.s.amount, "a bare price reads as a ceiling")
+				} else {
+					p.dims(side.s.start, side.end, side.s)
+				}
+			}
 			return 0
 		}
 		p.rangeOf(u.start, u.end, from, to, "range")
@@ -197,28 +226,46 @@ func (p *tagger) point(k int, q quantity) int {
 			return 1
 		}
 	}
-	if q.num.fraction && !q.hasUnit && p.category == "electrical" {
-		if c, ok := p.wireGauge(u.start, u.end, q, u.item.Value.From.Dims.Parts[0].Num); ok {
+	// Cable: "12/2", "14/3" (gauge over conductors) where nothing says otherwise.
+	if n := u.item.Value.From.Dims.Parts[0].Num; !q.hasUnit && cableFraction(n) && (p.category == "" || p.category == "electrical") {
+		if c, ok := p.wireGauge(u.start, u.end, q, n); ok {
+			c.Evidence = join(c.Evidence, "gauge over conductors, as cable is written (common practice)")
 			p.add(c)
 			return 0
 		}
 	}
-	// A letter size stuck to a number: "3xl", "2xl".
+	// A number stuck to a code: "6lr61".
+	if k+1 < len(p.units) && p.units[k+1].kind == uItem && p.units[k+1].item.Code != nil && !p.units[k+1].spaceBefore && q.num.integer && !q.hasUnit {
+		v := &p.units[k+1]
+		p.code(u.start, v)
+		return 1
+	}
 	if w != nil && !spaced && !q.hasUnit && q.num.integer {
-		if s, ok := letterSizes[q.num.decimal+w.text]; ok {
+		// A letter size stuck to a number: "3xl", "2x".
+		if s, ok := letterSizes[q.num.decimal+w.text]; ok && (!plusLetters[s] || p.apparel()) {
 			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "letter", Value: s}, Evidence: "letter size"})
+			return 1
+		}
+		// Toddler, youth and child sizes: "4t", "10y", "12c".
+		if p.apparel() && (w.text == "t" || w.text == "y" || w.text == "c" || w.text == "k") {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "numeric", Value: q.num.decimal + w.text},
+				Evidence: "number with a size letter"})
 			return 1
 		}
 	}
 	// A count: "8 pack", "12-pack", "50 pcs".
 	if !q.hasUnit && q.num.integer {
-		if w != nil && countWords[w.text] {
-			p.add(countConstraint(u.start, w.end, q.num.value, "number before \""+w.text+"\""))
+		if w != nil && w.text == "thread" && k+2 < len(p.units) && p.units[k+2].text == "count" {
+			p.add(countConstraint(u.start, p.units[k+2].end, q.num.value, "thread_count", "number before \"thread count\""))
+			return 2
+		}
+		if w != nil && countWords[w.text] != "" {
+			p.add(countConstraint(u.start, w.end, q.num.value, countWords[w.text], "number before \""+w.text+"\""))
 			return 1
 		}
 		if k+2 < len(p.units) && p.units[k+1].kind == uSym && p.units[k+1].tok.Value == "-" && !p.units[k+1].spaceBefore &&
-			p.units[k+2].kind == uWord && !p.units[k+2].spaceBefore && countWords[p.units[k+2].text] {
-			p.add(countConstraint(u.start, p.units[k+2].end, q.num.value, "number before \""+p.units[k+2].text+"\""))
+			p.units[k+2].kind == uWord && !p.units[k+2].spaceBefore && countWords[p.units[k+2].text] != "" {
+			p.add(countConstraint(u.start, p.units[k+2].end, q.num.value, countWords[p.units[k+2].text], "number before \""+p.units[k+2].text+"\""))
 			return 2
 		}
 	}
@@ -232,6 +279,21 @@ func (p *tagger) point(k int, q quantity) int {
 	}
 	if q.hasUnit && p.isTrousers() && (q.unit.Symbol == "w" || q.unit.Symbol == "l") && q.num.integer {
 		return p.waistInseam(k, q)
+	}
+	// "7 in 1", "4 in 1": a count of functions, not inches.
+	if q.hasUnit && q.unit.Symbol == "in" && strings.HasSuffix(strings.ToLower(p.q[u.start:u.end]), " in") && k+1 < len(p.units) &&
+		p.units[k+1].kind == uItem && p.bareNumber(&p.units[k+1]) && p.units[k+1].item.Value.From.Dims.Parts[0].Num.Whole == "1" {
+		v := &p.units[k+1]
+		name := strings.ToLower(p.q[u.start:v.end])
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: v.end, Name: name, Evidence: "\"N in 1\" names a combination, not inches"})
+		return 1
+	}
+	// A number stuck to a word that is no unit: "200gsm", "1080p", "4k".
+	if w != nil && !spaced && !q.hasUnit {
+		name := strings.ToLower(p.q[u.start:w.end])
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: name, Evidence: "a number with a unit whittle does not know"})
+		p.res.Unrecognised = append(p.res.Unrecognised, name)
+		return 1
 	}
 	if q.hasUnit {
 		if c, ok := p.unitAsSize(u, q); ok {
@@ -572,6 +634,10 @@ func ordered(a, b *number) (*number, *number) {
 
 // dims tags AxB(xC): a lumber size, a waist by inseam, or a dimension.
 func (p *tagger) dims(start, end int, s single) {
+	if len(s.parts) < 2 {
+		p.lengths(s, 0, end, 0)
+		return
+	}
 	anyUnit := false
 	allInts := true
 	for _, q := range s.parts {
@@ -601,14 +667,25 @@ func (p *tagger) dims(start, end int, s single) {
 			return
 		}
 	}
-	// A unit written only on the last part applies to all.
+	p.lengths(s, 0, end, 0)
+}
+
+// lengths tags the parts of s from index from on as the dimensions of the
+// head product type: a unit written only on the last part applies to all,
+// a bare part takes the unit of the product's next length slot (starting
+// at slot index first), and the last part's span runs to end.
+func (p *tagger) lengths(s single, from, end, first int) {
+	if from >= len(s.parts) {
+		return
+	}
 	var shared *units.Unit
 	if last := s.parts[len(s.parts)-1]; last.hasUnit {
 		shared = &last.unit
 	}
-	lengthSlots := 0
+	filled := first
 	generic := []string{"width", "height", "depth"}
-	for i, q := range s.parts {
+	for i := from; i < len(s.parts); i++ {
+		q := s.parts[i]
 		qEnd := q.end
 		if i == len(s.parts)-1 {
 			qEnd = end
@@ -622,20 +699,20 @@ func (p *tagger) dims(start, end int, s single) {
 		case has:
 			dim := q.label
 			if dim == "" {
-				if sl, ok := p.slotFor(u.Quantity, lengthSlots); ok {
+				if sl, ok := p.slotFor(u.Quantity, filled); ok {
 					dim = sl.Dimension
 				} else if i < len(generic) {
 					dim = generic[i]
 				}
 			}
-			lengthSlots++
+			filled++
 			c = p.measure(q.start, qEnd, q, dim, nil, nil, u)
 			if !q.hasUnit {
 				c.Evidence = "unit from the last part of the dimension"
 			}
 		default:
-			sl, ok := p.slotFor(units.Length, lengthSlots)
-			lengthSlots++
+			sl, ok := p.slotFor(units.Length, filled)
+			filled++
 			if ok && sl.Holds(q.num.value) {
 				c = p.measure(q.start, qEnd, q, sl.Dimension, nil, nil, sl.Unit)
 				c.Inferred = true
@@ -651,6 +728,23 @@ func (p *tagger) dims(start, end int, s single) {
 		}
 		p.add(c)
 	}
+}
+
+// lengthSlot is the index, among the head product type's length slots,
+// of the one named "length" (what follows a thread or a number size), or
+// 0 when there is none.
+func (p *tagger) lengthSlot() int {
+	n := 0
+	for _, s := range p.lex.SlotsOf(p.head) {
+		if s.Quantity != units.Length {
+			continue
+		}
+		if s.Dimension == "length" {
+			return n
+		}
+		n++
+	}
+	return 0
 }
 
 func (p *tagger) isTrousers() bool {
@@ -709,12 +803,40 @@ func (p *tagger) bareNumber(v *unit) bool {
 	return q.Unit == "" && q.Mark == "" && q.Currency == ""
 }
 
-// countWords name a number of items in one package.
-var countWords = map[string]bool{"pack": true, "pk": true, "packs": true, "ct": true, "count": true, "pcs": true,
-	"pc": true, "piece": true, "pieces": true, "pairs": true, "pair": true, "set": true, "rolls": true, "roll": true}
+// countWords map the words that count things to the dimension counted:
+// items in a package ("8 pack") or parts of a product ("3 seater", "6
+// drawer", "5 tier").
+var countWords = map[string]string{
+	"pack": "pack_size", "pk": "pack_size", "packs": "pack_size", "ct": "pack_size", "count": "pack_size",
+	"pcs": "pack_size", "pc": "pack_size", "piece": "pack_size", "pieces": "pack_size", "pair": "pack_size",
+	"pairs": "pack_size", "set": "pack_size", "roll": "pack_size", "rolls": "pack_size", "sheets": "sheets",
+	"sheet": "sheets", "ream": "reams", "reams": "reams", "panel": "panels", "panels": "panels",
+	"seater": "seats", "seat": "seats", "seats": "seats", "person": "seats", "drawer": "drawers", "drawers": "drawers",
+	"tier": "tiers", "tiers": "tiers", "shelf": "shelves", "shelves": "shelves", "door": "doors", "doors": "doors",
+	"burner": "burners", "burners": "burners", "slice": "slices", "outlet": "outlets", "outlets": "outlets",
+	"port": "ports", "ports": "ports", "ring": "rings", "gang": "gangs", "light": "lights", "lights": "lights",
+	"speed": "speeds", "blade": "blades", "blades": "blades", "ply": "ply",
+}
 
-// countConstraint is a pack size: a measure of quantity "count".
-func countConstraint(start, end int, n float64, evidence string) Constraint {
+// countAfter reports whether unit k is followed by a counting word.
+func (p *tagger) countAfter(k int) bool {
+	return k+1 < len(p.units) && p.units[k+1].kind == uWord && countWords[p.units[k+1].text] != ""
+}
+
+// countConstraint is a count: a measure of quantity "count".
+func countConstraint(start, end int, n float64, dimension, evidence string) Constraint {
 	return Constraint{Kind: KindMeasure, Start: start, End: end, Evidence: evidence,
-		Measure: &Measure{Dimension: "pack_size", Quantity: "count", Unit: "count", BaseUnit: "count", Amount: ptr(n), BaseAmount: ptr(n)}}
+		Measure: &Measure{Dimension: dimension, Quantity: "count", Unit: "count", BaseUnit: "count", Amount: ptr(n), BaseAmount: ptr(n)}}
+}
+
+// cableFraction reports whether n is written like cable, gauge over
+// conductors ("12/2", "14/3", "10/3"): an even gauge 6 to 18 over 2 to 4.
+func cableFraction(n *grammar.Num) bool {
+	f := n.Only
+	if f == nil || f.Vulgar != "" {
+		return false
+	}
+	g, err1 := strconv.Atoi(f.Num)
+	c, err2 := strconv.Atoi(f.Den)
+	return err1 == nil && err2 == nil && g >= 6 && g <= 18 && g%2 == 0 && c >= 2 && c <= 4
 }

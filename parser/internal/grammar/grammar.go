@@ -69,7 +69,8 @@ type Compare struct {
 	Val *Single `parser:"Space? @@"`
 }
 
-// Tyre is an ISO metric tyre size: "225/45R17", "225/45 r17".
+// Tyre is an ISO metric tyre size: "225/45R17", "225/45 r17", with an
+// optional service description (load index and speed symbol, "91V").
 type Tyre struct {
 	Pos    lexer.Position
 	EndPos lexer.Position
@@ -78,6 +79,8 @@ type Tyre struct {
 	Aspect       string `parser:"@Number Space?"`
 	Construction string `parser:"@('r' | 'zr' | 'd' | 'b' | 'rf')"`
 	Rim          string `parser:"Space? @Number"`
+	Load         string `parser:"( Space @Number"`
+	Speed        string `parser:"  @('l' | 'm' | 'n' | 'p' | 'q' | 'r' | 's' | 't' | 'u' | 'h' | 'v' | 'w' | 'y' | 'z') )?"`
 }
 
 // Value is a single value, or a range of two, with an optional trailing
@@ -129,7 +132,7 @@ type Quant struct {
 	Num      *Num   `parser:"@@"`
 	Mark     string `parser:"( @Mark"`
 	Unit     string `parser:"| (Space | Dash)? @Unit"`
-	Currency string `parser:"| Space? @(CurWord | Cur) )?"`
+	Currency string `parser:"| Space? @CurWord | @Cur | Space @Cur (?! Space? (Number | Vulgar)) )?"`
 	Label    string `parser:"@('w' | 'h' | 'd' | 'l')?"`
 }
 

@@ -165,6 +165,16 @@ func Tokens(s string) []lexer.Token {
 			i = scanWord(s, i)
 			w := normWord(s[start:i])
 			ty := tyWord
+			if (w == "w" || w == "W") && i < len(s) && s[i] == '/' {
+				// "w/" is with, "w/o" without.
+				if i+1 < len(s) && (s[i+1] == 'o' || s[i+1] == 'O') && (i+2 == len(s) || !isWordStart(rune(s[i+2]))) {
+					i, w = i+2, "w/o"
+				} else {
+					i, w = i+1, "w/"
+				}
+				emit(ty, start, w)
+				continue
+			}
 			if end, unit := multiWordUnit(s, i, w); end > i {
 				i, w, ty = end, unit, tyUnit
 			} else if _, ok := currencyWords[w]; ok {
