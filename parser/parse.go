@@ -24,9 +24,19 @@ func Parse(query string) *Result {
 // The rules that settle competing readings, each named in the
 // constraint's Evidence:
 //
-//   - Product type first: the last product type in the query that is not
-//     part of a compatibility target is the head; its category (or
-//     Options.Category) is the query's category.
+//   - When one phrase is several lexicon entries, the one the surface
+//     spells exactly wins over one reached only by stemming; a product
+//     type yields to another kind when the query names another product
+//     type; then product type, colour, material, pattern, silhouette,
+//     audience, brand and filler rank in that order.
+//   - Product types next to each other merge when the second adds nothing
+//     ("variable nd filter"), else the first is a modifier ("saucepan
+//     lid"); a product type after "with", or after "in" or a material once
+//     a product type was named, is a feature ("with lid", "marble top").
+//     Modifiers and features are keywords.
+//   - The head is the last product type, not a modifier or feature, before
+//     the first compatibility phrase, else the last one in the query; its
+//     category (or Options.Category) is the query's category.
 //   - AxB of whole numbers with no unit is a nominal lumber size when PS 20
 //     lists it and the category is lumber or hardware, or there is no
 //     product type; on trousers, jeans and shorts it is waist by inseam;
@@ -35,8 +45,13 @@ func Parse(query string) *Result {
 //     measure slot whose typical range holds it (inferred). In apparel and
 //     footwear a bare number that no slot holds is a size. Otherwise it
 //     stays unitless and the evidence says so.
-//   - "m", "s" and "l" are letter sizes only in apparel and footwear, and
-//     "m" right after a number is metres.
+//   - A number stuck to a word that is no unit ("200gsm", "1080p") is one
+//     keyword.
+//   - "m", "s" and "l" are letter sizes only in apparel, footwear and
+//     accessories, and "m" right after a number is metres.
+//   - A fraction written like cable, an even gauge 6 to 18 over 2 to 4
+//     ("12/2"), is a wire gauge with its conductors; another fraction is
+//     never a gauge.
 //   - A code like "m8" is a metric thread, "a4" a paper size, "cr2032" a
 //     battery, when the standard lists it and the category does not say
 //     otherwise; else it is a part number.
