@@ -67,3 +67,9 @@ func ExampleLoad() {
 	fmt.Println(err != nil)
 	// Output: true
 }
+
+func ExampleLexicon_Key() {
+	l := lexicon.Default()
+	fmt.Println(l.Key("dresses"), l.Key("sweater"))
+	// Output: dress sweater
+}

@@ -21,6 +21,9 @@ type Lexicon struct {
 	byKind map[Kind][]*Entry
 	byName map[Kind]map[string]*Entry
 	maxLen int
+	// keys caches the key of every word the vocabulary spells, so that
+	// most query words need no stemming.
+	keys map[string]string
 }
 
 // node is one step of the word trie: children by word key, and the entries
@@ -88,6 +91,7 @@ func Load(fsys fs.FS) (*Lexicon, error) {
 		root:   &node{},
 		byKind: make(map[Kind][]*Entry),
 		byName: make(map[Kind]map[string]*Entry),
+		keys:   make(map[string]string),
 	}
 	var errs []error
 	for _, k := range Kinds {
@@ -164,10 +168,22 @@ func phraseKeys(p string) []string {
 	return keys
 }
 
+// Key returns [Key](word), from a cache of the words the vocabulary spells
+// when word is one of them. word must be normalised already.
+func (l *Lexicon) Key(word string) string {
+	if k, ok := l.keys[word]; ok {
+		return k
+	}
+	return Key(word)
+}
+
 // insert adds the phrase under its word keys and, for hyphenated or
 // multi-word phrases, under the joined form too ("v-neck" also as "vneck").
 func (l *Lexicon) insert(p string, e *Entry) {
 	keys := phraseKeys(p)
+	for i, w := range Words(p) {
+		l.keys[w] = keys[i]
+	}
 	l.insertKeys(keys, e)
 	if ws := Words(p); len(ws) > 1 && len(ws) <= 3 {
 		l.insertKeys([]string{Key(strings.Join(ws, ""))}, e)

@@ -267,7 +267,7 @@ func (p *tagger) quoted(u *unit) {
 	ws := lexicon.Words(inner)
 	keys := make([]string, len(ws))
 	for i, w := range ws {
-		keys[i] = lexicon.Key(w)
+		keys[i] = p.lex.Key(lexicon.Normalise(w))
 	}
 	if n, es := p.lex.Match(keys); n == len(keys) {
 		if e := pick(es); e != nil && e.Kind != lexicon.Filler {

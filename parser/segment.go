@@ -128,7 +128,7 @@ func (p *tagger) addWord(words []word, i, piece int, space bool) []word {
 		}
 		if j > off {
 			n := lexicon.Normalise(raw[off:j])
-			words = append(words, word{start: start + off, end: start + j, norm: n, key: lexicon.Key(n), piece: piece, first: first, spaceBefore: space && first})
+			words = append(words, word{start: start + off, end: start + j, norm: n, key: p.lex.Key(n), piece: piece, first: first, spaceBefore: space && first})
 			first = false
 		}
 		_, n := utf8.DecodeRuneInString(raw[j:])
@@ -162,7 +162,7 @@ func (p *tagger) match(ws []word) []unit {
 				for _, w := range ws[j : k+1] {
 					b.WriteString(w.norm)
 				}
-				if m, es := p.lex.Match([]string{lexicon.Key(b.String())}); m == 1 {
+				if m, es := p.lex.Match([]string{p.lex.Key(b.String())}); m == 1 {
 					n, entries = k-j+1, es
 				} else if !p.anyMatch(keys[j+1 : k+1]) {
 					n = k - j + 1 // keep "ultra-soft" whole

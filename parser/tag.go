@@ -35,6 +35,15 @@ var (
 	plusLetters = map[string]bool{"1x": true, "2x": true, "3x": true, "4x": true, "5x": true}
 )
 
+// lexiconEvidence is the evidence of a plain lexicon match, by kind.
+var lexiconEvidence = func() map[lexicon.Kind]string {
+	m := make(map[lexicon.Kind]string)
+	for _, k := range lexicon.Kinds {
+		m[k] = string(k) + " lexicon"
+	}
+	return m
+}()
+
 // kindOrder ranks the lexicon kinds when one phrase is several things.
 var kindOrder = []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern,
 	lexicon.Silhouette, lexicon.Audience, lexicon.Brand, lexicon.Filler}
@@ -365,7 +374,7 @@ func (p *tagger) wordUnit(k int) int {
 			return n
 		}
 	}
-	c := Constraint{Start: u.start, End: u.end, Name: e.Name, Evidence: fmt.Sprintf("%s lexicon", e.Kind)}
+	c := Constraint{Start: u.start, End: u.end, Name: e.Name, Evidence: lexiconEvidence[e.Kind]}
 	switch e.Kind {
 	case lexicon.ProductType:
 		c.Kind, c.Category, c.Parent = KindProductType, e.Category, e.Parent
