@@ -73,3 +73,19 @@ func ExampleLexicon_Key() {
 	fmt.Println(l.Key("dresses"), l.Key("sweater"))
 	// Output: dress sweater
 }
+
+func ExampleStem() {
+	fmt.Println(lexicon.Stem("batteries"), lexicon.Stem("running"), lexicon.Stem("m8"))
+	// Output: batteri run m8
+}
+
+func ExampleLexicon_SlotsOf() {
+	l := lexicon.Default()
+	cover, _ := l.Lookup(lexicon.ProductType, "cushion cover")
+	for _, s := range l.SlotsOf(cover) {
+		fmt.Println(s)
+	}
+	// Output:
+	// width:length:in:10..36
+	// height:length:in:10..36
+}

@@ -114,3 +114,12 @@ func ExampleConstraint_Value() {
 	// product_type → tyre
 	// compatibility → fits korvane jx-10
 }
+
+func ExampleError_Render() {
+	r := parser.Parse("under 99999999999999999999 usd")
+	fmt.Println(r.Errors[0].Render())
+	// Output:
+	// under 99999999999999999999 usd
+	//       ^^^^^^^^^^^^^^^^^^^^
+	// number 99999999999999999999 has more than 15 significant digits
+}

@@ -6,6 +6,7 @@ import (
 	"os"
 	"path/filepath"
 	"strings"
+	"sync"
 	"testing"
 	"unicode/utf8"
 
@@ -134,4 +135,34 @@ func FuzzParse(f *testing.F) {
 	f.Fuzz(func(t *testing.T, q string) {
 		checkInvariants(t, q, Parse(q))
 	})
+}
+
+// Parse is safe for concurrent use: goroutines parsing the corpus at once
+// get exactly what one goroutine gets.
+func TestParseConcurrently(t *testing.T) {
+	qs := corpus(t)
+	want := make([]*Result, len(qs))
+	for i, q := range qs {
+		want[i] = Parse(q)
+	}
+	var wg sync.WaitGroup
+	errs := make(chan string, 8)
+	for g := 0; g < 8; g++ {
+		wg.Add(1)
+		go func(g int) {
+			defer wg.Done()
+			for i := range qs {
+				j := (i + g*31) % len(qs)
+				if diff := cmp.Diff(want[j], Parse(qs[j])); diff != "" {
+					errs <- qs[j] + ": " + diff
+					return
+				}
+			}
+		}(g)
+	}
+	wg.Wait()
+	close(errs)
+	for e := range errs {
+		t.Error(e)
+	}
 }

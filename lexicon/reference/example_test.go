@@ -2,6 +2,7 @@ package reference_test
 
 import (
 	"fmt"
+	"path/filepath"
 
 	"github.com/whittle-search/whittle/lexicon/reference"
 )
@@ -18,4 +19,16 @@ func ExampleRead() {
 		}
 	}
 	// Output: 210 x 297 mm
+}
+
+func ExampleDir() {
+	dir, err := reference.Dir()
+	fmt.Println(filepath.Base(filepath.Dir(dir)), filepath.Base(dir), err)
+	// Output: testdata reference <nil>
+}
+
+func ExampleRow_Float() {
+	v, err := reference.Row{"factor_to_si": "0.0254"}.Float("factor_to_si")
+	fmt.Println(v, err)
+	// Output: 0.0254 <nil>
 }
