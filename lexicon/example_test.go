@@ -89,3 +89,14 @@ func ExampleLexicon_SlotsOf() {
 	// width:length:in:10..36
 	// height:length:in:10..36
 }
+
+func ExampleLexicon_Lineage() {
+	l := lexicon.Default()
+	e, _ := l.Lookup(lexicon.ProductType, "chelsea boot")
+	for _, a := range l.Lineage(e) {
+		fmt.Println(a.Name)
+	}
+	// Output:
+	// chelsea boot
+	// boot
+}

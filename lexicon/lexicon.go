@@ -154,6 +154,10 @@ func (l *Lexicon) checkParents() error {
 			return &FileError{File: e.File, Line: e.Line, Column: 1,
 				Msg: fmt.Sprintf("parent %q of %q is not a product type", e.Parent, e.Name)}
 		}
+		if len(l.Lineage(e)) == maxDepth {
+			return &FileError{File: e.File, Line: e.Line, Column: 1,
+				Msg: fmt.Sprintf("the parents of %q go round in a loop, or more than %d deep", e.Name, maxDepth)}
+		}
 	}
 	return nil
 }
@@ -258,14 +262,30 @@ func (l *Lexicon) Counts() map[Kind]int {
 	return out
 }
 
+// maxDepth bounds a walk up the parent chain; the loader refuses a chain
+// that reaches it, which is how a loop shows.
+const maxDepth = 32
+
+// Lineage returns e and its ancestors, nearest first: "chelsea boot",
+// then "boot".
+func (l *Lexicon) Lineage(e *Entry) []*Entry {
+	var out []*Entry
+	for ; e != nil && len(out) < maxDepth; e = l.byName[ProductType][e.Parent] {
+		out = append(out, e)
+		if e.Parent == "" {
+			break
+		}
+	}
+	return out
+}
+
 // SlotsOf returns the measure slots of a product type, inherited from the
 // nearest ancestor that has any.
 func (l *Lexicon) SlotsOf(e *Entry) []Slot {
-	for seen := 0; e != nil && seen < 32; seen++ {
-		if len(e.Slots) > 0 {
-			return e.Slots
+	for _, a := range l.Lineage(e) {
+		if len(a.Slots) > 0 {
+			return a.Slots
 		}
-		e = l.byName[ProductType][e.Parent]
 	}
 	return nil
 }

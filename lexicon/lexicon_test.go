@@ -150,6 +150,15 @@ func TestLoadRefusesDuplicates(t *testing.T) {
 	}
 }
 
+func TestLoadRefusesParentLoops(t *testing.T) {
+	dir := t.TempDir()
+	os.WriteFile(filepath.Join(dir, "product_types.wlx"), []byte("boot | category=footwear | parent=shoe\nshoe | category=footwear | parent=boot\n"), 0o644)
+	_, err := LoadDir(dir)
+	if err == nil || !strings.Contains(err.Error(), "loop") {
+		t.Errorf("got %v, want an error about a loop", err)
+	}
+}
+
 func TestLoadDirOverlaysDefault(t *testing.T) {
 	dir := t.TempDir()
 	os.WriteFile(filepath.Join(dir, "brands.wlx"), []byte("# our brands\nquillmoor | also=quill moor\n"), 0o644)

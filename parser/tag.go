@@ -157,17 +157,7 @@ func (p *tagger) broader(b, a *lexicon.Entry) bool {
 	if strings.HasSuffix(a.Name, " "+b.Name) {
 		return true
 	}
-	for e, n := a, 0; e != nil && n < 16; n++ {
-		if e == b {
-			return true
-		}
-		next, ok := p.lex.Lookup(lexicon.ProductType, e.Parent)
-		if !ok {
-			break
-		}
-		e = next
-	}
-	return false
+	return slices.Contains(p.lex.Lineage(a), b)
 }
 
 // compatAt reports whether a compatibility phrase starts at unit k, and

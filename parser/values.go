@@ -748,16 +748,11 @@ func (p *tagger) lengthSlot() int {
 }
 
 func (p *tagger) isTrousers() bool {
-	for e, n := p.head, 0; e != nil && n < 16; n++ {
+	for _, e := range p.lex.Lineage(p.head) {
 		switch e.Name {
 		case "trousers", "jeans", "pants", "shorts", "chinos", "slacks":
 			return true
 		}
-		next, ok := p.lex.Lookup(lexicon.ProductType, e.Parent)
-		if !ok {
-			break
-		}
-		e = next
 	}
 	return false
 }

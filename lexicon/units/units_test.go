@@ -1,75 +1,25 @@
 package units
 
 import (
-	"bufio"
 	"errors"
 	"math"
-	"os"
-	"path/filepath"
 	"sort"
 	"strconv"
 	"strings"
 	"testing"
+
+	"github.com/whittle-search/whittle/lexicon/reference"
 )
 
-// referenceDir finds testdata/reference beside the module's go.mod by
-// walking up from the package directory.
-func referenceDir(t testing.TB) string {
+// readTSV reads a reference table through lexicon/reference: the rows,
+// keyed by column name.
+func readTSV(t testing.TB, name string) []reference.Row {
 	t.Helper()
-	dir, err := os.Getwd()
+	tb, err := reference.Read(name)
 	if err != nil {
 		t.Fatal(err)
 	}
-	for {
-		if _, err := os.Stat(filepath.Join(dir, "go.mod")); err == nil {
-			return filepath.Join(dir, "testdata", "reference")
-		}
-		parent := filepath.Dir(dir)
-		if parent == dir {
-			t.Fatal("no go.mod above the package directory")
-		}
-		dir = parent
-	}
-}
-
-// readTSV reads a reference table: '#' lines are comments, the first other
-// line is the header. Rows come back as maps from column name to cell.
-func readTSV(t testing.TB, name string) []map[string]string {
-	t.Helper()
-	f, err := os.Open(filepath.Join(referenceDir(t), name))
-	if err != nil {
-		t.Fatal(err)
-	}
-	defer f.Close()
-	var header []string
-	var rows []map[string]string
-	sc := bufio.NewScanner(f)
-	for sc.Scan() {
-		line := sc.Text()
-		if line == "" || strings.HasPrefix(line, "#") {
-			continue
-		}
-		cells := strings.Split(line, "\t")
-		if header == nil {
-			header = cells
-			continue
-		}
-		if len(cells) != len(header) {
-			t.Fatalf("%s: row %q has %d cells, header has %d", name, line, len(cells), len(header))
-		}
-		row := make(map[string]string, len(cells))
-		for i, c := range cells {
-			row[header[i]] = c
-		}
-		rows = append(rows, row)
-	}
-	if err := sc.Err(); err != nil {
-		t.Fatal(err)
-	}
-	if len(rows) == 0 {
-		t.Fatalf("%s: no data rows", name)
-	}
-	return rows
+	return tb.Rows
 }
 
 func relErr(got, want float64) float64 {
