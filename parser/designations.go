@@ -271,7 +271,7 @@ func (p *tagger) quoted(u *unit) {
 	}
 	if n, es := p.lex.Match(keys); n == len(keys) {
 		if e := pick(es); e != nil && e.Kind != lexicon.Filler {
-			c.Kind = Kind(e.Kind)
+			c.Kind = kindOf[e.Kind]
 			c.Name = e.Name
 			if e.Kind == lexicon.ProductType {
 				c.Category, c.Parent = e.Category, e.Parent

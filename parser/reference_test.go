@@ -17,15 +17,6 @@ import (
 	"github.com/whittle-search/whittle/lexicon/reference"
 )
 
-func table(t *testing.T, name string) *reference.Table {
-	t.Helper()
-	tb, err := reference.Read(name)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return tb
-}
-
 func float(t *testing.T, r reference.Row, col string) float64 {
 	t.Helper()
 	v, err := r.Float(col)
@@ -62,7 +53,7 @@ func near(a, b, tol float64) bool { return math.Abs(a-b) <= tol }
 // testdata/reference/lumber_ps20_sizes.tsv. "2x4 stud" must name the
 // nominal size and carry its dressed millimetres.
 func TestLumberSizesPS20(t *testing.T) {
-	for _, row := range table(t, "lumber_ps20_sizes.tsv").Rows {
+	for _, row := range reference.Rows(t, "lumber_ps20_sizes.tsv") {
 		q := row["nominal"] + " stud"
 		r := Parse(q)
 		c := only(t, r, KindSpec)
@@ -86,7 +77,7 @@ func TestLumberSizesPS20(t *testing.T) {
 // testdata/reference/tyre_size_examples.tsv, written both "205/55 R16"
 // and "205/55r16".
 func TestTyreSizesISO(t *testing.T) {
-	for _, row := range table(t, "tyre_size_examples.tsv").Rows {
+	for _, row := range reference.Rows(t, "tyre_size_examples.tsv") {
 		joined := strings.ToLower(strings.ReplaceAll(row["designation"], " ", ""))
 		for _, q := range []string{row["designation"] + " tyres", joined} {
 			c := only(t, Parse(q), KindSpec)
@@ -107,7 +98,7 @@ func TestTyreSizesISO(t *testing.T) {
 // ASTM B258 American Wire Gauge diameters:
 // testdata/reference/awg_wire_diameters.tsv, for "N awg" and "N gauge".
 func TestWireGaugeASTMB258(t *testing.T) {
-	for _, row := range table(t, "awg_wire_diameters.tsv").Rows {
+	for _, row := range reference.Rows(t, "awg_wire_diameters.tsv") {
 		n, err := strconv.Atoi(row["n"])
 		if err != nil || n < 0 {
 			continue // 0000..00 are written 4/0..2/0, which read as fractions
@@ -126,7 +117,7 @@ func TestWireGaugeASTMB258(t *testing.T) {
 
 // ISO 261 metric coarse threads: testdata/reference/threads_metric_iso261_262.tsv.
 func TestMetricThreadsISO261(t *testing.T) {
-	for _, row := range table(t, "threads_metric_iso261_262.tsv").Rows {
+	for _, row := range reference.Rows(t, "threads_metric_iso261_262.tsv") {
 		q := strings.ToLower(row["designation"]) + " bolt"
 		c := only(t, Parse(q), KindSpec)
 		if c.Spec.System != "metric_thread" {
@@ -145,7 +136,7 @@ func TestMetricThreadsISO261(t *testing.T) {
 // ASME B1.1 unified coarse threads: testdata/reference/threads_unified_asme_b1_1.tsv,
 // fractional sizes as "1/4-20" and numbered sizes as "#10-24".
 func TestUnifiedThreadsASMEB11(t *testing.T) {
-	for _, row := range table(t, "threads_unified_asme_b1_1.tsv").Rows {
+	for _, row := range reference.Rows(t, "threads_unified_asme_b1_1.tsv") {
 		size := row["size"]
 		if strings.HasPrefix(size, "No. ") {
 			size = "#" + strings.TrimPrefix(size, "No. ")
@@ -167,7 +158,7 @@ func TestUnifiedThreadsASMEB11(t *testing.T) {
 
 // ISO 216 A and B paper sizes: testdata/reference/iso216_paper_sizes.tsv.
 func TestPaperSizesISO216(t *testing.T) {
-	for _, row := range table(t, "iso216_paper_sizes.tsv").Rows {
+	for _, row := range reference.Rows(t, "iso216_paper_sizes.tsv") {
 		q := strings.ToLower(row["size"]) + " paper"
 		c := only(t, Parse(q), KindSpec)
 		if c.Spec.System != "paper" || c.Spec.Designation != row["size"] {
@@ -182,7 +173,7 @@ func TestPaperSizesISO216(t *testing.T) {
 
 // IEC 60086 battery sizes: testdata/reference/iec60086_batteries.tsv.
 func TestBatterySizesIEC60086(t *testing.T) {
-	for _, row := range table(t, "iec60086_batteries.tsv").Rows {
+	for _, row := range reference.Rows(t, "iec60086_batteries.tsv") {
 		name := strings.ToLower(strings.Fields(row["common_name"])[0])
 		q := name + " batteries"
 		c := only(t, Parse(q), KindSpec)
@@ -209,7 +200,7 @@ func TestUnitFactorsNISTSP811(t *testing.T) {
 	spell := map[string]string{"in": "in", "ft": "ft", "yd": "yd", "mi": "mi", "lb": "lb", "oz": "oz",
 		"L": "l", "gal": "gal", "qt": "qt", "pt": "pt", "cup": "cups", "fl oz": "fl oz", "tbsp": "tbsp", "tsp": "tsp"}
 	checked := 0
-	for _, row := range table(t, "unit_conversions.tsv").Rows {
+	for _, row := range reference.Rows(t, "unit_conversions.tsv") {
 		word, ok := spell[row["symbol"]]
 		if !ok {
 			continue

@@ -35,6 +35,13 @@ var (
 	plusLetters = map[string]bool{"1x": true, "2x": true, "3x": true, "4x": true, "5x": true}
 )
 
+// kindOf maps a lexicon kind to the constraint kind it tags.
+var kindOf = map[lexicon.Kind]Kind{
+	lexicon.ProductType: KindProductType, lexicon.Colour: KindColour, lexicon.Pattern: KindPattern,
+	lexicon.Silhouette: KindSilhouette, lexicon.Material: KindMaterial, lexicon.Audience: KindAudience,
+	lexicon.Brand: KindBrand, lexicon.Filler: KindFiller,
+}
+
 // lexiconEvidence is the evidence of a plain lexicon match, by kind.
 var lexiconEvidence = func() map[lexicon.Kind]string {
 	m := make(map[lexicon.Kind]string)
@@ -364,27 +371,15 @@ func (p *tagger) wordUnit(k int) int {
 			return n
 		}
 	}
-	c := Constraint{Start: u.start, End: u.end, Name: e.Name, Evidence: lexiconEvidence[e.Kind]}
+	c := Constraint{Kind: kindOf[e.Kind], Start: u.start, End: u.end, Name: e.Name, Evidence: lexiconEvidence[e.Kind]}
 	switch e.Kind {
 	case lexicon.ProductType:
-		c.Kind, c.Category, c.Parent = KindProductType, e.Category, e.Parent
+		c.Category, c.Parent = e.Category, e.Parent
 		if e == p.head {
 			c.Evidence = join(c.Evidence, "head product type")
 		}
-	case lexicon.Colour:
-		c.Kind = KindColour
-	case lexicon.Pattern:
-		c.Kind = KindPattern
-	case lexicon.Silhouette:
-		c.Kind = KindSilhouette
-	case lexicon.Material:
-		c.Kind = KindMaterial
-	case lexicon.Audience:
-		c.Kind = KindAudience
-	case lexicon.Brand:
-		c.Kind = KindBrand
 	case lexicon.Filler:
-		c.Kind, c.Strictness, c.Name = KindFiller, Filler, ""
+		c.Strictness, c.Name = Filler, ""
 	}
 	p.add(c)
 	return 0

@@ -8,6 +8,7 @@ import (
 	"path/filepath"
 	"strconv"
 	"strings"
+	"testing"
 )
 
 // Row is one data row of a table, keyed by column name.
@@ -102,4 +103,14 @@ func Read(name string) (*Table, error) {
 		return nil, fmt.Errorf("%s: no data rows", name)
 	}
 	return t, nil
+}
+
+// Rows reads the named table for a test, failing the test when it cannot.
+func Rows(tb testing.TB, name string) []Row {
+	tb.Helper()
+	t, err := Read(name)
+	if err != nil {
+		tb.Fatal(err)
+	}
+	return t.Rows
 }

@@ -9,17 +9,6 @@ import (
 	"github.com/whittle-search/whittle/lexicon/reference"
 )
 
-// readTSV reads a reference table through lexicon/reference: the rows,
-// keyed by column name.
-func readTSV(t testing.TB, name string) []reference.Row {
-	t.Helper()
-	tb, err := reference.Read(name)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return tb.Rows
-}
-
 func num(t testing.TB, s string) float64 {
 	t.Helper()
 	v, err := strconv.ParseFloat(s, 64)
@@ -56,7 +45,7 @@ func TestEmbeddedTablesMatchReferenceSize(t *testing.T) {
 		{"iec60086_batteries.tsv", len(d.batteries)},      // IEC 60086
 	}
 	for _, tc := range tests {
-		if want := len(readTSV(t, tc.file)); tc.got != want {
+		if want := len(reference.Rows(t, tc.file)); tc.got != want {
 			t.Errorf("%s: embedded table has %d sizes, reference %d", tc.file, tc.got, want)
 		}
 	}
@@ -65,7 +54,7 @@ func TestEmbeddedTablesMatchReferenceSize(t *testing.T) {
 // TestLumberReference checks every row against the PS 20 dry dressed
 // sizes, testdata/reference/lumber_ps20_sizes.tsv.
 func TestLumberReference(t *testing.T) {
-	for _, row := range readTSV(t, "lumber_ps20_sizes.tsv") {
+	for _, row := range reference.Rows(t, "lumber_ps20_sizes.tsv") {
 		t.Run(row["nominal"], func(t *testing.T) {
 			nt, nw := integer(t, row["nominal_thickness_in"]), integer(t, row["nominal_width_in"])
 			d, ok := LumberNominal(nt, nw)
@@ -116,7 +105,7 @@ func TestLumberReference(t *testing.T) {
 // testdata/reference/tyre_size_examples.tsv (ISO metric designation;
 // D = rim x 25.4 + 2 x W x AR/100).
 func TestTyreReference(t *testing.T) {
-	for _, row := range readTSV(t, "tyre_size_examples.tsv") {
+	for _, row := range reference.Rows(t, "tyre_size_examples.tsv") {
 		t.Run(row["designation"], func(t *testing.T) {
 			w, ar := integer(t, row["section_width_mm"]), integer(t, row["aspect_ratio_pct"])
 			c := row["construction"][0]
@@ -155,7 +144,7 @@ func roundSig(v float64, n int) float64 {
 // testdata/reference/awg_wire_diameters.tsv (ASTM B258 formula; tabulated
 // columns from Lessons in Electric Circuits and cocoaNEC awg.h).
 func TestWireReference(t *testing.T) {
-	for _, row := range readTSV(t, "awg_wire_diameters.tsv") {
+	for _, row := range reference.Rows(t, "awg_wire_diameters.tsv") {
 		t.Run(row["gauge"], func(t *testing.T) {
 			n := integer(t, row["n"])
 			d, err := WireGauge(n, 0)
@@ -206,7 +195,7 @@ func splitPitches(t testing.TB, s string) []float64 {
 // testdata/reference/threads_metric_iso261_262.tsv (ISO 261 coarse pitch,
 // and the fine pitches of both fetched sources).
 func TestMetricThreadReference(t *testing.T) {
-	for _, row := range readTSV(t, "threads_metric_iso261_262.tsv") {
+	for _, row := range reference.Rows(t, "threads_metric_iso261_262.tsv") {
 		t.Run(row["designation"], func(t *testing.T) {
 			dia := num(t, row["nominal_diameter_mm"])
 			d, err := MetricThreadSize(dia, 0)
@@ -250,7 +239,7 @@ func TestMetricThreadReference(t *testing.T) {
 // testdata/reference/threads_unified_asme_b1_1.tsv (ASME B1.1 UNC and UNF
 // threads per inch and basic major diameter).
 func TestUnifiedThreadReference(t *testing.T) {
-	for _, row := range readTSV(t, "threads_unified_asme_b1_1.tsv") {
+	for _, row := range reference.Rows(t, "threads_unified_asme_b1_1.tsv") {
 		t.Run(row["size"], func(t *testing.T) {
 			// The reference writes numbered sizes "No. 4"; shoppers write #4.
 			size := row["size"]
@@ -297,7 +286,7 @@ func TestUnifiedThreadReference(t *testing.T) {
 // TestPaperReference checks every size of
 // testdata/reference/iso216_paper_sizes.tsv (ISO 216).
 func TestPaperReference(t *testing.T) {
-	for _, row := range readTSV(t, "iso216_paper_sizes.tsv") {
+	for _, row := range reference.Rows(t, "iso216_paper_sizes.tsv") {
 		t.Run(row["size"], func(t *testing.T) {
 			d, ok := PaperSize(row["size"])
 			if !ok {
@@ -339,7 +328,7 @@ func TestPaperHalvingRule(t *testing.T) {
 // maximum dimensions; coin-cell 3 V and some designations are marked there
 // as from memory).
 func TestBatteryReference(t *testing.T) {
-	for _, row := range readTSV(t, "iec60086_batteries.tsv") {
+	for _, row := range reference.Rows(t, "iec60086_batteries.tsv") {
 		t.Run(row["common_name"], func(t *testing.T) {
 			// "9V (PP3)" is two names of one size.
 			names := []string{row["common_name"], row["iec_designation"]}

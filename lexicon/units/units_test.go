@@ -11,17 +11,6 @@ import (
 	"github.com/whittle-search/whittle/lexicon/reference"
 )
 
-// readTSV reads a reference table through lexicon/reference: the rows,
-// keyed by column name.
-func readTSV(t testing.TB, name string) []reference.Row {
-	t.Helper()
-	tb, err := reference.Read(name)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return tb.Rows
-}
-
 func relErr(got, want float64) float64 {
 	if want == 0 {
 		return math.Abs(got)
@@ -66,7 +55,7 @@ var siToBase = map[string]float64{"m": 1000, "kg": 1000, "m^3": 1e6}
 // testdata/reference/unit_conversions.tsv (NIST SP 811 Appendix B and the
 // 1959 international yard and pound agreement, factors derived exactly).
 func TestFactorsMatchReference(t *testing.T) {
-	rows := readTSV(t, "unit_conversions.tsv")
+	rows := reference.Rows(t, "unit_conversions.tsv")
 	for _, row := range rows {
 		sym := row["symbol"]
 		t.Run(sym, func(t *testing.T) {

@@ -268,7 +268,7 @@ func ParseItem(toks []lexer.Token) (*Item, int) {
 // run parses one T from the front of toks (which ends with EOF), and
 // returns it with the byte offset where it ends.
 func run[T any](p *participle.Parser[T], toks []lexer.Token) (*T, int, bool) {
-	peek, err := lexer.Upgrade(&sliceLexer{toks: toks})
+	peek, err := lexer.Upgrade(&Lexer{toks: toks})
 	if err != nil {
 		return nil, 0, false
 	}
@@ -277,21 +277,6 @@ func run[T any](p *participle.Parser[T], toks []lexer.Token) (*T, int, bool) {
 		return nil, 0, false
 	}
 	return v, peek.Peek().Pos.Offset, true
-}
-
-// sliceLexer replays a token slice.
-type sliceLexer struct {
-	toks []lexer.Token
-	i    int
-}
-
-func (l *sliceLexer) Next() (lexer.Token, error) {
-	if l.i >= len(l.toks) {
-		return lexer.Token{Type: lexer.EOF}, nil
-	}
-	t := l.toks[l.i]
-	l.i++
-	return t, nil
 }
 
 // newDefinition makes the lexer definition; calling it (rather than naming

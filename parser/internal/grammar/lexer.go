@@ -302,14 +302,7 @@ func scanWord(s string, i int) int {
 
 // asciiDigits rewrites any Unicode decimal digits as ASCII.
 func asciiDigits(s string) string {
-	ascii := true
-	for i := 0; i < len(s); i++ {
-		if s[i] >= utf8.RuneSelf {
-			ascii = false
-			break
-		}
-	}
-	if ascii {
+	if isASCII(s) {
 		return s
 	}
 	var b strings.Builder
@@ -341,14 +334,7 @@ func digitValue(r rune) rune {
 // normWord normalises a word for matching: NFKC, lower case, curly
 // apostrophes made straight.
 func normWord(w string) string {
-	ascii := true
-	for i := 0; i < len(w); i++ {
-		if w[i] >= utf8.RuneSelf {
-			ascii = false
-			break
-		}
-	}
-	if ascii {
+	if isASCII(w) {
 		for i := 0; i < len(w); i++ {
 			if 'A' <= w[i] && w[i] <= 'Z' {
 				return strings.ToLower(w)
@@ -428,4 +414,13 @@ func multiWordUnit(s string, i int, w string) (int, string) {
 		end++ // "fl. oz."
 	}
 	return end, name
+}
+
+func isASCII(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] >= utf8.RuneSelf {
+			return false
+		}
+	}
+	return true
 }
