@@ -197,6 +197,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindSize, "sz 8", "8 (numeric)"), tg(KindProductType, "dress", "dress")}},
 	{name: "3xl", query: "3xl hoodie", category: "apparel", reason: "letter size with a count",
 		want: []tagged{tg(KindSize, "3xl", "3xl (letter)"), tg(KindProductType, "hoodie", "hoodie")}},
+	{name: "two-word letter size", query: "extra large hoodie", category: "apparel", reason: "extra large is XL",
+		want: []tagged{tg(KindSize, "extra large", "xl (letter)"), tg(KindProductType, "hoodie", "hoodie")}},
 	{name: "xs", query: "xs blazer", category: "apparel", reason: "letter size",
 		want: []tagged{tg(KindSize, "xs", "xs (letter)"), tg(KindProductType, "blazer", "blazer")}},
 	{name: "petite", query: "petite jeans", category: "apparel", reason: "petite is a fit size",

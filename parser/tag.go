@@ -27,7 +27,7 @@ var (
 	}
 	// ambiguousLetters are letter sizes that are also units or words.
 	ambiguousLetters = map[string]bool{"s": true, "m": true, "l": true, "small": true, "medium": true, "large": true, "sm": true, "med": true, "lg": true}
-	fitSizes         = map[string]bool{"petite": true, "tall": true, "plus": true, "plus size": true, "big and tall": true, "maternity": true, "husky": true, "slim": false}
+	fitSizes         = map[string]bool{"petite": true, "tall": true, "plus": true, "maternity": true, "husky": true}
 	widths           = map[string]string{"wide": "wide", "narrow": "narrow", "extra wide": "extra wide", "ww": "extra wide", "xw": "extra wide", "w": "wide", "n": "narrow", "medium": "medium", "regular": "medium",
 		"ee": "wide", "eee": "extra wide", "eeee": "extra wide"}
 	// plusLetters are the plus-size letter sizes "1x".."5x", read only in
@@ -388,6 +388,13 @@ func (p *tagger) wordUnit(k int) int {
 // letterSize tags a letter or fit size at unit k; -1 when it is none.
 func (p *tagger) letterSize(k int) int {
 	u := &p.units[k]
+	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.sized() {
+		// Two-word letter sizes: "extra large", "extra small".
+		if v, ok := letterSizes[u.text+" "+p.units[k+1].text]; ok {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: p.units[k+1].end, Size: &Size{System: "letter", Value: v}, Evidence: "letter size"})
+			return 1
+		}
+	}
 	if v, ok := letterSizes[u.text]; ok {
 		if ambiguousLetters[u.text] && !p.sized() || plusLetters[u.text] && !p.apparel() {
 			return -1
