@@ -360,7 +360,7 @@ func (p *tagger) bare(start, end int, q quantity) {
 		if s.Holds(q.num.value) {
 			c := p.measure(start, end, q, s.Dimension, nil, nil, s.Unit)
 			c.Inferred = true
-			c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", s.Unit.Symbol, p.head.Name, s.Dimension, rangeText(s))
+			c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", s.Unit, p.head.Name, s.Dimension, rangeText(s))
 			p.add(c)
 			return
 		}
@@ -455,7 +455,7 @@ func (p *tagger) measure(start, end int, q quantity, dim string, min, max *float
 		}
 		dim = p.dimensionFor(u, v)
 	}
-	m := &Measure{Dimension: dim, Quantity: string(u.Quantity), Unit: u.Symbol, BaseUnit: units.Base(u.Quantity)}
+	m := &Measure{Dimension: dim, Quantity: string(u.Quantity), Unit: u.String(), BaseUnit: mustUnit(units.Base(u.Quantity)).String()}
 	if min == nil && max == nil {
 		m.Amount, m.BaseAmount = ptr(q.num.value), ptr(tidy(q.num.value*u.ToBase))
 	} else {
@@ -527,7 +527,7 @@ func (p *tagger) bound(start, end int, s single, op string) {
 		if sl.Holds(v) {
 			c := p.measure(start, end, q, sl.Dimension, lo, hi, sl.Unit)
 			c.Inferred = true
-			c.Evidence = join(ev, fmt.Sprintf("unit %s from product type %s", sl.Unit.Symbol, p.head.Name))
+			c.Evidence = join(ev, fmt.Sprintf("unit %s from product type %s", sl.Unit, p.head.Name))
 			p.add(c)
 			return
 		}
@@ -588,7 +588,7 @@ func (p *tagger) rangeOf(start, end int, a, b single, how string) {
 	lo, hi := qa.num.value, qb.num.value
 	if qa.hasUnit && qb.hasUnit && qa.unit.Symbol != qb.unit.Symbol {
 		if qa.unit.Quantity != qb.unit.Quantity {
-			p.errorf(start, end, "range from %s to %s mixes quantities", qa.unit.Symbol, qb.unit.Symbol)
+			p.errorf(start, end, "range from %s to %s mixes quantities", qa.unit, qb.unit)
 			return
 		}
 		lo = qa.num.value * qa.unit.ToBase / u.ToBase
@@ -606,7 +606,7 @@ func (p *tagger) rangeOf(start, end int, a, b single, how string) {
 		if sl.Holds(lo) && sl.Holds(hi) {
 			c := p.measure(start, end, qb, sl.Dimension, &lo, &hi, sl.Unit)
 			c.Inferred = true
-			c.Evidence = fmt.Sprintf("%s; unit %s from product type %s", how, sl.Unit.Symbol, p.head.Name)
+			c.Evidence = fmt.Sprintf("%s; unit %s from product type %s", how, sl.Unit, p.head.Name)
 			p.add(c)
 			return
 		}
@@ -716,7 +716,7 @@ func (p *tagger) lengths(s single, from, end, first int) {
 			if ok && sl.Holds(q.num.value) {
 				c = p.measure(q.start, qEnd, q, sl.Dimension, nil, nil, sl.Unit)
 				c.Inferred = true
-				c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", sl.Unit.Symbol, p.head.Name, sl.Dimension, rangeText(sl))
+				c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", sl.Unit, p.head.Name, sl.Dimension, rangeText(sl))
 			} else {
 				dim := "dimension"
 				if i < len(generic) {

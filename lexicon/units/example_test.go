@@ -72,3 +72,12 @@ func ExampleOpensPhrase() {
 	fmt.Println(units.OpensPhrase("fl"), units.OpensPhrase("imperial"), units.OpensPhrase("mm"))
 	// Output: true true false
 }
+
+func ExampleUnit_String() {
+	for _, sym := range []string{"mm", "ml", "w", "mah", "gb", "floz"} {
+		u, _ := units.BySymbol(sym)
+		fmt.Print(u, " ")
+	}
+	fmt.Println()
+	// Output: mm mL W mAh GB fl oz
+}

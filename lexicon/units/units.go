@@ -41,6 +41,28 @@ type Unit struct {
 	ToBase float64
 }
 
+// written holds the symbols whose usual written form differs from the
+// lower-case key: SI prefixes and unit symbols keep their case, so the
+// watt is W and the gigabyte GB, and the litre takes L as NIST SP 811
+// recommends for the US (both rules from memory of the SI Brochure and
+// SP 811, not from a fetched copy).
+var written = map[string]string{
+	"ml": "mL", "cl": "cL", "dl": "dL", "l": "L", "floz": "fl oz", "imp_floz": "imp fl oz", "imp_cup": "imp cup",
+	"imp_pt": "imp pt", "imp_qt": "imp qt", "imp_gal": "imp gal", "w": "W", "kw": "kW", "mv": "mV", "v": "V",
+	"kv": "kV", "ma": "mA", "a": "A", "mah": "mAh", "ah": "Ah", "kb": "kB", "mb": "MB", "gb": "GB", "tb": "TB",
+	"pb": "PB", "day": "d",
+}
+
+// String returns the symbol as it is usually written: "mm", "in", "mL",
+// "W", "mAh", "GB", "fl oz". Symbol stays the lower-case key that
+// [BySymbol] and the lexicon files use.
+func (u Unit) String() string {
+	if w, ok := written[u.Symbol]; ok {
+		return w
+	}
+	return u.Symbol
+}
+
 // Base returns the base unit symbol for q: "mm", "g", "ml", "w", "v", "a",
 // "mah", "gb" or "s". It returns "" for an unknown quantity.
 func Base(q Quantity) string {

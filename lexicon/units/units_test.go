@@ -582,3 +582,16 @@ func BenchmarkConvert(b *testing.B) {
 		}
 	}
 }
+
+// Every unit's written symbol is unique, so the output never confuses two
+// units.
+func TestWrittenSymbolsAreUnique(t *testing.T) {
+	seen := make(map[string]string)
+	for _, u := range Units() {
+		w := u.String()
+		if other, dup := seen[w]; dup {
+			t.Errorf("%s and %s are both written %q", other, u.Symbol, w)
+		}
+		seen[w] = u.Symbol
+	}
+}
