@@ -334,6 +334,16 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindProductType, "tv stand", "tv stand"), tg(KindCompatibility, "for 65 inch tv", "fits 65 inch tv")}},
 	{name: "exact spelling wins", query: "215/60R16 studded snow tires", category: "tyres", reason: "studded is the silhouette it spells, not the stud it stems to",
 		want: []tagged{tg(KindSpec, "215/60R16", "215/60R16 (tyre)"), tg(KindSilhouette, "studded", "studded"), tg(KindProductType, "snow tires", "winter tyre")}},
+	{name: "size 8 boots", query: "size 8 boots", category: "footwear", reason: "a number after size on footwear is a shoe size",
+		want: []tagged{tg(KindSize, "size 8", "8 (shoe)"), tg(KindProductType, "boots", "boot")}},
+	{name: "spaced dimension", query: "22 x 36 picture frame", category: "home", reason: "22 x 36 with spaces is a dimension in the frame's inches",
+		want: []tagged{tg(KindMeasure, "22", "22 in").inferred(), tg(KindMeasure, "36", "36 in").inferred(), tg(KindProductType, "picture frame", "picture frame")}},
+	{name: "2x4 is a rug size in a rug query", query: "2x4 rug", category: "home", reason: "PS 20 lists 2x4, but the category is home, so it is the rug's size in feet",
+		want: []tagged{tg(KindMeasure, "2", "2 ft").inferred(), tg(KindMeasure, "4", "4 ft").inferred(), tg(KindProductType, "rug", "rug")}},
+	{name: "tall", query: "tall jeans", category: "apparel", reason: "tall is a fit size",
+		want: []tagged{tg(KindSize, "tall", "tall (fit)"), tg(KindProductType, "jeans", "jeans")}},
+	{name: "pressure treated", query: "2x6 pressure treated", category: "lumber", reason: "a multi-word material",
+		want: []tagged{tg(KindSpec, "2x6", "2x6 (lumber)"), tg(KindMaterial, "pressure treated", "pressure treated")}},
 	{name: "unitless number", query: "500 lens", category: "camera", reason: "500 mm is within a lens's focal lengths",
 		want: []tagged{tg(KindMeasure, "500", "500 mm").inferred(), tg(KindProductType, "lens", "lens")}},
 	{name: "out of every slot", query: "5000 lens", category: "camera", reason: "no focal length slot holds 5000: stays unitless",
@@ -473,6 +483,33 @@ func TestMeasureDimensions(t *testing.T) {
 		}
 		if diff := cmp.Diff(tc.want, got); diff != "" {
 			t.Errorf("%q: %s (-want +got):\n%s", tc.query, tc.reason, diff)
+		}
+	}
+}
+
+// Every comparison the grammar knows sets the bound it says; bounds are
+// inclusive.
+func TestComparisons(t *testing.T) {
+	for _, tc := range []struct{ query, want string }{
+		{"under 30 mm", "≤ 30 mm"}, {"below $20", "≤ 20.00 USD"}, {"less than 30 mm", "≤ 30 mm"},
+		{"up to 2 tb", "≤ 2 TB"}, {"max 30w", "≤ 30 W"}, {"at most 5 kg", "≤ 5 kg"}, {"no more than 5 kg", "≤ 5 kg"},
+		{"< 10 lb", "≤ 10 lb"}, {"<= 10 lb", "≤ 10 lb"}, {"10 lb or less", "≤ 10 lb"}, {"$50 and under", "≤ 50.00 USD"},
+		{"over 100 w", "≥ 100 W"}, {"above 50 lb", "≥ 50 lb"}, {"more than 2 tb", "≥ 2 TB"}, {"at least 2 tb", "≥ 2 TB"},
+		{"min 3000mah", "≥ 3000 mAh"}, {"> 5 kg", "≥ 5 kg"}, {">= 12v", "≥ 12 V"}, {"2 tb or more", "≥ 2 TB"},
+		{"$100 and up", "≥ 100.00 USD"}, {"$40+", "≥ 40.00 USD"},
+	} {
+		r := Parse(tc.query)
+		if len(r.Constraints) != 1 || r.Constraints[0].Value() != tc.want || r.Constraints[0].Text != tc.query {
+			t.Errorf("%q: got %s, want one constraint over the whole query reading %s", tc.query, summary(r), tc.want)
+		}
+	}
+}
+
+// Parents come from the lexicon: bunk bed is a bed, chelsea boot a boot.
+func TestParents(t *testing.T) {
+	for q, want := range map[string]string{"bunk bed": "bed", "chelsea boots": "boot"} {
+		if c := only(t, Parse(q), KindProductType); c.Parent != want {
+			t.Errorf("%q: parent %q, want %q", q, c.Parent, want)
 		}
 	}
 }
