@@ -7,6 +7,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"slices"
 	"strings"
 
 	"golang.org/x/term"
@@ -23,7 +24,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("explain", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	asJSON := fs.Bool("json", false, "write the JSON contract (one object a line) instead of the table")
-	category := fs.String("category", "", "read every query as being in this category (e.g. apparel)")
+	category := fs.String("category", "", "read every query as being in this category: "+strings.Join(lexicon.Categories, ", "))
 	cur := fs.String("currency", "USD", `ISO 4217 code a bare "$" or "dollars" means, when it is a dollar currency`)
 	imperial := fs.Bool("imperial", false, "read gallons, quarts, pints, cups and fluid ounces as imperial")
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones (missing files fall back)")
@@ -47,7 +48,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if *imperial {
 		opts.Volume = units.Imperial
 	}
-	if *category != "" && !known(lexicon.Categories, *category) {
+	if *category != "" && !slices.Contains(lexicon.Categories, *category) {
 		fmt.Fprintf(stderr, "whittle explain: unknown category %q (known: %s)\n", *category, strings.Join(lexicon.Categories, ", "))
 		return 2
 	}
@@ -116,13 +117,4 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		emit(q, i == 0)
 	}
 	return status
-}
-
-func known(list []string, s string) bool {
-	for _, x := range list {
-		if x == s {
-			return true
-		}
-	}
-	return false
 }
