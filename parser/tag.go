@@ -238,8 +238,9 @@ func (p *tagger) sized() bool {
 	return p.apparel() || p.category == "accessories"
 }
 
-// add appends a constraint for units [from, to] and applies a pending
-// exclusion.
+// add appends a constraint, filling in its text and, when Strictness is
+// left zero on a kind other than filler, the kind's default strictness;
+// a pending exclusion applies to it.
 func (p *tagger) add(c Constraint) {
 	if c.Strictness == 0 && c.Kind != KindFiller {
 		c.Strictness = DefaultStrictness(c.Kind)

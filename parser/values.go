@@ -40,7 +40,7 @@ func (p *tagger) readSingle(s *grammar.Single) (single, bool) {
 			p.res.Errors = append(p.res.Errors, err)
 			return out, false
 		}
-		code, ok := p.symbolCurrency(m.Symbol)
+		code, ok := p.currency(m.Symbol)
 		if !ok {
 			p.errorf(m.Pos.Offset, m.Amount.Pos.Offset, "unknown currency symbol %q", m.Symbol)
 			return out, false
@@ -63,7 +63,7 @@ func (p *tagger) readSingle(s *grammar.Single) (single, bool) {
 		case q.Unit != "":
 			qt.unit, qt.hasUnit = units.Lookup(q.Unit, p.opts.Volume)
 		case q.Currency != "":
-			code, ok := p.wordCurrency(q.Currency)
+			code, ok := p.currency(q.Currency)
 			if !ok {
 				p.errorf(qt.start, qt.end, "unknown currency %q", q.Currency)
 				return out, false
@@ -94,15 +94,10 @@ var currencySigns = map[string]string{
 	"₲": "PYG", "₵": "GHS", "₸": "KZT", "₼": "AZN", "₾": "GEL", "zł": "PLN", "¢": "",
 }
 
-func (p *tagger) symbolCurrency(sym string) (string, bool) {
-	if sym == "$" {
-		return p.opts.dollar(), true
-	}
-	code, ok := currencySigns[sym]
-	return code, ok && code != ""
-}
-
-func (p *tagger) wordCurrency(w string) (string, bool) {
+// currency returns the ISO 4217 code of a currency sign ("€", "$") or
+// word ("eur", "euros", "dollars"); "$" and the dollar words take the
+// option's dollar currency.
+func (p *tagger) currency(w string) (string, bool) {
 	if code, ok := currencySigns[w]; ok {
 		return code, code != ""
 	}
