@@ -72,6 +72,11 @@ type Entry struct {
 	// Slots are the measures a product type takes, in the order a bare
 	// number or a dimension fills them (product types only).
 	Slots []Slot
+	// Hex is a colour's sRGB value, "#rrggbb", or "multi" for a word that
+	// names several colours; From says where the value comes from: "css4"
+	// (CSS Color Module Level 4) or "memory" (common usage, from memory).
+	// Colours only; both may be empty.
+	Hex, From string
 	// File and Line say where the entry was defined.
 	File string
 	Line int

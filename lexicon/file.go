@@ -25,11 +25,17 @@ func (e *FileError) Error() string {
 
 // keysFor lists the field keys each kind accepts besides "also".
 func keysFor(k Kind) []string {
-	if k == ProductType {
+	switch k {
+	case ProductType:
 		return []string{"also", "category", "parent", "slot"}
+	case Colour:
+		return []string{"also", "hex", "from"}
 	}
 	return []string{"also"}
 }
+
+// colourSources are the values a colour's from= field may take.
+var colourSources = []string{"css4", "memory"}
 
 const fieldSep = " | "
 
@@ -41,7 +47,8 @@ const fieldSep = " | "
 //
 // Fields are separated by " | ". The key "also" takes a comma-separated
 // list of aliases; product types also take "category", "parent" and
-// repeated "slot" fields (dimension:quantity:unit:min..max). Names are
+// repeated "slot" fields (dimension:quantity:unit:min..max); colours take
+// "hex" (#rrggbb, or multi) and "from" (css4 or memory). Names are
 // normalised as [Normalise] does. Every problem is a *FileError naming
 // the line and column.
 func ParseFile(name string, k Kind, r io.Reader) ([]*Entry, error) {
@@ -102,6 +109,16 @@ func ParseFile(name string, k Kind, r io.Reader) ([]*Entry, error) {
 				e.Category = val
 			case "parent":
 				e.Parent = normaliseName(val)
+			case "hex":
+				if val != "multi" && !isHexColour(val) {
+					return nil, errAt(fcol, "hex %q: want #rrggbb, or multi for a word that names several colours", val)
+				}
+				e.Hex = strings.ToLower(val)
+			case "from":
+				if !slices.Contains(colourSources, val) {
+					return nil, errAt(fcol, "from %q: want one of %s", val, strings.Join(colourSources, ", "))
+				}
+				e.From = val
 			case "slot":
 				s, err := parseSlot(val)
 				if err != nil {
@@ -112,6 +129,9 @@ func ParseFile(name string, k Kind, r io.Reader) ([]*Entry, error) {
 		}
 		if k == ProductType && e.Category == "" {
 			return nil, errAt(1, "product type %q has no category", e.Name)
+		}
+		if k == Colour && (e.Hex == "") != (e.From == "") && e.Hex != "multi" {
+			return nil, errAt(1, "colour %q: give hex= and from= together (from= says where the value comes from)", e.Name)
 		}
 		out = append(out, e)
 	}
@@ -124,4 +144,16 @@ func ParseFile(name string, k Kind, r io.Reader) ([]*Entry, error) {
 // normaliseName lower-cases a name and folds runs of white space to one.
 func normaliseName(s string) string {
 	return strings.Join(strings.Fields(Normalise(s)), " ")
+}
+
+func isHexColour(s string) bool {
+	if len(s) != 7 || s[0] != '#' {
+		return false
+	}
+	for _, c := range s[1:] {
+		if !('0' <= c && c <= '9' || 'a' <= c && c <= 'f' || 'A' <= c && c <= 'F') {
+			return false
+		}
+	}
+	return true
 }

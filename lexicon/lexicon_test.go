@@ -120,7 +120,10 @@ func TestParseFileErrors(t *testing.T) {
 	}{
 		{"field first", "pattern", "also=x\n", 1, 1, "canonical name comes first"},
 		{"not key=value", "pattern", "# c\nstripe | dotted\n", 2, 10, "not key=value"},
-		{"unknown key", "colour", "red | hex=#f00\n", 1, 7, `unknown key "hex"`},
+		{"unknown key", "colour", "red | shade=dark\n", 1, 7, `unknown key "shade"`},
+		{"short hex", "colour", "red | hex=#f00 | from=css4\n", 1, 7, "want #rrggbb"},
+		{"hex without source", "colour", "red | hex=#ff0000\n", 1, 1, "give hex= and from= together"},
+		{"unknown source", "colour", "red | hex=#ff0000 | from=paint chart\n", 1, 21, `from "paint chart"`},
 		{"unknown category", "product_type", "sock | category=socks\n", 1, 8, `unknown category "socks"`},
 		{"no category", "product_type", "sock\n", 1, 1, "no category"},
 		{"bad slot unit", "product_type", "lens | category=camera | slot=focal_length:length:furlong:8..1200\n", 1, 26, `unknown unit "furlong"`},
