@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io/fs"
 	"os"
+	"slices"
 
 	"strings"
 	"sync"
@@ -24,6 +25,8 @@ type Lexicon struct {
 	// keys caches the key of every word the vocabulary spells, so that
 	// most query words need no stemming.
 	keys map[string]string
+	// joined holds the joined forms waiting for insertJoined.
+	joined []joinedForm
 }
 
 // node is one step of the word trie: children by word key, and the entries
@@ -110,6 +113,7 @@ func Load(fsys fs.FS) (*Lexicon, error) {
 			errs = append(errs, err)
 		}
 	}
+	l.insertJoined()
 	if err := l.checkParents(); err != nil {
 		errs = append(errs, err)
 	}
@@ -190,8 +194,28 @@ func (l *Lexicon) insert(p string, e *Entry) {
 	}
 	l.insertKeys(keys, e)
 	if ws := Words(p); len(ws) > 1 && len(ws) <= 3 {
-		l.insertKeys([]string{Key(strings.Join(ws, ""))}, e)
+		l.joined = append(l.joined, joinedForm{Key(strings.Join(ws, "")), e})
 	}
+}
+
+// joinedForm is a phrase of several words written as one ("vneck",
+// "bunkbed"), added once every phrase is in.
+type joinedForm struct {
+	key string
+	e   *Entry
+}
+
+// insertJoined adds the joined forms where no phrase of the vocabulary
+// already has that key: "orangered" stems like "orange", and must not
+// make plain "orange" mean two colours.
+func (l *Lexicon) insertJoined() {
+	for _, j := range l.joined {
+		if c := l.root.next[j.key]; c != nil && len(c.entries) > 0 && !slices.Contains(c.entries, j.e) {
+			continue
+		}
+		l.insertKeys([]string{j.key}, j.e)
+	}
+	l.joined = nil
 }
 
 func (l *Lexicon) insertKeys(keys []string, e *Entry) {

@@ -10,6 +10,8 @@ import (
 	"github.com/blevesearch/bleve/v2/analysis/lang/en"
 	"github.com/blevesearch/bleve/v2/registry"
 	"github.com/google/go-cmp/cmp"
+
+	"github.com/whittle-search/whittle/lexicon/reference"
 )
 
 // The default vocabulary must cover what the parser promises.
@@ -190,5 +192,49 @@ func TestSlotsInherit(t *testing.T) {
 		if got := l.SlotsOf(e); len(got) != len(l.SlotsOf(parent)) {
 			t.Errorf("%s does not inherit the slots of %s", e.Name, parent.Name)
 		}
+	}
+}
+
+// Every CSS Color Module Level 4 named colour is in the colour lexicon
+// with its CSS value (testdata/reference/css_named_colours.tsv), and every
+// other colour says where its value comes from.
+func TestColoursCSS4(t *testing.T) {
+	l := Default()
+	for _, row := range reference.Rows(t, "css_named_colours.tsv") {
+		name := row["name"]
+		if name == "orangered" {
+			name = "orange red" // one word, it stems like "orange" (see colours.wlx)
+		}
+		var keys []string
+		for _, w := range Words(name) {
+			keys = append(keys, Key(w))
+		}
+		n, es := l.Match(keys)
+		var found *Entry
+		for _, e := range es {
+			if e.Kind == Colour {
+				found = e
+			}
+		}
+		if n != len(keys) || found == nil {
+			t.Errorf("CSS colour %s is not in the colour lexicon", row["name"])
+			continue
+		}
+		if found.Hex != row["hex"] || found.From != "css4" {
+			t.Errorf("CSS colour %s: lexicon entry %q has %s from %s, CSS gives %s", row["name"], found.Name, found.Hex, found.From, row["hex"])
+		}
+	}
+	memory := 0
+	for _, e := range l.Entries(Colour) {
+		switch {
+		case e.Hex == "multi", e.Hex == "" && e.Name == "clear":
+		case e.From == "memory":
+			memory++
+		case e.From != "css4":
+			t.Errorf("colour %s has no source for its value", e.Name)
+		}
+	}
+	if memory < 150 {
+		t.Errorf("%d colours beyond CSS, want at least 150", memory)
 	}
 }
