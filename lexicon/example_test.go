@@ -100,3 +100,31 @@ func ExampleLexicon_Lineage() {
 	// chelsea boot
 	// boot
 }
+
+func ExampleLexicon_Suggest() {
+	fmt.Println(lexicon.Default().Suggest("burgandy", lexicon.Colour))
+	// Output: burgundy
+}
+
+func ExampleEntry_ColourLab() {
+	e, _ := lexicon.Default().Lookup(lexicon.Colour, "navy")
+	lab, _ := e.ColourLab()
+	fmt.Printf("%s %.2f %.2f %.2f\n", e.Hex, lab.L, lab.A, lab.B)
+	// Output: #000080 12.98 47.51 -64.70
+}
+
+func ExampleLexicon_ColourPalette() {
+	l := lexicon.Default()
+	e, _ := l.Lookup(lexicon.Colour, "teal")
+	lab, _ := e.ColourLab()
+	for _, m := range l.ColourPalette().Nearest(lab, 1) {
+		fmt.Printf("%s %.1f\n", m.Name, m.DeltaE)
+	}
+	// Output: teal 0.0
+}
+
+func ExampleLexicon_ColourNamed() {
+	e, lab, ok := lexicon.Default().ColourNamed("Navy Blue")
+	fmt.Printf("%s %s %.1f %v\n", e.Name, e.Hex, lab.L, ok)
+	// Output: navy #000080 13.0 true
+}

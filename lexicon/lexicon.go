@@ -27,6 +27,7 @@ type Lexicon struct {
 	keys map[string]string
 	// joined holds the joined forms waiting for insertJoined.
 	joined []joinedForm
+	paletteState
 }
 
 // node is one step of the word trie: children by word key, and the entries

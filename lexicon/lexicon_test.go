@@ -238,3 +238,47 @@ func TestColoursCSS4(t *testing.T) {
 		t.Errorf("%d colours beyond CSS, want at least 150", memory)
 	}
 }
+
+func TestSuggest(t *testing.T) {
+	l := Default()
+	for _, tc := range []struct{ in, want, reason string }{
+		{"burgandy", "burgundy", "one letter replaced"},
+		{"chacoal", "charcoal", "one letter missing"},
+		{"naavy", "navy", "one letter added"},
+		{"zzzzzzzz", "", "nothing close"},
+	} {
+		if got := l.Suggest(tc.in, Colour); got != tc.want {
+			t.Errorf("Suggest(%q) = %q, want %q (%s)", tc.in, got, tc.want, tc.reason)
+		}
+	}
+}
+
+// The optimal string alignment distance of a few textbook pairs.
+func TestEditDistance(t *testing.T) {
+	for _, tc := range []struct {
+		a, b string
+		want int
+	}{
+		{"kitten", "sitting", 3}, // the classic Levenshtein example
+		{"ca", "ac", 1},          // one transposition
+		{"", "abc", 3},
+		{"same", "same", 0},
+	} {
+		if got := editDistance(tc.a, tc.b, 99); got != tc.want {
+			t.Errorf("editDistance(%q, %q) = %d, want %d", tc.a, tc.b, got, tc.want)
+		}
+	}
+}
+
+func TestColourPalette(t *testing.T) {
+	p := Default().ColourPalette()
+	if p.Len() < 300 {
+		t.Errorf("palette has %d colours, want every colour with a value", p.Len())
+	}
+	// CSS navy is #000080 (css_named_colours.tsv): its nearest named colour is itself.
+	e, _ := Default().Lookup(Colour, "navy")
+	lab, _ := e.ColourLab()
+	if m := p.Nearest(lab, 1); len(m) != 1 || m[0].Name != "navy" || m[0].DeltaE != 0 {
+		t.Errorf("nearest to navy: %+v", m)
+	}
+}

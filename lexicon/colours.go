@@ -1,0 +1,113 @@
+package lexicon
+
+import (
+	"strings"
+	"sync"
+
+	"github.com/whittle-search/whittle/lexicon/colour"
+)
+
+// ColourPalette returns the named colours of the lexicon that have a
+// value, as a palette: every canonical name with its Lab. It is built on
+// first use and shared.
+func (l *Lexicon) ColourPalette() *colour.Palette {
+	l.paletteOnce.Do(func() {
+		var cs []colour.PaletteColour
+		for _, e := range l.Entries(Colour) {
+			if lab, ok := e.ColourLab(); ok {
+				cs = append(cs, colour.PaletteColour{Name: e.Name, Lab: lab})
+			}
+		}
+		l.palette = colour.NewPalette(cs)
+	})
+	return l.palette
+}
+
+// ColourLab returns a colour entry's value in CIELAB, or false when it
+// has none (a word that names several colours, or a non-colour entry).
+func (e *Entry) ColourLab() (colour.Lab, bool) {
+	if e.Kind != Colour || e.Hex == "" || e.Hex == "multi" {
+		return colour.Lab{}, false
+	}
+	rgb, err := colour.ParseHex(e.Hex)
+	if err != nil {
+		return colour.Lab{}, false
+	}
+	return rgb.Lab(), true
+}
+
+// ColourNamed returns the colour entry with a value that phrase names
+// whole ("dusty rose", "navy blue"), with its Lab, or false.
+func (l *Lexicon) ColourNamed(phrase string) (*Entry, colour.Lab, bool) {
+	var keys []string
+	for _, w := range Words(phrase) {
+		keys = append(keys, l.Key(Normalise(w)))
+	}
+	n, es := l.Match(keys)
+	if n == 0 || n != len(keys) {
+		return nil, colour.Lab{}, false
+	}
+	for _, e := range es {
+		if lab, ok := e.ColourLab(); ok {
+			return e, lab, true
+		}
+	}
+	return nil, colour.Lab{}, false
+}
+
+// Suggest returns the name or alias of kind k closest to word in edit
+// distance (letters inserted, deleted, replaced or swapped), for "did you
+// mean" messages; "" when nothing is within a third of the word's length.
+func (l *Lexicon) Suggest(word string, k Kind) string {
+	word = strings.Join(strings.Fields(Normalise(word)), " ")
+	best, bestD := "", len(word)/3+1
+	for _, e := range l.Entries(k) {
+		for _, s := range append([]string{e.Name}, e.Aliases...) {
+			if d := editDistance(word, s, bestD); d < bestD {
+				best, bestD = s, d
+			}
+		}
+	}
+	return best
+}
+
+// editDistance is the optimal string alignment distance between a and b
+// over runes, or limit when it is limit or more.
+func editDistance(a, b string, limit int) int {
+	x, y := []rune(a), []rune(b)
+	if d := len(x) - len(y); d >= limit || -d >= limit {
+		return limit
+	}
+	prev2 := make([]int, len(y)+1)
+	prev := make([]int, len(y)+1)
+	cur := make([]int, len(y)+1)
+	for j := range prev {
+		prev[j] = j
+	}
+	for i := 1; i <= len(x); i++ {
+		cur[0] = i
+		rowMin := cur[0]
+		for j := 1; j <= len(y); j++ {
+			cost := 1
+			if x[i-1] == y[j-1] {
+				cost = 0
+			}
+			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+			if i > 1 && j > 1 && x[i-1] == y[j-2] && x[i-2] == y[j-1] {
+				cur[j] = min(cur[j], prev2[j-2]+1)
+			}
+			rowMin = min(rowMin, cur[j])
+		}
+		if rowMin >= limit {
+			return limit
+		}
+		prev2, prev, cur = prev, cur, prev2
+	}
+	return min(prev[len(y)], limit)
+}
+
+// paletteState is embedded in Lexicon for ColourPalette.
+type paletteState struct {
+	paletteOnce sync.Once
+	palette     *colour.Palette
+}
