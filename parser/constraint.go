@@ -22,12 +22,13 @@ type Constraint struct {
 	Name string
 	// Category and Parent describe a product type.
 	Category, Parent string
-	// Measure, Price, Size and Spec hold the value of a constraint of
-	// that kind; they are nil for other kinds.
+	// Measure, Price, Size, Spec and Colour hold the value of a
+	// constraint of that kind; they are nil for other kinds.
 	Measure *Measure
 	Price   *Price
 	Size    *Size
 	Spec    *Spec
+	Colour  *Colour
 	// Target is what a compatibility constraint must fit ("jx-10").
 	Target string
 	// Code is a part number, upper-cased ("XR-2200").
@@ -94,6 +95,20 @@ type Spec struct {
 	Attributes map[string]string
 	// Standard names the standard the values come from ("PS 20").
 	Standard string
+}
+
+// Colour places a colour constraint in CIELAB, so that a query colour can
+// be compared with a catalog's own colour names.
+type Colour struct {
+	// Hex is the sRGB value, "#rrggbb"; empty for a word that names
+	// several colours ("multicolour").
+	Hex string `json:"hex,omitempty"`
+	// Lab is CIE 1976 L*, a*, b* (D65), rounded to 4 decimals; nil when
+	// Hex is empty.
+	Lab *[3]float64 `json:"lab,omitempty"`
+	// Families are the colour families computed from the Lab value ("red",
+	// "brown"), or "multi".
+	Families []string `json:"families,omitempty"`
 }
 
 // Result is what [Parse] understood of one query.

@@ -273,8 +273,11 @@ func (p *tagger) quoted(u *unit) {
 		if e := pick(es); e != nil && e.Kind != lexicon.Filler {
 			c.Kind = kindOf[e.Kind]
 			c.Name = e.Name
-			if e.Kind == lexicon.ProductType {
+			switch e.Kind {
+			case lexicon.ProductType:
 				c.Category, c.Parent = e.Category, e.Parent
+			case lexicon.Colour:
+				c.Colour = colourOf(e)
 			}
 			c.Evidence = fmt.Sprintf("quoted phrase; %s lexicon", e.Kind)
 		}

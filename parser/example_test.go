@@ -92,10 +92,10 @@ func ExampleResult_WriteText() {
 	// spans     1──────── 2─────── 3───────
 	// category  footwear
 	//
-	// #  span       kind          value        strictness  evidence
-	// 1  not white  colour        not white    firm        colour lexicon; excluded by "not"
-	// 2  -leather   material      not leather  soft        material lexicon; excluded by "-"
-	// 3  sneakers   product_type  sneaker      firm        product_type lexicon; head product type
+	// #  span       kind          value              strictness  evidence
+	// 1  not white  colour        not white #ffffff  firm        colour lexicon; excluded by "not"
+	// 2  -leather   material      not leather        soft        material lexicon; excluded by "-"
+	// 3  sneakers   product_type  sneaker            firm        product_type lexicon; head product type
 }
 
 func ExampleResult_MarshalJSON() {
@@ -122,4 +122,25 @@ func ExampleError_Render() {
 	// under 99999999999999999999 usd
 	//       ^^^^^^^^^^^^^^^^^^^^
 	// number 99999999999999999999 has more than 15 significant digits
+}
+
+func ExampleParse_colour() {
+	r := parser.Parse("light sage linen shirt")
+	c := r.Of(parser.KindColour)[0]
+	fmt.Println(c.Name, c.Colour.Hex, c.Colour.Families, c.Inferred)
+	// Output: light sage #bdd0a8 [green] true
+}
+
+func ExampleReadColour() {
+	r, err := parser.ReadColour("dusty rose", parser.Options{})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(r.Name, r.Hex, r.Families)
+	_, err = parser.ReadColour("burgandy", parser.Options{})
+	fmt.Println(err)
+	// Output:
+	// dusty rose #c9a3a0 [red pink]
+	// "burgandy" is not a colour whittle knows; did you mean "burgundy"?
 }

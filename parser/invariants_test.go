@@ -47,7 +47,7 @@ func checkInvariants(t *testing.T, q string, r *Result) {
 		if _, err := c.Strictness.MarshalText(); err != nil {
 			t.Fatalf("%q: %v", q, err)
 		}
-		has := map[Kind]bool{KindMeasure: c.Measure != nil, KindPrice: c.Price != nil, KindSize: c.Size != nil, KindSpec: c.Spec != nil}
+		has := map[Kind]bool{KindMeasure: c.Measure != nil, KindPrice: c.Price != nil, KindSize: c.Size != nil, KindSpec: c.Spec != nil, KindColour: c.Colour != nil}
 		for k, ok := range has {
 			if (c.Kind == k) != ok {
 				t.Fatalf("%q: constraint %d of kind %s: value of kind %s present=%v", q, i, c.Kind, k, ok)

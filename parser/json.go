@@ -60,6 +60,10 @@ type wireConstraint struct {
 	Attributes   map[string]string  `json:"attributes,omitempty"`
 	Standard     string             `json:"standard,omitempty"`
 
+	Hex      string      `json:"hex,omitempty"`
+	Lab      *[3]float64 `json:"lab,omitempty"`
+	Families []string    `json:"families,omitempty"`
+
 	Target string `json:"target,omitempty"`
 	Code   string `json:"code,omitempty"`
 }
@@ -128,6 +132,9 @@ func (c Constraint) MarshalJSON() ([]byte, error) {
 	if s := c.Spec; s != nil {
 		w.System, w.Designation, w.DimensionsMM, w.Attributes, w.Standard = s.System, s.Designation, s.Dimensions, s.Attributes, s.Standard
 	}
+	if col := c.Colour; col != nil {
+		w.Hex, w.Lab, w.Families = col.Hex, col.Lab, col.Families
+	}
 	return json.Marshal(w)
 }
 
@@ -171,6 +178,8 @@ func (c *Constraint) UnmarshalJSON(b []byte) error {
 		c.Size = &Size{System: w.System, Value: w.Value, Width: w.Width}
 	case KindSpec:
 		c.Spec = &Spec{System: w.System, Designation: w.Designation, Dimensions: w.DimensionsMM, Attributes: w.Attributes, Standard: w.Standard}
+	case KindColour:
+		c.Colour = &Colour{Hex: w.Hex, Lab: w.Lab, Families: w.Families}
 	}
 	return nil
 }

@@ -27,8 +27,9 @@ func Parse(query string) *Result {
 //   - When one phrase is several lexicon entries, the one the surface
 //     spells exactly wins over one reached only by stemming; a product
 //     type yields to another kind when the query names another product
-//     type; then product type, colour, material, pattern, silhouette,
-//     audience, brand and filler rank in that order.
+//     type; then product type, material, colour, pattern, silhouette,
+//     audience, brand and filler rank in that order (so "linen" is the
+//     material, though CSS names a colour linen).
 //   - Product types next to each other merge when the second adds nothing
 //     ("variable nd filter"), else the first is a modifier ("saucepan
 //     lid"); a product type after "with", or after "in" or a material once

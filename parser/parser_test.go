@@ -344,6 +344,12 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindSize, "tall", "tall (fit)"), tg(KindProductType, "jeans", "jeans")}},
 	{name: "pressure treated", query: "2x6 pressure treated", category: "lumber", reason: "a multi-word material",
 		want: []tagged{tg(KindSpec, "2x6", "2x6 (lumber)"), tg(KindMaterial, "pressure treated", "pressure treated")}},
+	{name: "modified colour", query: "light sage shirt", category: "apparel", reason: "a modifier and the colour after it are one inferred colour",
+		want: []tagged{tg(KindColour, "light sage", "light sage").inferred(), tg(KindProductType, "shirt", "shirt")}},
+	{name: "colour phrase beats modifier", query: "light blue shirt", category: "apparel", reason: "CSS lightblue is a colour of its own, not blue made lighter",
+		want: []tagged{tg(KindColour, "light blue", "light blue"), tg(KindProductType, "shirt", "shirt")}},
+	{name: "linen is a material", query: "light sage linen shirt", category: "apparel", reason: "linen is a CSS colour too, but shoppers mean the cloth",
+		want: []tagged{tg(KindColour, "light sage", "light sage").inferred(), tg(KindMaterial, "linen", "linen"), tg(KindProductType, "shirt", "shirt")}},
 	{name: "unitless number", query: "500 lens", category: "camera", reason: "500 mm is within a lens's focal lengths",
 		want: []tagged{tg(KindMeasure, "500", "500 mm").inferred(), tg(KindProductType, "lens", "lens")}},
 	{name: "out of every slot", query: "5000 lens", category: "camera", reason: "no focal length slot holds 5000: stays unitless",
@@ -511,5 +517,16 @@ func TestParents(t *testing.T) {
 		if c := only(t, Parse(q), KindProductType); c.Parent != want {
 			t.Errorf("%q: parent %q, want %q", q, c.Parent, want)
 		}
+	}
+}
+
+// A modified colour is the base colour moved by the modifier's rule: "light
+// sage" is sage (#9caf88) with L* raised by 12, which an independent
+// computation of the same IEC 61966-2-1 and CIE 1976 formulas (written
+// for this check, outside whittle) puts at #bdd0a8.
+func TestModifiedColourValue(t *testing.T) {
+	c := only(t, Parse("light sage"), KindColour)
+	if c.Colour.Hex != "#bdd0a8" {
+		t.Errorf("light sage = %s, want #bdd0a8", c.Colour.Hex)
 	}
 }

@@ -245,3 +245,31 @@ func TestPriceMinorUnitsISO4217(t *testing.T) {
 		}
 	}
 }
+
+// CSS Color Module Level 4 named colours (testdata/reference/
+// css_named_colours.tsv): a query naming one carries its hex and its
+// CIELAB value, within 0.03 per component of the table.
+func TestCSSColoursInQueries(t *testing.T) {
+	for _, row := range reference.Rows(t, "css_named_colours.tsv") {
+		name := row["name"]
+		if name == "orangered" {
+			name = "orange red" // see lexicon/data/colours.wlx
+		}
+		if name == "linen" {
+			// In a query linen is the cloth (see kindOrder); as a colour
+			// it is read by ReadColour, checked in TestReadColour.
+			continue
+		}
+		q := name + " dress"
+		c := only(t, Parse(q), KindColour)
+		if c.Colour == nil || c.Colour.Hex != row["hex"] {
+			t.Errorf("%q: colour %+v, CSS gives %s", q, c.Colour, row["hex"])
+			continue
+		}
+		for i, col := range []string{"L_star", "a_star", "b_star"} {
+			if want := float(t, row, col); !near(c.Colour.Lab[i], want, 0.03) {
+				t.Errorf("%q: %s = %.4f, table gives %.4f", q, col, c.Colour.Lab[i], want)
+			}
+		}
+	}
+}

@@ -52,7 +52,9 @@ var lexiconEvidence = func() map[lexicon.Kind]string {
 }()
 
 // kindOrder ranks the lexicon kinds when one phrase is several things.
-var kindOrder = []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern,
+// A word that is both a material and a colour (CSS linen) is read as the
+// material, which is what shoppers nearly always mean by it.
+var kindOrder = []lexicon.Kind{lexicon.ProductType, lexicon.Material, lexicon.Colour, lexicon.Pattern,
 	lexicon.Silhouette, lexicon.Audience, lexicon.Brand, lexicon.Filler}
 
 func pick(entries []*lexicon.Entry) *lexicon.Entry {
@@ -319,6 +321,9 @@ func (p *tagger) setNeg(start, end int, text string) {
 // wordUnit tags a word unit and returns how many extra units it used.
 func (p *tagger) wordUnit(k int) int {
 	u := &p.units[k]
+	if n := p.modifiedColour(k); n > 0 {
+		return n
+	}
 	if u.entries == nil {
 		switch {
 		case negators[u.text] && k+1 < len(p.units):
@@ -381,6 +386,8 @@ func (p *tagger) wordUnit(k int) int {
 		}
 	case lexicon.Filler:
 		c.Strictness, c.Name = Filler, ""
+	case lexicon.Colour:
+		c.Colour = colourOf(e)
 	}
 	p.add(c)
 	return 0

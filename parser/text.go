@@ -143,6 +143,9 @@ func (r *Result) WriteText(w io.Writer, st TextStyle) error {
 		sort.SliceStable(cs, func(i, j int) bool { return cs[i].Start < cs[j].Start })
 		for i, c := range cs {
 			val := c.Value()
+			if c.Colour != nil && c.Colour.Hex != "" {
+				val += " " + c.Colour.Hex
+			}
 			if c.Inferred {
 				val += " (inferred)"
 			}

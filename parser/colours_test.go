@@ -1,0 +1,48 @@
+package parser
+
+import (
+	"strings"
+	"testing"
+)
+
+func TestReadColour(t *testing.T) {
+	for _, tc := range []struct {
+		name, in, hex, reason string
+		inferred              bool
+		err                   string
+	}{
+		// CSS values from testdata/reference/css_named_colours.tsv.
+		{name: "css name", in: "rebeccapurple", hex: "#663399", reason: "a CSS name"},
+		{name: "css name spaced", in: "light blue", hex: "#add8e6", reason: "CSS lightblue as shoppers type it"},
+		{name: "a colour that is also a material", in: "linen", hex: "#faf0e6", reason: "asked for a colour, linen is CSS linen"},
+		{name: "hex", in: "#663399", hex: "#663399", reason: "a hex value"},
+		{name: "short hex", in: "#639", hex: "#663399", reason: "#rgb doubles each digit (CSS Color 4)"},
+		{name: "bare hex", in: "663399", hex: "#663399", reason: "six hex digits without #"},
+		{name: "rgb", in: "rgb(102, 51, 153)", hex: "#663399", reason: "rgb() with commas"},
+		{name: "modified", in: "light sage", hex: "#bdd0a8", inferred: true, reason: "see TestModifiedColourValue"},
+		{name: "with filler", in: "the navy", hex: "#000080", reason: "filler words are ignored"},
+		{name: "unknown", in: "burgandy", err: `did you mean "burgundy"`, reason: "a near miss suggests the name"},
+		{name: "not only a colour", in: "navy dress", err: "is not a colour", reason: "a query is not a colour"},
+		{name: "excluded", in: "not navy", err: "is not a colour", reason: "an exclusion is not a colour"},
+		{name: "multi", in: "multicolour", err: "is not a colour", reason: "a word for several colours has no single value"},
+		{name: "bad hex", in: "#12345", err: "5 digits", reason: "a malformed hex"},
+		{name: "lab out of range", in: "50,300,0", err: "out of range", reason: "a* beyond 200"},
+		{name: "empty", in: "  ", err: "no colour", reason: "nothing given"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			r, err := ReadColour(tc.in, Options{})
+			if tc.err != "" {
+				if err == nil || !strings.Contains(err.Error(), tc.err) {
+					t.Errorf("%s: got %v, want an error containing %q", tc.reason, err, tc.err)
+				}
+				return
+			}
+			if err != nil {
+				t.Fatalf("%s: %v", tc.reason, err)
+			}
+			if r.Hex != tc.hex || r.Inferred != tc.inferred {
+				t.Errorf("%s: got %s inferred=%v, want %s inferred=%v", tc.reason, r.Hex, r.Inferred, tc.hex, tc.inferred)
+			}
+		})
+	}
+}
