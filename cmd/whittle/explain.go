@@ -30,7 +30,8 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones (missing files fall back)")
 	colour := fs.String("colour", "auto", "colour the table: auto (on a terminal), always or never")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle explain [flags] QUERY...\n       whittle explain [flags] -   (one query a line from standard input)\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle explain [flags] QUERY...\n       whittle explain [flags] -   (one query a line from standard input)\n\n"+
+			"Flags come before the queries; put a query that starts with a dash after --:\n  whittle explain --json -- \"-leather boots\"\n\nflags:\n")
 		fs.PrintDefaults()
 	}
 	if err := fs.Parse(args); err != nil {

@@ -17,9 +17,10 @@ const usage = `whittle reads long shopping queries into typed constraints.
 usage:
   whittle explain [flags] QUERY...   show how each query is read
   whittle explain [flags] -          read one query a line from standard input
+  whittle colour [flags] COLOUR...   describe a colour, compare two, or search a catalog's colours
   whittle help                       show this text
 
-Run "whittle explain -h" for the flags of explain.
+Run "whittle explain -h" or "whittle colour -h" for their flags.
 
 exit status: 0 parsed, 1 a query had an error, 2 bad usage.
 `
@@ -37,6 +38,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	switch args[0] {
 	case "explain":
 		return explain(args[1:], stdin, stdout, stderr)
+	case "colour", "color":
+		return colourCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
 		fmt.Fprint(stdout, usage)
 		return 0
