@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -109,6 +110,9 @@ func ReadColour(s string, opts Options) (*ColourReading, error) {
 	case strings.HasPrefix(lower, "lab(") || strings.ContainsAny(t[:1], "0123456789-+."):
 		l, err := colour.ParseLab(t)
 		if err != nil {
+			if near := nearestClamped(t, lex); near != "" {
+				err = fmt.Errorf("%v; the nearest named colour within range is %q", err, near)
+			}
 			return nil, err
 		}
 		lab = l
@@ -152,4 +156,28 @@ func isHexDigits(s string) bool {
 	}
 	// Six letters a-f alone ("facade") could be a word; a hex has a digit.
 	return strings.ContainsAny(s, "0123456789")
+}
+
+// nearestClamped reads three numbers from an L,a,b text that is out of
+// range, moves them into range, and names the nearest lexicon colour; ""
+// when the text does not hold three numbers.
+func nearestClamped(t string, lex *lexicon.Lexicon) string {
+	t = strings.TrimSuffix(strings.TrimPrefix(strings.ToLower(t), "lab("), ")")
+	fields := strings.FieldsFunc(t, func(r rune) bool { return r == ',' || r == ' ' })
+	if len(fields) != 3 {
+		return ""
+	}
+	var v [3]float64
+	for i, f := range fields {
+		x, err := strconv.ParseFloat(f, 64)
+		if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+			return ""
+		}
+		v[i] = x
+	}
+	lab := colour.Lab{L: math.Max(0, math.Min(100, v[0])), A: math.Max(-200, math.Min(200, v[1])), B: math.Max(-200, math.Min(200, v[2]))}
+	if m := lex.ColourPalette().Nearest(lab, 1); len(m) == 1 {
+		return m[0].Name
+	}
+	return ""
 }
