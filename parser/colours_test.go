@@ -47,3 +47,27 @@ func TestReadColour(t *testing.T) {
 		})
 	}
 }
+
+// FuzzReadColour: any input either reads as a colour with a well-formed
+// hex and a Lab inside the CIELAB ranges, or gives an error with a message.
+func FuzzReadColour(f *testing.F) {
+	for _, s := range []string{"navy", "light sage", "#663399", "#639", "rgb(1, 2, 3)", "rgb(10%, 20%, 30%)",
+		"50,20,-10", "lab(50 20 -10)", "120,0,0", "burgandy", "", "#", "rgb(", "1,2", "not navy", "\xff"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		r, err := ReadColour(s, Options{})
+		if err != nil {
+			if err.Error() == "" {
+				t.Fatalf("%q: empty error", s)
+			}
+			return
+		}
+		if len(r.Hex) != 7 || r.Hex[0] != '#' || r.Colour.Lab == nil {
+			t.Fatalf("%q: bad reading %+v", s, r)
+		}
+		if l := r.Colour.Lab; l[0] < 0 || l[0] > 100 || l[1] < -200 || l[1] > 200 || l[2] < -200 || l[2] > 200 {
+			t.Fatalf("%q: Lab %v out of range", s, *l)
+		}
+	})
+}
