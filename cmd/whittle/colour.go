@@ -65,19 +65,14 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, "whittle colour: --within and --nearest must not be negative")
 		return 2
 	}
-	opts := parser.Options{}
-	if *lexDir != "" {
-		lx, err := lexicon.LoadDir(*lexDir)
-		if err != nil {
-			fmt.Fprintf(stderr, "whittle colour: %v\n", err)
-			return 2
-		}
-		opts.Lexicon = lx
+	if !checkCategory("colour", *category, stderr) {
+		return 2
 	}
-	lex := lexicon.Default()
-	if opts.Lexicon != nil {
-		lex = opts.Lexicon
+	lex, ok := loadLexicon("colour", *lexDir, stderr)
+	if !ok {
+		return 2
 	}
+	opts := parser.Options{Lexicon: lex}
 	var readings []*parser.ColourReading
 	for _, a := range colours {
 		r, err := parser.ReadColour(a, opts)

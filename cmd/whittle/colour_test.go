@@ -31,6 +31,7 @@ func TestColourExitCodes(t *testing.T) {
 		{"three colours", []string{"colour", "red", "green", "blue"}, 2, "usage"},
 		{"catalog with two", []string{"colour", "--catalog", demoCatalog, "red", "blue"}, 2, "a catalog search takes one colour"},
 		{"negative tolerance", []string{"colour", "--within", "-1", "red"}, 2, "a tolerance is not negative"},
+		{"unknown category", []string{"colour", "--category", "toys", "red"}, 2, "the category must be known"},
 		{"help", []string{"colour", "-h"}, 0, "help is not an error"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {

@@ -7,7 +7,6 @@ import (
 	"fmt"
 	"io"
 	"os"
-	"slices"
 	"strings"
 
 	"golang.org/x/term"
@@ -49,18 +48,14 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if *imperial {
 		opts.Volume = units.Imperial
 	}
-	if *category != "" && !slices.Contains(lexicon.Categories, *category) {
-		fmt.Fprintf(stderr, "whittle explain: unknown category %q (known: %s)\n", *category, strings.Join(lexicon.Categories, ", "))
+	if !checkCategory("explain", *category, stderr) {
 		return 2
 	}
-	if *lexDir != "" {
-		lx, err := lexicon.LoadDir(*lexDir)
-		if err != nil {
-			fmt.Fprintf(stderr, "whittle explain: %v\n", err)
-			return 2
-		}
-		opts.Lexicon = lx
+	lx, ok := loadLexicon("explain", *lexDir, stderr)
+	if !ok {
+		return 2
 	}
+	opts.Lexicon = lx
 	var style parser.TextStyle
 	switch *colour {
 	case "always":
