@@ -98,6 +98,9 @@ func ReadColour(s string, opts Options) (*ColourReading, error) {
 	case strings.HasPrefix(t, "#") || isHexDigits(t):
 		rgb, err := colour.ParseHex(t)
 		if err != nil {
+			if sug := lex.Suggest(strings.TrimPrefix(t, "#"), lexicon.Colour); sug != "" {
+				err = fmt.Errorf("%v; or did you mean the colour %q?", err, sug)
+			}
 			return nil, err
 		}
 		lab = rgb.Lab()

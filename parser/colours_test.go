@@ -26,6 +26,7 @@ func TestReadColour(t *testing.T) {
 		{name: "excluded", in: "not navy", err: "is not a colour", reason: "an exclusion is not a colour"},
 		{name: "multi", in: "multicolour", err: "is not a colour", reason: "a word for several colours has no single value"},
 		{name: "bad hex", in: "#12345", err: "5 digits", reason: "a malformed hex"},
+		{name: "hash before a name", in: "#navvy", err: `did you mean the colour "navy"`, reason: "a name typed after # is suggested"},
 		{name: "lab out of range", in: "50,300,0", err: "out of range", reason: "a* beyond 200"},
 		{name: "lab out of range suggests", in: "120,0,0", err: `nearest named colour within range is "white"`, reason: "L* 120 moved to 100 is white"},
 		{name: "empty", in: "  ", err: "no colour", reason: "nothing given"},

@@ -31,10 +31,21 @@ flags:
 
 // nearJSON is one named colour near another.
 type nearJSON struct {
-	Name     string  `json:"name"`
-	Hex      string  `json:"hex"`
-	DeltaE   float64 `json:"delta_e00"`
-	Products int     `json:"products,omitempty"`
+	Name     string   `json:"name"`
+	Hex      string   `json:"hex"`
+	Families []string `json:"families"`
+	DeltaE   float64  `json:"delta_e00"`
+	Products int      `json:"products,omitempty"`
+}
+
+// near describes a palette match.
+func near(m colour.Match) nearJSON {
+	rgb, _ := m.Lab.RGB()
+	var fams []string
+	for _, f := range colour.FamiliesOf(m.Lab) {
+		fams = append(fams, string(f))
+	}
+	return nearJSON{Name: m.Name, Hex: rgb.Hex(), Families: fams, DeltaE: round2(m.DeltaE), Products: m.Count}
 }
 
 func colourCmd(args []string, stdout, stderr io.Writer) int {
@@ -103,19 +114,17 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 		if tol == 0 {
 			tol = colour.ToleranceFor(*category)
 		}
-		var near []nearJSON
+		var found []nearJSON
 		for _, m := range v.Palette().Within(readings[0].LabValue(), tol) {
-			rgb, _ := m.Lab.RGB()
-			near = append(near, nearJSON{Name: m.Name, Hex: rgb.Hex(), DeltaE: round2(m.DeltaE), Products: m.Count})
+			found = append(found, near(m))
 		}
-		out.catalog(readings[0], tol, near, v)
+		out.catalog(readings[0], tol, found, v)
 	default:
-		var near []nearJSON
+		var found []nearJSON
 		for _, m := range lex.ColourPalette().Nearest(readings[0].LabValue(), *nearest) {
-			rgb, _ := m.Lab.RGB()
-			near = append(near, nearJSON{Name: m.Name, Hex: rgb.Hex(), DeltaE: round2(m.DeltaE)})
+			found = append(found, near(m))
 		}
-		out.one(readings[0], near)
+		out.one(readings[0], found)
 	}
 	return out.done(stderr)
 }
@@ -224,10 +233,10 @@ func (p *printer) catalog(r *parser.ColourReading, tol float64, near []nearJSON,
 	if len(near) == 0 {
 		fmt.Fprintf(tw, "  none\n")
 	} else {
-		fmt.Fprintf(tw, "  name\tΔE00\thex\tproducts\n")
+		fmt.Fprintf(tw, "  name\tΔE00\thex\tfamilies\tproducts\n")
 	}
 	for _, n := range near {
-		fmt.Fprintf(tw, "  %s\t%.2f\t%s\t%d\n", n.Name, n.DeltaE, n.Hex, n.Products)
+		fmt.Fprintf(tw, "  %s\t%.2f\t%s\t%s\t%d\n", n.Name, n.DeltaE, n.Hex, strings.Join(n.Families, ", "), n.Products)
 	}
 	if len(v.Unplaced) > 0 {
 		fmt.Fprintf(tw, "\n%d colour names have no value and are not in the lexicon\n", len(v.Unplaced))
