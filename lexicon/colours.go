@@ -59,13 +59,23 @@ func (l *Lexicon) ColourNamed(phrase string) (*Entry, colour.Lab, bool) {
 // distance (letters inserted, deleted, replaced or swapped), for "did you
 // mean" messages; "" when nothing is within a third of the word's length.
 func (l *Lexicon) Suggest(word string, k Kind) string {
-	word = strings.Join(strings.Fields(Normalise(word)), " ")
-	best, bestD := "", len(word)/3+1
+	var names []string
 	for _, e := range l.Entries(k) {
-		for _, s := range append([]string{e.Name}, e.Aliases...) {
-			if d := editDistance(word, s, bestD); d < bestD {
-				best, bestD = s, d
-			}
+		names = append(names, e.Name)
+		names = append(names, e.Aliases...)
+	}
+	return Closest(Normalise(word), names)
+}
+
+// Closest returns the option closest to word in edit distance (letters
+// inserted, deleted, replaced or swapped), or "" when none is within a
+// third of the word's length; the first of equally close options wins.
+func Closest(word string, options []string) string {
+	word = strings.Join(strings.Fields(word), " ")
+	best, bestD := "", len(word)/3+1
+	for _, s := range options {
+		if d := editDistance(word, s, bestD); d < bestD {
+			best, bestD = s, d
 		}
 	}
 	return best

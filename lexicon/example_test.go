@@ -128,3 +128,8 @@ func ExampleLexicon_ColourNamed() {
 	fmt.Printf("%s %s %.1f %v\n", e.Name, e.Hex, lab.L, ok)
 	// Output: navy #000080 13.0 true
 }
+
+func ExampleClosest() {
+	fmt.Println(lexicon.Closest("colour_tolerence", []string{"min_results", "colour_tolerance", "price_stretch"}))
+	// Output: colour_tolerance
+}

@@ -53,10 +53,11 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	asJSON := fs.Bool("json", false, "write JSON instead of text")
 	catalogFile := fs.String("catalog", "", "catalog file (JSON Lines) whose colours to search")
-	within := fs.Float64("within", 0, "ΔE00 tolerance for --catalog (default: the category's, see --category)")
-	category := fs.String("category", "", "category whose default tolerance --catalog uses: "+strings.Join(lexicon.Categories, ", "))
+	within := fs.Float64("within", 0, "ΔE00 tolerance for --catalog (default: the policy's for --category)")
+	category := fs.String("category", "", "category whose policy tolerance --catalog uses: "+strings.Join(lexicon.Categories, ", "))
 	nearest := fs.Int("nearest", 5, "how many nearest named colours to show")
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones")
+	policyFile := fs.String("policy", "", "policy file laid over the built-in policy (for the category's tolerance)")
 	fs.Usage = func() {
 		fmt.Fprint(stderr, colourUsage)
 		fs.PrintDefaults()
@@ -112,7 +113,11 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 		}
 		tol := *within
 		if tol == 0 {
-			tol = colour.ToleranceFor(*category)
+			pol, ok := loadPolicy("colour", *policyFile, lex, stderr)
+			if !ok {
+				return 2
+			}
+			tol = pol.For(*category, "", lex).ColourTolerance
 		}
 		var found []nearJSON
 		for _, m := range v.Palette().Within(readings[0].LabValue(), tol) {

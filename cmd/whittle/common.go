@@ -1,12 +1,14 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"io"
 	"slices"
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/rewrite"
 )
 
 // loadLexicon returns the lexicon a --lexicon flag names, or the default
@@ -30,4 +32,37 @@ func checkCategory(cmd, category string, stderr io.Writer) bool {
 	}
 	fmt.Fprintf(stderr, "whittle %s: unknown category %q (known: %s)\n", cmd, category, strings.Join(lexicon.Categories, ", "))
 	return false
+}
+
+// loadPolicy returns the built-in policy, with the file a --policy flag
+// names laid over it; on an error it reports it, rendered, for command
+// cmd.
+func loadPolicy(cmd, file string, lex *lexicon.Lexicon, stderr io.Writer) (*rewrite.Policy, bool) {
+	if file == "" {
+		return rewrite.DefaultPolicy(), true
+	}
+	p, err := rewrite.LoadPolicy(file, lex)
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle %s: %s\n", cmd, renderPolicyError(err))
+		return nil, false
+	}
+	return p, true
+}
+
+// renderPolicyError shows each policy error with its line and a caret.
+func renderPolicyError(err error) string {
+	var parts []string
+	errs := []error{err}
+	if j, ok := err.(interface{ Unwrap() []error }); ok {
+		errs = j.Unwrap()
+	}
+	for _, e := range errs {
+		var pe *rewrite.PolicyError
+		if errors.As(e, &pe) {
+			parts = append(parts, pe.Render())
+		} else {
+			parts = append(parts, e.Error())
+		}
+	}
+	return strings.Join(parts, "\n\n")
 }

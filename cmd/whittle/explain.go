@@ -27,6 +27,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	cur := fs.String("currency", "USD", `ISO 4217 code a bare "$" or "dollars" means, when it is a dollar currency`)
 	imperial := fs.Bool("imperial", false, "read gallons, quarts, pints, cups and fluid ounces as imperial")
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones (missing files fall back)")
+	policyFile := fs.String("policy", "", "policy file laid over the built-in strictness policy")
 	colour := fs.String("colour", "auto", "colour the table: auto (on a terminal), always or never")
 	fs.Usage = func() {
 		fmt.Fprint(stderr, "usage: whittle explain [flags] QUERY...\n       whittle explain [flags] -   (one query a line from standard input)\n\n"+
@@ -56,6 +57,10 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return 2
 	}
 	opts.Lexicon = lx
+	pol, ok := loadPolicy("explain", *policyFile, lx, stderr)
+	if !ok {
+		return 2
+	}
 	var style parser.TextStyle
 	switch *colour {
 	case "always":
@@ -75,6 +80,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	status := 0
 	emit := func(q string, first bool) {
 		r := parser.ParseWith(q, opts)
+		pol.Apply(r, lx)
 		if len(r.Errors) > 0 {
 			status = 1
 		}

@@ -18,9 +18,10 @@ usage:
   whittle explain [flags] QUERY...   show how each query is read
   whittle explain [flags] -          read one query a line from standard input
   whittle colour [flags] COLOUR...   describe a colour, compare two, or search a catalog's colours
+  whittle policy show|check ...      print the strictness policy in force, or check a policy file
   whittle help                       show this text
 
-Run "whittle explain -h" or "whittle colour -h" for their flags.
+Run "whittle explain -h", "whittle colour -h" or "whittle policy -h" for more.
 
 exit status: 0 parsed, 1 a query had an error, 2 bad usage.
 `
@@ -40,6 +41,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return explain(args[1:], stdin, stdout, stderr)
 	case "colour", "color":
 		return colourCmd(args[1:], stdout, stderr)
+	case "policy":
+		return policyCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
 		fmt.Fprint(stdout, usage)
 		return 0

@@ -173,7 +173,3 @@ func ExamplePalette_Len() {
 	fmt.Println(colour.NewPalette(nil).Len(), colour.NewPalette(catalog()).Len())
 	// Output: 0 5
 }
-func ExampleToleranceFor() {
-	fmt.Println(colour.ToleranceFor("apparel"), colour.ToleranceFor("hardware"), colour.ToleranceFor(""))
-	// Output: 4 10 5
-}

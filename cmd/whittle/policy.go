@@ -1,0 +1,158 @@
+package main
+
+import (
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"os"
+	"sort"
+	"strings"
+	"text/tabwriter"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+)
+
+const policyUsage = `usage:
+  whittle policy show [flags]     print the policy in force (built in, or with --policy laid over it)
+  whittle policy check FILE       check a policy file: every problem with its line and column
+
+flags of show:
+`
+
+func policyCmd(args []string, stdout, stderr io.Writer) int {
+	if len(args) == 0 {
+		fmt.Fprint(stderr, policyUsage)
+		return 2
+	}
+	switch args[0] {
+	case "show":
+		return policyShow(args[1:], stdout, stderr)
+	case "check":
+		return policyCheck(args[1:], stdout, stderr)
+	case "-h", "-help", "--help", "help":
+		fmt.Fprint(stdout, policyUsage)
+		return 0
+	}
+	fmt.Fprintf(stderr, "whittle policy: unknown subcommand %q\n\n%s", args[0], policyUsage)
+	return 2
+}
+
+func policyShow(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("policy show", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	category := fs.String("category", "", "category: "+strings.Join(lexicon.Categories, ", "))
+	productType := fs.String("product-type", "", "product type, by its lexicon name (\"rain jacket\")")
+	file := fs.String("policy", "", "policy file laid over the built-in policy")
+	asJSON := fs.Bool("json", false, "write JSON")
+	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones")
+	fs.Usage = func() {
+		fmt.Fprint(stderr, policyUsage)
+		fs.PrintDefaults()
+	}
+	rest, err := parseInterspersed(fs, args)
+	if err != nil {
+		if err == flag.ErrHelp {
+			return 0
+		}
+		return 2
+	}
+	if len(rest) != 0 {
+		fs.Usage()
+		return 2
+	}
+	if !checkCategory("policy", *category, stderr) {
+		return 2
+	}
+	lex, ok := loadLexicon("policy", *lexDir, stderr)
+	if !ok {
+		return 2
+	}
+	if *productType != "" {
+		if _, ok := lex.Lookup(lexicon.ProductType, *productType); !ok {
+			fmt.Fprintf(stderr, "whittle policy: unknown product type %q\n", *productType)
+			return 2
+		}
+	}
+	pol, ok := loadPolicy("policy", *file, lex, stderr)
+	if !ok {
+		return 1
+	}
+	e := pol.For(*category, *productType, lex)
+	if *asJSON {
+		b, err := json.MarshalIndent(e, "", "  ")
+		if err != nil {
+			fmt.Fprintf(stderr, "whittle policy: %v\n", err)
+			return 1
+		}
+		fmt.Fprintf(stdout, "%s\n", b)
+		return 0
+	}
+	writePolicy(stdout, e)
+	return 0
+}
+
+func writePolicy(w io.Writer, e rewrite.Effective) {
+	or := func(s, none string) string {
+		if s == "" {
+			return none
+		}
+		return s
+	}
+	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "policy for\tcategory %s, product type %s\n", or(e.Category, "(any)"), or(e.ProductType, "(any)"))
+	fmt.Fprintf(tw, "min_results\t%d\n", e.MinResults)
+	fmt.Fprintf(tw, "colour_tolerance\t%g (ΔE00)\n", e.ColourTolerance)
+	fmt.Fprintf(tw, "measure_tolerance\t%g (±%g%%)\n", e.MeasureTolerance, e.MeasureTolerance*100)
+	fmt.Fprintf(tw, "price_stretch\t%g (+%g%%)\n", e.PriceStretch, e.PriceStretch*100)
+	fmt.Fprintf(tw, "\nstrictness\t\n")
+	for _, k := range parser.AllKinds {
+		fmt.Fprintf(tw, "  %s\t%s\n", k, e.Strictness[k])
+	}
+	if len(e.Dimensions) > 0 {
+		fmt.Fprintf(tw, "\ndimensions\t\n")
+		for _, d := range sorted(e.Dimensions) {
+			fmt.Fprintf(tw, "  %s\t%s\n", d, e.Dimensions[d])
+		}
+	}
+	if len(e.StandardSizes) > 0 {
+		fmt.Fprintf(tw, "\nstandard_sizes\t\n")
+		for _, d := range sorted(e.StandardSizes) {
+			fmt.Fprintf(tw, "  %s\t%s\n", d, strings.Join(e.StandardSizes[d], ", "))
+		}
+	}
+	tw.Flush()
+}
+
+func sorted[V any](m map[string]V) []string {
+	ks := make([]string, 0, len(m))
+	for k := range m {
+		ks = append(ks, k)
+	}
+	sort.Strings(ks)
+	return ks
+}
+
+func policyCheck(args []string, stdout, stderr io.Writer) int {
+	if len(args) != 1 || strings.HasPrefix(args[0], "-") {
+		fmt.Fprint(stderr, "usage: whittle policy check FILE\n")
+		return 2
+	}
+	b, err := os.ReadFile(args[0])
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle policy: %v\n", err)
+		return 1
+	}
+	pol, err := rewrite.ParsePolicy(args[0], string(b), lexicon.Default())
+	if err != nil {
+		fmt.Fprintf(stderr, "%s\n", renderPolicyError(err))
+		return 1
+	}
+	for _, w := range pol.Warnings {
+		fmt.Fprintf(stdout, "warning: %s\n", w)
+	}
+	fmt.Fprintf(stdout, "%s: ok\n", args[0])
+	return 0
+}

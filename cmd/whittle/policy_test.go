@@ -1,0 +1,70 @@
+package main
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+func TestPolicyCommands(t *testing.T) {
+	dir := t.TempDir()
+	good := filepath.Join(dir, "good.toml")
+	bad := filepath.Join(dir, "bad.toml")
+	risky := filepath.Join(dir, "risky.toml")
+	os.WriteFile(good, []byte("[category.apparel]\ncolour_tolerance = 3\n"), 0o644)
+	os.WriteFile(bad, []byte("[category.aparel]\ncolour_tolerence = 3\n"), 0o644)
+	os.WriteFile(risky, []byte("[category.electrical.strictness]\nspec = \"soft\"\n"), 0o644)
+	for _, tc := range []struct {
+		name     string
+		args     []string
+		want     int
+		out, err string
+		reason   string
+	}{
+		{"show", []string{"policy", "show"}, 0, "colour_tolerance   5", "", "the built-in defaults"},
+		{"show category", []string{"policy", "show", "--category", "apparel"}, 0, "colour_tolerance   4", "", "apparel's tolerance"},
+		{"show with a file", []string{"policy", "show", "--policy", good, "--category", "apparel"}, 0, "colour_tolerance   3", "", "the file overrides"},
+		{"show product type", []string{"policy", "show", "--category", "camera", "--product-type", "lens"}, 0, "focal_length", "", "camera's dimensions"},
+		{"show bad file", []string{"policy", "show", "--policy", bad}, 1, "", `did you mean "apparel"`, "errors are rendered"},
+		{"show unknown category", []string{"policy", "show", "--category", "toys"}, 2, "", "unknown category", "usage"},
+		{"show unknown product type", []string{"policy", "show", "--product-type", "hoverboard"}, 2, "", "unknown product type", "usage"},
+		{"check good", []string{"policy", "check", good}, 0, "ok", "", "a valid file"},
+		{"check bad", []string{"policy", "check", bad}, 1, "", "bad.toml:1:1", "positions are given"},
+		{"check risky", []string{"policy", "check", risky}, 0, "warning: category.electrical", "", "relaxing a designation warns"},
+		{"check missing", []string{"policy", "check", filepath.Join(dir, "none.toml")}, 1, "", "no such file", "the file must exist"},
+		{"check usage", []string{"policy", "check"}, 2, "", "usage", "a file is needed"},
+		{"no subcommand", []string{"policy"}, 2, "", "usage", "usage"},
+		{"unknown subcommand", []string{"policy", "edit"}, 2, "", "unknown subcommand", "usage"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			code, out, stderr := runCLI("", tc.args...)
+			if code != tc.want || !strings.Contains(out, tc.out) || !strings.Contains(stderr, tc.err) {
+				t.Errorf("%s: exit %d (want %d)\nstdout: %s\nstderr: %s", tc.reason, code, tc.want, out, stderr)
+			}
+		})
+	}
+	_, out, _ := runCLI("", "policy", "show", "--json", "--category", "paint")
+	var e struct {
+		Strictness map[string]string `json:"strictness"`
+	}
+	if err := json.Unmarshal([]byte(out), &e); err != nil || e.Strictness["colour"] != "hard" {
+		t.Errorf("json: %v %+v", err, e)
+	}
+}
+
+// explain applies the policy: colour is hard in paint, and --policy can
+// change it.
+func TestExplainAppliesPolicy(t *testing.T) {
+	_, out, _ := runCLI("", "explain", "--json", "sage paint")
+	if !strings.Contains(out, `"kind":"colour","text":"sage","start":0,"end":4,"strictness":"hard"`) {
+		t.Errorf("colour not hard in paint: %s", out)
+	}
+	file := filepath.Join(t.TempDir(), "p.toml")
+	os.WriteFile(file, []byte("[category.paint.strictness]\ncolour = \"firm\"\n"), 0o644)
+	_, out, _ = runCLI("", "explain", "--json", "--policy", file, "sage paint")
+	if !strings.Contains(out, `"kind":"colour","text":"sage","start":0,"end":4,"strictness":"firm"`) {
+		t.Errorf("--policy not applied: %s", out)
+	}
+}

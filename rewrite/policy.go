@@ -1,0 +1,411 @@
+package rewrite
+
+import (
+	_ "embed"
+	"errors"
+	"fmt"
+	"math"
+	"os"
+	"regexp"
+	"slices"
+	"sort"
+	"strconv"
+	"strings"
+
+	"github.com/BurntSushi/toml"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
+)
+
+//go:embed policy.toml
+var defaultPolicy string
+
+// Settings are the parts of a policy that one level (the defaults, a
+// category, a product type) may set. A nil pointer or a missing map key
+// means "as the level above".
+type Settings struct {
+	// MinResults is the fewest results a query should find before it is
+	// relaxed.
+	MinResults *int
+	// ColourTolerance is the ΔE00 within which a colour may be widened.
+	ColourTolerance *float64
+	// MeasureTolerance is the fraction by which a measure may be widened.
+	MeasureTolerance *float64
+	// PriceStretch is the fraction by which a price ceiling may be raised.
+	PriceStretch *float64
+	// Strictness by constraint kind.
+	Strictness map[parser.Kind]parser.Strictness
+	// Dimensions gives the strictness of measures by dimension.
+	Dimensions map[string]parser.Strictness
+	// StandardSizes lists, by dimension, the sizes a measure may be
+	// widened to ("8 ft", "10 ft").
+	StandardSizes map[string][]string
+}
+
+// Policy is a strictness policy: defaults, then per category, then per
+// product type.
+type Policy struct {
+	Defaults     Settings
+	Categories   map[string]Settings
+	ProductTypes map[string]Settings
+	// Warnings are things a valid policy does that deserve a second look,
+	// such as relaxing a standard designation.
+	Warnings []string
+}
+
+// settingsTOML is the TOML form of Settings.
+type settingsTOML struct {
+	MinResults       *int                         `toml:"min_results"`
+	ColourTolerance  *float64                     `toml:"colour_tolerance"`
+	MeasureTolerance *float64                     `toml:"measure_tolerance"`
+	PriceStretch     *float64                     `toml:"price_stretch"`
+	Strictness       map[string]parser.Strictness `toml:"strictness"`
+	Dimensions       map[string]parser.Strictness `toml:"dimensions"`
+	StandardSizes    map[string][]string          `toml:"standard_sizes"`
+}
+
+type policyTOML struct {
+	Defaults     settingsTOML            `toml:"defaults"`
+	Categories   map[string]settingsTOML `toml:"category"`
+	ProductTypes map[string]settingsTOML `toml:"product_type"`
+}
+
+// PolicyError is a problem in a policy file, with its line and column.
+type PolicyError struct {
+	File         string
+	Line, Column int
+	Msg          string
+	// Source is the line of the file at fault, for Render.
+	Source string
+}
+
+// Error renders "file:line:column: message".
+func (e *PolicyError) Error() string {
+	return fmt.Sprintf("%s:%d:%d: %s", e.File, e.Line, e.Column, e.Msg)
+}
+
+// Render shows the line at fault with a caret under the column, then the
+// message.
+func (e *PolicyError) Render() string {
+	if e.Source == "" {
+		return e.Error()
+	}
+	col := max(e.Column, 1)
+	return fmt.Sprintf("%s:%d:%d:\n%s\n%s^\n%s", e.File, e.Line, e.Column, e.Source, strings.Repeat(" ", col-1), e.Msg)
+}
+
+// DefaultPolicy returns the policy embedded in whittle.
+func DefaultPolicy() *Policy {
+	p, err := ParsePolicy("default policy", defaultPolicy, lexicon.Default())
+	if err != nil {
+		panic("whittle: embedded policy: " + err.Error())
+	}
+	return p
+}
+
+// LoadPolicy reads a policy file and lays it over the default policy: a
+// setting the file leaves out keeps its default.
+func LoadPolicy(path string, lex *lexicon.Lexicon) (*Policy, error) {
+	b, err := os.ReadFile(path)
+	if err != nil {
+		return nil, err
+	}
+	user, err := ParsePolicy(path, string(b), lex)
+	if err != nil {
+		return nil, err
+	}
+	return DefaultPolicy().Overlay(user), nil
+}
+
+// ParsePolicy reads a policy in whittle's TOML layout (see policy.toml).
+// Every problem is a *PolicyError (or several, joined) with a line and
+// column: TOML syntax, a value of the wrong type or range, an unknown
+// key, kind, category or product type (with the nearest known name).
+func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
+	lines := strings.Split(text, "\n")
+	var raw policyTOML
+	md, err := toml.Decode(text, &raw)
+	if err != nil {
+		return nil, decodeError(name, text, lines, err)
+	}
+	pos := keyPositions(lines)
+	var errs []error
+	at := func(key []string, format string, args ...any) {
+		p := pos[strings.Join(key, "\x00")]
+		if p.line == 0 {
+			p = position{1, 1}
+		}
+		errs = append(errs, &PolicyError{File: name, Line: p.line, Column: p.col, Msg: fmt.Sprintf(format, args...), Source: lineAt(lines, p.line)})
+	}
+	for _, k := range md.Undecoded() {
+		last := k[len(k)-1]
+		msg := fmt.Sprintf("unknown key %q", strings.Join(k, "."))
+		if sug := nearest(last, knownKeys(k)); sug != "" {
+			msg += fmt.Sprintf("; did you mean %q?", sug)
+		}
+		at(k, "%s", msg)
+	}
+	pol := &Policy{Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings)}
+	pol.Defaults = pol.settings([]string{"defaults"}, raw.Defaults, at, lex)
+	for _, c := range sortedKeys(raw.Categories) {
+		key := []string{"category", c}
+		if !slices.Contains(lexicon.Categories, c) {
+			at(key, "unknown category %q%s", c, didYouMean(c, lexicon.Categories))
+			continue
+		}
+		pol.Categories[c] = pol.settings(key, raw.Categories[c], at, lex)
+	}
+	var types []string
+	for _, e := range lex.Entries(lexicon.ProductType) {
+		types = append(types, e.Name)
+	}
+	for _, t := range sortedKeys(raw.ProductTypes) {
+		key := []string{"product_type", t}
+		if _, ok := lex.Lookup(lexicon.ProductType, t); !ok {
+			at(key, "unknown product type %q%s", t, didYouMean(t, types))
+			continue
+		}
+		pol.ProductTypes[t] = pol.settings(key, raw.ProductTypes[t], at, lex)
+	}
+	if len(errs) > 0 {
+		sort.SliceStable(errs, func(i, j int) bool {
+			a, b := errs[i].(*PolicyError), errs[j].(*PolicyError)
+			return a.Line < b.Line || a.Line == b.Line && a.Column < b.Column
+		})
+		return nil, errors.Join(errs...)
+	}
+	return pol, nil
+}
+
+// settings checks one level of the policy and converts it.
+func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, string, ...any), lex *lexicon.Lexicon) Settings {
+	out := Settings{MinResults: s.MinResults, ColourTolerance: s.ColourTolerance, MeasureTolerance: s.MeasureTolerance,
+		PriceStretch: s.PriceStretch, Dimensions: s.Dimensions, StandardSizes: s.StandardSizes}
+	sub := func(k ...string) []string { return append(slices.Clone(key), k...) }
+	if v := s.MinResults; v != nil && (*v < 1 || *v > 10000) {
+		at(sub("min_results"), "min_results %d: want 1 to 10000", *v)
+	}
+	for _, f := range []struct {
+		name     string
+		v        *float64
+		min, max float64
+	}{
+		{"colour_tolerance", s.ColourTolerance, 0, 100},
+		{"measure_tolerance", s.MeasureTolerance, 0, 1},
+		{"price_stretch", s.PriceStretch, 0, 10},
+	} {
+		if f.v != nil && (math.IsNaN(*f.v) || *f.v < f.min || *f.v > f.max) {
+			at(sub(f.name), "%s %g: want %g to %g", f.name, *f.v, f.min, f.max)
+		}
+	}
+	if len(s.Strictness) > 0 {
+		out.Strictness = make(map[parser.Kind]parser.Strictness, len(s.Strictness))
+		var kinds []string
+		for _, k := range parser.AllKinds {
+			kinds = append(kinds, string(k))
+		}
+		for _, k := range sortedKeys(s.Strictness) {
+			if !slices.Contains(kinds, k) {
+				at(sub("strictness", k), "unknown constraint kind %q%s", k, didYouMean(k, kinds))
+				continue
+			}
+			out.Strictness[parser.Kind(k)] = s.Strictness[k]
+			if parser.Kind(k) == parser.KindSpec && s.Strictness[k] < parser.Hard {
+				pol.Warnings = append(pol.Warnings, fmt.Sprintf("%s: spec is %s: wire gauges, tyre sizes and threads may then be substituted; defer to local codes and the maker's specification", strings.Join(key, "."), s.Strictness[k]))
+			}
+		}
+	}
+	for dim, sizes := range s.StandardSizes {
+		for _, sz := range sizes {
+			r := parser.ParseWith(sz, parser.Options{Lexicon: lex})
+			if ms := r.Of(parser.KindMeasure); len(ms) != 1 || ms[0].Measure.Unit == "" || len(r.Constraints) != 1 {
+				at(sub("standard_sizes", dim), "standard size %q of %s: want a number with its unit, such as \"8 ft\"", sz, dim)
+			}
+		}
+	}
+	return out
+}
+
+// Overlay returns p with q's settings laid over it, level by level.
+func (p *Policy) Overlay(q *Policy) *Policy {
+	out := &Policy{Defaults: merge(p.Defaults, q.Defaults), Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings),
+		Warnings: append(slices.Clone(p.Warnings), q.Warnings...)}
+	for _, m := range []struct{ dst, a, b map[string]Settings }{{out.Categories, p.Categories, q.Categories}, {out.ProductTypes, p.ProductTypes, q.ProductTypes}} {
+		for k, v := range m.a {
+			m.dst[k] = v
+		}
+		for k, v := range m.b {
+			m.dst[k] = merge(m.dst[k], v)
+		}
+	}
+	return out
+}
+
+// merge lays b over a.
+func merge(a, b Settings) Settings {
+	out := a
+	if b.MinResults != nil {
+		out.MinResults = b.MinResults
+	}
+	if b.ColourTolerance != nil {
+		out.ColourTolerance = b.ColourTolerance
+	}
+	if b.MeasureTolerance != nil {
+		out.MeasureTolerance = b.MeasureTolerance
+	}
+	if b.PriceStretch != nil {
+		out.PriceStretch = b.PriceStretch
+	}
+	out.Strictness = mergeMap(a.Strictness, b.Strictness)
+	out.Dimensions = mergeMap(a.Dimensions, b.Dimensions)
+	out.StandardSizes = mergeMap(a.StandardSizes, b.StandardSizes)
+	return out
+}
+
+func mergeMap[K comparable, V any](a, b map[K]V) map[K]V {
+	if len(a) == 0 && len(b) == 0 {
+		return nil
+	}
+	out := make(map[K]V, len(a)+len(b))
+	for k, v := range a {
+		out[k] = v
+	}
+	for k, v := range b {
+		out[k] = v
+	}
+	return out
+}
+
+// Effective is the policy in force for one category and product type,
+// with every value settled.
+type Effective struct {
+	Category         string                            `json:"category"`
+	ProductType      string                            `json:"product_type"`
+	MinResults       int                               `json:"min_results"`
+	ColourTolerance  float64                           `json:"colour_tolerance"`
+	MeasureTolerance float64                           `json:"measure_tolerance"`
+	PriceStretch     float64                           `json:"price_stretch"`
+	Strictness       map[parser.Kind]parser.Strictness `json:"strictness"`
+	Dimensions       map[string]parser.Strictness      `json:"dimensions"`
+	StandardSizes    map[string][]string               `json:"standard_sizes"`
+}
+
+// For returns the policy in force for a category and a product type
+// (either may be ""): the defaults, then the category's settings, then
+// the product type's and its ancestors', broadest first.
+func (p *Policy) For(category, productType string, lex *lexicon.Lexicon) Effective {
+	s := p.Defaults
+	if c, ok := p.Categories[category]; ok {
+		s = merge(s, c)
+	}
+	if e, ok := lex.Lookup(lexicon.ProductType, productType); ok {
+		line := lex.Lineage(e)
+		for i := len(line) - 1; i >= 0; i-- {
+			if t, ok := p.ProductTypes[line[i].Name]; ok {
+				s = merge(s, t)
+			}
+		}
+	}
+	e := Effective{Category: category, ProductType: productType, MinResults: 1, Strictness: make(map[parser.Kind]parser.Strictness),
+		Dimensions: s.Dimensions, StandardSizes: s.StandardSizes}
+	for _, k := range parser.AllKinds {
+		e.Strictness[k] = parser.DefaultStrictness(k)
+	}
+	for k, v := range s.Strictness {
+		e.Strictness[k] = v
+	}
+	if s.MinResults != nil {
+		e.MinResults = *s.MinResults
+	}
+	for _, f := range []struct {
+		dst *float64
+		v   *float64
+	}{{&e.ColourTolerance, s.ColourTolerance}, {&e.MeasureTolerance, s.MeasureTolerance}, {&e.PriceStretch, s.PriceStretch}} {
+		if f.v != nil {
+			*f.dst = *f.v
+		}
+	}
+	return e
+}
+
+// StrictnessOf is the strictness the policy gives constraint c: by its
+// measure dimension where the policy names one, else by its kind. A
+// constraint the parser made stricter than its kind's default (a quoted
+// phrase) stays at least that strict.
+func (e Effective) StrictnessOf(c parser.Constraint) parser.Strictness {
+	s, ok := e.Strictness[c.Kind]
+	if !ok {
+		s = parser.DefaultStrictness(c.Kind)
+	}
+	if c.Measure != nil {
+		if d, ok := e.Dimensions[c.Measure.Dimension]; ok {
+			s = d
+		}
+	}
+	if c.Strictness > parser.DefaultStrictness(c.Kind) && c.Strictness > s {
+		s = c.Strictness
+	}
+	return s
+}
+
+// Apply sets the strictness of every constraint of r by the policy in
+// force for its category and head product type.
+func (p *Policy) Apply(r *parser.Result, lex *lexicon.Lexicon) Effective {
+	head := ""
+	for _, c := range r.Of(parser.KindProductType) {
+		if strings.Contains(c.Evidence, "head product type") {
+			head = c.Name
+		}
+	}
+	e := p.For(r.Category, head, lex)
+	for i := range r.Constraints {
+		r.Constraints[i].Strictness = e.StrictnessOf(r.Constraints[i])
+	}
+	return e
+}
+
+func sortedKeys[V any](m map[string]V) []string {
+	ks := make([]string, 0, len(m))
+	for k := range m {
+		ks = append(ks, k)
+	}
+	sort.Strings(ks)
+	return ks
+}
+
+func lineAt(lines []string, n int) string {
+	if n < 1 || n > len(lines) {
+		return ""
+	}
+	return strings.TrimRight(lines[n-1], "\r")
+}
+
+// typeError matches the decoder's message for a value of the wrong type.
+var typeError = regexp.MustCompile(`^toml: line (\d+) \(last key "([^"]*)"\): (.*)$`)
+
+// decodeError turns a TOML decoding error into a *PolicyError with the
+// line and column of the problem.
+func decodeError(name, text string, lines []string, err error) error {
+	var pe toml.ParseError
+	if errors.As(err, &pe) {
+		line, col := pe.Position.Line, pe.Position.Col
+		if start := pe.Position.Start; start > 0 && start <= len(text) {
+			// The byte offset is exact; count lines and columns from it.
+			line = strings.Count(text[:start], "\n") + 1
+			col = start - strings.LastIndexByte(text[:start], '\n')
+		}
+		return &PolicyError{File: name, Line: line, Column: col, Msg: pe.Message, Source: lineAt(lines, line)}
+	}
+	if m := typeError.FindStringSubmatch(err.Error()); m != nil {
+		line, _ := strconv.Atoi(m[1])
+		src := lineAt(lines, line)
+		col := len(src) - len(strings.TrimLeft(src, " \t")) + 1
+		key := m[2]
+		if i := strings.LastIndexByte(key, '.'); i >= 0 {
+			key = key[i+1:]
+		}
+		return &PolicyError{File: name, Line: line, Column: col, Msg: key + ": " + m[3], Source: src}
+	}
+	return &PolicyError{File: name, Line: 1, Column: 1, Msg: err.Error(), Source: lineAt(lines, 1)}
+}

@@ -1,0 +1,136 @@
+package rewrite
+
+import (
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/google/go-cmp/cmp"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
+)
+
+func TestDefaultPolicy(t *testing.T) {
+	lex := lexicon.Default()
+	p := DefaultPolicy()
+	for _, tc := range []struct {
+		name, category, productType string
+		check                       func(Effective) bool
+		reason                      string
+	}{
+		{"defaults", "", "", func(e Effective) bool {
+			return e.MinResults == 1 && e.ColourTolerance == 5 && e.Strictness[parser.KindSpec] == parser.Hard
+		},
+			"one result is enough; ΔE00 5; designations are hard"},
+		{"apparel", "apparel", "", func(e Effective) bool {
+			return e.ColourTolerance == 4 && e.Strictness[parser.KindSize] == parser.Hard && e.Strictness[parser.KindPattern] == parser.Soft
+		}, "in apparel size is hard and pattern soft; colours match closely"},
+		{"camera", "camera", "lens", func(e Effective) bool {
+			return e.Dimensions["focal_length"] == parser.Hard && e.Strictness[parser.KindCompatibility] == parser.Hard
+		}, "focal length and mount compatibility are hard in camera"},
+		{"paint", "paint", "", func(e Effective) bool { return e.Strictness[parser.KindColour] == parser.Hard }, "in paint the colour is hard"},
+		{"lumber", "lumber", "", func(e Effective) bool {
+			return e.Strictness[parser.KindSpec] == parser.Hard && e.Dimensions["length"] == parser.Firm && len(e.StandardSizes["length"]) > 0
+		}, "in lumber the nominal size is hard and the length firm, widened to standard lengths"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			if e := p.For(tc.category, tc.productType, lex); !tc.check(e) {
+				t.Errorf("%s: got %+v", tc.reason, e)
+			}
+		})
+	}
+}
+
+func TestParsePolicyErrors(t *testing.T) {
+	for _, tc := range []struct {
+		name, text string
+		line, col  int
+		msg        string
+	}{
+		{"syntax", "[defaults\nmin_results = 1\n", 1, 10, ""},
+		{"wrong type", "[defaults]\nmin_results = \"one\"\n", 2, 1, ""},
+		{"bad strictness", "[defaults.strictness]\nsize = \"strict\"\n", 2, 0, "unknown strictness"},
+		{"unknown key", "[defaults]\ncolour_tolerence = 4\n", 2, 1, `did you mean "colour_tolerance"`},
+		{"unknown top table", "[default]\nmin_results = 2\n", 1, 1, `did you mean "defaults"`},
+		{"unknown kind", "[defaults.strictness]\ncolor = \"hard\"\n", 2, 1, `did you mean "colour"`},
+		{"unknown category", "[category.aparel]\nmin_results = 2\n", 1, 1, `did you mean "apparel"`},
+		{"unknown product type", "[product_type.\"chelsea boots\"]\nmin_results = 2\n", 1, 1, `did you mean "chelsea boot"`},
+		{"min results out of range", "[defaults]\nmin_results = 0\n", 2, 1, "want 1 to 10000"},
+		{"tolerance out of range", "[category.apparel]\nmeasure_tolerance = 1.5\n", 2, 1, "want 0 to 1"},
+		{"bad standard size", "[category.lumber.standard_sizes]\nlength = [\"8 ft\", \"ten\"]\n", 2, 1, `"ten"`},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := ParsePolicy("test.toml", tc.text, lexicon.Default())
+			var pe *PolicyError
+			if !errors.As(err, &pe) {
+				t.Fatalf("got %v, want a *PolicyError", err)
+			}
+			if pe.Line != tc.line || (tc.col != 0 && pe.Column != tc.col) || !strings.Contains(pe.Msg, tc.msg) {
+				t.Errorf("got %v, want line %d col %d containing %q", pe, tc.line, tc.col, tc.msg)
+			}
+			if r := pe.Render(); !strings.Contains(r, "^") || !strings.Contains(r, pe.Msg) {
+				t.Errorf("render lacks the caret or the message: %q", r)
+			}
+		})
+	}
+}
+
+// A user file overrides only what it sets; the rest stays the default.
+func TestLoadPolicyOverlays(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "shop.toml")
+	os.WriteFile(path, []byte("[category.apparel]\ncolour_tolerance = 3\n\n[product_type.boot.strictness]\ncolour = \"soft\"\n"), 0o644)
+	lex := lexicon.Default()
+	p, err := LoadPolicy(path, lex)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if e := p.For("apparel", "", lex); e.ColourTolerance != 3 || e.Strictness[parser.KindSize] != parser.Hard {
+		t.Errorf("apparel: %+v", e)
+	}
+	if e := p.For("home", "", lex); e.ColourTolerance != 6 {
+		t.Errorf("home kept the default 6? got %v", e.ColourTolerance)
+	}
+	// chelsea boot's parent is boot: the product type's setting is inherited.
+	if e := p.For("footwear", "chelsea boot", lex); e.Strictness[parser.KindColour] != parser.Soft {
+		t.Errorf("chelsea boot did not inherit boot's colour strictness: %v", e.Strictness[parser.KindColour])
+	}
+	if _, err := LoadPolicy(filepath.Join(t.TempDir(), "missing.toml"), lex); err == nil {
+		t.Error("a missing file gave no error")
+	}
+}
+
+func TestRelaxingASpecWarns(t *testing.T) {
+	p, err := ParsePolicy("shop.toml", "[category.electrical.strictness]\nspec = \"soft\"\n", lexicon.Default())
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(p.Warnings) != 1 || !strings.Contains(p.Warnings[0], "maker's specification") {
+		t.Errorf("warnings = %q", p.Warnings)
+	}
+}
+
+func TestApply(t *testing.T) {
+	lex := lexicon.Default()
+	for _, tc := range []struct {
+		query, reason string
+		want          []parser.Strictness
+	}{
+		{"85 lens", "focal length is hard in camera", []parser.Strictness{parser.Hard, parser.Firm}},
+		{"sage paint", "colour is hard in paint", []parser.Strictness{parser.Hard, parser.Firm}},
+		{`"sage" rug`, "a quoted phrase stays hard whatever the policy", []parser.Strictness{parser.Hard, parser.Firm}},
+		{"sage rug", "colour is firm in home", []parser.Strictness{parser.Firm, parser.Firm}},
+	} {
+		r := parser.Parse(tc.query)
+		DefaultPolicy().Apply(r, lex)
+		var got []parser.Strictness
+		for _, c := range r.Constraints {
+			got = append(got, c.Strictness)
+		}
+		if diff := cmp.Diff(tc.want, got); diff != "" {
+			t.Errorf("%q: %s (-want +got):\n%s", tc.query, tc.reason, diff)
+		}
+	}
+}
