@@ -81,6 +81,12 @@ func Closest(word string, options []string) string {
 	return best
 }
 
+// EditDistance is the optimal string alignment distance between a and b
+// (Damerau–Levenshtein where no substring is edited twice), over runes.
+func EditDistance(a, b string) int {
+	return editDistance(a, b, len([]rune(a))+len([]rune(b))+1)
+}
+
 // editDistance is the optimal string alignment distance between a and b
 // over runes, or limit when it is limit or more.
 func editDistance(a, b string, limit int) int {

@@ -133,3 +133,19 @@ func ExampleClosest() {
 	fmt.Println(lexicon.Closest("colour_tolerence", []string{"min_results", "colour_tolerance", "price_stretch"}))
 	// Output: colour_tolerance
 }
+
+func ExampleEditDistance() {
+	fmt.Println(lexicon.EditDistance("sweter", "sweater"), lexicon.EditDistance("jakcet", "jacket"))
+	// Output: 1 1
+}
+
+func ExampleLexicon_Descendants() {
+	l := lexicon.Default()
+	boot, _ := l.Lookup(lexicon.ProductType, "boot")
+	for _, d := range l.Descendants(boot) {
+		if d.Name == "chelsea boot" {
+			fmt.Println(d.Name, "is a", d.Parent)
+		}
+	}
+	// Output: chelsea boot is a boot
+}

@@ -27,6 +27,8 @@ type Lexicon struct {
 	keys map[string]string
 	// joined holds the joined forms waiting for insertJoined.
 	joined []joinedForm
+	// children lists each product type's direct subtypes.
+	children map[string][]*Entry
 	paletteState
 }
 
@@ -117,6 +119,12 @@ func Load(fsys fs.FS) (*Lexicon, error) {
 	l.insertJoined()
 	if err := l.checkParents(); err != nil {
 		errs = append(errs, err)
+	}
+	l.children = make(map[string][]*Entry)
+	for _, e := range l.byKind[ProductType] {
+		if e.Parent != "" {
+			l.children[e.Parent] = append(l.children[e.Parent], e)
+		}
 	}
 	if len(errs) > 0 {
 		return nil, errors.Join(errs...)
@@ -299,6 +307,22 @@ func (l *Lexicon) Lineage(e *Entry) []*Entry {
 		out = append(out, e)
 		if e.Parent == "" {
 			break
+		}
+	}
+	return out
+}
+
+// Descendants returns the product types below e, nearest first: "boot"
+// gives "chelsea boot", "hiking boot" and the rest.
+func (l *Lexicon) Descendants(e *Entry) []*Entry {
+	var out []*Entry
+	queue := []*Entry{e}
+	for len(queue) > 0 && len(out) < 10000 {
+		next := queue[0]
+		queue = queue[1:]
+		for _, c := range l.children[next.Name] {
+			out = append(out, c)
+			queue = append(queue, c)
 		}
 	}
 	return out
