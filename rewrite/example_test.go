@@ -1,8 +1,10 @@
 package rewrite_test
 
 import (
+	"context"
 	"errors"
 	"fmt"
+	"slices"
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/parser"
@@ -49,4 +51,41 @@ func ExamplePolicyError_Render() {
 	// colour_tolerence = 4
 	// ^
 	// unknown key "defaults.colour_tolerence"; did you mean "colour_tolerance"?
+}
+
+// shopEngine is a tiny in-memory engine for the example: products by
+// type and colour.
+type shopEngine []struct{ kind, colour string }
+
+func (s shopEngine) Count(_ context.Context, p rewrite.Plan) (int, error) {
+	n := 0
+	for _, pr := range s {
+		ok := true
+		for _, c := range p.Clauses {
+			v := map[string]string{"product_type": pr.kind, "colour": pr.colour}[c.Field]
+			if slices.Contains(c.Values, v) == c.Excluded {
+				ok = false
+			}
+		}
+		if ok {
+			n++
+		}
+	}
+	return n, nil
+}
+
+func (s shopEngine) Search(context.Context, rewrite.Plan, int) ([]rewrite.Hit, error) {
+	return nil, nil
+}
+
+func ExampleRewriter_Rescue() {
+	eng := shopEngine{{"rain jacket", "ember"}, {"rain jacket", "morning fog"}}
+	rw := rewrite.New(eng, nil)
+	out, err := rw.Rescue(context.Background(), "mustard rain jacket")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(out.Count, out.Message)
+	// Output: 2 No exact match for “mustard rain jacket”. Showing rain jackets in any colour.
 }

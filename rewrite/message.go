@@ -1,0 +1,91 @@
+package rewrite
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/whittle-search/whittle/parser"
+)
+
+// message writes what a shopper reads: what was not found, and what is
+// shown instead, in plain words.
+func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
+	if len(out.Relaxations) == 0 {
+		return fmt.Sprintf("No results for “%s”.", strings.TrimSpace(out.Query))
+	}
+	noun := "results"
+	var phrases []string
+	for _, r := range out.Relaxations {
+		switch {
+		case r.Kind == parser.KindProductType && r.Operator == OpWiden:
+			noun = strings.TrimPrefix(r.Phrase, "other ")
+		case r.Kind == parser.KindProductType && r.Operator == OpDrop:
+		default:
+			phrases = append(phrases, r.Phrase)
+		}
+	}
+	for i, it := range items {
+		if it.c.Kind == parser.KindProductType && !it.c.Excluded && state[i] == 0 && strings.Contains(it.c.Evidence, "head product type") {
+			noun = plural(it.c.Name)
+		}
+	}
+	msg := fmt.Sprintf("No exact match for “%s”. Showing %s", strings.TrimSpace(out.Query), noun)
+	if len(phrases) > 0 {
+		msg += " " + strings.Join(phrases, ", ")
+	}
+	if out.Count < out.Policy.MinResults {
+		msg += fmt.Sprintf(" (still only %d)", out.Count)
+	}
+	return msg + "."
+}
+
+// hardStopMessage explains that the constraints that are never relaxed
+// find nothing, and names what the catalog carries instead.
+func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
+	in := ""
+	for _, c := range out.Parsed.Of(parser.KindProductType) {
+		if strings.Contains(c.Evidence, "head product type") {
+			in = " in " + plural(c.Name)
+		}
+	}
+	var parts []string
+	for _, m := range out.Missing {
+		c := out.Parsed.Constraints[m.Constraint]
+		what := m.Text
+		if c.Measure != nil && c.Inferred {
+			what = c.Value() // "85 mm", not "85"
+		}
+		s := fmt.Sprintf("%s is not carried%s", what, in)
+		if len(m.Carried) > 0 {
+			s += fmt.Sprintf("; %s carried: %s", plural(fieldName(c)), summarise(m.Carried))
+		}
+		parts = append(parts, s)
+	}
+	msg := fmt.Sprintf("No results for “%s”.", strings.TrimSpace(out.Query))
+	if len(parts) > 0 {
+		msg += " " + strings.Join(parts, ". ") + "."
+	}
+	return msg, "the hard constraints alone find nothing, so none is relaxed; " + strings.Join(parts, "; ")
+}
+
+// summarise writes a list of carried values, a range when they are many
+// numbers.
+func summarise(vals []string) string {
+	if len(vals) > 6 {
+		if _, err1 := parseNum(vals[0]); err1 == nil {
+			if _, err2 := parseNum(vals[len(vals)-1]); err2 == nil {
+				return vals[0] + " to " + vals[len(vals)-1]
+			}
+		}
+		return strings.Join(vals[:6], ", ") + ", …"
+	}
+	return strings.Join(vals, ", ")
+}
+
+// fieldName names what a constraint constrains, for messages.
+func fieldName(c parser.Constraint) string {
+	if c.Measure != nil && c.Measure.Dimension != "" {
+		return strings.ReplaceAll(c.Measure.Dimension, "_", " ")
+	}
+	return strings.ReplaceAll(string(c.Kind), "_", " ")
+}

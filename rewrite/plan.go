@@ -1,0 +1,90 @@
+package rewrite
+
+import (
+	"context"
+	"fmt"
+	"sort"
+	"strings"
+
+	"github.com/whittle-search/whittle/lexicon/colour"
+)
+
+// Clause is one kept constraint in engine-neutral form: the field it
+// constrains and the values it allows.
+type Clause struct {
+	// Field is the constraint kind ("product_type", "colour", "size",
+	// "measure", "price", ...).
+	Field string `json:"field"`
+	// Dimension names the measure ("focal_length") or the standard
+	// system ("lumber") where the field has several.
+	Dimension string `json:"dimension,omitempty"`
+	// Values are the allowed values, any of which matches, lower case:
+	// product type names, colour names, sizes, designations, codes, words.
+	Values []string `json:"values,omitempty"`
+	// Min and Max bound a measure (in its base unit) or a price (in
+	// Unit, a currency code); either may be nil.
+	Min  *float64 `json:"min,omitempty"`
+	Max  *float64 `json:"max,omitempty"`
+	Unit string   `json:"unit,omitempty"`
+	// Excluded means a product must NOT match the clause.
+	Excluded bool `json:"excluded,omitempty"`
+	// From is the index, in the parsed query, of the constraint the
+	// clause comes from.
+	From int `json:"from"`
+}
+
+// key is the clause written out, for telling plans apart.
+func (c Clause) key() string {
+	var b strings.Builder
+	fmt.Fprintf(&b, "%s/%s/%v/%s", c.Field, c.Dimension, c.Excluded, strings.Join(c.Values, ","))
+	if c.Min != nil {
+		fmt.Fprintf(&b, ">=%g", *c.Min)
+	}
+	if c.Max != nil {
+		fmt.Fprintf(&b, "<=%g", *c.Max)
+	}
+	return b.String()
+}
+
+// Plan is an engine-neutral query: every clause must hold.
+type Plan struct {
+	Clauses []Clause `json:"clauses"`
+}
+
+// Key identifies the plan: two plans with the same key match the same
+// products.
+func (p Plan) Key() string {
+	ks := make([]string, len(p.Clauses))
+	for i, c := range p.Clauses {
+		ks[i] = c.key()
+	}
+	sort.Strings(ks)
+	return strings.Join(ks, " & ")
+}
+
+// Hit is one product a search returns.
+type Hit struct {
+	ID    string  `json:"id"`
+	Score float64 `json:"score"`
+}
+
+// Engine is the search engine the planner asks. Implementations must be
+// safe for concurrent use.
+type Engine interface {
+	// Count returns how many products match every clause of p.
+	Count(ctx context.Context, p Plan) (int, error)
+	// Search returns the k best products that match p.
+	Search(ctx context.Context, p Plan, k int) ([]Hit, error)
+}
+
+// Catalog is what an engine may also tell about the products it holds,
+// so that the planner can widen to values that exist and name them when
+// nothing matches.
+type Catalog interface {
+	// Colours returns the colours the catalog carries, with their counts.
+	Colours(ctx context.Context) ([]colour.PaletteColour, error)
+	// Values returns the values of field (with dimension, for measures:
+	// amounts in base units, written with %g) that the products matching
+	// within carry, with how many products carry each.
+	Values(ctx context.Context, field, dimension string, within Plan) (map[string]int, error)
+}

@@ -1,0 +1,409 @@
+package rewrite
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"slices"
+	"sort"
+	"strconv"
+	"strings"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/parser"
+)
+
+// Operators say how a constraint was relaxed.
+const (
+	OpWiden   = "widen"
+	OpReplace = "replace"
+	OpDrop    = "drop"
+)
+
+// Relaxation is one change made to one constraint.
+type Relaxation struct {
+	// Constraint is the index of the constraint in the parsed query.
+	Constraint int         `json:"constraint"`
+	Text       string      `json:"text"`
+	Kind       parser.Kind `json:"kind"`
+	Operator   string      `json:"operator"`
+	// Detail says what the change was, for developers ("to 3 catalog
+	// colours within ΔE00 4").
+	Detail string `json:"detail"`
+	// Phrase says it to a shopper ("in colours close to mustard").
+	Phrase string `json:"phrase"`
+}
+
+// level is one state of a constraint: its clause (nil when dropped), the
+// relaxation that led to it (nil for the exact state), and its cost.
+type level struct {
+	clause *Clause
+	relax  *Relaxation
+	cost   float64
+}
+
+// item is one constraint of the query and the ladder of states it may
+// step down.
+type item struct {
+	index  int
+	c      parser.Constraint
+	levels []level
+	// solo is the constraint's count on its own, or -1 when unknown;
+	// rarity is 1 - solo over the largest solo count (0 for the commonest).
+	solo   int
+	rarity float64
+}
+
+// ladders builds each constraint's states: exact first, then every
+// allowed widening or replacement, then dropping where the strictness
+// allows it. Hard constraints and exclusions have only their exact state;
+// filler has none (it is dropped before anything is searched).
+func (rw *Rewriter) ladders(ctx context.Context, r *parser.Result, e Effective) []*item {
+	var items []*item
+	for i, c := range r.Constraints {
+		if c.Kind == parser.KindFiller || c.Strictness == parser.Filler {
+			continue
+		}
+		exact := rw.exactClause(i, c)
+		items = append(items, &item{index: i, c: c, solo: -1, levels: []level{{clause: &exact}}})
+	}
+	// What the catalog carries is asked among the products of the same
+	// kind: those the product type and the hard constraints allow.
+	var within Plan
+	for _, it := range items {
+		if it.c.Strictness == parser.Hard && !it.c.Excluded || it.c.Kind == parser.KindProductType && !it.c.Excluded {
+			within.Clauses = append(within.Clauses, *it.levels[0].clause)
+		}
+	}
+	for _, it := range items {
+		if it.c.Strictness < parser.Hard && !it.c.Excluded {
+			rw.relaxations(ctx, it, e, without(within, it.index))
+		}
+	}
+	return items
+}
+
+// without is p less the clause that comes from constraint i.
+func without(p Plan, i int) Plan {
+	var out Plan
+	for _, c := range p.Clauses {
+		if c.From != i {
+			out.Clauses = append(out.Clauses, c)
+		}
+	}
+	return out
+}
+
+// costs of the operators, before the evidence of the counts scales them.
+const (
+	costReplace  = 0.4
+	costWiden    = 1.5
+	costDropSoft = 1.0
+	costDropFirm = 4.0
+)
+
+func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, within Plan) {
+	c := it.c
+	add := func(cl *Clause, op, detail, phrase string, cost float64) {
+		it.levels = append(it.levels, level{clause: cl, cost: cost,
+			relax: &Relaxation{Constraint: it.index, Text: c.Text, Kind: c.Kind, Operator: op, Detail: detail, Phrase: phrase}})
+	}
+	switch c.Kind {
+	case parser.KindColour:
+		if cl, n := rw.widenColour(ctx, it, e.ColourTolerance); cl != nil {
+			add(cl, OpWiden, fmt.Sprintf("to %d catalog colours within ΔE00 %g of %s", n, e.ColourTolerance, c.Name),
+				"in colours close to "+c.Name, costWiden)
+		}
+	case parser.KindMeasure:
+		for _, w := range rw.widenMeasure(it, e) {
+			add(w.clause, OpWiden, w.detail, w.phrase, costWiden)
+		}
+		if w := rw.widenToCarried(ctx, it, within); w != nil {
+			add(w.clause, OpWiden, w.detail, w.phrase, costWiden*1.5)
+		}
+	case parser.KindProductType:
+		if parent, ok := rw.lex.Lookup(lexicon.ProductType, c.Parent); ok {
+			cl := rw.exactClause(it.index, c)
+			cl.Values = rw.typeValues(parent)
+			add(&cl, OpWiden, "to the broader type "+parent.Name, "other "+plural(parent.Name), costWiden)
+		}
+	case parser.KindPrice:
+		if c.Price.Max != nil && e.PriceStretch > 0 {
+			cl := rw.exactClause(it.index, c)
+			max := *cl.Max * (1 + e.PriceStretch)
+			cl.Max = &max
+			add(&cl, OpWiden, fmt.Sprintf("ceiling raised by %g%% to %.2f %s", e.PriceStretch*100, max, c.Price.Currency),
+				fmt.Sprintf("up to %.2f %s", max, c.Price.Currency), costWiden)
+		}
+	case parser.KindKeyword:
+		if cl, fixed := rw.replaceTypo(ctx, it.index, c); cl != nil {
+			add(cl, OpReplace, fmt.Sprintf("%q read as %q", c.Name, fixed), fmt.Sprintf("for “%s”", fixed), costReplace)
+		}
+	}
+	drop := costDropSoft
+	if c.Strictness >= parser.Firm {
+		drop = costDropFirm
+	}
+	add(nil, OpDrop, "dropped", dropPhrase(c), drop)
+}
+
+// exactClause is constraint c as a clause.
+func (rw *Rewriter) exactClause(i int, c parser.Constraint) Clause {
+	cl := Clause{Field: string(c.Kind), Excluded: c.Excluded, From: i}
+	switch {
+	case c.Kind == parser.KindProductType:
+		if e, ok := rw.lex.Lookup(lexicon.ProductType, c.Name); ok {
+			cl.Values = rw.typeValues(e)
+		} else {
+			cl.Values = []string{c.Name}
+		}
+	case c.Measure != nil && c.Measure.BaseUnit != "" && c.Kind == parser.KindMeasure:
+		cl.Dimension, cl.Unit = c.Measure.Dimension, c.Measure.BaseUnit
+		cl.Min, cl.Max = c.Measure.BaseAmount, c.Measure.BaseAmount
+		if c.Measure.BaseAmount == nil {
+			cl.Min, cl.Max = c.Measure.BaseMin, c.Measure.BaseMax
+		}
+	case c.Price != nil:
+		cl.Unit = c.Price.Currency
+		cl.Min, cl.Max = decimal(c.Price.Min), decimal(c.Price.Max)
+	case c.Size != nil:
+		cl.Dimension, cl.Values = c.Size.System, []string{c.Size.Value}
+	case c.Spec != nil:
+		cl.Dimension, cl.Values = c.Spec.System, []string{strings.ToLower(c.Spec.Designation)}
+	case c.Kind == parser.KindCompatibility:
+		cl.Values = []string{c.Target}
+	case c.Kind == parser.KindPartNumber:
+		cl.Values = []string{strings.ToLower(c.Code)}
+	case c.Name != "":
+		cl.Values = []string{c.Name}
+	default:
+		cl.Field = string(parser.KindKeyword)
+		cl.Values = []string{strings.ToLower(c.Text)}
+	}
+	return cl
+}
+
+func decimal(s *string) *float64 {
+	if s == nil {
+		return nil
+	}
+	v, err := strconv.ParseFloat(*s, 64)
+	if err != nil {
+		return nil
+	}
+	return &v
+}
+
+// typeValues is a product type and all the types below it.
+func (rw *Rewriter) typeValues(e *lexicon.Entry) []string {
+	out := []string{e.Name}
+	for _, t := range rw.lex.Descendants(e) {
+		out = append(out, t.Name)
+	}
+	return out
+}
+
+// widenColour lists the catalog colours within tol of the query colour.
+func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Clause, int) {
+	pal := rw.palette(ctx)
+	if pal == nil || it.c.Colour == nil || it.c.Colour.Lab == nil || tol <= 0 {
+		return nil, 0
+	}
+	l := it.c.Colour.Lab
+	ms := pal.Within(colour.Lab{L: l[0], A: l[1], B: l[2]}, tol)
+	if len(ms) == 0 {
+		return nil, 0
+	}
+	cl := rw.exactClause(it.index, it.c)
+	cl.Values = nil
+	for _, m := range ms {
+		cl.Values = append(cl.Values, m.Name)
+	}
+	if !slices.Contains(cl.Values, it.c.Name) {
+		cl.Values = append(cl.Values, it.c.Name)
+	}
+	return &cl, len(ms)
+}
+
+type widening struct {
+	clause         *Clause
+	detail, phrase string
+}
+
+// widenMeasure widens a measure by the policy's tolerance, then to the
+// standard sizes around it, when the policy lists them.
+func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
+	m := it.c.Measure
+	if m == nil || m.BaseUnit == "" || m.BaseAmount == nil {
+		return nil
+	}
+	v := *m.BaseAmount
+	var out []widening
+	if t := e.MeasureTolerance; t > 0 {
+		cl := rw.exactClause(it.index, it.c)
+		lo, hi := v*(1-t), v*(1+t)
+		cl.Min, cl.Max = &lo, &hi
+		out = append(out, widening{&cl, fmt.Sprintf("to ±%g%% (%.4g..%.4g %s)", t*100, lo, hi, m.BaseUnit),
+			fmt.Sprintf("about %s", strings.TrimSpace(m.String()))})
+	}
+	if sizes := e.StandardSizes[m.Dimension]; len(sizes) > 0 {
+		var base []float64
+		for _, s := range sizes {
+			r := parser.ParseWith(s, parser.Options{Lexicon: rw.lex})
+			if ms := r.Of(parser.KindMeasure); len(ms) == 1 && ms[0].Measure.BaseAmount != nil && ms[0].Measure.BaseUnit == m.BaseUnit {
+				base = append(base, *ms[0].Measure.BaseAmount)
+			}
+		}
+		sort.Float64s(base)
+		// The nearest standard sizes below and above the asked amount.
+		lo, hi := math.Inf(-1), math.Inf(1)
+		for _, b := range base {
+			if b < v-1e-9 {
+				lo = b
+			}
+			if b > v+1e-9 && math.IsInf(hi, 1) {
+				hi = b
+			}
+		}
+		if !math.IsInf(lo, 0) || !math.IsInf(hi, 0) {
+			if math.IsInf(lo, 0) {
+				lo = hi
+			}
+			if math.IsInf(hi, 0) {
+				hi = lo
+			}
+			lo, hi = math.Min(lo, v), math.Max(hi, v)
+			cl := rw.exactClause(it.index, it.c)
+			cl.Min, cl.Max = &lo, &hi
+			out = append(out, widening{&cl, fmt.Sprintf("to the standard sizes around it (%.4g..%.4g %s)", lo, hi, m.BaseUnit),
+				"in the nearest standard " + strings.ReplaceAll(m.Dimension, "_", " ") + "s"})
+		}
+	}
+	return out
+}
+
+// replaceTypo reads an unknown word as the lexicon word it is one or two
+// edits from: distance 1 for words of 4 to 7 letters, 2 for longer ones;
+// never for numbers or codes.
+func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint) (*Clause, string) {
+	w := c.Name
+	n := len([]rune(w))
+	if n < 4 || strings.ContainsAny(w, "0123456789 -") {
+		return nil, ""
+	}
+	limit := 1
+	if n >= 8 {
+		limit = 2
+	}
+	var best *wordEntry
+	bestD := limit + 1
+	words := rw.words(ctx)
+	for j := range words {
+		if d := lexicon.EditDistance(w, words[j].word); d <= limit && d < bestD {
+			best, bestD = &words[j], d
+		}
+	}
+	if best == nil {
+		return nil, ""
+	}
+	name := best.word
+	if best.entry != nil {
+		name = best.entry.Name
+	}
+	fixed := parser.Constraint{Kind: best.kind, Name: name, Text: c.Text}
+	cl := rw.exactClause(i, fixed)
+	return &cl, name
+}
+
+func kindOfEntry(e *lexicon.Entry) parser.Kind {
+	switch e.Kind {
+	case lexicon.ProductType:
+		return parser.KindProductType
+	case lexicon.Colour:
+		return parser.KindColour
+	case lexicon.Material:
+		return parser.KindMaterial
+	case lexicon.Pattern:
+		return parser.KindPattern
+	case lexicon.Silhouette:
+		return parser.KindSilhouette
+	case lexicon.Brand:
+		return parser.KindBrand
+	}
+	return parser.KindKeyword
+}
+
+func plural(s string) string {
+	switch {
+	case strings.HasSuffix(s, "s"), strings.HasSuffix(s, "x"), strings.HasSuffix(s, "ch"), strings.HasSuffix(s, "sh"):
+		return s + "es"
+	case strings.HasSuffix(s, "y") && !strings.HasSuffix(s, "ey") && !strings.HasSuffix(s, "ay") && !strings.HasSuffix(s, "oy"):
+		return s[:len(s)-1] + "ies"
+	}
+	return s + "s"
+}
+
+// dropPhrase says to a shopper what dropping c means.
+func dropPhrase(c parser.Constraint) string {
+	switch c.Kind {
+	case parser.KindColour:
+		return "in any colour"
+	case parser.KindPattern:
+		return "in any pattern"
+	case parser.KindMaterial:
+		return "in any material"
+	case parser.KindSilhouette:
+		return "in any style"
+	case parser.KindBrand:
+		return "from any brand"
+	case parser.KindMeasure:
+		return "in any " + strings.ReplaceAll(c.Measure.Dimension, "_", " ")
+	case parser.KindPrice:
+		return "at any price"
+	case parser.KindProductType:
+		return "of any kind"
+	}
+	return fmt.Sprintf("without “%s”", strings.ToLower(c.Text))
+}
+
+// widenToCarried widens a measure to the nearest amounts the catalog
+// carries below and above it, among products like the ones asked for.
+func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) *widening {
+	cat, ok := rw.engine.(Catalog)
+	m := it.c.Measure
+	if !ok || m == nil || m.BaseUnit == "" || m.BaseAmount == nil {
+		return nil
+	}
+	vals, err := cat.Values(ctx, string(parser.KindMeasure), m.Dimension, within)
+	if err != nil || len(vals) == 0 {
+		return nil
+	}
+	v := *m.BaseAmount
+	lo, hi := math.Inf(-1), math.Inf(1)
+	for s := range vals {
+		x, err := parseNum(s)
+		if err != nil {
+			continue
+		}
+		if x < v && x > lo {
+			lo = x
+		}
+		if x > v && x < hi {
+			hi = x
+		}
+	}
+	if math.IsInf(lo, 0) && math.IsInf(hi, 0) {
+		return nil
+	}
+	if math.IsInf(lo, 0) {
+		lo = v
+	}
+	if math.IsInf(hi, 0) {
+		hi = v
+	}
+	cl := rw.exactClause(it.index, it.c)
+	cl.Min, cl.Max = &lo, &hi
+	return &widening{&cl, fmt.Sprintf("to the nearest amounts carried (%.4g..%.4g %s)", lo, hi, m.BaseUnit),
+		"in the nearest " + strings.ReplaceAll(m.Dimension, "_", " ") + "s carried"}
+}

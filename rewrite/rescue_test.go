@@ -1,0 +1,348 @@
+package rewrite
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"math/rand"
+	"reflect"
+	"slices"
+	"strings"
+	"testing"
+	"testing/quick"
+	"time"
+
+	"github.com/whittle-search/whittle/parser"
+)
+
+// ops writes an outcome's relaxations as "operator kind" pairs.
+func ops(o *Outcome) []string {
+	var out []string
+	for _, r := range o.Relaxations {
+		out = append(out, r.Operator+" "+string(r.Kind))
+	}
+	return out
+}
+
+// The counts below follow from the invented shop in memengine_test.go.
+func TestRescue(t *testing.T) {
+	for _, tc := range []struct {
+		name, query, reason string
+		exact               bool
+		count               int
+		ops                 []string
+		message             string
+	}{
+		{name: "exact", query: "womens rain jacket size m", reason: "two women's rain jackets come in m: nothing is relaxed",
+			exact: true, count: 2},
+		{name: "widen colour", query: "mustard rain jacket", reason: "harvest gold is within ΔE00 4 of mustard; no rain jacket is mustard by name",
+			count: 1, ops: []string{"widen colour"}, message: "Showing rain jackets in colours close to mustard."},
+		{name: "drop pattern", query: "striped rain jacket", reason: "no rain jacket is striped; pattern is soft in apparel",
+			count: 4, ops: []string{"drop pattern"}, message: "Showing rain jackets in any pattern."},
+		{name: "culprit is not the last word", query: "merino crew sweater oatmeal", reason: "the oatmeal sweater is wool: merino, the first word, goes, not the colour",
+			count: 1, ops: []string{"drop material"}, message: "Showing sweaters in any material."},
+		{name: "replace a typo", query: "sweter merino", reason: "sweter is one edit from sweater",
+			count: 1, ops: []string{"replace keyword"}},
+		{name: "replace a typo with the catalog's word", query: "glaciar rain jacket", reason: "glaciar is one edit from glacier, a colour only the catalog names",
+			count: 1, ops: []string{"replace keyword"}, message: "for “glacier”"},
+		{name: "widen product type", query: "chelsea boots", reason: "no chelsea boot; the hiking boot is a boot",
+			count: 1, ops: []string{"widen product_type"}, message: "Showing boots."},
+		{name: "stretch price", query: "rain jacket under $50", reason: "the cheapest is 55.00; a 15% stretch reaches 57.50",
+			count: 1, ops: []string{"widen price"}, message: "up to 57.50 USD"},
+		{name: "widen measure", query: "5x8 rug", reason: "the rug is 5 by 7.5 ft: 8 ft widened by 10% holds 7.5",
+			count: 1, ops: []string{"widen measure"}, message: "about 8 ft"},
+		{name: "standard sizes", query: "2x4 12 ft", reason: "no 12 ft stud; lumber length widens to the standard sizes around it, 10 to 14 ft",
+			count: 1, ops: []string{"widen measure"}, message: "nearest standard lengths"},
+		{name: "hard stop on size", query: "trail running shoes size 13", reason: "size is hard: it is not relaxed, and the sizes carried are named",
+			count: 0, message: "size 13 is not carried in trail running shoes; sizes carried: 7, 8, 9, 10, 11, 12."},
+		{name: "hard stop on focal length", query: "85 lens", reason: "focal length is hard in camera",
+			count: 0, message: "85 mm is not carried in lenses; focal lengths carried: 35 mm, 50 mm."},
+		{name: "hard stop on wire gauge", query: "14 awg wire", reason: "a wire gauge is never substituted",
+			count: 0, message: "14 awg is not carried in electrical wires; specs carried: 12 awg."},
+		{name: "drop an unknown word", query: "zorblax", reason: "an unknown word that matches nothing is dropped",
+			count: len(shop), ops: []string{"drop keyword"}},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			eng := &memEngine{products: shop}
+			o, err := New(eng, nil).Rescue(context.Background(), tc.query)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if o.Exact != tc.exact || o.Count != tc.count || !slices.Equal(ops(o), tc.ops) {
+				t.Errorf("%s: exact=%v count=%d ops=%v; want exact=%v count=%d ops=%v\n%s", tc.reason, o.Exact, o.Count, ops(o), tc.exact, tc.count, tc.ops, o.Explanation)
+			}
+			if !strings.Contains(o.Message, tc.message) {
+				t.Errorf("%s: message %q lacks %q", tc.reason, o.Message, tc.message)
+			}
+			if o.Exact && o.Message != "" {
+				t.Errorf("an exact match needs no message, got %q", o.Message)
+			}
+		})
+	}
+}
+
+func TestBudgetAndDeadline(t *testing.T) {
+	// A budget of 2 counts: the exact query and the hard constraints alone.
+	o, err := New(&memEngine{products: shop}, nil, WithBudget(2)).Rescue(context.Background(), "merino crew sweater oatmeal")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(o.Steps) != 2 || !strings.Contains(o.Note, "budget of 2") {
+		t.Errorf("budget: %d steps, note %q", len(o.Steps), o.Note)
+	}
+	// A deadline that has passed stops the search; the best plan so far
+	// (here the exact one) comes back with a note.
+	slow := &memEngine{products: shop, delay: func(ctx context.Context) error {
+		select {
+		case <-ctx.Done():
+			return ctx.Err()
+		case <-time.After(time.Millisecond):
+			return nil
+		}
+	}}
+	ctx, cancel := context.WithCancel(context.Background())
+	cancel()
+	if _, err := New(slow, nil).Rescue(ctx, "merino crew sweater oatmeal"); !errors.Is(err, context.Canceled) {
+		// Not even the exact query could be counted: there is nothing to show.
+		t.Errorf("a cancelled context gave %v, want context.Canceled", err)
+	}
+	ctx2, cancel2 := context.WithCancel(context.Background())
+	calls := 0
+	slow.delay = func(context.Context) error {
+		calls++
+		if calls == 3 {
+			cancel2()
+		}
+		return nil
+	}
+	o, err = New(slow, nil).Rescue(ctx2, "merino crew sweater oatmeal")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(o.Note, "deadline") {
+		t.Errorf("deadline: note %q", o.Note)
+	}
+	cancel2()
+}
+
+// countingEngine wraps memEngine to check the planner never counts a
+// plan twice.
+func TestNoPlanCountedTwice(t *testing.T) {
+	for _, q := range []string{"merino crew sweater oatmeal", "striped mustard rain jacket size m", "zorblax sweter"} {
+		eng := &memEngine{products: shop}
+		if _, err := New(eng, nil).Rescue(context.Background(), q); err != nil {
+			t.Fatal(err)
+		}
+		seen := map[string]bool{}
+		for _, k := range eng.counted {
+			if seen[k] {
+				t.Errorf("%q: plan %s counted twice", q, k)
+			}
+			seen[k] = true
+		}
+	}
+}
+
+// queryGen makes random queries from the shop's vocabulary, hard and
+// soft words alike.
+type queryGen string
+
+func (queryGen) Generate(r *rand.Rand, _ int) reflect.Value {
+	words := []string{"rain jacket", "sweater", "trail running shoes", "lens", "rug", "mustard", "charcoal", "oatmeal",
+		"striped", "merino", "wool", "crew", "size m", "size 13", "size l", "womens", "mens", "under $60", "85", "50",
+		"zorblax", "sweter", "for jx-10", "not black", "chelsea boots"}
+	n := 1 + r.Intn(5)
+	var parts []string
+	for i := 0; i < n; i++ {
+		parts = append(parts, words[r.Intn(len(words))])
+	}
+	return reflect.ValueOf(queryGen(strings.Join(parts, " ")))
+}
+
+// Properties over random queries: a hard constraint is never relaxed and
+// always stays in the final plan; the same input gives the same outcome;
+// when the whole lattice of relaxations fits in the budget and some plan
+// in it reaches the minimum, the planner's plan does too.
+func TestRescueProperties(t *testing.T) {
+	check := func(q queryGen) bool {
+		eng := &memEngine{products: shop}
+		rw := New(eng, nil)
+		o, err := rw.Rescue(context.Background(), string(q))
+		if err != nil {
+			t.Logf("%q: %v", q, err)
+			return false
+		}
+		for _, r := range o.Relaxations {
+			if o.Parsed.Constraints[r.Constraint].Strictness == parser.Hard {
+				t.Logf("%q: relaxed hard %s", q, r.Text)
+				return false
+			}
+		}
+		for i, c := range o.Parsed.Constraints {
+			if c.Strictness != parser.Hard {
+				continue
+			}
+			found := false
+			for _, cl := range o.Plan.Clauses {
+				found = found || cl.From == i
+			}
+			if !found {
+				t.Logf("%q: hard %s missing from the plan", q, c.Text)
+				return false
+			}
+		}
+		o2, _ := New(&memEngine{products: shop}, nil).Rescue(context.Background(), string(q))
+		if o2.Message != o.Message || o2.Count != o.Count || fmt.Sprint(ops(o2)) != fmt.Sprint(ops(o)) {
+			t.Logf("%q: not deterministic", q)
+			return false
+		}
+		// Brute force over the whole lattice when it is small.
+		r := parser.Parse(string(q))
+		e := rw.policy.Apply(r, rw.lex)
+		items := rw.ladders(context.Background(), r, e)
+		total := 1
+		for _, it := range items {
+			total *= len(it.levels)
+		}
+		if total+len(items)+2 <= DefaultBudget && len(o.Missing) == 0 && o.Note == "" {
+			s := &search{rw: rw, ctx: context.Background(), out: &Outcome{Parsed: r}, seen: map[string]int{}, budget: 1 << 20, items: items}
+			any := false
+			var walk func(i int, st []int)
+			walk = func(i int, st []int) {
+				if i == len(items) {
+					if n, _ := s.count(st); n >= e.MinResults {
+						any = true
+					}
+					return
+				}
+				for l := range items[i].levels {
+					walk(i+1, append(st, l))
+				}
+			}
+			walk(0, nil)
+			if any && o.Count < e.MinResults {
+				t.Logf("%q: a plan reaches %d but the planner found %d", q, e.MinResults, o.Count)
+				return false
+			}
+		}
+		return true
+	}
+	if err := quick.Check(check, &quick.Config{MaxCount: 300, Rand: rand.New(rand.NewSource(7))}); err != nil {
+		t.Error(err)
+	}
+}
+
+// blind is the usual fallback: keep N of the M constraints, N stepping
+// down, the first N in query order that find anything.
+func blind(eng Engine, r *parser.Result) (kept []parser.Constraint, n int) {
+	rw := New(eng, nil)
+	var cs []parser.Constraint
+	for _, c := range r.Constraints {
+		if c.Kind != parser.KindFiller {
+			cs = append(cs, c)
+		}
+	}
+	for size := len(cs); size > 0; size-- {
+		var best []parser.Constraint
+		combos(len(cs), size, func(idx []int) bool {
+			var p Plan
+			var pick []parser.Constraint
+			for _, i := range idx {
+				p.Clauses = append(p.Clauses, rw.exactClause(i, cs[i]))
+				pick = append(pick, cs[i])
+			}
+			if k, _ := eng.Count(context.Background(), p); k > 0 {
+				best, n = pick, k
+				return false
+			}
+			return true
+		})
+		if best != nil {
+			return best, n
+		}
+	}
+	return nil, 0
+}
+
+func combos(n, k int, f func([]int) bool) {
+	idx := make([]int, k)
+	var rec func(start, d int) bool
+	rec = func(start, d int) bool {
+		if d == k {
+			return f(idx)
+		}
+		for i := start; i < n; i++ {
+			idx[d] = i
+			if !rec(i+1, d+1) {
+				return false
+			}
+		}
+		return true
+	}
+	rec(0, 0)
+}
+
+// whittle keeps every hard constraint where the blind fallback loses
+// some: the blind fallback shows shoes of the wrong size, whittle says the
+// size is not carried.
+func TestAgainstBlindFallback(t *testing.T) {
+	for _, q := range []string{"trail running shoes size 13 black", "85 lens for jx-10", "14 awg wire red"} {
+		eng := &memEngine{products: shop}
+		r := parser.Parse(q)
+		DefaultPolicy().Apply(r, New(eng, nil).lex)
+		kept, bn := blind(eng, r)
+		o, err := New(eng, nil).Rescue(context.Background(), q)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var lost []string
+		for _, c := range r.Constraints {
+			if c.Strictness == parser.Hard && !slices.ContainsFunc(kept, func(k parser.Constraint) bool { return k.Start == c.Start }) {
+				lost = append(lost, c.Text)
+			}
+		}
+		t.Logf("%q\n  blind fallback: keeps %d constraints, %d results, loses hard %q\n  whittle: %d results; %s", q, len(kept), bn, lost, o.Count, o.Message)
+		if len(lost) == 0 {
+			t.Errorf("%q: the blind fallback was expected to lose a hard constraint", q)
+		}
+		for _, rl := range o.Relaxations {
+			if r.Constraints[rl.Constraint].Strictness == parser.Hard {
+				t.Errorf("%q: whittle relaxed hard %q", q, rl.Text)
+			}
+		}
+	}
+}
+
+// A Rewriter is safe for concurrent use: rescues from many goroutines give
+// what one goroutine gets.
+func TestRescueConcurrently(t *testing.T) {
+	queries := []string{"mustard rain jacket", "striped rain jacket", "sweter merino", "85 lens", "chelsea boots", "2x4 12 ft", "zorblax"}
+	rw := New(&memEngine{products: shop}, nil)
+	want := make([]string, len(queries))
+	for i, q := range queries {
+		o, err := rw.Rescue(context.Background(), q)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want[i] = o.Message
+	}
+	done := make(chan string, 16)
+	for g := 0; g < 16; g++ {
+		go func(g int) {
+			for i := range queries {
+				j := (i + g) % len(queries)
+				o, err := rw.Rescue(context.Background(), queries[j])
+				if err != nil || o.Message != want[j] {
+					done <- fmt.Sprintf("%q: %v %q", queries[j], err, o.Message)
+					return
+				}
+			}
+			done <- ""
+		}(g)
+	}
+	for g := 0; g < 16; g++ {
+		if msg := <-done; msg != "" {
+			t.Error(msg)
+		}
+	}
+}

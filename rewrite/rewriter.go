@@ -1,0 +1,507 @@
+package rewrite
+
+import (
+	"container/heap"
+	"context"
+	"errors"
+	"fmt"
+	"math"
+	"slices"
+	"sort"
+	"strings"
+	"sync"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/parser"
+)
+
+// DefaultBudget is how many engine counts one rescue may spend.
+const DefaultBudget = 24
+
+// Rewriter rescues queries that find nothing. It is safe for concurrent
+// use.
+type Rewriter struct {
+	engine Engine
+	policy *Policy
+	lex    *lexicon.Lexicon
+	parse  parser.Options
+	budget int
+
+	once     sync.Once
+	pal      *colour.Palette
+	wordOnce sync.Once
+	vocab    []wordEntry
+}
+
+// Option configures a Rewriter.
+type Option func(*Rewriter)
+
+// WithBudget sets how many engine counts one rescue may spend.
+func WithBudget(n int) Option { return func(rw *Rewriter) { rw.budget = n } }
+
+// WithParseOptions sets how queries are parsed; its lexicon is used too.
+func WithParseOptions(o parser.Options) Option { return func(rw *Rewriter) { rw.parse = o } }
+
+// New returns a Rewriter that asks engine and follows policy (nil means
+// the built-in policy).
+func New(engine Engine, policy *Policy, opts ...Option) *Rewriter {
+	rw := &Rewriter{engine: engine, policy: policy, budget: DefaultBudget}
+	for _, o := range opts {
+		o(rw)
+	}
+	if rw.policy == nil {
+		rw.policy = DefaultPolicy()
+	}
+	rw.lex = rw.parse.Lexicon
+	if rw.lex == nil {
+		rw.lex = lexicon.Default()
+	}
+	if rw.budget < 1 {
+		rw.budget = 1
+	}
+	return rw
+}
+
+// palette is the catalog's colours, asked of the engine once.
+func (rw *Rewriter) palette(ctx context.Context) *colour.Palette {
+	rw.once.Do(func() {
+		if cat, ok := rw.engine.(Catalog); ok {
+			if cs, err := cat.Colours(ctx); err == nil && len(cs) > 0 {
+				rw.pal = colour.NewPalette(cs)
+			}
+		}
+	})
+	return rw.pal
+}
+
+// wordEntry is a word a typo may be read as: a lexicon entry's name or
+// alias, or a value the catalog carries (entry nil).
+type wordEntry struct {
+	word  string
+	entry *lexicon.Entry
+	kind  parser.Kind
+}
+
+// words are the single words of the lexicon, and of the catalog's own
+// product types, colours, brands, materials and patterns, that a typo may
+// be read as.
+func (rw *Rewriter) words(ctx context.Context) []wordEntry {
+	rw.wordOnce.Do(func() {
+		if cat, ok := rw.engine.(Catalog); ok {
+			for _, f := range []parser.Kind{parser.KindProductType, parser.KindColour, parser.KindBrand, parser.KindMaterial, parser.KindPattern} {
+				vals, err := cat.Values(ctx, string(f), "", Plan{})
+				if err != nil {
+					continue
+				}
+				for _, v := range sortedKeys(vals) {
+					if !strings.ContainsAny(v, " -") && len(v) >= 4 {
+						rw.vocab = append(rw.vocab, wordEntry{word: v, kind: f})
+					}
+				}
+			}
+		}
+		for _, k := range []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern, lexicon.Silhouette, lexicon.Brand} {
+			for _, e := range rw.lex.Entries(k) {
+				for _, w := range append([]string{e.Name}, e.Aliases...) {
+					if !strings.ContainsAny(w, " -") && len(w) >= 4 {
+						rw.vocab = append(rw.vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e)})
+					}
+				}
+			}
+		}
+	})
+	return rw.vocab
+}
+
+// Step is one plan the planner asked the engine to count.
+type Step struct {
+	Relaxations []Relaxation `json:"relaxations"`
+	Count       int          `json:"count"`
+	Cost        float64      `json:"cost"`
+}
+
+// Missing names a hard constraint that nothing in the catalog matches
+// with the other hard constraints, and the values the catalog carries
+// instead.
+type Missing struct {
+	Constraint int      `json:"constraint"`
+	Text       string   `json:"text"`
+	Carried    []string `json:"carried"`
+}
+
+// Outcome is what a rescue did.
+type Outcome struct {
+	Query  string         `json:"query"`
+	Parsed *parser.Result `json:"parsed"`
+	Policy Effective      `json:"policy"`
+	// Exact is set when the query as typed found enough.
+	Exact bool `json:"exact"`
+	// Count is the final plan's count.
+	Count int `json:"count"`
+	// Plan is the final plan, for the engine's Search.
+	Plan Plan `json:"plan"`
+	// Relaxations are the changes in the final plan.
+	Relaxations []Relaxation `json:"relaxations"`
+	// Steps are every plan counted, in order.
+	Steps []Step `json:"steps"`
+	// Missing is set when the hard constraints alone match nothing.
+	Missing []Missing `json:"missing,omitempty"`
+	// Message is for the shopper; Explanation for developers.
+	Message     string `json:"message"`
+	Explanation string `json:"explanation"`
+	// Note says why the search stopped early (budget or deadline), or "".
+	Note string `json:"note,omitempty"`
+}
+
+// Rescue parses query, applies the policy, and relaxes it until the
+// engine finds at least the policy's minimum, within the budget and the
+// context's deadline. See [Rewriter.RescueParsed].
+func (rw *Rewriter) Rescue(ctx context.Context, query string) (*Outcome, error) {
+	r := parser.ParseWith(query, rw.parse)
+	return rw.RescueParsed(ctx, r)
+}
+
+// RescueParsed rescues a parsed query. Hard constraints and exclusions
+// are never relaxed; filler is dropped before anything is counted. The
+// planner searches relaxation sets cheapest first: cost comes from the
+// strictness of what is relaxed, from the operator (widening and typo
+// fixes cost less than dropping), and from the counts of each constraint
+// on its own (one that matches nothing alone is the first suspect; a
+// common one costs less to drop than a rare one). It never counts the
+// same plan twice. When the budget or the deadline runs out it returns
+// the best plan found so far, with a Note.
+func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcome, error) {
+	e := rw.policy.Apply(r, rw.lex)
+	out := &Outcome{Query: r.Query, Parsed: r, Policy: e}
+	s := &search{rw: rw, ctx: ctx, out: out, seen: make(map[string]int), budget: rw.budget}
+	items := rw.ladders(ctx, r, e)
+	s.items = items
+
+	exact := make([]int, len(items))
+	n, err := s.count(exact)
+	if err == errStop {
+		if ctx.Err() != nil {
+			return nil, ctx.Err()
+		}
+		return nil, errors.New("rewrite: the budget allows no count at all")
+	}
+	if err != nil {
+		return nil, err
+	}
+	if n >= e.MinResults {
+		out.Exact, out.Count, out.Plan = true, n, s.plan(exact)
+		out.Message = ""
+		out.Explanation = fmt.Sprintf("the query as typed finds %d", n)
+		return out, nil
+	}
+	// The hard constraints alone: if they find nothing, stop.
+	hard := s.hardOnly()
+	if hn, err := s.countPlan(hard, nil); err != nil {
+		return nil, err
+	} else if hn < e.MinResults && s.stopReason == "" {
+		rw.missing(ctx, s, hard)
+		out.Plan = hard
+		out.Count = hn
+		out.Message, out.Explanation = rw.hardStopMessage(out)
+		return out, nil
+	}
+	best, bestN := exact, n
+	if found, state, fn := s.bestFirst(e.MinResults); found {
+		best, bestN = state, fn
+	} else if state != nil && fn > bestN {
+		best, bestN = state, fn
+	}
+	out.Count, out.Plan, out.Relaxations = bestN, s.plan(best), s.relaxationsOf(best)
+	out.Note = s.stopReason
+	out.Message = rw.message(out, items, best)
+	out.Explanation = s.explain(best)
+	return out, nil
+}
+
+// search is the state of one rescue.
+type search struct {
+	rw         *Rewriter
+	ctx        context.Context
+	out        *Outcome
+	items      []*item
+	seen       map[string]int // plan key → count
+	budget     int
+	stopReason string
+}
+
+// plan builds the plan of a state: each item's clause at its level.
+func (s *search) plan(state []int) Plan {
+	var p Plan
+	for i, it := range s.items {
+		if cl := it.levels[state[i]].clause; cl != nil {
+			p.Clauses = append(p.Clauses, *cl)
+		}
+	}
+	return p
+}
+
+func (s *search) relaxationsOf(state []int) []Relaxation {
+	var rs []Relaxation
+	for i, it := range s.items {
+		if r := it.levels[state[i]].relax; r != nil {
+			rs = append(rs, *r)
+		}
+	}
+	return rs
+}
+
+func (s *search) cost(state []int) float64 {
+	var c float64
+	for i, it := range s.items {
+		c += it.scaled(state[i])
+	}
+	return c
+}
+
+// scaled is a level's cost, scaled by the evidence of the counts.
+func (it *item) scaled(l int) float64 {
+	c := it.levels[l].cost
+	switch {
+	case l == 0:
+		return 0
+	case it.solo == 0:
+		return c * 0.25 // matches nothing even alone: the first suspect
+	case it.solo > 0 && it.levels[l].relax.Operator == OpDrop:
+		// A rare constraint says more about what the shopper wants than
+		// a common one, so it costs more to drop.
+		return c * (0.75 + 0.5*it.rarity)
+	}
+	return c
+}
+
+// count counts a state's plan, once per distinct plan.
+func (s *search) count(state []int) (int, error) {
+	return s.countPlan(s.plan(state), state)
+}
+
+// errStop marks a count refused because the budget or deadline ran out.
+var errStop = fmt.Errorf("stopped")
+
+func (s *search) countPlan(p Plan, state []int) (int, error) {
+	key := p.Key()
+	if n, ok := s.seen[key]; ok {
+		return n, nil
+	}
+	if s.stopReason != "" {
+		return 0, errStop
+	}
+	if err := s.ctx.Err(); err != nil {
+		s.stopReason = "the deadline passed; showing the best plan found so far"
+		return 0, errStop
+	}
+	if s.budget <= 0 {
+		s.stopReason = fmt.Sprintf("the budget of %d engine counts ran out; showing the best plan found so far", s.rw.budget)
+		return 0, errStop
+	}
+	s.budget--
+	n, err := s.rw.engine.Count(s.ctx, p)
+	if err != nil {
+		if s.ctx.Err() != nil {
+			s.stopReason = "the deadline passed; showing the best plan found so far"
+			return 0, errStop
+		}
+		return 0, err
+	}
+	s.seen[key] = n
+	step := Step{Count: n}
+	if state != nil {
+		step.Relaxations, step.Cost = s.relaxationsOf(state), s.cost(state)
+	}
+	s.out.Steps = append(s.out.Steps, step)
+	return n, nil
+}
+
+// hardOnly is the plan of the constraints that are never relaxed.
+func (s *search) hardOnly() Plan {
+	var p Plan
+	for _, it := range s.items {
+		if len(it.levels) == 1 {
+			p.Clauses = append(p.Clauses, *it.levels[0].clause)
+		}
+	}
+	return p
+}
+
+// bestFirst searches relaxation sets cheapest first. It returns whether
+// a state reached min, and that state (or the best counted) with its
+// count.
+func (s *search) bestFirst(min int) (bool, []int, int) {
+	// Evidence first: each relaxable constraint's count on its own, while
+	// a third of the budget allows.
+	most := 0
+	for _, it := range s.items {
+		if len(it.levels) > 1 && s.budget > s.rw.budget*2/3 {
+			if n, err := s.countPlan(Plan{Clauses: []Clause{*it.levels[0].clause}}, nil); err == nil {
+				it.solo = n
+				most = max(most, n)
+			}
+		}
+	}
+	for _, it := range s.items {
+		if it.solo > 0 && most > 0 {
+			it.rarity = 1 - float64(it.solo)/float64(most)
+		}
+	}
+	pq := &queue{}
+	start := make([]int, len(s.items))
+	visited := map[string]bool{stateKey(start): true}
+	s.push(pq, start, visited)
+	var best []int
+	bestN := -1
+	for pq.Len() > 0 {
+		st := heap.Pop(pq).(entry).state
+		n, err := s.count(st)
+		if err == errStop {
+			break
+		}
+		if err != nil {
+			return false, best, bestN
+		}
+		if n > bestN {
+			best, bestN = st, n
+		}
+		if n >= min {
+			return true, st, n
+		}
+		s.push(pq, st, visited)
+	}
+	return false, best, bestN
+}
+
+// push queues the states one step down from st.
+func (s *search) push(pq *queue, st []int, visited map[string]bool) {
+	for i, it := range s.items {
+		if st[i]+1 >= len(it.levels) {
+			continue
+		}
+		next := append([]int(nil), st...)
+		next[i]++
+		k := stateKey(next)
+		if visited[k] {
+			continue
+		}
+		visited[k] = true
+		heap.Push(pq, entry{state: next, cost: s.cost(next), order: pq.n})
+		pq.n++
+	}
+}
+
+func stateKey(st []int) string { return fmt.Sprint(st) }
+
+type entry struct {
+	state []int
+	cost  float64
+	order int
+}
+
+// queue is a min-heap of states by cost, then by the order queued, so the
+// search is deterministic.
+type queue struct {
+	es []entry
+	n  int
+}
+
+func (q *queue) Len() int { return len(q.es) }
+func (q *queue) Less(i, j int) bool {
+	if q.es[i].cost != q.es[j].cost {
+		return q.es[i].cost < q.es[j].cost
+	}
+	return q.es[i].order < q.es[j].order
+}
+func (q *queue) Swap(i, j int) { q.es[i], q.es[j] = q.es[j], q.es[i] }
+func (q *queue) Push(x any)    { q.es = append(q.es, x.(entry)) }
+func (q *queue) Pop() any {
+	e := q.es[len(q.es)-1]
+	q.es = q.es[:len(q.es)-1]
+	return e
+}
+
+// explain writes the developer's account of the search.
+func (s *search) explain(best []int) string {
+	var b strings.Builder
+	for i, st := range s.out.Steps {
+		what := "the query as typed"
+		if len(st.Relaxations) > 0 {
+			var parts []string
+			for _, r := range st.Relaxations {
+				parts = append(parts, fmt.Sprintf("%s %q %s", r.Operator, r.Text, r.Detail))
+			}
+			what = strings.Join(parts, "; ")
+		} else if i > 0 {
+			what = "a constraint alone, or the hard constraints"
+		}
+		fmt.Fprintf(&b, "step %d: %s → %d\n", i+1, what, st.Count)
+	}
+	fmt.Fprintf(&b, "chosen: %d relaxation(s), %d results", len(s.relaxationsOf(best)), s.out.Count)
+	if s.stopReason != "" {
+		fmt.Fprintf(&b, "; %s", s.stopReason)
+	}
+	return b.String()
+}
+
+// missing finds the hard constraints that nothing matches alongside the
+// others, and what the catalog carries instead.
+func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
+	cat, _ := rw.engine.(Catalog)
+	for i, cl := range hard.Clauses {
+		if cl.Excluded {
+			continue
+		}
+		rest := Plan{Clauses: append(append([]Clause(nil), hard.Clauses[:i]...), hard.Clauses[i+1:]...)}
+		n, err := s.countPlan(rest, nil)
+		if err != nil || n == 0 {
+			continue
+		}
+		m := Missing{Constraint: cl.From, Text: s.out.Parsed.Constraints[cl.From].Text}
+		if cat != nil {
+			// Among products of the kind asked for.
+			like := rest
+			for _, it := range s.items {
+				if it.c.Kind == parser.KindProductType && !it.c.Excluded {
+					like.Clauses = append(slices.Clone(like.Clauses), *it.levels[0].clause)
+				}
+			}
+			if vals, err := cat.Values(ctx, cl.Field, cl.Dimension, like); err == nil {
+				m.Carried = carried(vals)
+				if cl.Field == string(parser.KindMeasure) && cl.Unit != "" {
+					for j := range m.Carried {
+						m.Carried[j] += " " + cl.Unit
+					}
+				}
+			}
+		}
+		s.out.Missing = append(s.out.Missing, m)
+	}
+}
+
+// carried lists the values a catalog carries, numbers in order.
+func carried(vals map[string]int) []string {
+	out := make([]string, 0, len(vals))
+	for v := range vals {
+		out = append(out, v)
+	}
+	sort.Slice(out, func(i, j int) bool {
+		a, errA := parseNum(out[i])
+		b, errB := parseNum(out[j])
+		if errA == nil && errB == nil && a != b {
+			return a < b
+		}
+		return out[i] < out[j]
+	})
+	return out
+}
+
+func parseNum(s string) (float64, error) {
+	var v float64
+	_, err := fmt.Sscan(s, &v)
+	if err == nil && (math.IsNaN(v) || math.IsInf(v, 0)) {
+		err = fmt.Errorf("not finite")
+	}
+	return v, err
+}
