@@ -28,7 +28,8 @@ type Rewriter struct {
 	parse  parser.Options
 	budget int
 
-	once     sync.Once
+	mu       sync.Mutex
+	palDone  bool
 	pal      *colour.Palette
 	wordOnce sync.Once
 	vocab    []wordEntry
@@ -63,15 +64,26 @@ func New(engine Engine, policy *Policy, opts ...Option) *Rewriter {
 	return rw
 }
 
-// palette is the catalog's colours, asked of the engine once.
+// palette is the catalog's colours, asked of the engine until it answers.
 func (rw *Rewriter) palette(ctx context.Context) *colour.Palette {
-	rw.once.Do(func() {
-		if cat, ok := rw.engine.(Catalog); ok {
-			if cs, err := cat.Colours(ctx); err == nil && len(cs) > 0 {
-				rw.pal = colour.NewPalette(cs)
-			}
-		}
-	})
+	rw.mu.Lock()
+	defer rw.mu.Unlock()
+	if rw.palDone {
+		return rw.pal
+	}
+	cat, ok := rw.engine.(Catalog)
+	if !ok {
+		rw.palDone = true
+		return nil
+	}
+	cs, err := cat.Colours(ctx)
+	if err != nil {
+		return nil // a failed or cancelled call is tried again next time
+	}
+	if len(cs) > 0 {
+		rw.pal = colour.NewPalette(cs)
+	}
+	rw.palDone = true
 	return rw.pal
 }
 
