@@ -175,7 +175,8 @@ func (rw *Rewriter) Rescue(ctx context.Context, query string) (*Outcome, error) 
 }
 
 // RescueParsed rescues a parsed query. Hard constraints and exclusions
-// are never relaxed; filler is dropped before anything is counted. The
+// are never relaxed, and the head product type is widened but never
+// dropped; filler is dropped before anything is counted. The
 // planner searches relaxation sets cheapest first: cost comes from the
 // strictness of what is relaxed, from the operator (widening and typo
 // fixes cost less than dropping), and from the counts of each constraint
