@@ -1,0 +1,215 @@
+package bleveengine
+
+import (
+	"context"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"sort"
+
+	"github.com/blevesearch/bleve/v2"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// vocabFile holds, beside the index, the catalog's colour vocabulary.
+const vocabFile = "whittle-vocabulary.json"
+
+// BuildOptions tune Build. The zero value is ready to use.
+type BuildOptions struct {
+	// BatchSize is how many products go into one batch (default 1000).
+	BatchSize int
+	// SkipBad skips malformed lines, listing them in Stats.Skipped,
+	// instead of stopping at the first.
+	SkipBad bool
+	// Progress, when set, is called after each batch with the number of
+	// products indexed so far.
+	Progress func(indexed int)
+	// Lexicon reads colour names without a value; nil means the default.
+	Lexicon *lexicon.Lexicon
+}
+
+// Stats reports a build.
+type Stats struct {
+	Products int `json:"products"`
+	// Skipped are the malformed lines passed over with SkipBad.
+	Skipped []*catalog.LineError `json:"skipped,omitempty"`
+	Colours int                  `json:"colours"`
+}
+
+type vocabulary struct {
+	Colours []vocabColour `json:"colours"`
+}
+
+type vocabColour struct {
+	Name  string     `json:"name"`
+	Lab   [3]float64 `json:"lab"`
+	Count int        `json:"count"`
+}
+
+// Build reads a catalog from r and writes an index at dir, replacing any
+// index already there only once the new one is complete.
+func Build(ctx context.Context, r io.Reader, dir string, opts BuildOptions) (*Stats, error) {
+	if opts.BatchSize <= 0 {
+		opts.BatchSize = 1000
+	}
+	lex := opts.Lexicon
+	if lex == nil {
+		lex = lexicon.Default()
+	}
+	parent := filepath.Dir(dir)
+	if err := os.MkdirAll(parent, 0o755); err != nil {
+		return nil, err
+	}
+	tmp, err := os.MkdirTemp(parent, "."+filepath.Base(dir)+".building-")
+	if err != nil {
+		return nil, err
+	}
+	ok := false
+	defer func() {
+		if !ok {
+			os.RemoveAll(tmp)
+		}
+	}()
+	idxDir := filepath.Join(tmp, "index")
+	idx, err := bleve.New(idxDir, indexMapping())
+	if err != nil {
+		return nil, fmt.Errorf("creating the index: %w", err)
+	}
+	stats, err := fill(ctx, idx, r, opts, lex)
+	if cerr := idx.Close(); err == nil && cerr != nil {
+		err = cerr
+	}
+	if err != nil {
+		return nil, err
+	}
+	if err := writeVocabulary(filepath.Join(tmp, vocabFile), stats.colours); err != nil {
+		return nil, err
+	}
+	stats.Colours = len(stats.colours)
+	if err := swap(tmp, dir); err != nil {
+		return nil, err
+	}
+	ok = true
+	return &stats.Stats, nil
+}
+
+type buildStats struct {
+	Stats
+	colours map[string]*vocabColour
+}
+
+func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon) (*buildStats, error) {
+	rd := catalog.NewReader(r, lex)
+	st := &buildStats{colours: make(map[string]*vocabColour)}
+	batch := idx.NewBatch()
+	flush := func() error {
+		if batch.Size() == 0 {
+			return nil
+		}
+		if err := idx.Batch(batch); err != nil {
+			return err
+		}
+		batch.Reset()
+		if opts.Progress != nil {
+			opts.Progress(st.Products)
+		}
+		return nil
+	}
+	for {
+		if err := ctx.Err(); err != nil {
+			return nil, err
+		}
+		p, err := rd.Next()
+		if err == io.EOF {
+			break
+		}
+		var le *catalog.LineError
+		if errors.As(err, &le) && opts.SkipBad {
+			st.Skipped = append(st.Skipped, le)
+			continue
+		}
+		if err != nil {
+			return nil, err
+		}
+		doc, lab, err := document(p, rd, lex)
+		if err != nil {
+			le := &catalog.LineError{Line: rd.Line(), Msg: err.Error()}
+			if opts.SkipBad {
+				st.Skipped = append(st.Skipped, le)
+				continue
+			}
+			return nil, le
+		}
+		if err := batch.Index(p.ID, doc); err != nil {
+			return nil, err
+		}
+		st.Products++
+		if name := norm(p.Colour); name != "" && lab != nil {
+			c := st.colours[name]
+			if c == nil {
+				c = &vocabColour{Name: name, Lab: [3]float64{lab.L, lab.A, lab.B}}
+				st.colours[name] = c
+			}
+			c.Count++
+		}
+		if batch.Size() >= opts.BatchSize {
+			if err := flush(); err != nil {
+				return nil, err
+			}
+		}
+	}
+	if st.Products == 0 {
+		return nil, errors.New("the catalog has no products")
+	}
+	return st, flush()
+}
+
+func writeVocabulary(path string, cs map[string]*vocabColour) error {
+	v := vocabulary{}
+	for _, c := range cs {
+		v.Colours = append(v.Colours, *c)
+	}
+	sort.Slice(v.Colours, func(i, j int) bool { return v.Colours[i].Name < v.Colours[j].Name })
+	b, err := json.Marshal(v)
+	if err != nil {
+		return err
+	}
+	return os.WriteFile(path, b, 0o644)
+}
+
+// swap puts the finished directory tmp at dir: the old index, if any, is
+// moved aside first and removed once the new one is in place.
+func swap(tmp, dir string) error {
+	old := ""
+	if _, err := os.Stat(dir); err == nil {
+		old = dir + ".old"
+		os.RemoveAll(old)
+		if err := os.Rename(dir, old); err != nil {
+			return fmt.Errorf("moving the old index aside: %w", err)
+		}
+	}
+	if err := os.Rename(tmp, dir); err != nil {
+		if old != "" {
+			os.Rename(old, dir)
+		}
+		return fmt.Errorf("putting the new index in place: %w", err)
+	}
+	if old != "" {
+		os.RemoveAll(old)
+	}
+	return nil
+}
+
+func (v vocabulary) palette() []colour.PaletteColour {
+	out := make([]colour.PaletteColour, len(v.Colours))
+	for i, c := range v.Colours {
+		out[i] = colour.PaletteColour{Name: c.Name, Lab: colour.Lab{L: c.Lab[0], A: c.Lab[1], B: c.Lab[2]}, Count: c.Count}
+	}
+	return out
+}

@@ -1,0 +1,212 @@
+package bleveengine
+
+import (
+	"context"
+	"encoding/json"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"github.com/blevesearch/bleve/v2"
+	"github.com/blevesearch/bleve/v2/search/query"
+
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/rewrite"
+)
+
+// Engine is an open index. It is safe for concurrent use.
+type Engine struct {
+	idx   bleve.Index
+	vocab vocabulary
+}
+
+// Open opens the index Build wrote at dir.
+func Open(dir string) (*Engine, error) {
+	st, err := os.Stat(dir)
+	if err != nil {
+		return nil, fmt.Errorf("no index at %s (build one with whittle index): %w", dir, err)
+	}
+	if !st.IsDir() {
+		return nil, fmt.Errorf("%s is not an index directory", dir)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, vocabFile))
+	if err != nil {
+		return nil, fmt.Errorf("%s is not a whittle index: %w", dir, err)
+	}
+	var v vocabulary
+	if err := json.Unmarshal(b, &v); err != nil {
+		return nil, fmt.Errorf("%s: the colour vocabulary is damaged: %w", dir, err)
+	}
+	idx, err := bleve.Open(filepath.Join(dir, "index"))
+	if err != nil {
+		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
+	}
+	return &Engine{idx: idx, vocab: v}, nil
+}
+
+// Close closes the index.
+func (e *Engine) Close() error { return e.idx.Close() }
+
+// Count returns how many products match every clause of p.
+func (e *Engine) Count(ctx context.Context, p rewrite.Plan) (int, error) {
+	req := bleve.NewSearchRequestOptions(toQuery(p), 0, 0, false)
+	res, err := e.idx.SearchInContext(ctx, req)
+	if err != nil {
+		return 0, err
+	}
+	return int(res.Total), nil
+}
+
+// Search returns the k best products that match p.
+func (e *Engine) Search(ctx context.Context, p rewrite.Plan, k int) ([]rewrite.Hit, error) {
+	shown, err := e.Show(ctx, p, k)
+	if err != nil {
+		return nil, err
+	}
+	hits := make([]rewrite.Hit, len(shown))
+	for i, s := range shown {
+		hits[i] = rewrite.Hit{ID: s.ID, Score: s.Score}
+	}
+	return hits, nil
+}
+
+// Shown is a product as a search shows it.
+type Shown struct {
+	ID      string  `json:"id"`
+	Title   string  `json:"title"`
+	Price   string  `json:"price,omitempty"`
+	Colour  string  `json:"colour,omitempty"`
+	InStock bool    `json:"in_stock"`
+	Score   float64 `json:"score"`
+}
+
+// Show returns the k best products that match p, with what a result
+// list shows of them.
+func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
+	req := bleve.NewSearchRequestOptions(toQuery(p), k, 0, false)
+	req.Fields = []string{fStored}
+	req.SortBy([]string{"-_score", "_id"})
+	res, err := e.idx.SearchInContext(ctx, req)
+	if err != nil {
+		return nil, err
+	}
+	out := make([]Shown, 0, len(res.Hits))
+	for _, h := range res.Hits {
+		s := Shown{ID: h.ID, Score: h.Score}
+		if v, ok := h.Fields[fStored].(string); ok {
+			parts := strings.Split(v, "\x1f")
+			if len(parts) == 4 {
+				s.Title, s.Price, s.Colour, s.InStock = parts[0], parts[1], parts[2], parts[3] == "true"
+			}
+		}
+		out = append(out, s)
+	}
+	return out, nil
+}
+
+// Colours returns the colours the catalog carries.
+func (e *Engine) Colours(context.Context) ([]colour.PaletteColour, error) {
+	return e.vocab.palette(), nil
+}
+
+// Values returns the values of a field that the products matching within
+// carry, with their counts; measures give their amounts in base units.
+func (e *Engine) Values(ctx context.Context, field, dimension string, within rewrite.Plan) (map[string]int, error) {
+	f, ok := facetField(field, dimension)
+	if !ok {
+		return nil, fmt.Errorf("bleveengine: no values for field %q", field)
+	}
+	req := bleve.NewSearchRequestOptions(toQuery(within), 0, 0, false)
+	req.AddFacet("v", bleve.NewFacetRequest(f, 1000))
+	res, err := e.idx.SearchInContext(ctx, req)
+	if err != nil {
+		return nil, err
+	}
+	out := map[string]int{}
+	if fr, ok := res.Facets["v"]; ok && fr.Terms != nil {
+		for _, t := range fr.Terms.Terms() {
+			out[t.Term] = t.Count
+		}
+	}
+	return out, nil
+}
+
+// facetField is the index field whose terms list a field's values.
+func facetField(field, dimension string) (string, bool) {
+	switch field {
+	case "measure":
+		return measureValueField(dimension), dimension != ""
+	case "spec":
+		return specField(dimension), dimension != ""
+	case "product_type", "colour", "pattern", "silhouette", "material", "audience", "brand", "size", "compatibility", "part_number", "category":
+		return field, true
+	}
+	return "", false
+}
+
+// toQuery turns a plan into a bleve query: a conjunction of one query per
+// clause, an excluded clause as a must-not.
+func toQuery(p rewrite.Plan) query.Query {
+	if len(p.Clauses) == 0 {
+		return bleve.NewMatchAllQuery()
+	}
+	b := bleve.NewBooleanQuery()
+	must := 0
+	for _, c := range p.Clauses {
+		q := clauseQuery(c)
+		if c.Excluded {
+			b.AddMustNot(q)
+			continue
+		}
+		b.AddMust(q)
+		must++
+	}
+	if must == 0 {
+		b.AddMust(bleve.NewMatchAllQuery())
+	}
+	return b
+}
+
+func clauseQuery(c rewrite.Clause) query.Query {
+	t := true
+	switch c.Field {
+	case "measure":
+		q := bleve.NewNumericRangeInclusiveQuery(c.Min, c.Max, &t, &t)
+		q.SetField(measureField(c.Dimension))
+		return q
+	case "price":
+		q := bleve.NewNumericRangeInclusiveQuery(c.Min, c.Max, &t, &t)
+		q.SetField(fPrice)
+		cur := bleve.NewTermQuery(c.Unit)
+		cur.SetField(fCurrency)
+		return bleve.NewConjunctionQuery(q, cur)
+	case "keyword":
+		var qs []query.Query
+		for _, v := range c.Values {
+			for _, f := range []string{fTitle, fDesc} {
+				m := bleve.NewMatchQuery(v)
+				m.SetField(f)
+				m.SetOperator(query.MatchQueryOperatorAnd)
+				qs = append(qs, m)
+			}
+		}
+		return bleve.NewDisjunctionQuery(qs...)
+	}
+	field := c.Field
+	if c.Field == "spec" {
+		field = specField(c.Dimension)
+	}
+	if len(c.Values) == 1 {
+		q := bleve.NewTermQuery(norm(c.Values[0]))
+		q.SetField(field)
+		return q
+	}
+	qs := make([]query.Query, 0, len(c.Values))
+	for _, v := range c.Values {
+		q := bleve.NewTermQuery(norm(v))
+		q.SetField(field)
+		qs = append(qs, q)
+	}
+	return bleve.NewDisjunctionQuery(qs...)
+}

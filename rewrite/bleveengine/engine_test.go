@@ -1,0 +1,159 @@
+package bleveengine
+
+import (
+	"context"
+	"errors"
+	"os"
+	"path/filepath"
+	"slices"
+	"strings"
+	"testing"
+
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// testdata/catalog/shop.jsonl is an invented shop of 13 products; each
+// expected value below is worked out by hand from it.
+func openShop(t *testing.T) *Engine {
+	t.Helper()
+	f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	dir := filepath.Join(t.TempDir(), "idx")
+	st, err := Build(context.Background(), f, dir, BuildOptions{BatchSize: 4})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if st.Products != 13 {
+		t.Errorf("indexed %d products, want 13", st.Products)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Cleanup(func() { e.Close() })
+	return e
+}
+
+func TestRescueOnTheIndex(t *testing.T) {
+	e := openShop(t)
+	rw := rewrite.New(e, nil)
+	for _, tc := range []struct {
+		query, reason string
+		exact         bool
+		count         int
+		ops           []string
+		message       string
+	}{
+		{"womens rain jacket size m", "RJ-1 and RJ-2 are women's rain jackets in m", true, 2, nil, ""},
+		{"rain jacket", "three rain jackets", true, 3, nil, ""},
+		{"mustard rain jacket", "harvest gold (#dfaa0a) is within ΔE00 4 of mustard: RJ-1", false, 1, []string{"widen colour"}, "colours close to mustard"},
+		{"striped rain jacket", "no striped rain jacket; pattern is soft: all three", false, 3, []string{"drop pattern"}, "in any pattern"},
+		{"merino crew sweater oatmeal", "the oatmeal sweater is wool (SW-2): merino is dropped, not the colour", false, 1, []string{"drop material"}, "in any material"},
+		{"trail running shoes size 13", "sizes 7 to 12 only; size is hard", false, 0, nil, "sizes carried: 7, 8, 9, 10, 11, 12"},
+		{"85 lens", "focal length is hard in camera; 35 and 50 mm are carried", false, 0, nil, "focal lengths carried: 35 mm, 50 mm"},
+		{"50mm lens for jx-10", "LN-1 fits jx-10 at 50 mm", true, 1, nil, ""},
+		{"2x4 12 ft", "no 12 ft stud; lumber length widens to the standard sizes around it, 10 to 14 ft: LB-2", false, 1, []string{"widen measure"}, "standard lengths"},
+		{"5x8 rug", "the rug is 5 by 7.5 ft: 8 ft ±10% holds 7.5", false, 1, []string{"widen measure"}, "about 8 ft"},
+		{"rain jacket under $50", "the cheapest is 55.00; a 15% stretch reaches 57.50: RJ-3", false, 1, []string{"widen price"}, "up to 57.50 USD"},
+		{"14 awg wire", "12 AWG only; a gauge is never substituted", false, 0, nil, "12 awg"},
+		{"not black lens", "both lenses are black", false, 0, nil, ""},
+	} {
+		t.Run(tc.query, func(t *testing.T) {
+			o, err := rw.Rescue(context.Background(), tc.query)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var ops []string
+			for _, r := range o.Relaxations {
+				ops = append(ops, r.Operator+" "+string(r.Kind))
+			}
+			if o.Exact != tc.exact || o.Count != tc.count || !slices.Equal(ops, tc.ops) {
+				t.Errorf("%s: exact=%v count=%d ops=%v; want %v %d %v\n%s", tc.reason, o.Exact, o.Count, ops, tc.exact, tc.count, tc.ops, o.Explanation)
+			}
+			if !strings.Contains(o.Message, tc.message) {
+				t.Errorf("%s: message %q lacks %q", tc.reason, o.Message, tc.message)
+			}
+		})
+	}
+}
+
+func TestShow(t *testing.T) {
+	e := openShop(t)
+	shown, err := e.Show(context.Background(), rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens"}}}}, 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(shown) != 2 || shown[0].Title == "" {
+		t.Fatalf("shown = %+v", shown)
+	}
+	for _, s := range shown {
+		// LN-2 is marked in_stock false in the catalog.
+		if s.ID == "LN-2" && s.InStock || s.ID == "LN-1" && !s.InStock {
+			t.Errorf("%s in stock = %v", s.ID, s.InStock)
+		}
+	}
+}
+
+func TestBuildErrors(t *testing.T) {
+	for _, tc := range []struct {
+		name, text string
+		line       int
+		field, msg string
+	}{
+		{"not json", "{\"id\": \"a\", \"title\": \"x\"}\nnot json\n", 2, "", "not a JSON object"},
+		{"bad measure", `{"id": "a", "title": "x", "measures": {"length": "long"}}`, 1, "measures", "length"},
+		{"duplicate id", "{\"id\": \"a\", \"title\": \"x\"}\n{\"id\": \"a\", \"title\": \"y\"}\n", 2, "id", "line 1"},
+		{"wrong type", `{"id": "a", "title": "x", "sizes": "m"}`, 1, "sizes", "want"},
+		{"bad spec", `{"id": "a", "title": "x", "spec": ["3x5"]}`, 1, "spec", "not a standard designation"},
+		{"bad currency", `{"id": "a", "title": "x", "price": {"amount": "5", "currency": "XYZ"}}`, 1, "price", "ISO 4217"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			dir := filepath.Join(t.TempDir(), "idx")
+			_, err := Build(context.Background(), strings.NewReader(tc.text), dir, BuildOptions{})
+			var le *catalog.LineError
+			if !errors.As(err, &le) || le.Line != tc.line || le.Field != tc.field || !strings.Contains(le.Msg, tc.msg) {
+				t.Fatalf("got %v, want line %d field %q containing %q", err, tc.line, tc.field, tc.msg)
+			}
+			if _, err := os.Stat(dir); !os.IsNotExist(err) {
+				t.Errorf("a failed build left %s behind", dir)
+			}
+		})
+	}
+	if _, err := Build(context.Background(), strings.NewReader("\n\n"), filepath.Join(t.TempDir(), "idx"), BuildOptions{}); err == nil || !strings.Contains(err.Error(), "no products") {
+		t.Errorf("an empty catalog gave %v", err)
+	}
+}
+
+func TestSkipBadAndAtomicReplace(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	good := "{\"id\": \"a\", \"title\": \"Tarn fleece\", \"product_type\": \"fleece\"}\n"
+	if _, err := Build(context.Background(), strings.NewReader(good), dir, BuildOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	// A failing rebuild leaves the old index as it was.
+	if _, err := Build(context.Background(), strings.NewReader("not json\n"), dir, BuildOptions{}); err == nil {
+		t.Fatal("a bad catalog built")
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatalf("the old index was lost: %v", err)
+	}
+	if n, _ := e.Count(context.Background(), rewrite.Plan{}); n != 1 {
+		t.Errorf("old index has %d products, want 1", n)
+	}
+	e.Close()
+	st, err := Build(context.Background(), strings.NewReader(good+"not json\n{\"id\": \"b\", \"title\": \"Scree beanie\"}\n"), dir, BuildOptions{SkipBad: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if st.Products != 2 || len(st.Skipped) != 1 || st.Skipped[0].Line != 2 {
+		t.Errorf("stats = %+v", st)
+	}
+	if _, err := Open(filepath.Join(t.TempDir(), "none")); err == nil {
+		t.Error("opening a missing index gave no error")
+	}
+}

@@ -1,0 +1,168 @@
+package bleveengine
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"github.com/blevesearch/bleve/v2/analysis/analyzer/keyword"
+	"github.com/blevesearch/bleve/v2/analysis/lang/en"
+	"github.com/blevesearch/bleve/v2/mapping"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// Field names in the index. Measures and designations get one field per
+// dimension or system: "m.focal_length" (numeric, base unit),
+// "mv.focal_length" (the same value as a keyword, for listing the values
+// carried) and "spec.lumber".
+const (
+	fID         = "id"
+	fTitle      = "title"
+	fDesc       = "description"
+	fType       = "product_type"
+	fCategory   = "category"
+	fBrand      = "brand"
+	fColour     = "colour"
+	fPattern    = "pattern"
+	fSilhouette = "silhouette"
+	fMaterial   = "material"
+	fAudience   = "audience"
+	fSizes      = "size"
+	fPrice      = "price"
+	fCurrency   = "currency"
+	fCompat     = "compatibility"
+	fPart       = "part_number"
+	fInStock    = "in_stock"
+	fL, fA, fB  = "lab_l", "lab_a", "lab_b"
+	fStored     = "show"
+)
+
+func measureField(dim string) string      { return "m." + dim }
+func measureValueField(dim string) string { return "mv." + dim }
+func specField(system string) string      { return "spec." + system }
+
+// indexMapping is whittle's mapping: keyword fields for attributes,
+// numeric fields for measures, prices and Lab, text with the en analyzer
+// for title and description, and one stored field for display.
+func indexMapping() *mapping.IndexMappingImpl {
+	kw := mapping.NewKeywordFieldMapping()
+	kw.Store = false
+	text := mapping.NewTextFieldMapping()
+	text.Analyzer = en.AnalyzerName
+	text.Store = false
+	num := mapping.NewNumericFieldMapping()
+	num.Store = false
+	stored := mapping.NewTextFieldMapping()
+	stored.Index = false
+	stored.Store = true
+	stored.IncludeInAll = false
+
+	doc := mapping.NewDocumentMapping()
+	for _, f := range []string{fID, fType, fCategory, fBrand, fColour, fPattern, fSilhouette, fMaterial, fAudience, fSizes, fCurrency, fCompat, fPart, fInStock} {
+		doc.AddFieldMappingsAt(f, kw)
+	}
+	doc.AddFieldMappingsAt(fTitle, text)
+	doc.AddFieldMappingsAt(fDesc, text)
+	for _, f := range []string{fPrice, fL, fA, fB} {
+		doc.AddFieldMappingsAt(f, num)
+	}
+	doc.AddFieldMappingsAt(fStored, stored)
+	// Measures and designations: dynamic sub-documents of known types.
+	m := mapping.NewDocumentMapping()
+	m.Dynamic = true
+	m.DefaultAnalyzer = keyword.Name
+	doc.AddSubDocumentMapping("m", m)
+	mv := mapping.NewDocumentMapping()
+	mv.Dynamic = true
+	mv.DefaultAnalyzer = keyword.Name
+	doc.AddSubDocumentMapping("mv", mv)
+	spec := mapping.NewDocumentMapping()
+	spec.Dynamic = true
+	spec.DefaultAnalyzer = keyword.Name
+	doc.AddSubDocumentMapping("spec", spec)
+
+	im := mapping.NewIndexMapping()
+	im.DefaultMapping = doc
+	im.DefaultAnalyzer = keyword.Name
+	im.StoreDynamic = false
+	im.IndexDynamic = true
+	im.DocValuesDynamic = true
+	return im
+}
+
+// norm is how attribute values are stored and asked for.
+func norm(s string) string { return strings.Join(strings.Fields(lexicon.Normalise(s)), " ") }
+
+// document turns a product into what the index stores, with its Lab
+// value (from the line, else the lexicon) when it has a colour.
+func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[string]any, *colour.Lab, error) {
+	d := map[string]any{
+		fID: p.ID, fTitle: p.Title, fDesc: p.Description, fType: norm(p.ProductType), fCategory: norm(p.Category),
+		fBrand: norm(p.Brand), fColour: norm(p.Colour), fPattern: norm(p.Pattern), fSilhouette: norm(p.Silhouette),
+		fMaterial: norm(p.Material), fAudience: norm(p.Audience), fPart: strings.ToLower(p.PartNumber),
+	}
+	in := p.InStock == nil || *p.InStock
+	d[fInStock] = strconv.FormatBool(in)
+	var sizes []string
+	for _, s := range p.Sizes {
+		sizes = append(sizes, norm(s))
+	}
+	d[fSizes] = sizes
+	var compat []string
+	for _, c := range p.CompatibleWith {
+		compat = append(compat, norm(c))
+	}
+	d[fCompat] = compat
+	ms, mvs := map[string]any{}, map[string]any{}
+	for dim, text := range p.Measures {
+		m, err := r.Measure(text)
+		if err != nil {
+			return nil, nil, fmt.Errorf("measure %s: %w", dim, err)
+		}
+		ms[dim] = *m.BaseAmount
+		mvs[dim] = strconv.FormatFloat(*m.BaseAmount, 'g', -1, 64)
+	}
+	d["m"], d["mv"] = ms, mvs
+	specs := map[string]any{}
+	for _, s := range p.Spec {
+		sp, err := r.Spec(s)
+		if err != nil {
+			return nil, nil, fmt.Errorf("spec %q: %w", s, err)
+		}
+		specs[sp.System] = strings.ToLower(sp.Designation)
+	}
+	d["spec"] = specs
+	if p.Price != nil {
+		v, err := strconv.ParseFloat(p.Price.Amount, 64)
+		if err == nil {
+			d[fPrice] = v
+			d[fCurrency] = p.Price.Currency
+		}
+	}
+	var lab *colour.Lab
+	switch {
+	case p.ColourLab != nil:
+		lab = &colour.Lab{L: p.ColourLab[0], A: p.ColourLab[1], B: p.ColourLab[2]}
+	case p.ColourHex != "":
+		if rgb, err := colour.ParseHex(p.ColourHex); err == nil {
+			l := rgb.Lab()
+			lab = &l
+		}
+	case p.Colour != "":
+		if _, l, ok := lex.ColourNamed(p.Colour); ok {
+			lab = &l
+		}
+	}
+	if lab != nil {
+		d[fL], d[fA], d[fB] = lab.L, lab.A, lab.B
+	}
+	price := ""
+	if p.Price != nil {
+		price = p.Price.Amount + " " + p.Price.Currency
+	}
+	d[fStored] = strings.Join([]string{p.Title, price, p.Colour, strconv.FormatBool(in)}, "\x1f")
+	return d, lab, nil
+}

@@ -1,0 +1,201 @@
+package catalog
+
+import (
+	"bufio"
+	"bytes"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"strings"
+
+	"github.com/bojanz/currency"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/parser"
+)
+
+// Reader reads a catalog product by product, checking each line.
+type Reader struct {
+	sc   *bufio.Scanner
+	lex  *lexicon.Lexicon
+	line int
+	ids  map[string]int
+}
+
+// NewReader reads the catalog in r.
+func NewReader(r io.Reader, lex *lexicon.Lexicon) *Reader {
+	sc := bufio.NewScanner(r)
+	sc.Buffer(make([]byte, 64<<10), MaxLine)
+	if lex == nil {
+		lex = lexicon.Default()
+	}
+	return &Reader{sc: sc, lex: lex, ids: make(map[string]int)}
+}
+
+// Line is the number of the line last read.
+func (r *Reader) Line() int { return r.line }
+
+// Next returns the next product, or io.EOF at the end. A malformed line
+// returns a *LineError naming the line and field; reading may go on
+// after it with the next line.
+func (r *Reader) Next() (*Product, error) {
+	for r.sc.Scan() {
+		r.line++
+		text := bytes.TrimSpace(r.sc.Bytes())
+		if len(text) == 0 {
+			continue
+		}
+		p, err := r.decode(text)
+		if err != nil {
+			return nil, err
+		}
+		return p, nil
+	}
+	if err := r.sc.Err(); err != nil {
+		r.line++
+		if errors.Is(err, bufio.ErrTooLong) {
+			return nil, &LineError{Line: r.line, Msg: fmt.Sprintf("longer than %d bytes", MaxLine)}
+		}
+		return nil, err
+	}
+	return nil, io.EOF
+}
+
+func (r *Reader) decode(text []byte) (*Product, error) {
+	fail := func(field, format string, args ...any) error {
+		return &LineError{Line: r.line, Field: field, Msg: fmt.Sprintf(format, args...)}
+	}
+	var fields map[string]json.RawMessage
+	if err := json.Unmarshal(text, &fields); err != nil {
+		return nil, fail("", "not a JSON object: %v", err)
+	}
+	var p Product
+	for name, raw := range fields {
+		if err := decodeField(&p, name, raw); err != nil {
+			return nil, fail(name, "%v", err)
+		}
+	}
+	if strings.TrimSpace(p.ID) == "" {
+		return nil, fail("id", "missing; every line needs it")
+	}
+	if strings.TrimSpace(p.Title) == "" {
+		return nil, fail("title", "missing; every line needs it")
+	}
+	if first, dup := r.ids[p.ID]; dup {
+		return nil, fail("id", "%q is already the id of line %d", p.ID, first)
+	}
+	r.ids[p.ID] = r.line
+	if p.ColourHex != "" {
+		if _, err := colour.ParseHex(p.ColourHex); err != nil {
+			return nil, fail("colour_hex", "%v", err)
+		}
+	}
+	if l := p.ColourLab; l != nil && (l[0] < 0 || l[0] > 100 || l[1] < -200 || l[1] > 200 || l[2] < -200 || l[2] > 200) {
+		return nil, fail("colour_lab", "L must be 0..100 and a, b within -200..200")
+	}
+	for dim, m := range p.Measures {
+		if _, err := r.Measure(m); err != nil {
+			return nil, fail("measures", "%s %q: %v", dim, m, err)
+		}
+	}
+	for _, s := range p.Spec {
+		if _, err := r.Spec(s); err != nil {
+			return nil, fail("spec", "%q: %v", s, err)
+		}
+	}
+	if p.Price != nil {
+		if !currency.IsValid(p.Price.Currency) {
+			return nil, fail("price", "currency %q is not an ISO 4217 code", p.Price.Currency)
+		}
+		if _, err := currency.NewAmount(p.Price.Amount, p.Price.Currency); err != nil {
+			return nil, fail("price", "amount %q is not a decimal amount", p.Price.Amount)
+		}
+	}
+	if p.ProductType != "" {
+		p.ProductType = strings.ToLower(strings.TrimSpace(p.ProductType))
+	}
+	return &p, nil
+}
+
+// decodeField decodes one field, so that a type error names its field.
+func decodeField(p *Product, name string, raw json.RawMessage) error {
+	var dst any
+	switch name {
+	case "id":
+		dst = &p.ID
+	case "title":
+		dst = &p.Title
+	case "description":
+		dst = &p.Description
+	case "product_type":
+		dst = &p.ProductType
+	case "category":
+		dst = &p.Category
+	case "brand":
+		dst = &p.Brand
+	case "colour", "color":
+		dst = &p.Colour
+	case "colour_hex", "color_hex":
+		dst = &p.ColourHex
+	case "colour_lab", "color_lab":
+		dst = &p.ColourLab
+	case "pattern":
+		dst = &p.Pattern
+	case "silhouette":
+		dst = &p.Silhouette
+	case "material":
+		dst = &p.Material
+	case "audience":
+		dst = &p.Audience
+	case "sizes":
+		dst = &p.Sizes
+	case "measures":
+		dst = &p.Measures
+	case "price":
+		dst = &p.Price
+	case "spec":
+		dst = &p.Spec
+	case "compatible_with":
+		dst = &p.CompatibleWith
+	case "part_number":
+		dst = &p.PartNumber
+	case "in_stock":
+		dst = &p.InStock
+	default:
+		return nil // fields whittle does not read are kept out of its way
+	}
+	if err := json.Unmarshal(raw, dst); err != nil {
+		var te *json.UnmarshalTypeError
+		if errors.As(err, &te) {
+			return fmt.Errorf("want %s, not %s", te.Type, te.Value)
+		}
+		return err
+	}
+	return nil
+}
+
+// Measure reads a catalog measure ("74 cm") with whittle's parser.
+func (r *Reader) Measure(s string) (*parser.Measure, error) {
+	res := parser.ParseWith(s, parser.Options{Lexicon: r.lex})
+	ms := res.Of(parser.KindMeasure)
+	if len(res.Errors) > 0 {
+		return nil, res.Errors[0]
+	}
+	if len(ms) != 1 || ms[0].Measure.Unit == "" || ms[0].Measure.BaseAmount == nil {
+		return nil, errors.New("want one amount with its unit, such as \"74 cm\"")
+	}
+	return ms[0].Measure, nil
+}
+
+// Spec reads a catalog designation ("2x6", "14 awg") with whittle's
+// parser.
+func (r *Reader) Spec(s string) (*parser.Spec, error) {
+	res := parser.ParseWith(s, parser.Options{Lexicon: r.lex})
+	ss := res.Of(parser.KindSpec)
+	if len(ss) != 1 {
+		return nil, errors.New("not a standard designation whittle knows (lumber, tyre, wire gauge, thread, paper, battery)")
+	}
+	return ss[0].Spec, nil
+}
