@@ -128,6 +128,10 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 
 // Step is one plan the planner asked the engine to count.
 type Step struct {
+	// Label says what was counted: "the query as typed", "\"merino\"
+	// alone", "the hard constraints alone", or "relaxed" for a step of
+	// the search, whose Relaxations say how.
+	Label       string       `json:"label"`
 	Relaxations []Relaxation `json:"relaxations"`
 	Count       int          `json:"count"`
 	Cost        float64      `json:"cost"`
@@ -210,7 +214,7 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 	}
 	// The hard constraints alone: if they find nothing, stop.
 	hard := s.hardOnly()
-	if hn, err := s.countPlan(hard, nil); err != nil {
+	if hn, err := s.countPlan(hard, nil, "the hard constraints alone"); err != nil {
 		return nil, err
 	} else if hn < e.MinResults && s.stopReason == "" {
 		rw.missing(ctx, s, hard)
@@ -290,13 +294,17 @@ func (it *item) scaled(l int) float64 {
 
 // count counts a state's plan, once per distinct plan.
 func (s *search) count(state []int) (int, error) {
-	return s.countPlan(s.plan(state), state)
+	label := "relaxed"
+	if len(s.relaxationsOf(state)) == 0 {
+		label = "the query as typed"
+	}
+	return s.countPlan(s.plan(state), state, label)
 }
 
 // errStop marks a count refused because the budget or deadline ran out.
 var errStop = fmt.Errorf("stopped")
 
-func (s *search) countPlan(p Plan, state []int) (int, error) {
+func (s *search) countPlan(p Plan, state []int, label string) (int, error) {
 	key := p.Key()
 	if n, ok := s.seen[key]; ok {
 		return n, nil
@@ -322,7 +330,7 @@ func (s *search) countPlan(p Plan, state []int) (int, error) {
 		return 0, err
 	}
 	s.seen[key] = n
-	step := Step{Count: n}
+	step := Step{Label: label, Count: n}
 	if state != nil {
 		step.Relaxations, step.Cost = s.relaxationsOf(state), s.cost(state)
 	}
@@ -350,7 +358,7 @@ func (s *search) bestFirst(min int) (bool, []int, int) {
 	most := 0
 	for _, it := range s.items {
 		if len(it.levels) > 1 && s.budget > s.rw.budget*2/3 {
-			if n, err := s.countPlan(Plan{Clauses: []Clause{*it.levels[0].clause}}, nil); err == nil {
+			if n, err := s.countPlan(Plan{Clauses: []Clause{*it.levels[0].clause}}, nil, fmt.Sprintf("%q alone", it.c.Text)); err == nil {
 				it.solo = n
 				most = max(most, n)
 			}
@@ -439,15 +447,13 @@ func (q *queue) Pop() any {
 func (s *search) explain(best []int) string {
 	var b strings.Builder
 	for i, st := range s.out.Steps {
-		what := "the query as typed"
+		what := st.Label
 		if len(st.Relaxations) > 0 {
 			var parts []string
 			for _, r := range st.Relaxations {
 				parts = append(parts, fmt.Sprintf("%s %q %s", r.Operator, r.Text, r.Detail))
 			}
 			what = strings.Join(parts, "; ")
-		} else if i > 0 {
-			what = "a constraint alone, or the hard constraints"
 		}
 		fmt.Fprintf(&b, "step %d: %s → %d\n", i+1, what, st.Count)
 	}
@@ -467,7 +473,7 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 			continue
 		}
 		rest := Plan{Clauses: append(append([]Clause(nil), hard.Clauses[:i]...), hard.Clauses[i+1:]...)}
-		n, err := s.countPlan(rest, nil)
+		n, err := s.countPlan(rest, nil, fmt.Sprintf("the hard constraints without %q", s.out.Parsed.Constraints[cl.From].Text))
 		if err != nil || n == 0 {
 			continue
 		}

@@ -19,6 +19,8 @@ usage:
   whittle explain [flags] -          read one query a line from standard input
   whittle colour [flags] COLOUR...   describe a colour, compare two, or search a catalog's colours
   whittle policy show|check ...      print the strictness policy in force, or check a policy file
+  whittle index --catalog FILE       build the search index of a catalog (JSON Lines)
+  whittle search [flags] QUERY       search the index, rescuing a query that finds too little
   whittle help                       show this text
 
 Run "whittle explain -h", "whittle colour -h" or "whittle policy -h" for more.
@@ -43,6 +45,10 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return colourCmd(args[1:], stdout, stderr)
 	case "policy":
 		return policyCmd(args[1:], stdout, stderr)
+	case "index":
+		return indexCmd(args[1:], stdout, stderr)
+	case "search":
+		return searchCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
 		fmt.Fprint(stdout, usage)
 		return 0

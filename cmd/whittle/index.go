@@ -1,0 +1,121 @@
+package main
+
+import (
+	"context"
+	"flag"
+	"fmt"
+	"io"
+	"os"
+	"os/signal"
+	"path/filepath"
+	"sync/atomic"
+	"time"
+
+	"golang.org/x/term"
+
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
+)
+
+// defaultIndex is where the index lives when --index is not given.
+func defaultIndex() string {
+	dir, err := os.UserCacheDir()
+	if err != nil {
+		dir = os.TempDir()
+	}
+	return filepath.Join(dir, "whittle", "index")
+}
+
+// countingReader counts the bytes read, for progress.
+type countingReader struct {
+	r io.Reader
+	n atomic.Int64
+}
+
+func (c *countingReader) Read(p []byte) (int, error) {
+	n, err := c.r.Read(p)
+	c.n.Add(int64(n))
+	return n, err
+}
+
+func indexCmd(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("index", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	file := fs.String("catalog", "", "catalog file, JSON Lines, one product a line (required)")
+	dir := fs.String("index", defaultIndex(), "index directory to write")
+	skipBad := fs.Bool("skip-bad", false, "skip malformed lines and report them, instead of stopping at the first")
+	fs.Usage = func() {
+		fmt.Fprint(stderr, "usage: whittle index --catalog FILE [--index DIR] [--skip-bad]\n\nflags:\n")
+		fs.PrintDefaults()
+	}
+	if rest, err := parseInterspersed(fs, args); err != nil || len(rest) != 0 || *file == "" {
+		if err == flag.ErrHelp {
+			return 0
+		}
+		fs.Usage()
+		return 2
+	}
+	f, err := os.Open(*file)
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle index: %v\n", err)
+		return 1
+	}
+	defer f.Close()
+	size := int64(0)
+	if st, err := f.Stat(); err == nil {
+		size = st.Size()
+	}
+	cr := &countingReader{r: f}
+	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
+	defer stop()
+	tty := false
+	if out, ok := stderr.(*os.File); ok && term.IsTerminal(int(out.Fd())) {
+		tty = true
+	}
+	start := time.Now()
+	progress := func(n int) {
+		if !tty {
+			return
+		}
+		el := time.Since(start).Seconds()
+		rate := float64(n) / max(el, 1e-9)
+		eta := ""
+		if done := cr.n.Load(); size > 0 && done > 0 {
+			left := el * float64(size-done) / float64(done)
+			eta = fmt.Sprintf(", about %.0fs left", left)
+		}
+		fmt.Fprintf(stderr, "\r%s  %d products, %.0f/s%s   ", bar(cr.n.Load(), size), n, rate, eta)
+	}
+	st, err := bleveengine.Build(ctx, cr, *dir, bleveengine.BuildOptions{SkipBad: *skipBad, Progress: progress})
+	if tty {
+		fmt.Fprint(stderr, "\r\033[K")
+	}
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle index: %s: %v (the index at %s is unchanged)\n", *file, err, *dir)
+		return 1
+	}
+	for _, le := range st.Skipped {
+		fmt.Fprintf(stderr, "skipped %s: %v\n", *file, le)
+	}
+	fmt.Fprintf(stdout, "indexed %d products (%d colour names, %d lines skipped) into %s in %.1fs\n",
+		st.Products, st.Colours, len(st.Skipped), *dir, time.Since(start).Seconds())
+	return 0
+}
+
+// bar draws a 24-character progress bar for done of total bytes.
+func bar(done, total int64) string {
+	const width = 24
+	if total <= 0 {
+		return ""
+	}
+	n := int(float64(width) * float64(done) / float64(total))
+	n = min(max(n, 0), width)
+	b := make([]rune, width)
+	for i := range b {
+		if i < n {
+			b[i] = '█'
+		} else {
+			b[i] = '·'
+		}
+	}
+	return "[" + string(b) + "]"
+}

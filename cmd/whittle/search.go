@@ -1,0 +1,111 @@
+package main
+
+import (
+	"context"
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"strings"
+	"text/tabwriter"
+
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
+)
+
+func searchCmd(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("search", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	dir := fs.String("index", defaultIndex(), "index directory (built with whittle index)")
+	asJSON := fs.Bool("json", false, "write the JSON contract instead of text")
+	k := fs.Int("k", 10, "how many hits to show")
+	policyFile := fs.String("policy", "", "policy file laid over the built-in policy")
+	budget := fs.Int("budget", rewrite.DefaultBudget, "most engine counts one rescue may spend")
+	fs.Usage = func() {
+		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] QUERY\n\nflags:\n")
+		fs.PrintDefaults()
+	}
+	rest, err := parseInterspersed(fs, args)
+	if err != nil {
+		if err == flag.ErrHelp {
+			return 0
+		}
+		return 2
+	}
+	if len(rest) != 1 || *k < 0 || *budget < 1 {
+		fs.Usage()
+		return 2
+	}
+	lex, _ := loadLexicon("search", "", stderr)
+	pol, ok := loadPolicy("search", *policyFile, lex, stderr)
+	if !ok {
+		return 2
+	}
+	eng, err := bleveengine.Open(*dir)
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle search: %v\n", err)
+		return 1
+	}
+	defer eng.Close()
+	ctx := context.Background()
+	o, err := rewrite.New(eng, pol, rewrite.WithBudget(*budget)).Rescue(ctx, rest[0])
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle search: %v\n", err)
+		return 1
+	}
+	var hits []rewrite.ReportHit
+	if o.Count > 0 && *k > 0 {
+		shown, err := eng.Show(ctx, o.Plan, *k)
+		if err != nil {
+			fmt.Fprintf(stderr, "whittle search: %v\n", err)
+			return 1
+		}
+		for _, s := range shown {
+			hits = append(hits, rewrite.ReportHit(s))
+		}
+	}
+	rep := rewrite.NewReport(o, hits)
+	if *asJSON {
+		b, err := json.Marshal(rep)
+		if err != nil {
+			fmt.Fprintf(stderr, "whittle search: %v\n", err)
+			return 1
+		}
+		fmt.Fprintf(stdout, "%s\n", b)
+		return 0
+	}
+	o.Parsed.WriteText(stdout, parser.TextStyle{})
+	fmt.Fprintln(stdout)
+	for i, s := range rep.Steps {
+		var what []string
+		for _, r := range s.Relaxations {
+			what = append(what, fmt.Sprintf("%s %s %q", r.Op, r.Kind, r.Text))
+		}
+		if len(what) == 0 {
+			what = []string{s.Label}
+		}
+		fmt.Fprintf(stdout, "step %d  %-50s %d\n", i+1, strings.Join(what, ", "), s.Count)
+	}
+	msg := o.Message
+	if o.Exact {
+		msg = fmt.Sprintf("%d exact matches.", o.Count)
+	}
+	fmt.Fprintf(stdout, "\n%s\n", msg)
+	if o.Note != "" {
+		fmt.Fprintf(stdout, "(%s)\n", o.Note)
+	}
+	if len(hits) > 0 {
+		fmt.Fprintln(stdout)
+		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', 0)
+		for _, h := range hits {
+			stock := ""
+			if !h.InStock {
+				stock = "unavailable"
+			}
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\n", h.ID, h.Title, h.Colour, h.Price, stock)
+		}
+		tw.Flush()
+	}
+	return 0
+}
