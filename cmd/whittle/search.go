@@ -22,6 +22,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	k := fs.Int("k", 10, "how many hits to show")
 	policyFile := fs.String("policy", "", "policy file laid over the built-in policy")
 	budget := fs.Int("budget", rewrite.DefaultBudget, "most engine counts one rescue may spend")
+	baseline := fs.Bool("baseline", false, "also run the blind partial match a plain engine would, and show both")
 	fs.Usage = func() {
 		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
@@ -66,8 +67,22 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	rep := rewrite.NewReport(o, hits)
+	var base *bleveengine.Baseline
+	if *baseline {
+		if base, err = eng.Baseline(ctx, rest[0], *k); err != nil {
+			fmt.Fprintf(stderr, "whittle search: %v\n", err)
+			return 1
+		}
+	}
 	if *asJSON {
-		b, err := json.Marshal(rep)
+		var v any = rep
+		if base != nil {
+			v = struct {
+				rewrite.Report
+				Baseline *bleveengine.Baseline `json:"baseline"`
+			}{rep, base}
+		}
+		b, err := json.Marshal(v)
 		if err != nil {
 			fmt.Fprintf(stderr, "whittle search: %v\n", err)
 			return 1
@@ -104,6 +119,14 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 				stock = "unavailable"
 			}
 			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\n", h.ID, h.Title, h.Colour, h.Price, stock)
+		}
+		tw.Flush()
+	}
+	if base != nil {
+		fmt.Fprintf(stdout, "\nblind partial match: %d of %d words kept, %d results\n", base.Kept, base.Words, base.Count)
+		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', 0)
+		for _, h := range base.Hits {
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\n", h.ID, h.Title, h.Colour, h.Price)
 		}
 		tw.Flush()
 	}

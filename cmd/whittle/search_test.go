@@ -74,3 +74,25 @@ func TestIndexAndSearchErrors(t *testing.T) {
 		})
 	}
 }
+
+func TestSearchBaseline(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	if code, _, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", dir); code != 0 {
+		t.Fatal(stderr)
+	}
+	// The blind match keeps "trail running shoes" and shows both shoes,
+	// neither of which comes in 13 (shop.jsonl); whittle shows none.
+	code, out, _ := runCLI("", "search", "--index", dir, "--json", "--baseline", "trail running shoes size 13")
+	var rep struct {
+		Hits     []json.RawMessage `json:"hits"`
+		Baseline struct {
+			Kept, Words, Count int
+		} `json:"baseline"`
+	}
+	if err := json.Unmarshal([]byte(out), &rep); err != nil || code != 0 {
+		t.Fatalf("%v %d %s", err, code, out)
+	}
+	if len(rep.Hits) != 0 || rep.Baseline.Count != 2 || rep.Baseline.Kept >= rep.Baseline.Words {
+		t.Errorf("report %+v", rep)
+	}
+}

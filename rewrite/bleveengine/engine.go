@@ -93,16 +93,21 @@ func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, erro
 	}
 	out := make([]Shown, 0, len(res.Hits))
 	for _, h := range res.Hits {
-		s := Shown{ID: h.ID, Score: h.Score}
-		if v, ok := h.Fields[fStored].(string); ok {
-			parts := strings.Split(v, "\x1f")
-			if len(parts) == 4 {
-				s.Title, s.Price, s.Colour, s.InStock = parts[0], parts[1], parts[2], parts[3] == "true"
-			}
-		}
-		out = append(out, s)
+		out = append(out, shownOf(h.ID, h.Score, h.Fields))
 	}
 	return out, nil
+}
+
+// shownOf reads the stored display field of a hit.
+func shownOf(id string, score float64, fields map[string]any) Shown {
+	s := Shown{ID: id, Score: score}
+	if v, ok := fields[fStored].(string); ok {
+		parts := strings.Split(v, "\x1f")
+		if len(parts) == 4 {
+			s.Title, s.Price, s.Colour, s.InStock = parts[0], parts[1], parts[2], parts[3] == "true"
+		}
+	}
+	return s
 }
 
 // Colours returns the colours the catalog carries.

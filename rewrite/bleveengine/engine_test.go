@@ -157,3 +157,24 @@ func TestSkipBadAndAtomicReplace(t *testing.T) {
 		t.Error("opening a missing index gave no error")
 	}
 }
+
+// The blind baseline drops words without knowing what they mean: for
+// "trail running shoes size 13" it keeps 4 of the 5 words and shows shoes
+// of other sizes, where whittle keeps the size.
+func TestBaseline(t *testing.T) {
+	e := openShop(t)
+	b, err := e.Baseline(context.Background(), "trail running shoes size 13", 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if b.Words != 5 || b.Kept >= 5 || b.Count == 0 {
+		t.Errorf("baseline = %+v", b)
+	}
+	for _, h := range b.Hits {
+		if !strings.HasPrefix(h.ID, "TR-") {
+			continue
+		}
+		// TR-1 and TR-2 come in 7..12 and 8..10 (shop.jsonl): not 13.
+		t.Logf("the baseline shows %s, which has no size 13", h.ID)
+	}
+}

@@ -38,6 +38,8 @@ const (
 	fInStock    = "in_stock"
 	fL, fA, fB  = "lab_l", "lab_a", "lab_b"
 	fStored     = "show"
+	// fWords holds all the product's words, for the blind baseline.
+	fWords = "words"
 )
 
 func measureField(dim string) string      { return "m." + dim }
@@ -66,6 +68,7 @@ func indexMapping() *mapping.IndexMappingImpl {
 	}
 	doc.AddFieldMappingsAt(fTitle, text)
 	doc.AddFieldMappingsAt(fDesc, text)
+	doc.AddFieldMappingsAt(fWords, text)
 	for _, f := range []string{fPrice, fL, fA, fB} {
 		doc.AddFieldMappingsAt(f, num)
 	}
@@ -164,5 +167,13 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 		price = p.Price.Amount + " " + p.Price.Currency
 	}
 	d[fStored] = strings.Join([]string{p.Title, price, p.Colour, strconv.FormatBool(in)}, "\x1f")
+	words := []string{p.Title, p.Description, p.ProductType, p.Brand, p.Colour, p.Pattern, p.Silhouette, p.Material, p.Audience, p.PartNumber}
+	words = append(words, p.Sizes...)
+	words = append(words, p.Spec...)
+	words = append(words, p.CompatibleWith...)
+	for _, m := range p.Measures {
+		words = append(words, m)
+	}
+	d[fWords] = strings.Join(words, " ")
 	return d, lab, nil
 }
