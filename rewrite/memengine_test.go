@@ -18,6 +18,8 @@ type product struct {
 	Price                                                                       float64
 	Specs                                                                       map[string]string
 	Compat, Words                                                               []string
+	// Gone marks a product that is not available.
+	Gone bool
 }
 
 // memEngine evaluates plans over a slice of products, written apart from
@@ -124,8 +126,26 @@ func attr(pr product, field string) string {
 		return pr.Brand
 	case "part_number":
 		return pr.Part
+	case FieldInStock:
+		return fmt.Sprint(!pr.Gone)
 	}
 	return ""
+}
+
+// Describe tells the planner about one product.
+func (m *memEngine) Describe(ctx context.Context, id string) (*Facts, error) {
+	for _, pr := range m.products {
+		if pr.ID != id {
+			continue
+		}
+		f := &Facts{ProductType: pr.Type, Measures: pr.Measures, Compat: pr.Compat, InStock: !pr.Gone}
+		if rgb, err := colour.ParseHex(pr.Hex); err == nil {
+			l := rgb.Lab()
+			f.Lab = &[3]float64{l.L, l.A, l.B}
+		}
+		return f, nil
+	}
+	return nil, fmt.Errorf("no product %s", id)
 }
 
 func matches(pr product, p Plan) bool {
@@ -178,8 +198,8 @@ var shop = []product{
 	{ID: "TR-1", Type: "trail running shoe", Colour: "black", Hex: "#000000", Material: "mesh", Sizes: []string{"7", "8", "9", "10", "11", "12"}, Price: 120},
 	{ID: "TR-2", Type: "trail running shoe", Colour: "ember", Hex: "#c8553d", Material: "mesh", Sizes: []string{"8", "9", "10"}, Price: 110},
 	{ID: "HB-1", Type: "hiking boot", Colour: "brown", Hex: "#a52a2a", Material: "leather", Sizes: []string{"9", "10", "11"}, Price: 160},
-	{ID: "LN-1", Type: "lens", Colour: "black", Hex: "#000000", Measures: map[string]float64{"focal_length": 50}, Price: 210, Compat: []string{"jx-10"}},
-	{ID: "LN-2", Type: "lens", Colour: "black", Hex: "#000000", Measures: map[string]float64{"focal_length": 35}, Price: 260, Compat: []string{"jx-10"}},
+	{ID: "LN-1", Type: "lens", Colour: "black", Hex: "#000000", Measures: map[string]float64{"focal_length": 50}, Price: 210, Compat: []string{"jx-10"}, Part: "fn-5018"},
+	{ID: "LN-2", Type: "lens", Colour: "black", Hex: "#000000", Measures: map[string]float64{"focal_length": 35}, Price: 260, Compat: []string{"jx-10"}, Part: "fn-3520", Gone: true},
 	{ID: "RG-1", Type: "rug", Colour: "oatmeal", Hex: "#d8cbb1", Pattern: "geometric", Material: "wool", Measures: map[string]float64{"width": 1524, "length": 2286}, Price: 240},
 	{ID: "LB-1", Type: "stud", Specs: map[string]string{"lumber": "2x4"}, Measures: map[string]float64{"length": 2438.4}, Price: 5},
 	{ID: "LB-2", Type: "stud", Specs: map[string]string{"lumber": "2x4"}, Measures: map[string]float64{"length": 3048}, Price: 7},

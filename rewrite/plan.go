@@ -88,3 +88,23 @@ type Catalog interface {
 	// within carry, with how many products carry each.
 	Values(ctx context.Context, field, dimension string, within Plan) (map[string]int, error)
 }
+
+// FieldInStock is the clause field that keeps available products
+// (Values "true") or unavailable ones ("false").
+const FieldInStock = "in_stock"
+
+// Facts are what the planner needs to know of one product to find
+// available ones like it.
+type Facts struct {
+	ProductType string             `json:"product_type"`
+	Lab         *[3]float64        `json:"lab,omitempty"`
+	Measures    map[string]float64 `json:"measures,omitempty"`
+	Compat      []string           `json:"compatible_with,omitempty"`
+	InStock     bool               `json:"in_stock"`
+}
+
+// Describer is what an engine may also do: describe one product, so that
+// the planner can offer alternatives to one that is unavailable.
+type Describer interface {
+	Describe(ctx context.Context, id string) (*Facts, error)
+}

@@ -59,6 +59,8 @@ func TestRescue(t *testing.T) {
 			count: 0, message: "85 mm is not carried in lenses; focal lengths carried: 35 mm, 50 mm."},
 		{name: "hard stop on wire gauge", query: "14 awg wire", reason: "a wire gauge is never substituted",
 			count: 0, message: "14 awg is not carried in electrical wires; specs carried: 12 awg."},
+		{name: "unavailable part number", query: "fn-3520", reason: "LN-2 is unavailable; LN-1 is an available lens, black like it and fitting jx-10",
+			count: 1, message: "“fn-3520” is unavailable. Showing available lenses like it: near its colour, fitting jx-10."},
 		{name: "drop an unknown word", query: "zorblax", reason: "an unknown word that matches nothing is dropped",
 			count: len(shop), ops: []string{"drop keyword"}},
 	} {

@@ -168,6 +168,9 @@ type Outcome struct {
 	Explanation string `json:"explanation"`
 	// Note says why the search stopped early (budget or deadline), or "".
 	Note string `json:"note,omitempty"`
+	// Unavailable lists the products the query named that are not
+	// available; Plan then finds available products like them.
+	Unavailable []string `json:"unavailable,omitempty"`
 }
 
 // Rescue parses query, applies the policy, and relaxes it until the
@@ -210,6 +213,9 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 		out.Exact, out.Count, out.Plan = true, n, s.plan(exact)
 		out.Message = ""
 		out.Explanation = fmt.Sprintf("the query as typed finds %d", n)
+		if rw.alternatives(ctx, s, out.Plan) {
+			out.Explanation += "; every match is unavailable, so available products like them are shown"
+		}
 		return out, nil
 	}
 	// The hard constraints alone: if they find nothing, stop.
@@ -233,6 +239,9 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 	out.Note = s.stopReason
 	out.Message = rw.message(out, items, best)
 	out.Explanation = s.explain(best)
+	if bestN > 0 && rw.alternatives(ctx, s, out.Plan) {
+		out.Explanation += "; every match is unavailable, so available products like them are shown"
+	}
 	return out, nil
 }
 

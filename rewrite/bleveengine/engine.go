@@ -215,3 +215,25 @@ func clauseQuery(c rewrite.Clause) query.Query {
 	}
 	return bleve.NewDisjunctionQuery(qs...)
 }
+
+// Describe returns what the planner needs of one product to find
+// available ones like it.
+func (e *Engine) Describe(ctx context.Context, id string) (*rewrite.Facts, error) {
+	q := bleve.NewTermQuery(id)
+	q.SetField(fID)
+	req := bleve.NewSearchRequestOptions(q, 1, 0, false)
+	req.Fields = []string{fFacts}
+	res, err := e.idx.SearchInContext(ctx, req)
+	if err != nil {
+		return nil, err
+	}
+	if len(res.Hits) == 0 {
+		return nil, fmt.Errorf("bleveengine: no product %q", id)
+	}
+	s, _ := res.Hits[0].Fields[fFacts].(string)
+	var f rewrite.Facts
+	if err := json.Unmarshal([]byte(s), &f); err != nil {
+		return nil, fmt.Errorf("bleveengine: product %q: %w", id, err)
+	}
+	return &f, nil
+}

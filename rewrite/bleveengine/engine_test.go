@@ -61,6 +61,7 @@ func TestRescueOnTheIndex(t *testing.T) {
 		{"rain jacket under $50", "the cheapest is 55.00; a 15% stretch reaches 57.50: RJ-3", false, 1, []string{"widen price"}, "up to 57.50 USD"},
 		{"14 awg wire", "12 AWG only; a gauge is never substituted", false, 0, nil, "12 awg"},
 		{"not black lens", "both lenses are black", false, 0, nil, ""},
+		{"fn-3520", "LN-2 is out of stock; LN-1 is an available black lens fitting jx-10", false, 1, nil, "“fn-3520” is unavailable. Showing available lenses like it: near its colour, fitting jx-10."},
 	} {
 		t.Run(tc.query, func(t *testing.T) {
 			o, err := rw.Rescue(context.Background(), tc.query)

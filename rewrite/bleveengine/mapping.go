@@ -1,6 +1,7 @@
 package bleveengine
 
 import (
+	"encoding/json"
 	"fmt"
 	"strconv"
 	"strings"
@@ -11,6 +12,7 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
@@ -40,6 +42,8 @@ const (
 	fStored     = "show"
 	// fWords holds all the product's words, for the blind baseline.
 	fWords = "words"
+	// fFacts is stored JSON of rewrite.Facts, for alternatives.
+	fFacts = "facts"
 )
 
 func measureField(dim string) string      { return "m." + dim }
@@ -73,6 +77,7 @@ func indexMapping() *mapping.IndexMappingImpl {
 		doc.AddFieldMappingsAt(f, num)
 	}
 	doc.AddFieldMappingsAt(fStored, stored)
+	doc.AddFieldMappingsAt(fFacts, stored)
 	// Measures and designations: dynamic sub-documents of known types.
 	m := mapping.NewDocumentMapping()
 	m.Dynamic = true
@@ -175,5 +180,17 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 		words = append(words, m)
 	}
 	d[fWords] = strings.Join(words, " ")
+	facts := rewrite.Facts{ProductType: norm(p.ProductType), Compat: compat, InStock: in, Measures: map[string]float64{}}
+	for dim, v := range ms {
+		facts.Measures[dim] = v.(float64)
+	}
+	if lab != nil {
+		facts.Lab = &[3]float64{lab.L, lab.A, lab.B}
+	}
+	fb, err := json.Marshal(facts)
+	if err != nil {
+		return nil, nil, err
+	}
+	d[fFacts] = string(fb)
 	return d, lab, nil
 }
