@@ -130,8 +130,14 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 		if err != nil {
 			return nil, nil, fmt.Errorf("measure %s: %w", dim, err)
 		}
-		ms[dim] = *m.BaseAmount
-		mvs[dim] = strconv.FormatFloat(*m.BaseAmount, 'g', -1, 64)
+		if m.BaseAmount != nil {
+			ms[dim] = *m.BaseAmount
+			mvs[dim] = strconv.FormatFloat(*m.BaseAmount, 'g', -1, 64)
+			continue
+		}
+		// A range (a zoom lens's 18-55 mm) is indexed at both ends.
+		ms[dim] = []float64{*m.BaseMin, *m.BaseMax}
+		mvs[dim] = []string{strconv.FormatFloat(*m.BaseMin, 'g', -1, 64), strconv.FormatFloat(*m.BaseMax, 'g', -1, 64)}
 	}
 	d["m"], d["mv"] = ms, mvs
 	specs := map[string]any{}
@@ -182,7 +188,12 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 	d[fWords] = strings.Join(words, " ")
 	facts := rewrite.Facts{ProductType: norm(p.ProductType), Compat: compat, InStock: in, Measures: map[string]float64{}}
 	for dim, v := range ms {
-		facts.Measures[dim] = v.(float64)
+		switch x := v.(type) {
+		case float64:
+			facts.Measures[dim] = x
+		case []float64:
+			facts.Measures[dim] = x[0]
+		}
 	}
 	if lab != nil {
 		facts.Lab = &[3]float64{lab.L, lab.A, lab.B}

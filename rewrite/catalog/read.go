@@ -176,17 +176,22 @@ func decodeField(p *Product, name string, raw json.RawMessage) error {
 	return nil
 }
 
-// Measure reads a catalog measure ("74 cm") with whittle's parser.
+// Measure reads a catalog measure ("74 cm", or a range such as a zoom
+// lens's "18-55 mm") with whittle's parser.
 func (r *Reader) Measure(s string) (*parser.Measure, error) {
 	res := parser.ParseWith(s, parser.Options{Lexicon: r.lex})
 	ms := res.Of(parser.KindMeasure)
 	if len(res.Errors) > 0 {
 		return nil, res.Errors[0]
 	}
-	if len(ms) != 1 || ms[0].Measure.Unit == "" || ms[0].Measure.BaseAmount == nil {
-		return nil, errors.New("want one amount with its unit, such as \"74 cm\"")
+	if len(ms) != 1 || ms[0].Measure.Unit == "" {
+		return nil, errors.New("want one amount with its unit, such as \"74 cm\", or a range, such as \"18-55 mm\"")
 	}
-	return ms[0].Measure, nil
+	m := ms[0].Measure
+	if m.BaseAmount == nil && (m.BaseMin == nil || m.BaseMax == nil) {
+		return nil, errors.New("a range needs both ends, such as \"18-55 mm\"")
+	}
+	return m, nil
 }
 
 // Spec reads a catalog designation ("2x6", "14 awg") with whittle's
