@@ -15,6 +15,7 @@ import (
 const usage = `whittle reads long shopping queries into typed constraints.
 
 usage:
+  whittle demo                       tour what whittle does, on an invented store's catalog
   whittle explain [flags] QUERY...   show how each query is read
   whittle explain [flags] -          read one query a line from standard input
   whittle colour [flags] COLOUR...   describe a colour, compare two, or search a catalog's colours
@@ -47,6 +48,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return policyCmd(args[1:], stdout, stderr)
 	case "index":
 		return indexCmd(args[1:], stdout, stderr)
+	case "demo":
+		return demoCmd(args[1:], stdout, stderr)
 	case "search":
 		return searchCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":

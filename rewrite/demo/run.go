@@ -1,0 +1,143 @@
+package demo
+
+import (
+	"context"
+	"encoding/json"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+	"time"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// Options tune the demo. The zero value is ready to use.
+type Options struct {
+	// Dir is where the demo index lives; "" means the user's cache
+	// directory.
+	Dir string
+	// Products is the size of the generated catalog (default 20,000).
+	Products int
+	// Rebuild builds the index even when one is there.
+	Rebuild bool
+	// Hits is how many hits each stop shows (default 3).
+	Hits int
+}
+
+// generation names the generator's output; an index built by another
+// generation is rebuilt.
+const generation = "1"
+
+func (o *Options) defaults() {
+	if o.Products <= 0 {
+		o.Products = 20000
+	}
+	if o.Hits <= 0 {
+		o.Hits = 3
+	}
+	if o.Dir == "" {
+		dir, err := os.UserCacheDir()
+		if err != nil {
+			dir = os.TempDir()
+		}
+		o.Dir = filepath.Join(dir, "whittle", "demo")
+	}
+}
+
+// Run generates the demo catalog, indexes it unless an index of the same
+// catalog is there, and runs the tour, writing it to w.
+func Run(ctx context.Context, w io.Writer, opts Options) error {
+	opts.defaults()
+	lex := lexicon.Default()
+	start := time.Now()
+	products := catalog.Demo(opts.Products, 1)
+	idxDir := filepath.Join(opts.Dir, fmt.Sprintf("index-%s-%d", generation, opts.Products))
+	if _, err := os.Stat(idxDir); err != nil || opts.Rebuild {
+		fmt.Fprintf(w, "Indexing the demo catalog: %d products of an invented general store...\n", len(products))
+		if err := build(ctx, products, idxDir); err != nil {
+			return err
+		}
+		fmt.Fprintf(w, "indexed in %.1fs\n\n", time.Since(start).Seconds())
+	}
+	eng, err := bleveengine.Open(idxDir)
+	if err != nil {
+		return err
+	}
+	defer eng.Close()
+	rw := rewrite.New(eng, nil)
+	for i, s := range Tour(products, lex) {
+		if err := stop(ctx, w, i+1, s, rw, eng, opts.Hits); err != nil {
+			return err
+		}
+	}
+	fmt.Fprintf(w, "The tour took %.1fs. Try your own: whittle search --index %s QUERY\n", time.Since(start).Seconds(), idxDir)
+	return nil
+}
+
+// build writes the products as a catalog file through a pipe into Build.
+func build(ctx context.Context, ps []catalog.Product, dir string) error {
+	pr, pw := io.Pipe()
+	go func() {
+		enc := json.NewEncoder(pw)
+		for i := range ps {
+			if err := enc.Encode(&ps[i]); err != nil {
+				pw.CloseWithError(err)
+				return
+			}
+		}
+		pw.Close()
+	}()
+	_, err := bleveengine.Build(ctx, pr, dir, bleveengine.BuildOptions{BatchSize: 2000})
+	pr.Close()
+	return err
+}
+
+func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter, eng *bleveengine.Engine, k int) error {
+	o, err := rw.Rescue(ctx, s.Query)
+	if err != nil {
+		return err
+	}
+	fmt.Fprintf(w, "%d. %s\n   query:   %s\n", n, s.Shows, s.Query)
+	var read []string
+	for _, c := range o.Parsed.Constraints {
+		if c.Kind == parser.KindFiller {
+			continue
+		}
+		v := c.Value()
+		if c.Inferred {
+			v += " (inferred)"
+		}
+		read = append(read, fmt.Sprintf("%s %s [%s]", c.Kind, v, c.Strictness))
+	}
+	fmt.Fprintf(w, "   read as: %s\n", strings.Join(read, " · "))
+	msg := o.Message
+	if msg == "" {
+		msg = fmt.Sprintf("%d exact matches.", o.Count)
+	}
+	fmt.Fprintf(w, "   whittle: %s\n", msg)
+	if o.Count > 0 {
+		shown, err := eng.Show(ctx, o.Plan, k)
+		if err != nil {
+			return err
+		}
+		for _, h := range shown {
+			fmt.Fprintf(w, "            %s  %s, %s, %s\n", h.ID, h.Title, h.Colour, h.Price)
+		}
+	}
+	b, err := eng.Baseline(ctx, s.Query, k)
+	if err != nil {
+		return err
+	}
+	fmt.Fprintf(w, "   blind partial match: %d of %d words kept, %d results\n", b.Kept, b.Words, b.Count)
+	for _, h := range b.Hits {
+		fmt.Fprintf(w, "            %s  %s, %s, %s\n", h.ID, h.Title, h.Colour, h.Price)
+	}
+	fmt.Fprintln(w)
+	return nil
+}
