@@ -7,6 +7,7 @@ import (
 	"io"
 	"os"
 	"os/signal"
+	"time"
 
 	"github.com/whittle-search/whittle/rewrite/demo"
 )
@@ -36,3 +37,37 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	return 0
 }
+
+func benchCmd(args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("bench", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	n := fs.Int("products", 100000, "size of the generated catalog")
+	dir := fs.String("dir", os.TempDir(), "where to build the temporary index")
+	fs.Usage = func() {
+		fmt.Fprint(stderr, "usage: whittle bench [--products N] [--dir DIR]\n\nBuilds an index of a generated catalog and times rescues of queries that find nothing, beside the blind partial match.\n\nflags:\n")
+		fs.PrintDefaults()
+	}
+	if rest, err := parseInterspersed(fs, args); err != nil || len(rest) != 0 || *n < 100 {
+		if err == flag.ErrHelp {
+			return 0
+		}
+		fs.Usage()
+		return 2
+	}
+	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
+	defer stop()
+	r, err := demo.Bench(ctx, stderr, *dir, *n)
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle bench: %v\n", err)
+		return 1
+	}
+	fmt.Fprintf(stdout, "products        %d\n", r.Products)
+	fmt.Fprintf(stdout, "index build     %.1f s\n", r.Build.Seconds())
+	fmt.Fprintf(stdout, "peak memory     %.0f MB\n", r.PeakMemoryMB)
+	fmt.Fprintf(stdout, "queries         %d that find nothing as typed (%.0f%% rescued)\n", r.Queries, r.RescuedShare*100)
+	fmt.Fprintf(stdout, "rescue          p50 %.2f ms, p99 %.2f ms\n", ms(r.RescueP50), ms(r.RescueP99))
+	fmt.Fprintf(stdout, "blind baseline  p50 %.2f ms, p99 %.2f ms\n", ms(r.BaselineP50), ms(r.BaselineP99))
+	return 0
+}
+
+func ms(d time.Duration) float64 { return float64(d.Microseconds()) / 1000 }

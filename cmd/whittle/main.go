@@ -22,6 +22,7 @@ usage:
   whittle policy show|check ...      print the strictness policy in force, or check a policy file
   whittle index --catalog FILE       build the search index of a catalog (JSON Lines)
   whittle search [flags] QUERY       search the index, rescuing a query that finds too little
+  whittle bench [--products N]       time index building and rescues on a generated catalog
   whittle help                       show this text
 
 Run "whittle explain -h", "whittle colour -h" or "whittle policy -h" for more.
@@ -50,6 +51,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return indexCmd(args[1:], stdout, stderr)
 	case "demo":
 		return demoCmd(args[1:], stdout, stderr)
+	case "bench":
+		return benchCmd(args[1:], stdout, stderr)
 	case "search":
 		return searchCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":

@@ -5,6 +5,7 @@ import (
 	"context"
 	"strings"
 	"testing"
+	"time"
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/catalog"
@@ -44,5 +45,30 @@ func TestRun(t *testing.T) {
 		if !strings.Contains(text, want) {
 			t.Errorf("the demo output lacks %q:\n%s", want, text)
 		}
+	}
+}
+
+func TestBench(t *testing.T) {
+	var log bytes.Buffer
+	r, err := Bench(context.Background(), &log, t.TempDir(), 1000)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Products != 1000 || r.Queries == 0 || r.RescueP50 <= 0 || r.RescueP99 < r.RescueP50 || r.BaselineP50 <= 0 {
+		t.Errorf("result %+v", r)
+	}
+	// Every benchmark query finds nothing as typed; most are rescued.
+	if r.RescuedShare < 0.5 {
+		t.Errorf("only %.0f%% rescued", r.RescuedShare*100)
+	}
+}
+
+func TestPercentile(t *testing.T) {
+	ds := []time.Duration{5, 1, 4, 2, 3}
+	if p := percentile(ds, 50); p != 3 {
+		t.Errorf("p50 = %v, want 3 (the middle of 1..5)", p)
+	}
+	if p := percentile(ds, 99); p != 5 {
+		t.Errorf("p99 = %v, want 5", p)
 	}
 }

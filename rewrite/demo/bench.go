@@ -1,0 +1,136 @@
+package demo
+
+import (
+	"context"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"runtime"
+	"sort"
+	"syscall"
+	"time"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// BenchResult holds the figures of one benchmark run.
+type BenchResult struct {
+	Products     int           `json:"products"`
+	Build        time.Duration `json:"build"`
+	PeakMemoryMB float64       `json:"peak_memory_mb"`
+	Queries      int           `json:"queries"`
+	RescueP50    time.Duration `json:"rescue_p50"`
+	RescueP99    time.Duration `json:"rescue_p99"`
+	BaselineP50  time.Duration `json:"baseline_p50"`
+	BaselineP99  time.Duration `json:"baseline_p99"`
+	RescuedShare float64       `json:"rescued_share"`
+}
+
+// Bench builds an index of n generated products in a temporary
+// directory under dir, then times the rescue of queries that find
+// nothing as typed, beside the blind partial match on the same queries.
+func Bench(ctx context.Context, w io.Writer, dir string, n int) (*BenchResult, error) {
+	products := catalog.Demo(n, 1)
+	tmp, err := os.MkdirTemp(dir, "whittle-bench-")
+	if err != nil {
+		return nil, err
+	}
+	defer os.RemoveAll(tmp)
+	idx := filepath.Join(tmp, "index")
+	fmt.Fprintf(w, "building an index of %d products...\n", n)
+	start := time.Now()
+	if err := build(ctx, products, idx); err != nil {
+		return nil, err
+	}
+	res := &BenchResult{Products: n, Build: time.Since(start), PeakMemoryMB: peakMB()}
+	eng, err := bleveengine.Open(idx)
+	if err != nil {
+		return nil, err
+	}
+	defer eng.Close()
+	queries := zeroQueries(products, lexicon.Default(), 200)
+	rw := rewrite.New(eng, nil)
+	var rescue, base []time.Duration
+	rescued := 0
+	for _, q := range queries {
+		t := time.Now()
+		o, err := rw.Rescue(ctx, q)
+		if err != nil {
+			return nil, err
+		}
+		if _, err := eng.Show(ctx, o.Plan, 10); err != nil {
+			return nil, err
+		}
+		rescue = append(rescue, time.Since(t))
+		if !o.Exact && o.Count > 0 {
+			rescued++
+		}
+		t = time.Now()
+		if _, err := eng.Baseline(ctx, q, 10); err != nil {
+			return nil, err
+		}
+		base = append(base, time.Since(t))
+	}
+	res.Queries = len(queries)
+	res.RescueP50, res.RescueP99 = percentile(rescue, 50), percentile(rescue, 99)
+	res.BaselineP50, res.BaselineP99 = percentile(base, 50), percentile(base, 99)
+	if len(queries) > 0 {
+		res.RescuedShare = float64(rescued) / float64(len(queries))
+	}
+	return res, nil
+}
+
+func percentile(ds []time.Duration, p int) time.Duration {
+	if len(ds) == 0 {
+		return 0
+	}
+	s := append([]time.Duration(nil), ds...)
+	sort.Slice(s, func(i, j int) bool { return s[i] < s[j] })
+	i := (len(s)*p + 99) / 100
+	return s[min(max(i-1, 0), len(s)-1)]
+}
+
+// peakMB is the process's peak resident memory, in MB.
+func peakMB() float64 {
+	var ru syscall.Rusage
+	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err == nil && ru.Maxrss > 0 {
+		return float64(ru.Maxrss) / 1024 // kilobytes on Linux
+	}
+	var ms runtime.MemStats
+	runtime.ReadMemStats(&ms)
+	return float64(ms.Sys) / (1 << 20)
+}
+
+// zeroQueries writes queries that find nothing as typed: a shopper's
+// colour word for a shop colour name, in that product's type; a pattern
+// and size the type does not have together. They come from the catalog,
+// one product in every few.
+func zeroQueries(ps []catalog.Product, lex *lexicon.Lexicon, n int) []string {
+	pal := lex.ColourPalette()
+	var qs []string
+	step := max(len(ps)/n, 1)
+	for i := 0; i < len(ps) && len(qs) < n; i += step {
+		p := ps[i]
+		if p.ColourHex != "" && p.ProductType != "" {
+			if rgb, err := colour.ParseHex(p.ColourHex); err == nil {
+				if near := pal.Nearest(rgb.Lab(), 1); len(near) == 1 {
+					q := near[0].Name + " " + p.ProductType
+					if len(p.Sizes) > 0 {
+						q += " size " + p.Sizes[0]
+					}
+					qs = append(qs, "striped "+q)
+					continue
+				}
+			}
+		}
+		if p.ProductType != "" {
+			qs = append(qs, "zorblax "+p.ProductType)
+		}
+	}
+	return qs
+}
