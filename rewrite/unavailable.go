@@ -3,15 +3,18 @@ package rewrite
 import (
 	"context"
 	"fmt"
+	"math"
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon/colour"
 )
 
 // alternatives handles a plan whose every match is unavailable: it finds
-// available products like the best of them (same product type, then the
-// catalog colours near its colour, then shared compatibility) and makes
-// them the outcome. It reports whether it did.
+// available products like the best of them (the same product type; then
+// the catalog colours near its colour, its measures within the
+// tolerance, and what it is compatible with, giving these up in that
+// order of importance, least first) and makes them the outcome. It
+// reports whether it did.
 func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	desc, ok := rw.engine.(Describer)
 	if !ok {
@@ -45,17 +48,34 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	if len(f.Compat) > 0 {
 		compat = &Clause{Field: "compatibility", Values: f.Compat, From: -1}
 	}
+	// Its measures, within the policy's tolerance (at least ±10%).
+	var sized []Clause
+	tol := math.Max(s.out.Policy.MeasureTolerance, 0.10)
+	for _, dim := range sortedKeys(f.Measures) {
+		v := f.Measures[dim]
+		lo, hi := v*(1-tol), v*(1+tol)
+		sized = append(sized, Clause{Field: "measure", Dimension: dim, Min: &lo, Max: &hi, From: -1})
+	}
+	fit := "fitting " + strings.Join(f.Compat, ", ")
 	type try struct {
 		clauses []*Clause
+		sized   bool
 		like    []string
 	}
 	tries := []try{
-		{[]*Clause{near, compat}, []string{"near its colour", "fitting " + strings.Join(f.Compat, ", ")}},
-		{[]*Clause{compat}, []string{"fitting " + strings.Join(f.Compat, ", ")}},
-		{[]*Clause{near}, []string{"near its colour"}},
-		{nil, nil},
+		{[]*Clause{near, compat}, true, []string{"near its colour", "of about its size", fit}},
+		{[]*Clause{near}, true, []string{"near its colour", "of about its size"}},
+		{[]*Clause{compat}, true, []string{"of about its size", fit}},
+		{[]*Clause{near, compat}, false, []string{"near its colour", fit}},
+		{[]*Clause{compat}, false, []string{fit}},
+		{[]*Clause{near}, false, []string{"near its colour"}},
+		{nil, true, []string{"of about its size"}},
+		{nil, false, nil},
 	}
 	for _, t := range tries {
+		if t.sized && len(sized) == 0 {
+			continue
+		}
 		plan := Plan{Clauses: []Clause{kind, stock}}
 		skip := false
 		for _, c := range t.clauses {
@@ -67,6 +87,9 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 		}
 		if skip {
 			continue
+		}
+		if t.sized {
+			plan.Clauses = append(plan.Clauses, sized...)
 		}
 		n, err := s.countPlan(plan, nil, "available alternatives")
 		if err != nil {
