@@ -77,7 +77,7 @@ func Build(ctx context.Context, r io.Reader, dir string, opts BuildOptions) (*St
 		}
 	}()
 	idxDir := filepath.Join(tmp, "index")
-	idx, err := bleve.New(idxDir, indexMapping())
+	idx, err := bleve.New(idxDir, indexMapping(lex))
 	if err != nil {
 		return nil, fmt.Errorf("creating the index: %w", err)
 	}

@@ -3,6 +3,7 @@ package bleveengine
 import (
 	"encoding/json"
 	"fmt"
+	"sort"
 	"strconv"
 	"strings"
 
@@ -53,18 +54,25 @@ func specField(system string) string      { return "spec." + system }
 // indexMapping is whittle's mapping: keyword fields for attributes,
 // numeric fields for measures, prices and Lab, text with the en analyzer
 // for title and description, and one stored field for display.
-func indexMapping() *mapping.IndexMappingImpl {
+func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
+	// Nothing goes into bleve's catch-all "_all" field: whittle always
+	// names the field it asks, and "_all" costs a sixth of the build.
 	kw := mapping.NewKeywordFieldMapping()
 	kw.Store = false
+	kw.IncludeInAll = false
 	text := mapping.NewTextFieldMapping()
 	text.Analyzer = en.AnalyzerName
 	text.Store = false
+	text.IncludeInAll = false
+	text.DocValues = false
 	num := mapping.NewNumericFieldMapping()
 	num.Store = false
+	num.IncludeInAll = false
 	stored := mapping.NewTextFieldMapping()
 	stored.Index = false
 	stored.Store = true
 	stored.IncludeInAll = false
+	stored.DocValues = false
 
 	doc := mapping.NewDocumentMapping()
 	for _, f := range []string{fID, fType, fCategory, fBrand, fColour, fPattern, fSilhouette, fMaterial, fAudience, fSizes, fCurrency, fCompat, fPart, fInStock} {
@@ -78,27 +86,44 @@ func indexMapping() *mapping.IndexMappingImpl {
 	}
 	doc.AddFieldMappingsAt(fStored, stored)
 	doc.AddFieldMappingsAt(fFacts, stored)
-	// Measures and designations: dynamic sub-documents of known types.
-	m := mapping.NewDocumentMapping()
-	m.Dynamic = true
-	m.DefaultAnalyzer = keyword.Name
+	// Measures and designations: one field per dimension the lexicon's
+	// slots name and per standard system, so nothing is mapped on the fly.
+	m, mv, spec := mapping.NewDocumentMapping(), mapping.NewDocumentMapping(), mapping.NewDocumentMapping()
+	for _, dim := range dimensions(lex) {
+		m.AddFieldMappingsAt(dim, num)
+		mv.AddFieldMappingsAt(dim, kw)
+	}
+	for _, sys := range []string{"lumber", "tyre", "awg", "metric_thread", "unified_thread", "paper", "battery"} {
+		spec.AddFieldMappingsAt(sys, kw)
+	}
 	doc.AddSubDocumentMapping("m", m)
-	mv := mapping.NewDocumentMapping()
-	mv.Dynamic = true
-	mv.DefaultAnalyzer = keyword.Name
 	doc.AddSubDocumentMapping("mv", mv)
-	spec := mapping.NewDocumentMapping()
-	spec.Dynamic = true
-	spec.DefaultAnalyzer = keyword.Name
 	doc.AddSubDocumentMapping("spec", spec)
+	doc.Dynamic = false
 
 	im := mapping.NewIndexMapping()
 	im.DefaultMapping = doc
 	im.DefaultAnalyzer = keyword.Name
 	im.StoreDynamic = false
-	im.IndexDynamic = true
-	im.DocValuesDynamic = true
+	im.IndexDynamic = false
+	im.DocValuesDynamic = false
 	return im
+}
+
+// dimensions lists every measure dimension the lexicon's slots name.
+func dimensions(lex *lexicon.Lexicon) []string {
+	seen := map[string]bool{}
+	var out []string
+	for _, e := range lex.Entries(lexicon.ProductType) {
+		for _, sl := range e.Slots {
+			if !seen[sl.Dimension] {
+				seen[sl.Dimension] = true
+				out = append(out, sl.Dimension)
+			}
+		}
+	}
+	sort.Strings(out)
+	return out
 }
 
 // norm is how attribute values are stored and asked for.

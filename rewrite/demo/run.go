@@ -93,7 +93,7 @@ func build(ctx context.Context, ps []catalog.Product, dir string) error {
 		}
 		pw.Close()
 	}()
-	_, err := bleveengine.Build(ctx, pr, dir, bleveengine.BuildOptions{BatchSize: 2000})
+	_, err := bleveengine.Build(ctx, pr, dir, bleveengine.BuildOptions{BatchSize: 5000})
 	pr.Close()
 	return err
 }
