@@ -2,6 +2,7 @@ package main
 
 import (
 	"errors"
+	"flag"
 	"fmt"
 	"io"
 	"slices"
@@ -65,4 +66,22 @@ func renderPolicyError(err error) string {
 		}
 	}
 	return strings.Join(parts, "\n\n")
+}
+
+// parseFlags parses a command's flags (anywhere among its arguments) and
+// returns the other arguments. When the command should stop, ok is false
+// and code is its exit status: 0 after -h, 2 for bad usage (want says how
+// many other arguments the command takes, or -1 for any number).
+func parseFlags(fs *flag.FlagSet, args []string, want int) (rest []string, code int, ok bool) {
+	rest, err := parseInterspersed(fs, args)
+	if err == flag.ErrHelp {
+		return nil, 0, false
+	}
+	if err != nil || want >= 0 && len(rest) != want {
+		if err == nil {
+			fs.Usage()
+		}
+		return nil, 2, false
+	}
+	return rest, 0, true
 }

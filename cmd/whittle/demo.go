@@ -22,11 +22,11 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, "usage: whittle demo [--dir DIR] [--products N] [--rebuild]\n\nGenerates an invented general store's catalog, indexes it once, and tours what whittle does.\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	if rest, err := parseInterspersed(fs, args); err != nil || len(rest) != 0 || *n < 100 {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		fs.Usage()
+	if _, code, ok := parseFlags(fs, args, 0); !ok {
+		return code
+	}
+	if *n < 100 {
+		fmt.Fprintln(stderr, "whittle: --products must be at least 100")
 		return 2
 	}
 	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
@@ -47,11 +47,11 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, "usage: whittle bench [--products N] [--dir DIR]\n\nBuilds an index of a generated catalog and times rescues of queries that find nothing, beside the blind partial match.\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	if rest, err := parseInterspersed(fs, args); err != nil || len(rest) != 0 || *n < 100 {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		fs.Usage()
+	if _, code, ok := parseFlags(fs, args, 0); !ok {
+		return code
+	}
+	if *n < 100 {
+		fmt.Fprintln(stderr, "whittle: --products must be at least 100")
 		return 2
 	}
 	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)

@@ -47,10 +47,10 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, "usage: whittle index --catalog FILE [--index DIR] [--skip-bad]\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	if rest, err := parseInterspersed(fs, args); err != nil || len(rest) != 0 || *file == "" {
-		if err == flag.ErrHelp {
-			return 0
-		}
+	if _, code, ok := parseFlags(fs, args, 0); !ok {
+		return code
+	}
+	if *file == "" {
 		fs.Usage()
 		return 2
 	}

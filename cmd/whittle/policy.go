@@ -5,8 +5,9 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"maps"
 	"os"
-	"sort"
+	"slices"
 	"strings"
 	"text/tabwriter"
 
@@ -52,16 +53,8 @@ func policyShow(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, policyUsage)
 		fs.PrintDefaults()
 	}
-	rest, err := parseInterspersed(fs, args)
-	if err != nil {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		return 2
-	}
-	if len(rest) != 0 {
-		fs.Usage()
-		return 2
+	if _, code, ok := parseFlags(fs, args, 0); !ok {
+		return code
 	}
 	if !checkCategory("policy", *category, stderr) {
 		return 2
@@ -113,26 +106,17 @@ func writePolicy(w io.Writer, e rewrite.Effective) {
 	}
 	if len(e.Dimensions) > 0 {
 		fmt.Fprintf(tw, "\ndimensions\t\n")
-		for _, d := range sorted(e.Dimensions) {
+		for _, d := range slices.Sorted(maps.Keys(e.Dimensions)) {
 			fmt.Fprintf(tw, "  %s\t%s\n", d, e.Dimensions[d])
 		}
 	}
 	if len(e.StandardSizes) > 0 {
 		fmt.Fprintf(tw, "\nstandard_sizes\t\n")
-		for _, d := range sorted(e.StandardSizes) {
+		for _, d := range slices.Sorted(maps.Keys(e.StandardSizes)) {
 			fmt.Fprintf(tw, "  %s\t%s\n", d, strings.Join(e.StandardSizes[d], ", "))
 		}
 	}
 	tw.Flush()
-}
-
-func sorted[V any](m map[string]V) []string {
-	ks := make([]string, 0, len(m))
-	for k := range m {
-		ks = append(ks, k)
-	}
-	sort.Strings(ks)
-	return ks
 }
 
 func policyCheck(args []string, stdout, stderr io.Writer) int {

@@ -27,14 +27,11 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	rest, err := parseInterspersed(fs, args)
-	if err != nil {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		return 2
+	rest, code, ok := parseFlags(fs, args, 1)
+	if !ok {
+		return code
 	}
-	if len(rest) != 1 || *k < 0 || *budget < 1 {
+	if *k < 0 || *budget < 1 {
 		fs.Usage()
 		return 2
 	}
@@ -62,9 +59,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintf(stderr, "whittle search: %v\n", err)
 			return 1
 		}
-		for _, s := range shown {
-			hits = append(hits, rewrite.ReportHit(s))
-		}
+		hits = shown
 	}
 	rep := rewrite.NewReport(o, hits)
 	var base *bleveengine.Baseline

@@ -71,15 +71,8 @@ func (e *Engine) Search(ctx context.Context, p rewrite.Plan, k int) ([]rewrite.H
 	return hits, nil
 }
 
-// Shown is a product as a search shows it.
-type Shown struct {
-	ID      string  `json:"id"`
-	Title   string  `json:"title"`
-	Price   string  `json:"price,omitempty"`
-	Colour  string  `json:"colour,omitempty"`
-	InStock bool    `json:"in_stock"`
-	Score   float64 `json:"score"`
-}
+// Shown is a product as a search shows it: the contract's hit.
+type Shown = rewrite.ReportHit
 
 // Show returns the k best products that match p, with what a result
 // list shows of them.
