@@ -63,7 +63,7 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	fmt.Fprintf(stdout, "products        %d\n", r.Products)
 	fmt.Fprintf(stdout, "index build     %.1f s\n", r.Build.Seconds())
-	fmt.Fprintf(stdout, "peak memory     %.0f MB\n", r.PeakMemoryMB)
+	fmt.Fprintf(stdout, "peak memory     %.0f MB during the build\n", r.PeakMemoryMB)
 	fmt.Fprintf(stdout, "queries         %d that find nothing as typed (%.0f%% rescued)\n", r.Queries, r.RescuedShare*100)
 	fmt.Fprintf(stdout, "rescue          p50 %.2f ms, p99 %.2f ms\n", ms(r.RescueP50), ms(r.RescueP99))
 	fmt.Fprintf(stdout, "blind baseline  p50 %.2f ms, p99 %.2f ms\n", ms(r.BaselineP50), ms(r.BaselineP99))

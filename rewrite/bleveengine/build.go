@@ -104,26 +104,65 @@ type buildStats struct {
 	colours map[string]*vocabColour
 }
 
+// fill reads the catalog and indexes it. Reading and mapping the next
+// batch overlaps the indexing of the last one.
 func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon) (*buildStats, error) {
-	rd := catalog.NewReader(r, lex)
 	st := &buildStats{colours: make(map[string]*vocabColour)}
-	batch := idx.NewBatch()
-	flush := func() error {
-		if batch.Size() == 0 {
-			return nil
+	batches := make(chan *bleve.Batch, 1)
+	readErr := make(chan error, 1)
+	stop := make(chan struct{})
+	go func() {
+		defer close(batches)
+		readErr <- read(ctx, idx, r, opts, lex, st, batches, stop)
+	}()
+	indexed := 0
+	var indexErr error
+	for b := range batches {
+		if indexErr != nil {
+			continue // drain, so the reader can finish
 		}
-		if err := idx.Batch(batch); err != nil {
-			return err
+		if err := idx.Batch(b); err != nil {
+			indexErr = err
+			close(stop)
+			continue
 		}
-		batch.Reset()
+		indexed += b.Size()
 		if opts.Progress != nil {
-			opts.Progress(st.Products)
+			opts.Progress(indexed)
 		}
-		return nil
+	}
+	if err := <-readErr; err != nil {
+		return nil, err
+	}
+	if indexErr != nil {
+		return nil, indexErr
+	}
+	if st.Products == 0 {
+		return nil, errors.New("the catalog has no products")
+	}
+	return st, nil
+}
+
+// read turns catalog lines into batches of mapped documents.
+func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon, st *buildStats,
+	out chan<- *bleve.Batch, stop <-chan struct{}) error {
+	rd := catalog.NewReader(r, lex)
+	batch := idx.NewBatch()
+	send := func() bool {
+		if batch.Size() == 0 {
+			return true
+		}
+		select {
+		case out <- batch:
+			batch = idx.NewBatch()
+			return true
+		case <-stop:
+			return false
+		}
 	}
 	for {
 		if err := ctx.Err(); err != nil {
-			return nil, err
+			return err
 		}
 		p, err := rd.Next()
 		if err == io.EOF {
@@ -135,7 +174,7 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 			continue
 		}
 		if err != nil {
-			return nil, err
+			return err
 		}
 		doc, lab, err := document(p, rd, lex)
 		if err != nil {
@@ -144,10 +183,10 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 				st.Skipped = append(st.Skipped, le)
 				continue
 			}
-			return nil, le
+			return le
 		}
 		if err := batch.Index(p.ID, doc); err != nil {
-			return nil, err
+			return err
 		}
 		st.Products++
 		if name := norm(p.Colour); name != "" && lab != nil {
@@ -158,16 +197,12 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 			}
 			c.Count++
 		}
-		if batch.Size() >= opts.BatchSize {
-			if err := flush(); err != nil {
-				return nil, err
-			}
+		if batch.Size() >= opts.BatchSize && !send() {
+			return nil
 		}
 	}
-	if st.Products == 0 {
-		return nil, errors.New("the catalog has no products")
-	}
-	return st, flush()
+	send()
+	return nil
 }
 
 func writeVocabulary(path string, cs map[string]*vocabColour) error {

@@ -1,13 +1,17 @@
 package demo
 
 import (
+	"bufio"
 	"context"
+	"encoding/json"
 	"fmt"
 	"io"
 	"os"
 	"path/filepath"
 	"runtime"
+	"runtime/debug"
 	"sort"
+	"strings"
 	"syscall"
 	"time"
 
@@ -31,20 +35,38 @@ type BenchResult struct {
 	RescuedShare float64       `json:"rescued_share"`
 }
 
-// Bench builds an index of n generated products in a temporary
-// directory under dir, then times the rescue of queries that find
-// nothing as typed, beside the blind partial match on the same queries.
+// Bench writes a catalog of n generated products to a temporary
+// directory under dir and indexes it as whittle index does, measuring
+// the build's time and peak memory; then it times the rescue of queries
+// that find nothing as typed, beside the blind partial match on the same
+// queries.
 func Bench(ctx context.Context, w io.Writer, dir string, n int) (*BenchResult, error) {
-	products := catalog.Demo(n, 1)
 	tmp, err := os.MkdirTemp(dir, "whittle-bench-")
 	if err != nil {
 		return nil, err
 	}
 	defer os.RemoveAll(tmp)
+	// The catalog goes to a file, as a shop's would, and the generated
+	// products are let go before the build, so that the memory measured
+	// is the build's.
+	file := filepath.Join(tmp, "catalog.jsonl")
+	queries, err := writeCatalog(file, n)
+	if err != nil {
+		return nil, err
+	}
+	runtime.GC()
+	debug.FreeOSMemory()
+	resetPeak()
 	idx := filepath.Join(tmp, "index")
 	fmt.Fprintf(w, "building an index of %d products...\n", n)
 	start := time.Now()
-	if err := build(ctx, products, idx); err != nil {
+	f, err := os.Open(file)
+	if err != nil {
+		return nil, err
+	}
+	_, err = bleveengine.Build(ctx, f, idx, bleveengine.BuildOptions{})
+	f.Close()
+	if err != nil {
 		return nil, err
 	}
 	res := &BenchResult{Products: n, Build: time.Since(start), PeakMemoryMB: peakMB()}
@@ -53,7 +75,6 @@ func Bench(ctx context.Context, w io.Writer, dir string, n int) (*BenchResult, e
 		return nil, err
 	}
 	defer eng.Close()
-	queries := zeroQueries(products, lexicon.Default(), 200)
 	rw := rewrite.New(eng, nil)
 	var rescue, base []time.Duration
 	rescued := 0
@@ -95,8 +116,49 @@ func percentile(ds []time.Duration, p int) time.Duration {
 	return s[min(max(i-1, 0), len(s)-1)]
 }
 
-// peakMB is the process's peak resident memory, in MB.
+// writeCatalog writes n generated products to file as a catalog and
+// returns the benchmark's queries, drawn from them.
+func writeCatalog(file string, n int) ([]string, error) {
+	products := catalog.Demo(n, 1)
+	queries := zeroQueries(products, lexicon.Default(), 200)
+	f, err := os.Create(file)
+	if err != nil {
+		return nil, err
+	}
+	bw := bufio.NewWriter(f)
+	enc := json.NewEncoder(bw)
+	for i := range products {
+		if err := enc.Encode(&products[i]); err != nil {
+			f.Close()
+			return nil, err
+		}
+	}
+	if err := bw.Flush(); err != nil {
+		f.Close()
+		return nil, err
+	}
+	return queries, f.Close()
+}
+
+// resetPeak starts the peak resident memory count afresh, where the
+// system allows it (Linux: writing 5 to /proc/self/clear_refs resets the
+// high-water mark).
+func resetPeak() { os.WriteFile("/proc/self/clear_refs", []byte("5"), 0) }
+
+// peakMB is the peak resident memory since resetPeak, in MB: the
+// high-water mark of /proc/self/status where there is one, else the
+// process's peak.
 func peakMB() float64 {
+	if b, err := os.ReadFile("/proc/self/status"); err == nil {
+		for _, line := range strings.Split(string(b), "\n") {
+			if rest, ok := strings.CutPrefix(line, "VmHWM:"); ok {
+				var kb float64
+				if _, err := fmt.Sscan(strings.TrimSuffix(strings.TrimSpace(rest), " kB"), &kb); err == nil {
+					return kb / 1024
+				}
+			}
+		}
+	}
 	var ru syscall.Rusage
 	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err == nil && ru.Maxrss > 0 {
 		return float64(ru.Maxrss) / 1024 // kilobytes on Linux
