@@ -106,7 +106,7 @@ func TestParseRGBFunc(t *testing.T) {
 	}
 }
 
-// TestParseLab checks L*a*b* parsing. The ranges are those of the task:
+// TestParseLab checks L*a*b* parsing. The ranges are whittle's:
 // L* 0..100 as CIE 15 defines it, a* and b* within -200..200, wider than
 // any real surface colour (common practice).
 func TestParseLab(t *testing.T) {
