@@ -182,12 +182,10 @@ func clauseQuery(c rewrite.Clause) query.Query {
 	case "keyword":
 		var qs []query.Query
 		for _, v := range c.Values {
-			for _, f := range []string{fTitle, fDesc} {
-				m := bleve.NewMatchQuery(v)
-				m.SetField(f)
-				m.SetOperator(query.MatchQueryOperatorAnd)
-				qs = append(qs, m)
-			}
+			m := bleve.NewMatchQuery(v)
+			m.SetField(fWords)
+			m.SetOperator(query.MatchQueryOperatorAnd)
+			qs = append(qs, m)
 		}
 		return bleve.NewDisjunctionQuery(qs...)
 	}
