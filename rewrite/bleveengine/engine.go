@@ -7,6 +7,7 @@ import (
 	"os"
 	"path/filepath"
 	"strings"
+	"sync"
 
 	"github.com/blevesearch/bleve/v2"
 	"github.com/blevesearch/bleve/v2/search/query"
@@ -19,7 +20,16 @@ import (
 type Engine struct {
 	idx   bleve.Index
 	vocab vocabulary
+
+	// counts remembers recent counts by plan: the index does not change
+	// while it is open, and the planner asks the same parts of queries
+	// (a product type alone, a size alone) again and again.
+	mu     sync.Mutex
+	counts map[string]int
 }
+
+// countCache bounds the remembered counts; past it the cache starts over.
+const countCache = 1 << 14
 
 // Open opens the index Build wrote at dir.
 func Open(dir string) (*Engine, error) {
@@ -42,7 +52,7 @@ func Open(dir string) (*Engine, error) {
 	if err != nil {
 		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
 	}
-	return &Engine{idx: idx, vocab: v}, nil
+	return &Engine{idx: idx, vocab: v, counts: make(map[string]int)}, nil
 }
 
 // Close closes the index.
@@ -50,12 +60,26 @@ func (e *Engine) Close() error { return e.idx.Close() }
 
 // Count returns how many products match every clause of p.
 func (e *Engine) Count(ctx context.Context, p rewrite.Plan) (int, error) {
+	key := p.Key()
+	e.mu.Lock()
+	n, ok := e.counts[key]
+	e.mu.Unlock()
+	if ok {
+		return n, nil
+	}
 	req := bleve.NewSearchRequestOptions(toQuery(p), 0, 0, false)
 	res, err := e.idx.SearchInContext(ctx, req)
 	if err != nil {
 		return 0, err
 	}
-	return int(res.Total), nil
+	n = int(res.Total)
+	e.mu.Lock()
+	if len(e.counts) >= countCache {
+		e.counts = make(map[string]int)
+	}
+	e.counts[key] = n
+	e.mu.Unlock()
+	return n, nil
 }
 
 // Search returns the k best products that match p.
