@@ -66,6 +66,12 @@ func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
 	num := mapping.NewNumericFieldMapping()
 	num.Store = false
 	num.IncludeInAll = false
+	num.DocValues = false // ranges need no doc values; nothing sorts on them
+	// Keywords that are asked but never listed need no doc values either.
+	plain := mapping.NewKeywordFieldMapping()
+	plain.Store = false
+	plain.IncludeInAll = false
+	plain.DocValues = false
 	stored := mapping.NewTextFieldMapping()
 	stored.Index = false
 	stored.Store = true
@@ -73,8 +79,11 @@ func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
 	stored.DocValues = false
 
 	doc := mapping.NewDocumentMapping()
-	for _, f := range []string{fID, fType, fCategory, fBrand, fColour, fPattern, fSilhouette, fMaterial, fAudience, fSizes, fCurrency, fCompat, fPart, fInStock} {
+	for _, f := range []string{fType, fCategory, fBrand, fColour, fPattern, fSilhouette, fMaterial, fAudience, fSizes, fCompat, fPart} {
 		doc.AddFieldMappingsAt(f, kw)
+	}
+	for _, f := range []string{fID, fCurrency, fInStock} {
+		doc.AddFieldMappingsAt(f, plain)
 	}
 	// One text field holds title, description and attributes: the
 	// planner's keywords and the blind baseline both search it, and one
