@@ -161,7 +161,7 @@ func facetField(field, dimension string) (string, bool) {
 		return measureValueField(dimension), dimension != ""
 	case "spec":
 		return specField(dimension), dimension != ""
-	case "product_type", "colour", "pattern", "silhouette", "material", "audience", "brand", "size", "compatibility", "part_number", "category":
+	case "product_type", "colour", "pattern", "silhouette", "material", "audience", "brand", "size", "compatibility":
 		return field, true
 	}
 	return "", false

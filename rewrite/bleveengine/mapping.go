@@ -79,10 +79,10 @@ func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
 	stored.DocValues = false
 
 	doc := mapping.NewDocumentMapping()
-	for _, f := range []string{fType, fCategory, fBrand, fColour, fPattern, fSilhouette, fMaterial, fAudience, fSizes, fCompat, fPart} {
+	for _, f := range []string{fType, fBrand, fColour, fPattern, fSilhouette, fMaterial, fAudience, fSizes, fCompat} {
 		doc.AddFieldMappingsAt(f, kw)
 	}
-	for _, f := range []string{fID, fCurrency, fInStock} {
+	for _, f := range []string{fID, fCategory, fPart, fCurrency, fInStock} {
 		doc.AddFieldMappingsAt(f, plain)
 	}
 	// One text field holds title, description and attributes: the

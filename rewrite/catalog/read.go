@@ -22,7 +22,24 @@ type Reader struct {
 	lex  *lexicon.Lexicon
 	line int
 	ids  map[string]int
+	// Catalogs repeat their measures and designations ("8 ft", "2x4"):
+	// each distinct text is parsed once.
+	measures map[string]measureRead
+	specs    map[string]specRead
 }
+
+type measureRead struct {
+	m   *parser.Measure
+	err error
+}
+
+type specRead struct {
+	s   *parser.Spec
+	err error
+}
+
+// readCache bounds each cache; past it the cache starts over.
+const readCache = 1 << 12
 
 // NewReader reads the catalog in r.
 func NewReader(r io.Reader, lex *lexicon.Lexicon) *Reader {
@@ -31,7 +48,7 @@ func NewReader(r io.Reader, lex *lexicon.Lexicon) *Reader {
 	if lex == nil {
 		lex = lexicon.Default()
 	}
-	return &Reader{sc: sc, lex: lex, ids: make(map[string]int)}
+	return &Reader{sc: sc, lex: lex, ids: make(map[string]int), measures: make(map[string]measureRead), specs: make(map[string]specRead)}
 }
 
 // Line is the number of the line last read.
@@ -179,6 +196,18 @@ func decodeField(p *Product, name string, raw json.RawMessage) error {
 // Measure reads a catalog measure ("74 cm", or a range such as a zoom
 // lens's "18-55 mm") with whittle's parser.
 func (r *Reader) Measure(s string) (*parser.Measure, error) {
+	if m, ok := r.measures[s]; ok {
+		return m.m, m.err
+	}
+	m, err := r.measure(s)
+	if len(r.measures) >= readCache {
+		r.measures = make(map[string]measureRead)
+	}
+	r.measures[s] = measureRead{m, err}
+	return m, err
+}
+
+func (r *Reader) measure(s string) (*parser.Measure, error) {
 	res := parser.ParseWith(s, parser.Options{Lexicon: r.lex})
 	ms := res.Of(parser.KindMeasure)
 	if len(res.Errors) > 0 {
@@ -197,6 +226,18 @@ func (r *Reader) Measure(s string) (*parser.Measure, error) {
 // Spec reads a catalog designation ("2x6", "14 awg") with whittle's
 // parser.
 func (r *Reader) Spec(s string) (*parser.Spec, error) {
+	if sp, ok := r.specs[s]; ok {
+		return sp.s, sp.err
+	}
+	sp, err := r.spec(s)
+	if len(r.specs) >= readCache {
+		r.specs = make(map[string]specRead)
+	}
+	r.specs[s] = specRead{sp, err}
+	return sp, err
+}
+
+func (r *Reader) spec(s string) (*parser.Spec, error) {
 	res := parser.ParseWith(s, parser.Options{Lexicon: r.lex})
 	ss := res.Of(parser.KindSpec)
 	if len(ss) != 1 {
