@@ -84,14 +84,20 @@ func (r *Reader) decode(text []byte) (*Product, error) {
 	fail := func(field, format string, args ...any) error {
 		return &LineError{Line: r.line, Field: field, Msg: fmt.Sprintf(format, args...)}
 	}
-	var fields map[string]json.RawMessage
-	if err := json.Unmarshal(text, &fields); err != nil {
-		return nil, fail("", "not a JSON object: %v", err)
-	}
 	var p Product
-	for name, raw := range fields {
-		if err := decodeField(&p, name, raw); err != nil {
-			return nil, fail(name, "%v", err)
+	// The whole line at once, when it decodes; field by field otherwise,
+	// to name the field at fault, and for the American spellings of the
+	// colour fields.
+	if bytes.Contains(text, []byte(`"color`)) || json.Unmarshal(text, &p) != nil {
+		p = Product{}
+		var fields map[string]json.RawMessage
+		if err := json.Unmarshal(text, &fields); err != nil {
+			return nil, fail("", "not a JSON object: %v", err)
+		}
+		for name, raw := range fields {
+			if err := decodeField(&p, name, raw); err != nil {
+				return nil, fail(name, "%v", err)
+			}
 		}
 	}
 	if strings.TrimSpace(p.ID) == "" {
