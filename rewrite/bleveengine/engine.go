@@ -67,8 +67,7 @@ func (e *Engine) Count(ctx context.Context, p rewrite.Plan) (int, error) {
 	if ok {
 		return n, nil
 	}
-	req := bleve.NewSearchRequestOptions(toQuery(p), 0, 0, false)
-	res, err := e.idx.SearchInContext(ctx, req)
+	res, err := e.idx.SearchInContext(ctx, unscored(toQuery(p)))
 	if err != nil {
 		return 0, err
 	}
@@ -80,6 +79,15 @@ func (e *Engine) Count(ctx context.Context, p rewrite.Plan) (int, error) {
 	e.counts[key] = n
 	e.mu.Unlock()
 	return n, nil
+}
+
+// unscored is a request for the number of matches alone. Without scores
+// bleve can combine the clauses' posting lists as bitmaps instead of
+// walking and scoring each match.
+func unscored(q query.Query) *bleve.SearchRequest {
+	req := bleve.NewSearchRequestOptions(q, 0, 0, false)
+	req.Score = bleve.ScoreNone
+	return req
 }
 
 // Search returns the k best products that match p.
@@ -139,7 +147,7 @@ func (e *Engine) Values(ctx context.Context, field, dimension string, within rew
 	if !ok {
 		return nil, fmt.Errorf("bleveengine: no values for field %q", field)
 	}
-	req := bleve.NewSearchRequestOptions(toQuery(within), 0, 0, false)
+	req := unscored(toQuery(within))
 	req.AddFacet("v", bleve.NewFacetRequest(f, 1000))
 	res, err := e.idx.SearchInContext(ctx, req)
 	if err != nil {
