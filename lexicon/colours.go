@@ -3,6 +3,7 @@ package lexicon
 import (
 	"strings"
 	"sync"
+	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon/colour"
 )
@@ -87,13 +88,21 @@ func EditDistance(a, b string) int {
 	return editDistance(a, b, len([]rune(a))+len([]rune(b))+1)
 }
 
+// EditDistanceWithin is EditDistance when that is at most limit, and
+// limit+1 otherwise. It gives up as soon as the distance must exceed
+// limit, so it is much cheaper than EditDistance for scanning a
+// vocabulary for near spellings.
+func EditDistanceWithin(a, b string, limit int) int {
+	return editDistance(a, b, limit+1)
+}
+
 // editDistance is the optimal string alignment distance between a and b
 // over runes, or limit when it is limit or more.
 func editDistance(a, b string, limit int) int {
-	x, y := []rune(a), []rune(b)
-	if d := len(x) - len(y); d >= limit || -d >= limit {
+	if d := utf8.RuneCountInString(a) - utf8.RuneCountInString(b); d >= limit || -d >= limit {
 		return limit
 	}
+	x, y := []rune(a), []rune(b)
 	prev2 := make([]int, len(y)+1)
 	prev := make([]int, len(y)+1)
 	cur := make([]int, len(y)+1)

@@ -139,6 +139,12 @@ func ExampleEditDistance() {
 	// Output: 1 1
 }
 
+func ExampleEditDistanceWithin() {
+	// "kitten" is 3 edits from "sitting": within 3, but past a limit of 1.
+	fmt.Println(lexicon.EditDistanceWithin("kitten", "sitting", 3), lexicon.EditDistanceWithin("kitten", "sitting", 1))
+	// Output: 3 2
+}
+
 func ExampleLexicon_Descendants() {
 	l := lexicon.Default()
 	boot, _ := l.Lookup(lexicon.ProductType, "boot")

@@ -270,6 +270,22 @@ func TestEditDistance(t *testing.T) {
 	}
 }
 
+// EditDistanceWithin agrees with EditDistance up to its limit and says
+// limit+1 past it, whatever the lengths (the pairs above, plus a
+// multi-byte one).
+func TestEditDistanceWithin(t *testing.T) {
+	pairs := [][2]string{{"kitten", "sitting"}, {"ca", "ac"}, {"", "abc"}, {"same", "same"}, {"beige", "béige"}, {"sweter", "sweater"}}
+	for _, p := range pairs {
+		full := EditDistance(p[0], p[1])
+		for limit := 0; limit <= 4; limit++ {
+			want := min(full, limit+1)
+			if got := EditDistanceWithin(p[0], p[1], limit); got != want {
+				t.Errorf("EditDistanceWithin(%q, %q, %d) = %d, want %d (full distance %d)", p[0], p[1], limit, got, want, full)
+			}
+		}
+	}
+}
+
 func TestColourPalette(t *testing.T) {
 	p := Default().ColourPalette()
 	if p.Len() < 300 {

@@ -305,7 +305,7 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 	bestD := limit + 1
 	words := rw.words(ctx)
 	for j := range words {
-		if d := lexicon.EditDistance(w, words[j].word); d <= limit && d < bestD {
+		if d := lexicon.EditDistanceWithin(w, words[j].word, bestD-1); d < bestD {
 			best, bestD = &words[j], d
 		}
 	}
