@@ -1,10 +1,13 @@
 package main
 
 import (
+	"context"
 	"errors"
 	"flag"
 	"fmt"
 	"io"
+	"os"
+	"os/signal"
 	"slices"
 	"strings"
 
@@ -66,6 +69,12 @@ func renderPolicyError(err error) string {
 		}
 	}
 	return strings.Join(parts, "\n\n")
+}
+
+// interruptible is the context of a long command: cancelled when the
+// user interrupts it, so that it stops cleanly.
+func interruptible() (context.Context, context.CancelFunc) {
+	return signal.NotifyContext(context.Background(), os.Interrupt)
 }
 
 // parseFlags parses a command's flags (anywhere among its arguments) and

@@ -1,12 +1,10 @@
 package main
 
 import (
-	"context"
 	"flag"
 	"fmt"
 	"io"
 	"os"
-	"os/signal"
 	"time"
 
 	"github.com/whittle-search/whittle/rewrite/demo"
@@ -25,11 +23,10 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if *n < 100 {
-		fmt.Fprintln(stderr, "whittle: --products must be at least 100")
+	if !productsOK(*n, stderr) {
 		return 2
 	}
-	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
+	ctx, stop := interruptible()
 	defer stop()
 	if err := demo.Run(ctx, stdout, demo.Options{Dir: *dir, Products: *n, Rebuild: *rebuild}); err != nil {
 		fmt.Fprintf(stderr, "whittle demo: %v\n", err)
@@ -50,11 +47,10 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if *n < 100 {
-		fmt.Fprintln(stderr, "whittle: --products must be at least 100")
+	if !productsOK(*n, stderr) {
 		return 2
 	}
-	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
+	ctx, stop := interruptible()
 	defer stop()
 	r, err := demo.Bench(ctx, stderr, *dir, *n)
 	if err != nil {
@@ -68,6 +64,16 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "rescue          p50 %.2f ms, p99 %.2f ms\n", ms(r.RescueP50), ms(r.RescueP99))
 	fmt.Fprintf(stdout, "blind baseline  p50 %.2f ms, p99 %.2f ms\n", ms(r.BaselineP50), ms(r.BaselineP99))
 	return 0
+}
+
+// productsOK says whether n is a catalog size the demo generator
+// accepts, and tells the user when it is not.
+func productsOK(n int, stderr io.Writer) bool {
+	if n < demo.MinProducts {
+		fmt.Fprintf(stderr, "whittle: --products must be at least %d\n", demo.MinProducts)
+		return false
+	}
+	return true
 }
 
 func ms(d time.Duration) float64 { return float64(d.Microseconds()) / 1000 }

@@ -1,12 +1,10 @@
 package main
 
 import (
-	"context"
 	"flag"
 	"fmt"
 	"io"
 	"os"
-	"os/signal"
 	"path/filepath"
 	"sync/atomic"
 	"time"
@@ -65,7 +63,7 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 		size = st.Size()
 	}
 	cr := &countingReader{r: f}
-	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
+	ctx, stop := interruptible()
 	defer stop()
 	tty := false
 	if out, ok := stderr.(*os.File); ok && term.IsTerminal(int(out.Fd())) {

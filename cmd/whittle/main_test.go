@@ -32,6 +32,8 @@ func TestExitCodes(t *testing.T) {
 		{"bad category", []string{"explain", "--category", "toys", "x"}, "", 2, "category must be known"},
 		{"bad colour", []string{"explain", "--colour", "pink", "x"}, "", 2, "colour must be auto, always or never"},
 		{"bad lexicon dir", []string{"explain", "--lexicon", "/no/such/dir", "x"}, "", 2, "lexicon directory must exist"},
+		{"demo too small", []string{"demo", "--products", "5"}, "", 2, "the demo catalog has a smallest size"},
+		{"bench too small", []string{"bench", "--products", "5"}, "", 2, "the benchmark catalog has a smallest size"},
 		{"help", []string{"help"}, "", 0, "help is not an error"},
 		{"explain help", []string{"explain", "-h"}, "", 0, "help is not an error"},
 		{"stdin ok", []string{"explain", "-"}, "85 lens\n2x6 12 ft\n", 0, "every line parses"},

@@ -30,6 +30,10 @@ type Options struct {
 	Hits int
 }
 
+// MinProducts is the smallest generated catalog the demo and the
+// benchmark are run on.
+const MinProducts = 100
+
 // generation names the generator's output; an index built by another
 // generation is rebuilt.
 const generation = "1"
