@@ -99,13 +99,36 @@ func EditDistanceWithin(a, b string, limit int) int {
 // editDistance is the optimal string alignment distance between a and b
 // over runes, or limit when it is limit or more.
 func editDistance(a, b string, limit int) int {
-	if d := utf8.RuneCountInString(a) - utf8.RuneCountInString(b); d >= limit || -d >= limit {
+	if isASCII(a) && isASCII(b) {
+		return osa([]byte(a), []byte(b), limit)
+	}
+	return osa([]rune(a), []rune(b), limit)
+}
+
+func isASCII(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] >= utf8.RuneSelf {
+			return false
+		}
+	}
+	return true
+}
+
+// osa is editDistance over letters: bytes when both words are ASCII, so
+// that scanning a vocabulary neither decodes nor allocates for the words
+// of a shopping query.
+func osa[T byte | rune](x, y []T, limit int) int {
+	if d := len(x) - len(y); d >= limit || -d >= limit {
 		return limit
 	}
-	x, y := []rune(a), []rune(b)
-	prev2 := make([]int, len(y)+1)
-	prev := make([]int, len(y)+1)
-	cur := make([]int, len(y)+1)
+	// Three rows of the table; on the stack for words of up to 31 letters.
+	var stack [3 * 32]int
+	n := len(y) + 1
+	rows := stack[:]
+	if 3*n > len(stack) {
+		rows = make([]int, 3*n)
+	}
+	prev2, prev, cur := rows[:n], rows[n:2*n], rows[2*n:3*n]
 	for j := range prev {
 		prev[j] = j
 	}

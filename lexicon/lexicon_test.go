@@ -263,6 +263,10 @@ func TestEditDistance(t *testing.T) {
 		{"ca", "ac", 1},          // one transposition
 		{"", "abc", 3},
 		{"same", "same", 0},
+		{"café", "cafe", 1}, // one rune replaced, not two bytes
+		// Words past the 31 letters the table keeps on the stack: two
+		// letters swapped and one added.
+		{"abcdefghijklmnopqrstuvwxyzabcdefghij", "abcdefghijklmnopqrstuvwxyzabcdefgihjk", 2},
 	} {
 		if got := editDistance(tc.a, tc.b, 99); got != tc.want {
 			t.Errorf("editDistance(%q, %q) = %d, want %d", tc.a, tc.b, got, tc.want)
@@ -283,6 +287,15 @@ func TestEditDistanceWithin(t *testing.T) {
 				t.Errorf("EditDistanceWithin(%q, %q, %d) = %d, want %d (full distance %d)", p[0], p[1], limit, got, want, full)
 			}
 		}
+	}
+}
+
+// Scanning a vocabulary for a typo must not allocate for each word
+// compared: the planner compares a query's unknown word with every word
+// the catalog and the lexicon know.
+func TestEditDistanceWithinAllocs(t *testing.T) {
+	if n := testing.AllocsPerRun(100, func() { EditDistanceWithin("sweter", "sweaters", 2) }); n != 0 {
+		t.Errorf("EditDistanceWithin allocates %v times a call, want 0", n)
 	}
 }
 
