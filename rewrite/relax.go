@@ -301,17 +301,23 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 	if n >= 8 {
 		limit = 2
 	}
-	var best *wordEntry
-	bestD := limit + 1
+	// The first word, in the vocabulary's order, of the least distance.
+	// Only words within limit letters of w's length can be within limit
+	// edits of it.
 	words := rw.words(ctx)
-	for j := range words {
-		if d := lexicon.EditDistanceWithin(w, words[j].word, bestD-1); d < bestD {
-			best, bestD = &words[j], d
+	bestJ, bestD := -1, limit+1
+	for l := n - limit; l <= n+limit; l++ {
+		for _, j := range rw.byLength[l] {
+			d := lexicon.EditDistanceWithin(w, words[j].word, min(bestD, limit))
+			if d <= limit && (d < bestD || d == bestD && j < bestJ) {
+				bestJ, bestD = j, d
+			}
 		}
 	}
-	if best == nil {
+	if bestJ < 0 {
 		return nil, ""
 	}
+	best := &words[bestJ]
 	name := best.word
 	if best.entry != nil {
 		name = best.entry.Name

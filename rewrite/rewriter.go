@@ -10,6 +10,7 @@ import (
 	"sort"
 	"strings"
 	"sync"
+	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
@@ -33,6 +34,7 @@ type Rewriter struct {
 	pal      *colour.Palette
 	wordOnce sync.Once
 	vocab    []wordEntry
+	byLength map[int][]int // rune count → indexes into vocab, in order
 }
 
 // Option configures a Rewriter.
@@ -121,6 +123,11 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 					}
 				}
 			}
+		}
+		rw.byLength = make(map[int][]int)
+		for i, w := range rw.vocab {
+			n := utf8.RuneCountInString(w.word)
+			rw.byLength[n] = append(rw.byLength[n], i)
 		}
 	})
 	return rw.vocab
