@@ -4,8 +4,10 @@ go 1.26.8
 
 require (
 	github.com/BurntSushi/toml v1.6.0
+	github.com/RoaringBitmap/roaring/v2 v2.14.5
 	github.com/alecthomas/participle/v2 v2.1.4
 	github.com/blevesearch/bleve/v2 v2.6.3
+	github.com/blevesearch/bleve_index_api v1.4.1
 	github.com/blevesearch/go-porterstemmer v1.0.3
 	github.com/bojanz/currency v1.4.2
 	github.com/google/go-cmp v0.7.0
@@ -14,9 +16,7 @@ require (
 )
 
 require (
-	github.com/RoaringBitmap/roaring/v2 v2.14.5 // indirect
 	github.com/bits-and-blooms/bitset v1.24.2 // indirect
-	github.com/blevesearch/bleve_index_api v1.4.1 // indirect
 	github.com/blevesearch/geo v0.2.8 // indirect
 	github.com/blevesearch/go-faiss v1.1.5 // indirect
 	github.com/blevesearch/gtreap v0.1.1 // indirect

@@ -45,7 +45,8 @@ func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, erro
 		}
 		b.Kept, b.Count = n, int(res.Total)
 		for _, h := range res.Hits {
-			b.Hits = append(b.Hits, shownOf(h.ID, h.Score, h.Fields))
+			v, _ := h.Fields[fStored].(string)
+			b.Hits = append(b.Hits, shownOf(h.ID, h.Score, v))
 		}
 		return b, nil
 	}

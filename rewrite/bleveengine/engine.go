@@ -11,6 +11,7 @@ import (
 
 	"github.com/blevesearch/bleve/v2"
 	"github.com/blevesearch/bleve/v2/search/query"
+	index "github.com/blevesearch/bleve_index_api"
 
 	"github.com/whittle-search/whittle/lexicon/colour"
 	"github.com/whittle-search/whittle/rewrite"
@@ -20,6 +21,7 @@ import (
 type Engine struct {
 	idx   bleve.Index
 	vocab vocabulary
+	sets  *sets
 
 	// counts remembers recent counts by plan: the index does not change
 	// while it is open, and the planner asks the same parts of queries
@@ -52,11 +54,27 @@ func Open(dir string) (*Engine, error) {
 	if err != nil {
 		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
 	}
-	return &Engine{idx: idx, vocab: v, counts: make(map[string]int)}, nil
+	adv, err := idx.Advanced()
+	if err != nil {
+		idx.Close()
+		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
+	}
+	r, err := adv.Reader()
+	if err != nil {
+		idx.Close()
+		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
+	}
+	return &Engine{idx: idx, vocab: v, sets: newSets(r, idx.Mapping()), counts: make(map[string]int)}, nil
 }
 
 // Close closes the index.
-func (e *Engine) Close() error { return e.idx.Close() }
+func (e *Engine) Close() error {
+	err := e.sets.close()
+	if cerr := e.idx.Close(); err == nil {
+		err = cerr
+	}
+	return err
+}
 
 // Count returns how many products match every clause of p.
 func (e *Engine) Count(ctx context.Context, p rewrite.Plan) (int, error) {
@@ -67,11 +85,10 @@ func (e *Engine) Count(ctx context.Context, p rewrite.Plan) (int, error) {
 	if ok {
 		return n, nil
 	}
-	res, err := e.idx.SearchInContext(ctx, unscored(toQuery(p)))
+	n, err := e.sets.count(ctx, p)
 	if err != nil {
 		return 0, err
 	}
-	n = int(res.Total)
 	e.mu.Lock()
 	if len(e.counts) >= countCache {
 		e.counts = make(map[string]int)
@@ -107,8 +124,13 @@ func (e *Engine) Search(ctx context.Context, p rewrite.Plan, k int) ([]rewrite.H
 type Shown = rewrite.ReportHit
 
 // Show returns the k best products that match p, with what a result
-// list shows of them.
+// list shows of them. A plan that keeps words to match in the text is
+// ranked by bleve's scores, ties by id; one of attributes alone, which
+// every match meets equally, lists its matches in id order with score 1.
 func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
+	if !scoredOnly(p) {
+		return e.showListed(ctx, p, k)
+	}
 	req := bleve.NewSearchRequestOptions(toQuery(p), k, 0, false)
 	req.Fields = []string{fStored}
 	req.SortBy([]string{"-_score", "_id"})
@@ -118,19 +140,48 @@ func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, erro
 	}
 	out := make([]Shown, 0, len(res.Hits))
 	for _, h := range res.Hits {
-		out = append(out, shownOf(h.ID, h.Score, h.Fields))
+		v, _ := h.Fields[fStored].(string)
+		out = append(out, shownOf(h.ID, h.Score, v))
 	}
 	return out, nil
 }
 
-// shownOf reads the stored display field of a hit.
-func shownOf(id string, score float64, fields map[string]any) Shown {
-	s := Shown{ID: id, Score: score}
-	if v, ok := fields[fStored].(string); ok {
-		parts := strings.Split(v, "\x1f")
-		if len(parts) == 4 {
-			s.Title, s.Price, s.Colour, s.InStock = parts[0], parts[1], parts[2], parts[3] == "true"
+// showListed shows the first k matches of p in id order.
+func (e *Engine) showListed(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
+	s := e.sets
+	if err := s.list.load(s.reader); err != nil {
+		return nil, err
+	}
+	m, err := s.match(ctx, p)
+	if err != nil {
+		return nil, err
+	}
+	ids := s.list.first(m, k)
+	out := make([]Shown, 0, len(ids))
+	for _, id := range ids {
+		doc, err := s.reader.Document(id)
+		if err != nil {
+			return nil, err
 		}
+		var v string
+		if doc != nil {
+			doc.VisitFields(func(f index.Field) {
+				if f.Name() == fStored {
+					v = string(f.Value())
+				}
+			})
+		}
+		out = append(out, shownOf(id, 1, v))
+	}
+	return out, nil
+}
+
+// shownOf reads a hit's stored display field.
+func shownOf(id string, score float64, stored string) Shown {
+	s := Shown{ID: id, Score: score}
+	parts := strings.Split(stored, "\x1f")
+	if len(parts) == 4 {
+		s.Title, s.Price, s.Colour, s.InStock = parts[0], parts[1], parts[2], parts[3] == "true"
 	}
 	return s
 }

@@ -3,10 +3,12 @@ package bleveengine
 import (
 	"context"
 	"errors"
+	"fmt"
 	"os"
 	"path/filepath"
 	"slices"
 	"strings"
+	"sync"
 	"testing"
 
 	"github.com/whittle-search/whittle/rewrite"
@@ -177,5 +179,148 @@ func TestBaseline(t *testing.T) {
 		}
 		// TR-1 and TR-2 come in 7..12 and 8..10 (shop.jsonl): not 13.
 		t.Logf("the baseline shows %s, which has no size 13", h.ID)
+	}
+}
+
+// Counts come from clause bitmaps the engine keeps; each must equal the
+// total bleve's own search reports for the same query (bleve, the
+// reference here), and where the catalog makes it plain, the count
+// worked out by hand from shop.jsonl.
+func TestCountsAgreeWithBleve(t *testing.T) {
+	e := openShop(t)
+	ctx := context.Background()
+	lo, hi, p0, p100 := 0.0, 1e9, 0.0, 100.0
+	typ := func(vs ...string) rewrite.Clause { return rewrite.Clause{Field: "product_type", Values: vs} }
+	for _, tc := range []struct {
+		name string
+		plan rewrite.Plan
+		want int // -1: bleve's count alone is the reference
+	}{
+		{"everything", rewrite.Plan{}, 13},
+		{"one type", rewrite.Plan{Clauses: []rewrite.Clause{typ("rain jacket")}}, 3},
+		{"either type", rewrite.Plan{Clauses: []rewrite.Clause{typ("lens", "rug")}}, 3},
+		{"type and size", rewrite.Plan{Clauses: []rewrite.Clause{typ("rain jacket"), {Field: "size", Values: []string{"m"}}}}, -1},
+		{"both lenses are black", rewrite.Plan{Clauses: []rewrite.Clause{typ("lens"), {Field: "colour", Values: []string{"black"}, Excluded: true}}}, 0},
+		{"exclusion alone", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens"}, Excluded: true}}}, 11},
+		{"any focal length", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "measure", Dimension: "focal_length", Min: &lo, Max: &hi}}}, 2},
+		{"price", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "price", Min: &p0, Max: &p100, Unit: "USD"}}}, -1},
+		{"a word", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "keyword", Values: []string{"merino"}}}}, -1},
+		{"no such type", rewrite.Plan{Clauses: []rewrite.Clause{typ("zorblax")}}, 0},
+		{"lens for jx-10 in stock", rewrite.Plan{Clauses: []rewrite.Clause{typ("lens"), {Field: "compatibility", Values: []string{"jx-10"}}, {Field: rewrite.FieldInStock, Values: []string{"true"}}}}, 1},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			got, err := e.Count(ctx, tc.plan)
+			if err != nil {
+				t.Fatal(err)
+			}
+			res, err := e.idx.SearchInContext(ctx, unscored(toQuery(tc.plan)))
+			if err != nil {
+				t.Fatal(err)
+			}
+			if got != int(res.Total) {
+				t.Errorf("Count = %d, bleve's search finds %d", got, res.Total)
+			}
+			if tc.want >= 0 && got != tc.want {
+				t.Errorf("Count = %d, want %d", got, tc.want)
+			}
+		})
+	}
+}
+
+// A plan of attributes alone lists its matches in product id order, the
+// same however bleve numbered the documents (openShop builds in batches
+// of 4, so there are several segments).
+func TestShowListsByID(t *testing.T) {
+	e := openShop(t)
+	ctx := context.Background()
+	for _, tc := range []struct {
+		name string
+		plan rewrite.Plan
+		k    int
+		want []string
+	}{
+		// The first five of the thirteen ids in shop.jsonl, sorted.
+		{"everything", rewrite.Plan{}, 5, []string{"LB-1", "LB-2", "LN-1", "LN-2", "RG-1"}},
+		{"rain jackets", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"rain jacket"}}}}, 2, []string{"RJ-1", "RJ-2"}},
+		{"more than match", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens", "stud"}}}}, 10, []string{"LB-1", "LB-2", "LN-1", "LN-2"}},
+		{"none", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"zorblax"}}}}, 10, nil},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			shown, err := e.Show(ctx, tc.plan, tc.k)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var ids []string
+			for _, s := range shown {
+				ids = append(ids, s.ID)
+				if s.Score != 1 || s.Title == "" {
+					t.Errorf("%s: score %v, title %q; want 1 and a title", s.ID, s.Score, s.Title)
+				}
+			}
+			if !slices.Equal(ids, tc.want) {
+				t.Errorf("shown %v, want %v", ids, tc.want)
+			}
+		})
+	}
+}
+
+// Counts and lists asked from many goroutines at once, with the caches
+// cold, agree with the same asked one at a time.
+func TestConcurrentCountsAndLists(t *testing.T) {
+	seq, par := openShop(t), openShop(t)
+	ctx := context.Background()
+	var plans []rewrite.Plan
+	for _, ty := range []string{"rain jacket", "lens", "rug", "stud", "sweater", "zorblax"} {
+		c := rewrite.Clause{Field: "product_type", Values: []string{ty}}
+		plans = append(plans, rewrite.Plan{Clauses: []rewrite.Clause{c}},
+			rewrite.Plan{Clauses: []rewrite.Clause{c, {Field: rewrite.FieldInStock, Values: []string{"true"}}}})
+	}
+	type result struct {
+		n   int
+		ids []string
+	}
+	ask := func(e *Engine, p rewrite.Plan) (result, error) {
+		n, err := e.Count(ctx, p)
+		if err != nil {
+			return result{}, err
+		}
+		shown, err := e.Show(ctx, p, 3)
+		var ids []string
+		for _, s := range shown {
+			ids = append(ids, s.ID)
+		}
+		return result{n, ids}, err
+	}
+	want := make([]result, len(plans))
+	for i, p := range plans {
+		r, err := ask(seq, p)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want[i] = r
+	}
+	errs := make(chan error, 16*len(plans))
+	var wg sync.WaitGroup
+	for g := range 16 {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for j := range plans {
+				i := (j + g) % len(plans)
+				got, err := ask(par, plans[i])
+				if err != nil {
+					errs <- err
+					continue
+				}
+				if got.n != want[i].n || !slices.Equal(got.ids, want[i].ids) {
+					errs <- fmt.Errorf("plan %s: got %v, want %v", plans[i].Key(), got, want[i])
+				}
+			}
+		}()
+	}
+	wg.Wait()
+	close(errs)
+	for err := range errs {
+		t.Error(err)
 	}
 }
