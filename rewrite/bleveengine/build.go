@@ -9,6 +9,7 @@ import (
 	"os"
 	"path/filepath"
 	"sort"
+	"sync"
 
 	"github.com/blevesearch/bleve/v2"
 
@@ -24,6 +25,11 @@ const vocabFile = "whittle-vocabulary.json"
 type BuildOptions struct {
 	// BatchSize is how many products go into one batch (default 1000).
 	BatchSize int
+	// Workers is how many batches are indexed at once (default 2). Each
+	// holds a batch in memory; bleve turns each batch into a segment on
+	// the goroutine that hands it over, so a second worker builds one
+	// segment while the first builds another.
+	Workers int
 	// SkipBad skips malformed lines, listing them in Stats.Skipped,
 	// instead of stopping at the first.
 	SkipBad bool
@@ -57,6 +63,9 @@ type vocabColour struct {
 func Build(ctx context.Context, r io.Reader, dir string, opts BuildOptions) (*Stats, error) {
 	if opts.BatchSize <= 0 {
 		opts.BatchSize = 1000
+	}
+	if opts.Workers <= 0 {
+		opts.Workers = 2
 	}
 	lex := opts.Lexicon
 	if lex == nil {
@@ -105,7 +114,7 @@ type buildStats struct {
 }
 
 // fill reads the catalog and indexes it. Reading and mapping the next
-// batch overlaps the indexing of the last one.
+// batch overlaps the indexing of the last ones.
 func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon) (*buildStats, error) {
 	st := &buildStats{colours: make(map[string]*vocabColour)}
 	batches := make(chan *bleve.Batch, 1)
@@ -115,22 +124,40 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 		defer close(batches)
 		readErr <- read(ctx, idx, r, opts, lex, st, batches, stop)
 	}()
-	indexed := 0
-	var indexErr error
-	for b := range batches {
-		if indexErr != nil {
-			continue // drain, so the reader can finish
-		}
-		if err := idx.Batch(b); err != nil {
-			indexErr = err
-			close(stop)
-			continue
-		}
-		indexed += b.Size()
-		if opts.Progress != nil {
-			opts.Progress(indexed)
-		}
+	var (
+		mu       sync.Mutex
+		indexed  int
+		indexErr error
+		wg       sync.WaitGroup
+	)
+	for range opts.Workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for b := range batches {
+				mu.Lock()
+				failed := indexErr != nil
+				mu.Unlock()
+				if failed {
+					continue // drain, so the reader can finish
+				}
+				err := idx.Batch(b)
+				mu.Lock()
+				switch {
+				case err != nil && indexErr == nil:
+					indexErr = err
+					close(stop)
+				case err == nil:
+					indexed += b.Size()
+					if opts.Progress != nil {
+						opts.Progress(indexed)
+					}
+				}
+				mu.Unlock()
+			}
+		}()
 	}
+	wg.Wait()
 	if err := <-readErr; err != nil {
 		return nil, err
 	}
