@@ -155,3 +155,10 @@ func ExampleLexicon_Descendants() {
 	}
 	// Output: chelsea boot is a boot
 }
+
+func ExampleNearWords() {
+	nw := lexicon.NewNearWords([]string{"sweater", "jacket", "trousers"})
+	i, d := nw.Nearest("jakcet", 1)
+	fmt.Println(i, d)
+	// Output: 1 1
+}

@@ -302,18 +302,8 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 		limit = 2
 	}
 	// The first word, in the vocabulary's order, of the least distance.
-	// Only words within limit letters of w's length can be within limit
-	// edits of it.
 	words := rw.words(ctx)
-	bestJ, bestD := -1, limit+1
-	for l := n - limit; l <= n+limit; l++ {
-		for _, j := range rw.byLength[l] {
-			d := lexicon.EditDistanceWithin(w, words[j].word, min(bestD, limit))
-			if d <= limit && (d < bestD || d == bestD && j < bestJ) {
-				bestJ, bestD = j, d
-			}
-		}
-	}
+	bestJ, _ := rw.near.Nearest(w, limit)
 	if bestJ < 0 {
 		return nil, ""
 	}

@@ -10,7 +10,6 @@ import (
 	"sort"
 	"strings"
 	"sync"
-	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
@@ -34,7 +33,7 @@ type Rewriter struct {
 	pal      *colour.Palette
 	wordOnce sync.Once
 	vocab    []wordEntry
-	byLength map[int][]int // rune count → indexes into vocab, in order
+	near     *lexicon.NearWords // the words of vocab, for typo lookups
 }
 
 // Option configures a Rewriter.
@@ -124,11 +123,11 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 				}
 			}
 		}
-		rw.byLength = make(map[int][]int)
+		list := make([]string, len(rw.vocab))
 		for i, w := range rw.vocab {
-			n := utf8.RuneCountInString(w.word)
-			rw.byLength[n] = append(rw.byLength[n], i)
+			list[i] = w.word
 		}
+		rw.near = lexicon.NewNearWords(list)
 	})
 	return rw.vocab
 }

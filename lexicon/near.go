@@ -1,0 +1,84 @@
+package lexicon
+
+import "unicode/utf8"
+
+// NearWords finds, among a fixed list of words, the one nearest to a
+// misspelt word in edit distance, without comparing it with every word.
+//
+// For a lookup within one edit it keeps, for each word, the word itself
+// and every string made by deleting one of its letters. Two words one
+// edit apart (a letter inserted, deleted or replaced, or two swapped)
+// share such a string, so only the words that share one with the
+// misspelling are compared with it: the symmetric deletion method. A
+// wider lookup compares the words whose length is within the limit of
+// the misspelling's, since no word further in length can be nearer. In
+// both, EditDistanceWithin decides.
+//
+// A NearWords is safe for concurrent use once made.
+type NearWords struct {
+	words    []string
+	byDel    map[string][]int32
+	byLength map[int][]int32
+}
+
+// NewNearWords indexes words; it takes a few milliseconds for a
+// thousand words.
+func NewNearWords(words []string) *NearWords {
+	n := &NearWords{words: words, byDel: make(map[string][]int32, 8*len(words)), byLength: make(map[int][]int32)}
+	for i, w := range words {
+		for _, d := range deletions(w) {
+			n.byDel[d] = append(n.byDel[d], int32(i))
+		}
+		l := utf8.RuneCountInString(w)
+		n.byLength[l] = append(n.byLength[l], int32(i))
+	}
+	return n
+}
+
+// Nearest returns the index of the first word, in the list's order, at
+// the least edit distance from w, and that distance, if it is at most
+// limit; else -1 and limit+1.
+func (n *NearWords) Nearest(w string, limit int) (int, int) {
+	limit = max(limit, 0)
+	best, bestD := -1, limit+1
+	consider := func(j int) {
+		if j == best {
+			return
+		}
+		d := EditDistanceWithin(w, n.words[j], min(bestD, limit))
+		if d <= limit && (d < bestD || d == bestD && j < best) {
+			best, bestD = j, d
+		}
+	}
+	if limit <= 1 {
+		for _, d := range deletions(w) {
+			for _, j := range n.byDel[d] {
+				consider(int(j))
+			}
+		}
+		return best, bestD
+	}
+	l := utf8.RuneCountInString(w)
+	for k := l - limit; k <= l+limit; k++ {
+		for _, j := range n.byLength[k] {
+			consider(int(j))
+		}
+	}
+	return best, bestD
+}
+
+// deletions lists w and every distinct string made by deleting one of
+// its letters. Deleting either of two equal letters side by side gives
+// the same string, so only the first of a run is deleted.
+func deletions(w string) []string {
+	rs := []rune(w)
+	out := make([]string, 0, len(rs)+1)
+	out = append(out, w)
+	for i := range rs {
+		if i > 0 && rs[i] == rs[i-1] {
+			continue
+		}
+		out = append(out, string(rs[:i])+string(rs[i+1:]))
+	}
+	return out
+}

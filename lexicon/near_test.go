@@ -1,0 +1,99 @@
+package lexicon
+
+import (
+	"strings"
+	"testing"
+)
+
+// scanNearest is the plain scan NearWords stands in for: every word
+// compared, the first of least distance kept.
+func scanNearest(words []string, w string, limit int) (int, int) {
+	best, bestD := -1, limit+1
+	for j, v := range words {
+		if d := EditDistanceWithin(w, v, bestD-1); d < bestD {
+			best, bestD = j, d
+		}
+	}
+	return best, bestD
+}
+
+// NearWords finds what the plain scan finds, for misspellings of each
+// kind (a letter dropped, added, replaced, two swapped, two edits at
+// once) of every third single word the default lexicon knows.
+func TestNearWordsAgreesWithScan(t *testing.T) {
+	var words []string
+	for _, k := range []Kind{ProductType, Colour, Material, Pattern, Silhouette, Brand} {
+		for _, e := range Default().Entries(k) {
+			for _, w := range append([]string{e.Name}, e.Aliases...) {
+				if !strings.ContainsAny(w, " -") {
+					words = append(words, w)
+				}
+			}
+		}
+	}
+	if len(words) < 100 {
+		t.Fatalf("only %d words", len(words))
+	}
+	nw := NewNearWords(words)
+	misspell := func(w string, i int) []string {
+		r := []rune(w)
+		if len(r) < 3 {
+			return nil
+		}
+		i %= len(r) - 1
+		out := []string{
+			string(r[:i]) + string(r[i+1:]),                                 // dropped
+			string(r[:i]) + "q" + string(r[i:]),                             // added
+			string(r[:i]) + "z" + string(r[i+1:]),                           // replaced
+			string(r[:i]) + string(r[i+1]) + string(r[i]) + string(r[i+2:]), // swapped
+		}
+		return append(out, out[1][:len(out[1])-1]+"x") // two edits
+	}
+	checked := 0
+	for i, w := range words {
+		if i%3 != 0 {
+			continue // a third of the words is plenty, and keeps -race quick
+		}
+		for _, m := range misspell(w, i) {
+			for limit := 0; limit <= 2; limit++ {
+				gj, gd := nw.Nearest(m, limit)
+				wj, wd := scanNearest(words, m, limit)
+				if gj != wj || gd != wd {
+					t.Fatalf("Nearest(%q, %d) = %d (%q), %d; the scan finds %d, %d", m, limit, gj, at(words, gj), gd, wj, wd)
+				}
+				checked++
+			}
+		}
+	}
+	t.Logf("%d lookups agree over %d words", checked, len(words))
+}
+
+func at(words []string, i int) string {
+	if i < 0 {
+		return ""
+	}
+	return words[i]
+}
+
+func TestNearWordsEdges(t *testing.T) {
+	nw := NewNearWords([]string{"sweater", "sweeter", "jacket", "café"})
+	for _, tc := range []struct {
+		w      string
+		limit  int
+		want   int
+		wantD  int
+		reason string
+	}{
+		{"sweter", 1, 0, 1, "one letter from both sweater and sweeter: the first wins"},
+		{"jakcet", 1, 2, 1, "two letters swapped is one edit"},
+		{"cafe", 1, 3, 1, "a rune replaced, not two bytes"},
+		{"xxxxxx", 2, -1, 3, "nothing within two"},
+		{"jackets", 9, 2, 1, "a wide limit still finds the nearest"},
+		{"swaeters", 2, 0, 2, "two edits: a swap and an added letter"},
+	} {
+		j, d := nw.Nearest(tc.w, tc.limit)
+		if j != tc.want || d != tc.wantD {
+			t.Errorf("Nearest(%q, %d) = %d, %d; want %d, %d (%s)", tc.w, tc.limit, j, d, tc.want, tc.wantD, tc.reason)
+		}
+	}
+}
