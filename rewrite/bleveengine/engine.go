@@ -272,22 +272,38 @@ func clauseQuery(c rewrite.Clause) query.Query {
 		}
 		return bleve.NewDisjunctionQuery(qs...)
 	}
-	field := c.Field
-	if c.Field == "spec" {
-		field = specField(c.Dimension)
-	}
-	if len(c.Values) == 1 {
-		q := bleve.NewTermQuery(norm(c.Values[0]))
+	field, terms, _ := termsOf(c)
+	if len(terms) == 1 {
+		q := bleve.NewTermQuery(terms[0])
 		q.SetField(field)
 		return q
 	}
-	qs := make([]query.Query, 0, len(c.Values))
-	for _, v := range c.Values {
-		q := bleve.NewTermQuery(norm(v))
+	qs := make([]query.Query, 0, len(terms))
+	for _, v := range terms {
+		q := bleve.NewTermQuery(v)
 		q.SetField(field)
 		qs = append(qs, q)
 	}
 	return bleve.NewDisjunctionQuery(qs...)
+}
+
+// termsOf returns the index field and terms of a clause that any one of
+// several exact terms satisfies: every clause but measures, prices and
+// words.
+func termsOf(c rewrite.Clause) (string, []string, bool) {
+	switch c.Field {
+	case "measure", "price", "keyword":
+		return "", nil, false
+	}
+	field := c.Field
+	if c.Field == "spec" {
+		field = specField(c.Dimension)
+	}
+	terms := make([]string, len(c.Values))
+	for i, v := range c.Values {
+		terms[i] = norm(v)
+	}
+	return field, terms, true
 }
 
 // Describe returns what the planner needs of one product to find

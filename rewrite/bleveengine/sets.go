@@ -99,18 +99,27 @@ func (s *sets) match(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap, erro
 // clause returns the products c matches, excluded or not.
 func (s *sets) clause(ctx context.Context, c rewrite.Clause) (*roaring.Bitmap, error) {
 	c.Excluded, c.From = false, 0
-	return s.query(ctx, rewrite.Plan{Clauses: []rewrite.Clause{c}}.Key(), clauseQuery(c))
+	key := rewrite.Plan{Clauses: []rewrite.Clause{c}}.Key()
+	if field, terms, ok := termsOf(c); ok {
+		return s.remember(key, func() (*roaring.Bitmap, error) { return s.postings(ctx, field, terms) })
+	}
+	return s.query(ctx, key, clauseQuery(c))
 }
 
 // query returns the products q matches, remembered under key.
 func (s *sets) query(ctx context.Context, key string, q query.Query) (*roaring.Bitmap, error) {
+	return s.remember(key, func() (*roaring.Bitmap, error) { return s.find(ctx, q) })
+}
+
+// remember returns the bitmap kept under key, or makes and keeps it.
+func (s *sets) remember(key string, build func() (*roaring.Bitmap, error)) (*roaring.Bitmap, error) {
 	s.mu.Lock()
 	b, ok := s.byKey[key]
 	s.mu.Unlock()
 	if ok {
 		return b, nil
 	}
-	b, err := s.find(ctx, q)
+	b, err := build()
 	if err != nil {
 		return nil, err
 	}
@@ -125,6 +134,44 @@ func (s *sets) query(ctx context.Context, key string, q query.Query) (*roaring.B
 		s.bytes += size
 	}
 	s.mu.Unlock()
+	return b, nil
+}
+
+// postings gathers the documents that hold any of terms in field,
+// reading bleve's posting lists directly: a term needs no searcher, and
+// nothing is scored.
+func (s *sets) postings(ctx context.Context, field string, terms []string) (b *roaring.Bitmap, err error) {
+	b = roaring.New()
+	var tfd index.TermFieldDoc
+	for _, t := range terms {
+		if err := ctx.Err(); err != nil {
+			return nil, err
+		}
+		r, err := s.reader.TermFieldReader(ctx, []byte(t), field, false, false, false)
+		if err != nil {
+			return nil, err
+		}
+		for {
+			d, err := r.Next(&tfd)
+			if err != nil {
+				r.Close()
+				return nil, err
+			}
+			if d == nil {
+				break
+			}
+			v := d.ID.Value()
+			if v > 1<<32-1 {
+				r.Close()
+				return nil, fmt.Errorf("bleveengine: document number %d is past what a clause set holds", v)
+			}
+			b.Add(uint32(v))
+		}
+		if err := r.Close(); err != nil {
+			return nil, err
+		}
+	}
+	b.RunOptimize()
 	return b, nil
 }
 
