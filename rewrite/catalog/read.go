@@ -8,6 +8,7 @@ import (
 	"fmt"
 	"io"
 	"strings"
+	"unicode"
 
 	"github.com/bojanz/currency"
 
@@ -102,6 +103,9 @@ func (r *Reader) decode(text []byte) (*Product, error) {
 	}
 	if strings.TrimSpace(p.ID) == "" {
 		return nil, fail("id", "missing; every line needs it")
+	}
+	if strings.IndexFunc(p.ID, unicode.IsControl) >= 0 {
+		return nil, fail("id", "%q holds a control character", p.ID)
 	}
 	if strings.TrimSpace(p.Title) == "" {
 		return nil, fail("title", "missing; every line needs it")
