@@ -228,6 +228,17 @@ func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 			return nil
 		}
 	}
+	// The palette entries, in name order, so that builds are alike.
+	names := make([]string, 0, len(st.colours))
+	for name := range st.colours {
+		names = append(names, name)
+	}
+	sort.Strings(names)
+	for _, name := range names {
+		if err := batch.Index(paletteIDPrefix+name, paletteDocument(st.colours[name])); err != nil {
+			return err
+		}
+	}
 	send()
 	return nil
 }

@@ -230,7 +230,7 @@ func facetField(field, dimension string) (string, bool) {
 // clause, an excluded clause as a must-not.
 func toQuery(p rewrite.Plan) query.Query {
 	if len(p.Clauses) == 0 {
-		return bleve.NewMatchAllQuery()
+		return everyProduct()
 	}
 	b := bleve.NewBooleanQuery()
 	must := 0
@@ -244,9 +244,18 @@ func toQuery(p rewrite.Plan) query.Query {
 		must++
 	}
 	if must == 0 {
-		b.AddMust(bleve.NewMatchAllQuery())
+		b.AddMust(everyProduct())
 	}
 	return b
+}
+
+// productMarks are the values of fInStock: every product has one of
+// them, and no palette entry has either.
+var productMarks = []string{"true", "false"}
+
+// everyProduct matches every product and no palette entry.
+func everyProduct() query.Query {
+	return clauseQuery(rewrite.Clause{Field: fInStock, Values: productMarks})
 }
 
 func clauseQuery(c rewrite.Clause) query.Query {

@@ -11,6 +11,9 @@ import (
 	"sync"
 	"testing"
 
+	"github.com/blevesearch/bleve/v2"
+
+	"github.com/whittle-search/whittle/lexicon/colour"
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
@@ -111,6 +114,7 @@ func TestBuildErrors(t *testing.T) {
 		{"bad measure", `{"id": "a", "title": "x", "measures": {"length": "long"}}`, 1, "measures", "length"},
 		{"duplicate id", "{\"id\": \"a\", \"title\": \"x\"}\n{\"id\": \"a\", \"title\": \"y\"}\n", 2, "id", "line 1"},
 		{"wrong type", `{"id": "a", "title": "x", "sizes": "m"}`, 1, "sizes", "want"},
+		{"control character in id", `{"id": "a\u001eb", "title": "x"}`, 1, "id", "control character"},
 		{"bad spec", `{"id": "a", "title": "x", "spec": ["3x5"]}`, 1, "spec", "not a standard designation"},
 		{"bad currency", `{"id": "a", "title": "x", "price": {"amount": "5", "currency": "XYZ"}}`, 1, "price", "ISO 4217"},
 	} {
@@ -322,5 +326,36 @@ func TestConcurrentCountsAndLists(t *testing.T) {
 	close(errs)
 	for err := range errs {
 		t.Error(err)
+	}
+}
+
+// The Lab components are numeric fields of the palette entries: a box
+// around harvest gold's Lab (#dfaa0a, RJ-1's colour in shop.jsonl)
+// finds its entry and nothing else, and no product query finds an
+// entry (the counts and lists above would show one).
+func TestPaletteEntries(t *testing.T) {
+	e := openShop(t)
+	rgb, err := colour.ParseHex("#dfaa0a")
+	if err != nil {
+		t.Fatal(err)
+	}
+	lab := rgb.Lab()
+	box := bleve.NewConjunctionQuery()
+	for f, v := range map[string]float64{fL: lab.L, fA: lab.A, fB: lab.B} {
+		lo, hi, yes := v-0.5, v+0.5, true
+		q := bleve.NewNumericRangeInclusiveQuery(&lo, &hi, &yes, &yes)
+		q.SetField(f)
+		box.AddQuery(q)
+	}
+	res, err := e.idx.Search(bleve.NewSearchRequest(box))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(res.Hits) != 1 || res.Hits[0].ID != paletteIDPrefix+"harvest gold" {
+		var ids []string
+		for _, h := range res.Hits {
+			ids = append(ids, h.ID)
+		}
+		t.Errorf("the box around harvest gold finds %q", ids)
 	}
 }

@@ -72,7 +72,9 @@ func (s *sets) match(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap, erro
 		}
 	}
 	if len(must) == 0 {
-		all, err := s.query(ctx, "*", query.NewMatchAllQuery())
+		all, err := s.remember("*", func() (*roaring.Bitmap, error) {
+			return s.postings(ctx, fInStock, productMarks)
+		})
 		if err != nil {
 			return nil, err
 		}
