@@ -8,6 +8,7 @@ import (
 	"time"
 
 	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
@@ -70,5 +71,24 @@ func TestPercentile(t *testing.T) {
 	}
 	if p := percentile(ds, 99); p != 5 {
 		t.Errorf("p99 = %v, want 5", p)
+	}
+}
+
+// A hit without a colour (a skillet) or a price prints neither, rather
+// than an empty field between commas.
+func TestPrintHit(t *testing.T) {
+	for _, tc := range []struct {
+		hit  bleveengine.Shown
+		want string
+	}{
+		{bleveengine.Shown{ID: "A", Title: "Lamp", Colour: "ivory", Price: "9.00 USD"}, "A  Lamp, ivory, 9.00 USD"},
+		{bleveengine.Shown{ID: "B", Title: "Skillet", Price: "45.00 USD"}, "B  Skillet, 45.00 USD"},
+		{bleveengine.Shown{ID: "C", Title: "Rope"}, "C  Rope"},
+	} {
+		var b bytes.Buffer
+		printHit(&b, tc.hit)
+		if got := strings.TrimSpace(b.String()); got != tc.want {
+			t.Errorf("printHit = %q, want %q", got, tc.want)
+		}
 	}
 }

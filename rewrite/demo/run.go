@@ -131,7 +131,7 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 			return err
 		}
 		for _, h := range shown {
-			fmt.Fprintf(w, "            %s  %s, %s, %s\n", h.ID, h.Title, h.Colour, h.Price)
+			printHit(w, h)
 		}
 	}
 	b, err := eng.Baseline(ctx, s.Query, k)
@@ -140,8 +140,20 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 	}
 	fmt.Fprintf(w, "   blind partial match: %d of %d words kept, %d results\n", b.Kept, b.Words, b.Count)
 	for _, h := range b.Hits {
-		fmt.Fprintf(w, "            %s  %s, %s, %s\n", h.ID, h.Title, h.Colour, h.Price)
+		printHit(w, h)
 	}
 	fmt.Fprintln(w)
 	return nil
+}
+
+// printHit writes one hit of the tour: its id and title, then its colour
+// and price where it has them.
+func printHit(w io.Writer, h bleveengine.Shown) {
+	line := h.ID + "  " + h.Title
+	for _, v := range []string{h.Colour, h.Price} {
+		if v != "" {
+			line += ", " + v
+		}
+	}
+	fmt.Fprintf(w, "            %s\n", line)
 }
