@@ -89,3 +89,18 @@ func ExampleRewriter_Rescue() {
 	fmt.Println(out.Count, out.Message)
 	// Output: 2 No exact match for “mustard rain jacket”. Showing rain jackets in any colour.
 }
+
+func ExampleRewriter_Parse() {
+	eng := shopEngine{{"rain jacket", "red"}}
+	rw := rewrite.New(eng, nil)
+	r := rw.Parse("red rain jacket")
+	for _, c := range r.Constraints {
+		fmt.Println(c.Kind, c.Name)
+	}
+	out, _ := rw.RescueParsed(context.Background(), r)
+	fmt.Println(out.Exact, out.Count)
+	// Output:
+	// colour red
+	// product_type rain jacket
+	// true 1
+}

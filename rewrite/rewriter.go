@@ -183,8 +183,14 @@ type Outcome struct {
 // engine finds at least the policy's minimum, within the budget and the
 // context's deadline. See [Rewriter.RescueParsed].
 func (rw *Rewriter) Rescue(ctx context.Context, query string) (*Outcome, error) {
-	r := parser.ParseWith(query, rw.parse)
-	return rw.RescueParsed(ctx, r)
+	return rw.RescueParsed(ctx, rw.Parse(query))
+}
+
+// Parse reads query with the rewriter's parse options, as Rescue does;
+// a caller may adjust the result (say, give it the category the
+// shopper searched in) before RescueParsed.
+func (rw *Rewriter) Parse(query string) *parser.Result {
+	return parser.ParseWith(query, rw.parse)
 }
 
 // RescueParsed rescues a parsed query. Hard constraints and exclusions
