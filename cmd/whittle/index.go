@@ -65,10 +65,7 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 	cr := &countingReader{r: f}
 	ctx, stop := interruptible()
 	defer stop()
-	tty := false
-	if out, ok := stderr.(*os.File); ok && term.IsTerminal(int(out.Fd())) {
-		tty = true
-	}
+	tty := isTerminal(stderr)
 	start := time.Now()
 	progress := func(n int) {
 		if !tty {
@@ -97,6 +94,12 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "indexed %d products (%d colour names, %d lines skipped) into %s in %.1fs\n",
 		st.Products, st.Colours, len(st.Skipped), *dir, time.Since(start).Seconds())
 	return 0
+}
+
+// isTerminal reports whether w is a terminal, where progress is shown.
+func isTerminal(w io.Writer) bool {
+	f, ok := w.(*os.File)
+	return ok && term.IsTerminal(int(f.Fd()))
 }
 
 // bar draws a 24-character progress bar for done of total bytes.

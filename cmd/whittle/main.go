@@ -22,6 +22,7 @@ usage:
   whittle policy show|check ...      print the strictness policy in force, or check a policy file
   whittle index --catalog FILE       build the search index of a catalog (JSON Lines)
   whittle search [flags] QUERY       search the index, rescuing a query that finds too little
+  whittle replay --log FILE          run a query log through whittle and sum up what would change
   whittle bench [--products N]       time index building and rescues on a generated catalog
   whittle help                       show this text
 
@@ -55,6 +56,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return benchCmd(args[1:], stdout, stderr)
 	case "search":
 		return searchCmd(args[1:], stdout, stderr)
+	case "replay":
+		return replayCmd(args[1:], stdin, stdout, stderr)
 	case "help", "-h", "-help", "--help":
 		fmt.Fprint(stdout, usage)
 		return 0

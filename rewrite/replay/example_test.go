@@ -1,0 +1,108 @@
+package replay_test
+
+import (
+	"context"
+	"fmt"
+	"os"
+	"slices"
+	"strings"
+
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/replay"
+)
+
+// kinds is a toy engine: a catalog of product types, and a count that
+// reads only the product type clause.
+type kinds []string
+
+func (k kinds) Count(_ context.Context, p rewrite.Plan) (int, error) {
+	n := 0
+	for _, t := range k {
+		ok := true
+		for _, c := range p.Clauses {
+			if c.Field != "product_type" || slices.Contains(c.Values, t) == c.Excluded {
+				ok = false
+			}
+		}
+		if ok {
+			n++
+		}
+	}
+	return n, nil
+}
+
+func (kinds) Search(context.Context, rewrite.Plan, int) ([]rewrite.Hit, error) { return nil, nil }
+
+func ExampleRead() {
+	log := "rain jacket\n{\"query\": \"red scarf\", \"count\": 12, \"category\": \"apparel\"}\n"
+	for e, err := range replay.Read(strings.NewReader(log)) {
+		fmt.Println(e.Line, e.Query, e.Count, e.Category, err)
+	}
+	// Output:
+	// 1 rain jacket 1  <nil>
+	// 2 red scarf 12 apparel <nil>
+}
+
+func ExampleRun() {
+	rw := rewrite.New(kinds{"rain jacket", "scarf"}, nil)
+	log := "rain jacket\n{\"query\": \"red scarf\", \"count\": 3}\n"
+	sum, err := replay.Run(context.Background(), rw, replay.Read(strings.NewReader(log)), replay.Options{}, func(r *replay.Result) error {
+		fmt.Println(r.Query, r.ExactCount, r.FinalCount)
+		return nil
+	})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	r := sum.Report()
+	fmt.Println(r.ZeroBefore.Searches, "of", r.All.Searches, "searches find nothing as typed,", r.ZeroAfter.Searches, "after rescue")
+	// Output:
+	// rain jacket 1 1
+	// red scarf 0 1
+	// 3 of 4 searches find nothing as typed, 0 after rescue
+}
+
+func ExampleSummary_Report() {
+	s := replay.NewSummary()
+	s.Add(&replay.Result{Entry: replay.Entry{Query: "Size 15 Boots", Count: 30}, HardUnmet: []string{"size 15"}})
+	s.Add(&replay.Result{Entry: replay.Entry{Query: "boots", Count: 70}, ExactCount: 9, FinalCount: 9})
+	r := s.Report()
+	fmt.Printf("%.0f%% of searches find nothing; %s: %d\n", 100*r.RateAfter.Searches, r.Alerts[0].Query, r.Alerts[0].Searches)
+	// Output: 30% of searches find nothing; size 15 boots: 30
+}
+
+func ExampleWriteText() {
+	s := replay.NewSummary()
+	s.Add(&replay.Result{Entry: replay.Entry{Query: "boots", Count: 2}, ExactCount: 9, FinalCount: 9})
+	replay.WriteText(os.Stdout, s.Report())
+	// Output:
+	// 1 queries, 2 searches
+	//
+	// finding nothing            queries          searches
+	//   as typed                  0    0.0%         0    0.0%
+	//   after rescue              0    0.0%         0    0.0%
+	//   rescued                   0                 0
+	//
+	// rescue time: p50 ≤ 50 µs, p99 ≤ 50 µs
+}
+
+func ExampleNewCSV() {
+	c := replay.NewCSV(os.Stdout)
+	c.Write(&replay.Result{Entry: replay.Entry{Line: 1, Query: "red scarf", Count: 1}, ExactCount: 0, Rescued: true, FinalCount: 4,
+		Changes: []replay.Change{{Op: "widen", Kind: "colour", Text: "red"}}})
+	c.Flush()
+	// Output:
+	// line,query,count,category,exact_count,rescued,final_count,relaxations,hard_unmet,elapsed_ms
+	// 1,red scarf,1,,0,true,4,widen colour red,,0.000
+}
+
+func ExampleWriteHTML() {
+	s := replay.NewSummary()
+	s.Add(&replay.Result{Entry: replay.Entry{Query: "boots", Count: 1}, ExactCount: 2, FinalCount: 2})
+	s.Add(&replay.Result{Entry: replay.Entry{Query: "red scarf", Count: 1}, Rescued: true, FinalCount: 4,
+		Changes: []replay.Change{{Op: "drop", Kind: "colour", Text: "red"}}})
+	var b strings.Builder
+	replay.WriteHTML(&b, "Replay", s.Report())
+	fmt.Println(strings.Count(b.String(), "<svg"), "charts")
+	// Output: 3 charts
+}

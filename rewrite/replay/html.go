@@ -1,0 +1,115 @@
+package replay
+
+import (
+	"fmt"
+	"html/template"
+	"io"
+	"strings"
+)
+
+// bar is one bar of a chart: a label, a value and how it is written.
+type bar struct {
+	label string
+	value float64
+	text  string
+}
+
+// hbars draws a horizontal bar chart as inline SVG, bars scaled to the
+// largest value.
+func hbars(title string, bars []bar) template.HTML {
+	const (
+		width, labelW, row, top = 640, 220, 24, 28
+	)
+	h := top + row*len(bars) + 8
+	var b strings.Builder
+	fmt.Fprintf(&b, `<svg xmlns="http://www.w3.org/2000/svg" role="img" aria-label="%s" width="%d" height="%d" viewBox="0 0 %d %d">`,
+		template.HTMLEscapeString(title), width, h, width, h)
+	fmt.Fprintf(&b, `<text x="0" y="18" class="t">%s</text>`, template.HTMLEscapeString(title))
+	most := 0.0
+	for _, x := range bars {
+		most = max(most, x.value)
+	}
+	for i, x := range bars {
+		yy := top + row*i
+		w := 0.0
+		if most > 0 {
+			w = (width - labelW - 90) * x.value / most
+		}
+		fmt.Fprintf(&b, `<text x="0" y="%d" class="l">%s</text>`, yy+16, template.HTMLEscapeString(x.label))
+		fmt.Fprintf(&b, `<rect x="%d" y="%d" width="%.1f" height="%d" class="b"/>`, labelW, yy+3, w, row-8)
+		fmt.Fprintf(&b, `<text x="%.1f" y="%d" class="v">%s</text>`, float64(labelW)+w+6, yy+16, template.HTMLEscapeString(x.text))
+	}
+	b.WriteString(`</svg>`)
+	return template.HTML(b.String())
+}
+
+var page = template.Must(template.New("replay").Parse(`<!doctype html>
+<html lang="en"><head><meta charset="utf-8">
+<title>{{.Title}}</title>
+<style>
+body{font:15px/1.45 system-ui,sans-serif;max-width:720px;margin:2em auto;padding:0 1em;color:#1d2327}
+h1{font-size:1.4em}h2{font-size:1.1em;margin-top:2em}
+table{border-collapse:collapse}td,th{padding:2px 10px 2px 0;text-align:left}td.n{text-align:right}
+svg .t{font-weight:600;font-size:14px}svg .l,svg .v{font-size:13px}svg .b{fill:#5b7f95}
+</style></head><body>
+<h1>{{.Title}}</h1>
+<p>{{.R.All.Queries}} queries, {{.R.All.Searches}} searches{{if .R.SkippedLines}}; {{.R.SkippedLines}} malformed lines skipped{{end}}.</p>
+{{.ZeroChart}}
+<h2>Relaxations used</h2>
+{{if .R.Changes}}{{.ChangeChart}}{{else}}<p>None: every query found enough as typed, or nothing could be relaxed.</p>{{end}}
+<h2>Left with nothing</h2>
+{{if or .R.Unmet .R.UnmetOther.Queries}}<table><tr><th>hard constraint nothing carries</th><th>queries</th><th>searches</th></tr>
+{{range .R.Unmet}}<tr><td>{{.Constraint}}</td><td class="n">{{.Queries}}</td><td class="n">{{.Searches}}</td></tr>
+{{end}}{{if .R.UnmetOther.Queries}}<tr><td>(no single hard constraint)</td><td class="n">{{.R.UnmetOther.Queries}}</td><td class="n">{{.R.UnmetOther.Searches}}</td></tr>{{end}}</table>
+{{else}}<p>No query is left with nothing.</p>{{end}}
+<h2>Frequent queries that find nothing as typed</h2>
+<p>A head query going empty usually means a catalog or publishing fault rather than a long-tail query.</p>
+{{if .R.Alerts}}<table><tr><th>searches</th><th>query</th></tr>
+{{range .R.Alerts}}<tr><td class="n">{{.Searches}}{{if .Error}} (at most {{.Error}} over){{end}}</td><td>{{.Query}}</td></tr>
+{{end}}</table>{{else}}<p>None.</p>{{end}}
+<h2>Rescue time</h2>
+{{.LatencyChart}}
+<p>p50 ≤ {{.P50}}, p99 ≤ {{.P99}}.</p>
+</body></html>
+`))
+
+// WriteHTML writes a one-page report with its charts drawn as inline
+// SVG: it needs nothing from the network and reads offline.
+func WriteHTML(w io.Writer, title string, r Report) error {
+	pct := func(x float64) string { return fmt.Sprintf("%.1f%%", 100*x) }
+	zero := hbars("Share finding nothing", []bar{
+		{"queries, as typed", r.RateBefore.Queries, pct(r.RateBefore.Queries)},
+		{"queries, after rescue", r.RateAfter.Queries, pct(r.RateAfter.Queries)},
+		{"searches, as typed", r.RateBefore.Searches, pct(r.RateBefore.Searches)},
+		{"searches, after rescue", r.RateAfter.Searches, pct(r.RateAfter.Searches)},
+	})
+	var ch []bar
+	for _, c := range r.Changes {
+		ch = append(ch, bar{c.Op + " " + c.Kind, float64(c.Searches), fmt.Sprintf("%d searches", c.Searches)})
+	}
+	// The histogram from its first bucket with a rescue to its last.
+	var lat []bar
+	first, last := -1, -1
+	for i, b := range r.Latency {
+		if b.Count > 0 {
+			last = max(last, i)
+			if first < 0 {
+				first = i
+			}
+		}
+	}
+	for i := max(first, 0); i <= last; i++ {
+		label := "up to " + fmtDur(r.Latency[i].UpTo)
+		if i > 0 {
+			label = fmtDur(r.Latency[i-1].UpTo) + " – " + fmtDur(r.Latency[i].UpTo)
+		}
+		if i == len(r.Latency)-1 && i > 0 {
+			label = "over " + fmtDur(r.Latency[i-1].UpTo)
+		}
+		lat = append(lat, bar{label, float64(r.Latency[i].Count), fmt.Sprint(r.Latency[i].Count)})
+	}
+	return page.Execute(w, map[string]any{
+		"Title": title, "R": r, "ZeroChart": zero, "ChangeChart": hbars("Searches rescued, by relaxation", ch),
+		"LatencyChart": hbars("Rescues by time taken", lat), "P50": fmtDur(r.P50), "P99": fmtDur(r.P99),
+	})
+}

@@ -1,0 +1,118 @@
+package replay
+
+import (
+	"encoding/csv"
+	"fmt"
+	"io"
+	"strconv"
+	"strings"
+	"time"
+)
+
+// WriteText writes a report for a person at a terminal.
+func WriteText(w io.Writer, r Report) error {
+	p := &printer{w: w}
+	p.f("%d queries, %d searches", r.All.Queries, r.All.Searches)
+	if r.SkippedLines > 0 {
+		p.f(" (%d malformed lines skipped)", r.SkippedLines)
+	}
+	p.f("\n\n")
+	p.f("finding nothing            queries          searches\n")
+	p.f("  as typed            %7d %6.1f%%  %8d %6.1f%%\n", r.ZeroBefore.Queries, 100*r.RateBefore.Queries, r.ZeroBefore.Searches, 100*r.RateBefore.Searches)
+	p.f("  after rescue        %7d %6.1f%%  %8d %6.1f%%\n", r.ZeroAfter.Queries, 100*r.RateAfter.Queries, r.ZeroAfter.Searches, 100*r.RateAfter.Searches)
+	p.f("  rescued             %7d          %8d\n", r.Rescued.Queries, r.Rescued.Searches)
+	if len(r.Changes) > 0 {
+		p.f("\nrelaxations used (queries, searches)\n")
+		for _, c := range r.Changes {
+			p.f("  %-8s %-16s %7d %8d\n", c.Op, c.Kind, c.Queries, c.Searches)
+		}
+	}
+	if len(r.Unmet) > 0 || r.UnmetOther.Queries > 0 {
+		p.f("\nleft with nothing, by the hard constraint nothing carries (queries, searches)\n")
+		for _, u := range r.Unmet[:min(len(r.Unmet), 15)] {
+			p.f("  %-32s %7d %8d\n", u.Constraint, u.Queries, u.Searches)
+		}
+		if n := len(r.Unmet) - 15; n > 0 {
+			p.f("  ... and %d more constraints\n", n)
+		}
+		if r.UnmetOther.Queries > 0 {
+			p.f("  %-32s %7d %8d\n", "(no single hard constraint)", r.UnmetOther.Queries, r.UnmetOther.Searches)
+		}
+	}
+	if len(r.Alerts) > 0 {
+		p.f("\nfrequent queries that find nothing as typed (a head query going empty is\nusually a catalog or publishing fault)\n")
+		for _, a := range r.Alerts {
+			bound := ""
+			if a.Error > 0 {
+				bound = fmt.Sprintf(" (at most %d over)", a.Error)
+			}
+			p.f("  %8d  %s%s\n", a.Searches, a.Query, bound)
+		}
+	}
+	p.f("\nrescue time: p50 ≤ %s, p99 ≤ %s\n", fmtDur(r.P50), fmtDur(r.P99))
+	for _, le := range r.Skipped {
+		p.f("skipped %v\n", le)
+	}
+	return p.err
+}
+
+type printer struct {
+	w   io.Writer
+	err error
+}
+
+func (p *printer) f(format string, args ...any) {
+	if p.err == nil {
+		_, p.err = fmt.Fprintf(p.w, format, args...)
+	}
+}
+
+func fmtDur(d time.Duration) string {
+	switch {
+	case d >= time.Second:
+		return fmt.Sprintf("%.1f s", d.Seconds())
+	case d >= time.Millisecond:
+		return fmt.Sprintf("%g ms", float64(d)/float64(time.Millisecond))
+	}
+	return fmt.Sprintf("%g µs", float64(d)/float64(time.Microsecond))
+}
+
+// CSV writes results as rows for a spreadsheet, one a query, after a
+// header row.
+type CSV struct {
+	w      *csv.Writer
+	header bool
+}
+
+// NewCSV returns a CSV writer on w.
+func NewCSV(w io.Writer) *CSV { return &CSV{w: csv.NewWriter(w)} }
+
+var csvHeader = []string{"line", "query", "count", "category", "exact_count", "rescued", "final_count", "relaxations", "hard_unmet", "elapsed_ms"}
+
+// Write writes one result's row (and the header before the first).
+func (c *CSV) Write(res *Result) error {
+	if !c.header {
+		c.header = true
+		if err := c.w.Write(csvHeader); err != nil {
+			return err
+		}
+	}
+	var ch []string
+	for _, x := range res.Changes {
+		ch = append(ch, x.Op+" "+x.Kind+" "+x.Text)
+	}
+	return c.w.Write([]string{strconv.Itoa(res.Line), res.Query, strconv.Itoa(res.Count), res.Category,
+		strconv.Itoa(res.ExactCount), strconv.FormatBool(res.Rescued), strconv.Itoa(res.FinalCount),
+		strings.Join(ch, "; "), strings.Join(res.HardUnmet, "; "),
+		strconv.FormatFloat(float64(res.Elapsed)/float64(time.Millisecond), 'f', 3, 64)})
+}
+
+// Flush writes what is buffered and reports any error so far.
+func (c *CSV) Flush() error {
+	if !c.header {
+		c.header = true
+		c.w.Write(csvHeader)
+	}
+	c.w.Flush()
+	return c.w.Error()
+}
