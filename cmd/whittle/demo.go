@@ -40,8 +40,9 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	n := fs.Int("products", 100000, "size of the generated catalog")
 	dir := fs.String("dir", os.TempDir(), "where to build the temporary index")
+	replayN := fs.Int("replay", demo.ReplayQueries, "length of the longer query log replayed (the shorter is a tenth of it)")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle bench [--products N] [--dir DIR]\n\nBuilds an index of a generated catalog and times rescues of queries that find nothing, beside the blind partial match.\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle bench [--products N] [--replay N] [--dir DIR]\n\nBuilds an index of a generated catalog and times rescues of queries that find nothing, beside the blind partial match; then replays query logs of a tenth of --replay and of --replay lines on it.\n\nflags:\n")
 		fs.PrintDefaults()
 	}
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
@@ -52,7 +53,11 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	ctx, stop := interruptible()
 	defer stop()
-	r, err := demo.Bench(ctx, stderr, *dir, *n)
+	if *replayN < 1 {
+		fs.Usage()
+		return 2
+	}
+	r, err := demo.Bench(ctx, stderr, *dir, *n, *replayN)
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle bench: %v\n", err)
 		return 1
@@ -63,6 +68,9 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "queries         %d that find nothing as typed (%.0f%% rescued)\n", r.Queries, r.RescuedShare*100)
 	fmt.Fprintf(stdout, "rescue          p50 %.2f ms, p99 %.2f ms\n", ms(r.RescueP50), ms(r.RescueP99))
 	fmt.Fprintf(stdout, "blind baseline  p50 %.2f ms, p99 %.2f ms\n", ms(r.BaselineP50), ms(r.BaselineP99))
+	for _, rp := range r.Replays {
+		fmt.Fprintf(stdout, "replay          %d queries, %.0f a second, peak memory %.0f MB\n", rp.Queries, rp.PerSecond, rp.PeakMemoryMB)
+	}
 	return 0
 }
 

@@ -20,6 +20,7 @@ import (
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/replay"
 )
 
 // BenchResult holds the figures of one benchmark run.
@@ -33,14 +34,28 @@ type BenchResult struct {
 	BaselineP50  time.Duration `json:"baseline_p50"`
 	BaselineP99  time.Duration `json:"baseline_p99"`
 	RescuedShare float64       `json:"rescued_share"`
+	// Replays: a log of a tenth of the replay length, then one of the
+	// whole, run through whittle replay on the same index.
+	Replays []ReplayFigures `json:"replays"`
 }
+
+// ReplayFigures are one replay's: queries, their rate over all workers,
+// and the process's peak resident memory during the replay.
+type ReplayFigures struct {
+	Queries      int     `json:"queries"`
+	PerSecond    float64 `json:"per_second"`
+	PeakMemoryMB float64 `json:"peak_memory_mb"`
+}
+
+// ReplayQueries is the usual length of the benchmark's longer query log.
+const ReplayQueries = 100000
 
 // Bench writes a catalog of n generated products to a temporary
 // directory under dir and indexes it as whittle index does, measuring
 // the build's time and peak memory; then it times the rescue of queries
 // that find nothing as typed, beside the blind partial match on the same
 // queries.
-func Bench(ctx context.Context, w io.Writer, dir string, n int) (*BenchResult, error) {
+func Bench(ctx context.Context, w io.Writer, dir string, n, replayN int) (*BenchResult, error) {
 	tmp, err := os.MkdirTemp(dir, "whittle-bench-")
 	if err != nil {
 		return nil, err
@@ -50,7 +65,8 @@ func Bench(ctx context.Context, w io.Writer, dir string, n int) (*BenchResult, e
 	// products are let go before the build, so that the memory measured
 	// is the build's.
 	file := filepath.Join(tmp, "catalog.jsonl")
-	queries, err := writeCatalog(file, n)
+	logs := []string{filepath.Join(tmp, "log-short.txt"), filepath.Join(tmp, "log.txt")}
+	queries, err := writeCatalog(file, n, map[string]int{logs[0]: max(replayN/10, 1), logs[1]: max(replayN, 1)})
 	if err != nil {
 		return nil, err
 	}
@@ -103,7 +119,36 @@ func Bench(ctx context.Context, w io.Writer, dir string, n int) (*BenchResult, e
 	if len(queries) > 0 {
 		res.RescuedShare = float64(rescued) / float64(len(queries))
 	}
+	for _, log := range logs {
+		fmt.Fprintf(w, "replaying %s...\n", filepath.Base(log))
+		f, err := replayFigures(ctx, eng, log)
+		if err != nil {
+			return nil, err
+		}
+		res.Replays = append(res.Replays, *f)
+	}
 	return res, nil
+}
+
+// replayFigures replays a log on the engine with a worker a CPU, as
+// whittle replay does, and measures its rate and peak memory.
+func replayFigures(ctx context.Context, eng *bleveengine.Engine, log string) (*ReplayFigures, error) {
+	f, err := os.Open(log)
+	if err != nil {
+		return nil, err
+	}
+	defer f.Close()
+	runtime.GC()
+	debug.FreeOSMemory()
+	resetPeak()
+	start := time.Now()
+	sum, err := replay.Run(ctx, rewrite.New(eng, nil), replay.Read(bufio.NewReader(f)), replay.Options{}, func(*replay.Result) error { return nil })
+	if err != nil {
+		return nil, err
+	}
+	el := time.Since(start)
+	n := sum.Report().All.Queries
+	return &ReplayFigures{Queries: n, PerSecond: float64(n) / el.Seconds(), PeakMemoryMB: peakMB()}, nil
 }
 
 func percentile(ds []time.Duration, p int) time.Duration {
@@ -116,11 +161,17 @@ func percentile(ds []time.Duration, p int) time.Duration {
 	return s[min(max(i-1, 0), len(s)-1)]
 }
 
-// writeCatalog writes n generated products to file as a catalog and
-// returns the benchmark's queries, drawn from them.
-func writeCatalog(file string, n int) ([]string, error) {
+// writeCatalog writes n generated products to file as a catalog, and
+// to each of logs a query log of the given length drawn from them, and
+// returns the rescue benchmark's queries.
+func writeCatalog(file string, n int, logs map[string]int) ([]string, error) {
 	products := catalog.Demo(n, 1)
 	queries := zeroQueries(products, lexicon.Default(), 200)
+	for log, lines := range logs {
+		if err := writeLog(log, logQueries(products, lexicon.Default(), lines)); err != nil {
+			return nil, err
+		}
+	}
 	f, err := os.Create(file)
 	if err != nil {
 		return nil, err
@@ -138,6 +189,55 @@ func writeCatalog(file string, n int) ([]string, error) {
 		return nil, err
 	}
 	return queries, f.Close()
+}
+
+// logQueries writes n queries as a shop's log holds them: a mix of
+// queries that find something as typed (a product type, a colour and a
+// type, a brand and a type) and queries that find nothing as typed
+// (those of zeroQueries), cycling through the catalog.
+func logQueries(ps []catalog.Product, lex *lexicon.Lexicon, n int) []string {
+	zero := zeroQueries(ps, lex, max(n/4, 1))
+	out := make([]string, 0, n)
+	for i := 0; len(out) < n; i++ {
+		p := ps[(i*7919)%len(ps)]
+		switch {
+		case i%4 == 0 && len(zero) > 0:
+			out = append(out, zero[(i/4)%len(zero)])
+		case i%4 <= 1:
+			out = append(out, p.ProductType)
+		case i%4 == 2:
+			out = append(out, strings.TrimSpace(p.Colour+" "+p.ProductType))
+		default:
+			out = append(out, strings.TrimSpace(p.Brand+" "+p.ProductType))
+		}
+	}
+	return out
+}
+
+// writeLog writes queries one a line; every tenth as a JSON line with a
+// count, as a log that aggregates searches would.
+func writeLog(file string, queries []string) error {
+	f, err := os.Create(file)
+	if err != nil {
+		return err
+	}
+	bw := bufio.NewWriter(f)
+	for i, q := range queries {
+		if strings.TrimSpace(q) == "" {
+			q = "lamp"
+		}
+		if i%10 == 9 {
+			b, _ := json.Marshal(map[string]any{"query": q, "count": 1 + i%17})
+			bw.Write(append(b, '\n'))
+			continue
+		}
+		bw.WriteString(q + "\n")
+	}
+	if err := bw.Flush(); err != nil {
+		f.Close()
+		return err
+	}
+	return f.Close()
 }
 
 // resetPeak starts the peak resident memory count afresh, where the

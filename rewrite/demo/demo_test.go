@@ -51,12 +51,16 @@ func TestRun(t *testing.T) {
 
 func TestBench(t *testing.T) {
 	var log bytes.Buffer
-	r, err := Bench(context.Background(), &log, t.TempDir(), 1000)
+	r, err := Bench(context.Background(), &log, t.TempDir(), 1000, 400)
 	if err != nil {
 		t.Fatal(err)
 	}
 	if r.Products != 1000 || r.Queries == 0 || r.RescueP50 <= 0 || r.RescueP99 < r.RescueP50 || r.BaselineP50 <= 0 {
 		t.Errorf("result %+v", r)
+	}
+	// Two replays: 400/10 lines, then 400.
+	if len(r.Replays) != 2 || r.Replays[0].Queries != 40 || r.Replays[1].Queries != 400 || r.Replays[1].PerSecond <= 0 {
+		t.Errorf("replays %+v", r.Replays)
 	}
 	// Every benchmark query finds nothing as typed; most are rescued.
 	if r.RescuedShare < 0.5 {
