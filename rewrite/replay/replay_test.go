@@ -20,7 +20,7 @@ import (
 
 // shop opens an index of testdata/catalog/shop.jsonl, the invented
 // shop of 13 products the engine's own tests work from by hand.
-func shop(t *testing.T) *rewrite.Rewriter {
+func shop(t testing.TB) *rewrite.Rewriter {
 	t.Helper()
 	f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
 	if err != nil {
