@@ -61,8 +61,10 @@ func TestRescue(t *testing.T) {
 			count: 0, message: "14 awg is not carried in electrical wires; specs carried: 12 awg."},
 		{name: "unavailable part number", query: "fn-3520", reason: "LN-2 is unavailable; LN-1 is an available lens, black like it and fitting jx-10",
 			count: 1, message: "“fn-3520” is unavailable. Showing available lenses like it: near its colour, fitting jx-10."},
-		{name: "drop an unknown word", query: "zorblax", reason: "an unknown word that matches nothing is dropped",
-			count: len(shop), ops: []string{"drop keyword"}},
+		{name: "nothing left to ask", query: "zorblax", reason: "dropping the only word would show the whole catalog, which rescues nothing",
+			count: 0, message: "No results for “zorblax”."},
+		{name: "drop an unknown word", query: "zorblax rain jacket", reason: "the unknown word is dropped; the product type stays: RJ-1 to RJ-4",
+			count: 4, ops: []string{"drop keyword"}},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			eng := &memEngine{products: shop}
@@ -212,7 +214,8 @@ func TestRescueProperties(t *testing.T) {
 			var walk func(i int, st []int)
 			walk = func(i int, st []int) {
 				if i == len(items) {
-					if n, _ := s.count(st); n >= e.MinResults {
+					// A plan that keeps nothing asked for is no rescue.
+					if n, _ := s.count(st); n >= e.MinResults && !s.keepsNothing(st) {
 						any = true
 					}
 					return

@@ -279,6 +279,25 @@ func (s *search) plan(state []int) Plan {
 	return p
 }
 
+// keepsNothing reports whether state drops every constraint that asks
+// for something, where the query had one: such a plan matches the
+// whole catalog (less any exclusions), which rescues nothing. A query
+// of unknown words alone ("zorblax") then finds nothing, and says so,
+// rather than showing arbitrary products.
+func (s *search) keepsNothing(state []int) bool {
+	asked := false
+	for i, it := range s.items {
+		if cl := it.levels[0].clause; cl == nil || cl.Excluded {
+			continue
+		}
+		asked = true
+		if cl := it.levels[state[i]].clause; cl != nil && !cl.Excluded {
+			return false
+		}
+	}
+	return asked
+}
+
 func (s *search) relaxationsOf(state []int) []Relaxation {
 	var rs []Relaxation
 	for i, it := range s.items {
@@ -429,6 +448,9 @@ func (s *search) push(pq *queue, st []int, visited map[string]bool) {
 			continue
 		}
 		visited[k] = true
+		if s.keepsNothing(next) {
+			continue
+		}
 		heap.Push(pq, entry{state: next, cost: s.cost(next), order: pq.n})
 		pq.n++
 	}
