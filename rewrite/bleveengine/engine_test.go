@@ -359,3 +359,33 @@ func TestPaletteEntries(t *testing.T) {
 		t.Errorf("the box around harvest gold finds %q", ids)
 	}
 }
+
+// Products in memory index as the same products read from a file do:
+// two invented products give two, and a count over their product type
+// finds the one of that type.
+func TestBuildProducts(t *testing.T) {
+	ps := []catalog.Product{
+		{ID: "a", Title: "Scree beanie", ProductType: "beanie"},
+		{ID: "b", Title: "Scree scarf", ProductType: "scarf"},
+	}
+	dir := filepath.Join(t.TempDir(), "idx")
+	st, err := BuildProducts(context.Background(), ps, dir, BuildOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if st.Products != 2 {
+		t.Errorf("indexed %d products, want 2", st.Products)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer e.Close()
+	n, err := e.Count(context.Background(), rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"beanie"}}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n != 1 {
+		t.Errorf("beanies = %d, want 1 (product a)", n)
+	}
+}
