@@ -23,9 +23,10 @@ usage:
   whittle index --catalog FILE       build the search index of a catalog (JSON Lines)
   whittle search [flags] QUERY       search the index, rescuing a query that finds too little
   whittle bench [--products N]       time index building and rescues on a generated catalog
+  whittle eval [flags]               measure rescue quality against the blind partial match
   whittle help                       show this text
 
-Run "whittle explain -h", "whittle colour -h" or "whittle policy -h" for more.
+Run "whittle explain -h", "whittle colour -h", "whittle policy -h" or "whittle eval -h" for more.
 
 exit status: 0 parsed, 1 a query had an error, 2 bad usage.
 `
@@ -53,6 +54,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return demoCmd(args[1:], stdout, stderr)
 	case "bench":
 		return benchCmd(args[1:], stdout, stderr)
+	case "eval":
+		return evalCmd(args[1:], stdout, stderr)
 	case "search":
 		return searchCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":

@@ -113,3 +113,11 @@ func ExampleReport_Met() {
 	fmt.Println(rep.Met())
 	// Output: false
 }
+
+// Cases gives the set Run would evaluate, without an index: here the
+// first of 5 on the first 300 products of the demo catalog.
+func ExampleCases() {
+	cases := eval.Cases(eval.RunOptions{Products: 300, Generate: eval.Options{Queries: 5, Seed: 1}})
+	fmt.Println(len(cases), cases[0].Failure)
+	// Output: 5 colour
+}

@@ -106,21 +106,32 @@ type RunOptions struct {
 	Log io.Writer
 }
 
-// DefaultProducts is the demo catalog size Run uses by default: large
-// enough that most product types come in many variants, small enough to
-// index and evaluate in a few seconds.
-const DefaultProducts = 5000
+// DefaultProducts is the demo catalog size Run uses by default, the
+// demo's own: every product type comes in many variants, and indexing and
+// evaluating take seconds.
+const DefaultProducts = 20000
+
+func (o *RunOptions) defaults() {
+	if o.Products <= 0 {
+		o.Products = DefaultProducts
+	}
+	if o.CatalogSeed == 0 {
+		o.CatalogSeed = 1
+	}
+}
+
+// Cases returns the labelled set Run evaluates with the same options,
+// without indexing or searching anything.
+func Cases(opts RunOptions) []Case {
+	opts.defaults()
+	return Generate(catalog.Demo(opts.Products, opts.CatalogSeed), opts.Generate)
+}
 
 // Run generates the demo catalog, indexes it in a temporary directory,
 // writes the labelled set from it and evaluates whittle and the baseline
 // on it.
 func Run(ctx context.Context, opts RunOptions) (Report, error) {
-	if opts.Products <= 0 {
-		opts.Products = DefaultProducts
-	}
-	if opts.CatalogSeed == 0 {
-		opts.CatalogSeed = 1
-	}
+	opts.defaults()
 	logf := func(format string, args ...any) {
 		if opts.Log != nil {
 			fmt.Fprintf(opts.Log, format, args...)
