@@ -389,3 +389,33 @@ func TestBuildProducts(t *testing.T) {
 		t.Errorf("beanies = %d, want 1 (product a)", n)
 	}
 }
+
+// Products the blind match scores alike come in id order, whatever
+// order the index's segments hold them in: three identical invented
+// products, indexed one a batch by two workers.
+func TestBaselineTiesByID(t *testing.T) {
+	var ps []catalog.Product
+	for _, id := range []string{"c", "a", "d", "b"} {
+		ps = append(ps, catalog.Product{ID: id, Title: "Scree beanie", ProductType: "beanie"})
+	}
+	dir := filepath.Join(t.TempDir(), "idx")
+	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{BatchSize: 1, Workers: 2}); err != nil {
+		t.Fatal(err)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer e.Close()
+	b, err := e.Baseline(context.Background(), "scree beanie", 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var got []string
+	for _, h := range b.Hits {
+		got = append(got, h.ID)
+	}
+	if !slices.Equal(got, []string{"a", "b", "c", "d"}) {
+		t.Errorf("hits %v, want a b c d: equal scores, so id order", got)
+	}
+}
