@@ -170,91 +170,11 @@ func (g *generator) write(r *rand.Rand, p *catalog.Product, fail Failure) (Case,
 		return Case{}, false
 	}
 	eff := g.policy.For(p.Category, p.ProductType, g.lex)
-	c := Case{Product: p.ID, ProductType: p.ProductType, Failure: fail}
-	add := func(a Attr) { c.Typed = append(c.Typed, a) }
-
-	typeText := g.typeText(r, entry)
-	if fail == FailTypo {
-		word, typo, ok := g.typo(r, p.ProductType)
-		if !ok {
-			return Case{}, false
-		}
-		typeText = strings.Replace(p.ProductType, word, typo, 1)
-		c.Injected = typo + " (for " + word + ")"
+	inj, said, ok := g.inject(r, p, entry, fail, eff.MeasureTolerance)
+	if !ok || hard(eff, inj.Kind, inj.Dimension) {
+		return Case{}, false
 	}
-	add(Attr{Kind: parser.KindProductType, Value: p.ProductType, Text: typeText})
-	if fail == FailTypo {
-		c.Typed[0].Value = typeText
-	}
-
-	switch {
-	case fail == FailColour:
-		if hard(eff, parser.KindColour, "") {
-			return Case{}, false
-		}
-		word, ok := g.nearColour(p)
-		if !ok {
-			return Case{}, false
-		}
-		add(Attr{Kind: parser.KindColour, Value: word, Text: word})
-		c.Injected = word + " (the shop's " + p.Colour + ")"
-	case p.Colour != "" && p.ColourHex == "" && r.IntN(2) == 0:
-		if _, _, ok := g.lex.ColourNamed(p.Colour); ok {
-			add(Attr{Kind: parser.KindColour, Value: p.Colour, Text: g.colourText(r, p.Colour)})
-		}
-	}
-	switch {
-	case fail == FailPattern:
-		pat, ok := g.missingPattern(r, p)
-		if !ok {
-			return Case{}, false
-		}
-		add(Attr{Kind: parser.KindPattern, Value: pat, Text: pat})
-		c.Injected = pat + " (no " + p.ProductType + " has it)"
-	case p.Pattern != "" && p.Pattern != "solid" && r.IntN(3) == 0:
-		add(Attr{Kind: parser.KindPattern, Value: p.Pattern, Text: p.Pattern})
-	}
-	if p.Material != "" && r.IntN(3) == 0 {
-		add(Attr{Kind: parser.KindMaterial, Value: p.Material, Text: p.Material})
-	}
-	if p.Audience != "" && r.IntN(2) == 0 {
-		add(Attr{Kind: parser.KindAudience, Value: p.Audience, Text: audienceText(r, p.Audience)})
-	}
-	if len(p.Sizes) > 0 {
-		s := p.Sizes[r.IntN(len(p.Sizes))]
-		add(Attr{Kind: parser.KindSize, Value: s, Text: sizeText(r, s)})
-	}
-	if len(p.Spec) > 0 {
-		s := p.Spec[r.IntN(len(p.Spec))]
-		add(Attr{Kind: parser.KindSpec, Value: s, Text: strings.ToLower(s)})
-	}
-	if len(p.CompatibleWith) > 0 && r.IntN(2) == 0 {
-		m := p.CompatibleWith[r.IntN(len(p.CompatibleWith))]
-		add(Attr{Kind: parser.KindCompatibility, Value: m, Text: compatText(r, m)})
-	}
-	slot, value, hasMeasure := mainMeasure(entry, p)
-	switch {
-	case fail == FailMeasure:
-		if !hasMeasure || hard(eff, parser.KindMeasure, slot.Dimension) {
-			return Case{}, false
-		}
-		off, ok := g.offMeasure(r, p, slot.Dimension, value, eff.MeasureTolerance)
-		if !ok {
-			return Case{}, false
-		}
-		add(Attr{Kind: parser.KindMeasure, Dimension: slot.Dimension, Value: off, Text: measureText(r, slot, off)})
-		c.Injected = off + " (the product's " + value + ")"
-	case hasMeasure && r.IntN(2) == 0:
-		add(Attr{Kind: parser.KindMeasure, Dimension: slot.Dimension, Value: value, Text: measureText(r, slot, value)})
-	}
-	if fail == FailKeyword {
-		w, ok := g.extraWord(r)
-		if !ok {
-			return Case{}, false
-		}
-		add(Attr{Kind: parser.KindKeyword, Value: w, Text: w})
-		c.Injected = w
-	}
+	c := Case{Product: p.ID, ProductType: p.ProductType, Failure: fail, Injected: said, Typed: g.attributes(r, p, entry, inj)}
 	for _, a := range c.Typed {
 		if hard(eff, a.Kind, a.Dimension) {
 			c.Hard = append(c.Hard, a)
@@ -265,6 +185,107 @@ func (g *generator) write(r *rand.Rand, p *catalog.Product, fail Failure) (Case,
 	}
 	c.Query = phrase(r, c.Typed)
 	return c, true
+}
+
+// inject makes failure fail for p: the attribute, as asked, that makes
+// the query miss, and what it is. A measure moves within tol, the
+// policy's measure tolerance.
+func (g *generator) inject(r *rand.Rand, p *catalog.Product, entry *lexicon.Entry, fail Failure, tol float64) (Attr, string, bool) {
+	switch fail {
+	case FailTypo:
+		word, typo, ok := g.typo(r, p.ProductType)
+		if !ok {
+			return Attr{}, "", false
+		}
+		text := strings.Replace(p.ProductType, word, typo, 1)
+		return Attr{Kind: parser.KindProductType, Value: text, Text: text}, typo + " (for " + word + ")", true
+	case FailColour:
+		word, ok := g.nearColour(p)
+		if !ok {
+			return Attr{}, "", false
+		}
+		return Attr{Kind: parser.KindColour, Value: word, Text: word}, word + " (the shop's " + p.Colour + ")", true
+	case FailPattern:
+		pat, ok := g.missingPattern(r, p)
+		if !ok {
+			return Attr{}, "", false
+		}
+		return Attr{Kind: parser.KindPattern, Value: pat, Text: pat}, pat + " (no " + p.ProductType + " has it)", true
+	case FailKeyword:
+		w, ok := g.extraWord(r)
+		if !ok {
+			return Attr{}, "", false
+		}
+		return Attr{Kind: parser.KindKeyword, Value: w, Text: w}, w, true
+	case FailMeasure:
+		slot, value, ok := mainMeasure(entry, p)
+		if !ok {
+			return Attr{}, "", false
+		}
+		off, ok := g.offMeasure(r, p, slot.Dimension, value, tol)
+		if !ok {
+			return Attr{}, "", false
+		}
+		return Attr{Kind: parser.KindMeasure, Dimension: slot.Dimension, Value: off, Text: measureText(r, slot, off)},
+			off + " (the product's " + value + ")", true
+	}
+	return Attr{}, "", false
+}
+
+// attributes chooses what a shopper types for p, in a fixed order of
+// kinds: the injected attribute in place of its kind's, the product type
+// always, a size and a designation whenever p has them, the others at
+// random.
+func (g *generator) attributes(r *rand.Rand, p *catalog.Product, entry *lexicon.Entry, inj Attr) []Attr {
+	var out []Attr
+	take := func(kind parser.Kind, chosen bool, a func() Attr) {
+		switch {
+		case inj.Kind == kind:
+			out = append(out, inj)
+		case chosen:
+			out = append(out, a())
+		}
+	}
+	take(parser.KindProductType, true, func() Attr {
+		return Attr{Kind: parser.KindProductType, Value: p.ProductType, Text: g.typeText(r, entry)}
+	})
+	lexColour := p.Colour != "" && p.ColourHex == "" && g.isColour(p.Colour)
+	take(parser.KindColour, lexColour && r.IntN(2) == 0, func() Attr {
+		return Attr{Kind: parser.KindColour, Value: p.Colour, Text: g.colourText(r, p.Colour)}
+	})
+	take(parser.KindPattern, p.Pattern != "" && p.Pattern != "solid" && r.IntN(3) == 0, func() Attr {
+		return Attr{Kind: parser.KindPattern, Value: p.Pattern, Text: p.Pattern}
+	})
+	take(parser.KindMaterial, p.Material != "" && r.IntN(3) == 0, func() Attr {
+		return Attr{Kind: parser.KindMaterial, Value: p.Material, Text: p.Material}
+	})
+	take(parser.KindAudience, p.Audience != "" && r.IntN(2) == 0, func() Attr {
+		return Attr{Kind: parser.KindAudience, Value: p.Audience, Text: audienceText(r, p.Audience)}
+	})
+	take(parser.KindSize, len(p.Sizes) > 0, func() Attr {
+		s := p.Sizes[r.IntN(len(p.Sizes))]
+		return Attr{Kind: parser.KindSize, Value: s, Text: sizeText(r, s)}
+	})
+	take(parser.KindSpec, len(p.Spec) > 0, func() Attr {
+		s := p.Spec[r.IntN(len(p.Spec))]
+		return Attr{Kind: parser.KindSpec, Value: s, Text: strings.ToLower(s)}
+	})
+	take(parser.KindCompatibility, len(p.CompatibleWith) > 0 && r.IntN(2) == 0, func() Attr {
+		m := p.CompatibleWith[r.IntN(len(p.CompatibleWith))]
+		return Attr{Kind: parser.KindCompatibility, Value: m, Text: compatText(r, m)}
+	})
+	slot, value, hasMeasure := mainMeasure(entry, p)
+	take(parser.KindMeasure, hasMeasure && r.IntN(2) == 0, func() Attr {
+		return Attr{Kind: parser.KindMeasure, Dimension: slot.Dimension, Value: value, Text: measureText(r, slot, value)}
+	})
+	take(parser.KindKeyword, false, nil)
+	return out
+}
+
+// isColour reports whether name is a lexicon colour with a value.
+func (g *generator) isColour(name string) bool {
+	_, _, ok := g.lex.ColourNamed(name)
+	return ok
 }
 
 // hard reports whether the policy in force makes an attribute hard.

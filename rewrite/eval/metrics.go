@@ -168,9 +168,13 @@ func loses(w, b caseScore) string {
 
 // The ways whittle loses a case to the baseline, worst first.
 const (
-	LossNoHits    = "no hits"
+	// LossNoHits: whittle returned nothing, the baseline something.
+	LossNoHits = "no hits"
+	// LossOffTarget: a smaller share of whittle's hits is on target.
 	LossOffTarget = "fewer hits on target"
-	LossMissed    = "missed the product the baseline found"
+	// LossMissed: the baseline's hits hold the product meant, whittle's
+	// do not.
+	LossMissed = "missed the product the baseline found"
 )
 
 // failureOrder sorts failures as Failures lists them, others after.
