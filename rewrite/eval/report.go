@@ -189,6 +189,7 @@ func figureRows(w, b Figures, k int) [][3]string {
 		{"mean reciprocal rank", fmt.Sprintf("%.3f", w.MRR()), fmt.Sprintf("%.3f", b.MRR())},
 		{"kept a query", fmt.Sprintf("%.2f of %.2f constraints", w.MeanKept(), w.MeanOf()), fmt.Sprintf("%.2f of %.2f words", b.MeanKept(), b.MeanOf())},
 		{"hits returned", fmt.Sprint(w.Hits), fmt.Sprint(b.Hits)},
+		{"queries found as typed", fmt.Sprint(w.Exact), fmt.Sprint(b.Exact)},
 	}
 }
 
