@@ -82,10 +82,10 @@ func Generate(products []catalog.Product, opts Options) []Case {
 	if n <= 0 {
 		n = DefaultQueries
 	}
-	g := newGenerator(products, opts)
 	if len(products) == 0 {
 		return nil
 	}
+	g := newGenerator(products, opts)
 	r := rand.New(rand.NewPCG(opts.Seed, genStream))
 	var out []Case
 	for i := 0; len(out) < n && i < 2*n; i++ {
