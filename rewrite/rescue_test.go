@@ -351,3 +351,45 @@ func TestRescueConcurrently(t *testing.T) {
 		}
 	}
 }
+
+// When every match is unavailable, the alternatives keep the query's
+// hard constraints: a size the shopper needs is not swapped for another
+// that happens to be in stock.
+func TestAlternativesKeepHardConstraints(t *testing.T) {
+	skirts := []product{
+		{ID: "SK-1", Type: "skirt", Colour: "black", Hex: "#000000", Pattern: "solid", Sizes: []string{"xl"}, Gone: true},
+		{ID: "SK-2", Type: "skirt", Colour: "black", Hex: "#000000", Pattern: "solid", Sizes: []string{"s", "m"}},
+		{ID: "SK-3", Type: "skirt", Colour: "black", Hex: "#000000", Pattern: "solid", Sizes: []string{"m", "xl"}},
+	}
+	for _, tc := range []struct {
+		name, reason string
+		products     []product
+		want         []string
+	}{
+		{name: "no available product in the size", products: skirts[:2],
+			reason: "SK-1, the one xl skirt, is gone; SK-2 is in stock but has no xl, so it is no alternative and SK-1 is shown as it is",
+			want:   []string{"SK-1"}},
+		{name: "an available product in the size", products: skirts,
+			reason: "SK-3 has xl: dropping the pattern already finds SK-1 and SK-3, one of them available, so no alternative is needed",
+			want:   []string{"SK-1", "SK-3"}},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			eng := &memEngine{products: tc.products}
+			o, err := New(eng, nil).Rescue(context.Background(), "striped skirt size xl")
+			if err != nil {
+				t.Fatal(err)
+			}
+			hits, err := eng.Search(context.Background(), o.Plan, 10)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var got []string
+			for _, h := range hits {
+				got = append(got, h.ID)
+			}
+			if !slices.Equal(got, tc.want) {
+				t.Errorf("%s: hits %v, want %v\n%s", tc.reason, got, tc.want, o.Explanation)
+			}
+		})
+	}
+}

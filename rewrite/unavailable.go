@@ -7,14 +7,18 @@ import (
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/parser"
 )
 
 // alternatives handles a plan whose every match is unavailable: it finds
 // available products like the best of them (the same product type; then
 // the catalog colours near its colour, its measures within the
 // tolerance, and what it is compatible with, giving these up in that
-// order of importance, least first) and makes them the outcome. It
-// reports whether it did.
+// order of importance, least first) and makes them the outcome. The
+// query's hard constraints and exclusions hold for the alternatives too
+// (a size, a thread, a wire gauge is not swapped for another because the
+// one asked for is out of stock), except a part number, which names the
+// very product that is unavailable. It reports whether it did.
 func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	desc, ok := rw.engine.(Describer)
 	if !ok {
@@ -33,6 +37,7 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 		return false
 	}
 	stock := Clause{Field: FieldInStock, Values: []string{"true"}, From: -1}
+	kept := keptForAlternatives(s.out.Parsed, p)
 	kind := Clause{Field: "product_type", Values: []string{f.ProductType}, From: -1}
 	var near *Clause
 	if pal := rw.palette(ctx); pal != nil && f.Lab != nil {
@@ -76,7 +81,7 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 		if t.sized && len(sized) == 0 {
 			continue
 		}
-		plan := Plan{Clauses: []Clause{kind, stock}}
+		plan := Plan{Clauses: append([]Clause{kind, stock}, kept...)}
 		skip := false
 		for _, c := range t.clauses {
 			if c == nil {
@@ -109,4 +114,20 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 		return true
 	}
 	return false
+}
+
+// keptForAlternatives are the clauses of p that alternatives must keep:
+// those of hard constraints, but for part numbers, and exclusions.
+func keptForAlternatives(r *parser.Result, p Plan) []Clause {
+	var out []Clause
+	for _, c := range p.Clauses {
+		if c.From < 0 || c.From >= len(r.Constraints) {
+			continue
+		}
+		pc := r.Constraints[c.From]
+		if c.Excluded || pc.Strictness == parser.Hard && pc.Kind != parser.KindPartNumber {
+			out = append(out, c)
+		}
+	}
+	return out
 }

@@ -24,9 +24,10 @@ usage:
   whittle search [flags] QUERY       search the index, rescuing a query that finds too little
   whittle replay --log FILE          run a query log through whittle and sum up what would change
   whittle bench [--products N]       time index building and rescues on a generated catalog
+  whittle eval [flags]               measure rescue quality against the blind partial match
   whittle help                       show this text
 
-Run "whittle explain -h", "whittle colour -h" or "whittle policy -h" for more.
+Run "whittle explain -h", "whittle colour -h", "whittle policy -h" or "whittle eval -h" for more.
 
 exit status: 0 parsed, 1 a query had an error, 2 bad usage.
 `
@@ -54,6 +55,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return demoCmd(args[1:], stdout, stderr)
 	case "bench":
 		return benchCmd(args[1:], stdout, stderr)
+	case "eval":
+		return evalCmd(args[1:], stdout, stderr)
 	case "search":
 		return searchCmd(args[1:], stdout, stderr)
 	case "replay":

@@ -36,6 +36,10 @@ func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, erro
 		dq.SetMin(float64(n))
 		req := bleve.NewSearchRequestOptions(dq, k, 0, false)
 		req.Fields = []string{fStored}
+		// Ties by id, as Show breaks them: otherwise equal scores come in
+		// the order of the index's segments, which differs from build to
+		// build.
+		req.SortBy([]string{"-_score", "_id"})
 		res, err := e.idx.SearchInContext(ctx, req)
 		if err != nil {
 			return nil, err

@@ -108,6 +108,26 @@ func Build(ctx context.Context, r io.Reader, dir string, opts BuildOptions) (*St
 	return &stats.Stats, nil
 }
 
+// BuildProducts indexes products already in memory at dir, as Build
+// does a catalog read from a file: they are written as catalog lines
+// through a pipe into Build.
+func BuildProducts(ctx context.Context, ps []catalog.Product, dir string, opts BuildOptions) (*Stats, error) {
+	pr, pw := io.Pipe()
+	go func() {
+		enc := json.NewEncoder(pw)
+		for i := range ps {
+			if err := enc.Encode(&ps[i]); err != nil {
+				pw.CloseWithError(err)
+				return
+			}
+		}
+		pw.Close()
+	}()
+	st, err := Build(ctx, pr, dir, opts)
+	pr.Close()
+	return st, err
+}
+
 type buildStats struct {
 	Stats
 	colours map[string]*vocabColour

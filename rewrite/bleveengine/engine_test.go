@@ -359,3 +359,63 @@ func TestPaletteEntries(t *testing.T) {
 		t.Errorf("the box around harvest gold finds %q", ids)
 	}
 }
+
+// Products in memory index as the same products read from a file do:
+// two invented products give two, and a count over their product type
+// finds the one of that type.
+func TestBuildProducts(t *testing.T) {
+	ps := []catalog.Product{
+		{ID: "a", Title: "Scree beanie", ProductType: "beanie"},
+		{ID: "b", Title: "Scree scarf", ProductType: "scarf"},
+	}
+	dir := filepath.Join(t.TempDir(), "idx")
+	st, err := BuildProducts(context.Background(), ps, dir, BuildOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if st.Products != 2 {
+		t.Errorf("indexed %d products, want 2", st.Products)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer e.Close()
+	n, err := e.Count(context.Background(), rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"beanie"}}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n != 1 {
+		t.Errorf("beanies = %d, want 1 (product a)", n)
+	}
+}
+
+// Products the blind match scores alike come in id order, whatever
+// order the index's segments hold them in: three identical invented
+// products, indexed one a batch by two workers.
+func TestBaselineTiesByID(t *testing.T) {
+	var ps []catalog.Product
+	for _, id := range []string{"c", "a", "d", "b"} {
+		ps = append(ps, catalog.Product{ID: id, Title: "Scree beanie", ProductType: "beanie"})
+	}
+	dir := filepath.Join(t.TempDir(), "idx")
+	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{BatchSize: 1, Workers: 2}); err != nil {
+		t.Fatal(err)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer e.Close()
+	b, err := e.Baseline(context.Background(), "scree beanie", 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var got []string
+	for _, h := range b.Hits {
+		got = append(got, h.ID)
+	}
+	if !slices.Equal(got, []string{"a", "b", "c", "d"}) {
+		t.Errorf("hits %v, want a b c d: equal scores, so id order", got)
+	}
+}

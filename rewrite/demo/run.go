@@ -2,7 +2,6 @@ package demo
 
 import (
 	"context"
-	"encoding/json"
 	"fmt"
 	"io"
 	"os"
@@ -64,7 +63,7 @@ func Run(ctx context.Context, w io.Writer, opts Options) error {
 	idxDir := filepath.Join(opts.Dir, fmt.Sprintf("index-%s-%d", generation, opts.Products))
 	if _, err := os.Stat(idxDir); err != nil || opts.Rebuild {
 		fmt.Fprintf(w, "Indexing the demo catalog: %d products of an invented general store...\n", len(products))
-		if err := build(ctx, products, idxDir); err != nil {
+		if _, err := bleveengine.BuildProducts(ctx, products, idxDir, bleveengine.BuildOptions{BatchSize: 5000}); err != nil {
 			return err
 		}
 		fmt.Fprintf(w, "indexed in %.1fs\n\n", time.Since(start).Seconds())
@@ -82,24 +81,6 @@ func Run(ctx context.Context, w io.Writer, opts Options) error {
 	}
 	fmt.Fprintf(w, "The tour took %.1fs. Try your own: whittle search --index %s QUERY\n", time.Since(start).Seconds(), idxDir)
 	return nil
-}
-
-// build writes the products as a catalog file through a pipe into Build.
-func build(ctx context.Context, ps []catalog.Product, dir string) error {
-	pr, pw := io.Pipe()
-	go func() {
-		enc := json.NewEncoder(pw)
-		for i := range ps {
-			if err := enc.Encode(&ps[i]); err != nil {
-				pw.CloseWithError(err)
-				return
-			}
-		}
-		pw.Close()
-	}()
-	_, err := bleveengine.Build(ctx, pr, dir, bleveengine.BuildOptions{BatchSize: 5000})
-	pr.Close()
-	return err
 }
 
 func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter, eng *bleveengine.Engine, k int) error {

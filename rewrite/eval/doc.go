@@ -1,0 +1,17 @@
+// Package eval measures how well whittle rescues queries that find
+// nothing, beside the blind partial match a plain engine falls back to.
+//
+// [Generate] writes a labelled set of queries from a catalog held in
+// memory, by a seeded procedure: it takes a real product, writes the query
+// a shopper would type for it from its attributes, in varied word orders
+// and phrasings, then makes the query miss its exact match in one known
+// way (a [Failure]). Each [Case] keeps the truth: the product meant, the
+// attributes typed, which of them the policy makes hard, and what was
+// injected.
+//
+// [Evaluate] runs every case through whittle and through the baseline on
+// the same engine, and [Score] checks each hit against the real
+// attributes of the product it names. [Run] does it all on the demo
+// catalog, in a temporary index. A [Report] holds the figures of both,
+// the goals they are held to, and the cases where whittle does worse.
+package eval

@@ -1,0 +1,123 @@
+package eval_test
+
+import (
+	"context"
+	"fmt"
+	"os"
+
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/eval"
+)
+
+// Two invented products for the examples.
+var examples = []catalog.Product{
+	{ID: "SK-1", Title: "Brellow cotton skirt", ProductType: "skirt", Category: "apparel", Sizes: []string{"s", "m"}},
+	{ID: "SK-2", Title: "Brellow linen skirt", ProductType: "skirt", Category: "apparel", Sizes: []string{"l", "xl"}},
+}
+
+// The two skirts have no colour, pattern or measure to make miss. Asked
+// for five cases, Generate takes ten turns of the failures (colour,
+// pattern, typo, keyword, measure, twice); only the typos (turns 3 and 8)
+// and the extra words (4 and 9) give a case. A size is always typed, and
+// apparel sizes are hard.
+func ExampleGenerate() {
+	cases := eval.Generate(examples, eval.Options{Queries: 5, Seed: 1})
+	for _, c := range cases {
+		fmt.Println(c.Failure, c.Hard[0].Kind)
+	}
+	// Output:
+	// typo size
+	// keyword size
+	// typo size
+	// keyword size
+}
+
+func ExampleSatisfies() {
+	xl := eval.Attr{Kind: parser.KindSize, Value: "xl"}
+	fmt.Println(eval.Satisfies(&examples[0], xl), eval.Satisfies(&examples[1], xl))
+	// Output: false true
+}
+
+func ExampleSatisfiesAll() {
+	want := []eval.Attr{{Kind: parser.KindProductType, Value: "skirt"}, {Kind: parser.KindSize, Value: "m"}}
+	fmt.Println(eval.SatisfiesAll(&examples[0], want), eval.SatisfiesAll(&examples[1], want))
+	// Output: true false
+}
+
+func ExampleScore() {
+	cases := []eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern,
+		Hard: []eval.Attr{{Kind: parser.KindSize, Value: "xl"}}}}
+	// SK-1 lacks xl; SK-2, the product meant, is second.
+	f := eval.Score(cases, []eval.Result{{Hits: []string{"SK-1", "SK-2"}}}, examples)
+	fmt.Printf("preserved %.0f%%, precision %.0f%%, MRR %.2f\n", f.HardPreservation()*100, f.AttributePrecision()*100, f.MRR())
+	// Output: preserved 50%, precision 50%, MRR 0.50
+}
+
+func ExampleNewReport() {
+	cases := []eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern,
+		Hard: []eval.Attr{{Kind: parser.KindSize, Value: "xl"}}}}
+	rep := eval.NewReport(cases, []eval.Result{{Hits: []string{"SK-2"}}}, []eval.Result{{Hits: []string{"SK-1", "SK-2"}}}, examples, 10)
+	for _, g := range rep.Goals {
+		fmt.Println(g.Name, g.Met)
+	}
+	// Output:
+	// rescue rate true
+	// hard-constraint preservation true
+	// attribute precision vs baseline true
+}
+
+func ExampleReport_WriteText() {
+	cases := []eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern}}
+	rep := eval.NewReport(cases, []eval.Result{{Hits: []string{"SK-2"}}}, []eval.Result{{Hits: []string{"SK-2"}}}, examples, 10)
+	rep.WriteText(os.Stdout)
+}
+
+func ExampleEvaluate() {
+	ctx := context.Background()
+	dir, _ := os.MkdirTemp("", "whittle-example-")
+	defer os.RemoveAll(dir)
+	if _, err := bleveengine.BuildProducts(ctx, examples, dir+"/index", bleveengine.BuildOptions{}); err != nil {
+		fmt.Println(err)
+		return
+	}
+	eng, err := bleveengine.Open(dir + "/index")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	defer eng.Close()
+	cases := eval.Generate(examples, eval.Options{Queries: 10, Seed: 1})
+	rep, err := eval.Evaluate(ctx, eng, rewrite.New(eng, nil), cases, examples, 10)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	rep.WriteText(os.Stdout)
+}
+
+func ExampleRun() {
+	rep, err := eval.Run(context.Background(), eval.RunOptions{Products: 1000, Generate: eval.Options{Queries: 100, Seed: 1}})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(rep.Met())
+}
+
+func ExampleReport_Met() {
+	cases := []eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern}}
+	rep := eval.NewReport(cases, []eval.Result{{}}, []eval.Result{{Hits: []string{"SK-2"}}}, examples, 10)
+	fmt.Println(rep.Met())
+	// Output: false
+}
+
+// Cases gives the set Run would evaluate, without an index: here the
+// first of 5 on the first 300 products of the demo catalog.
+func ExampleCases() {
+	cases := eval.Cases(eval.RunOptions{Products: 300, Generate: eval.Options{Queries: 5, Seed: 1}})
+	fmt.Println(len(cases), cases[0].Failure)
+	// Output: 5 colour
+}

@@ -1,0 +1,169 @@
+package eval
+
+import (
+	"context"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"slices"
+
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// Engine is what Evaluate searches: the planner's engine, which also runs
+// the blind partial match. *bleveengine.Engine is one.
+type Engine interface {
+	rewrite.Engine
+	Baseline(ctx context.Context, q string, k int) (*bleveengine.Baseline, error)
+}
+
+// DefaultK is how many hits a query asks for.
+const DefaultK = 10
+
+// Evaluate runs every case through whittle (rw's rescue, then the top k
+// of its plan) and through the baseline on eng, and reports how each did
+// against the products' real attributes.
+func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, cases []Case, products []catalog.Product, k int) (Report, error) {
+	if k <= 0 {
+		k = DefaultK
+	}
+	whittle := make([]Result, 0, len(cases))
+	baseline := make([]Result, 0, len(cases))
+	for _, c := range cases {
+		w, err := rescue(ctx, eng, rw, c.Query, k)
+		if err != nil {
+			return Report{}, fmt.Errorf("%q: %w", c.Query, err)
+		}
+		b, err := eng.Baseline(ctx, c.Query, k)
+		if err != nil {
+			return Report{}, fmt.Errorf("%q: the baseline: %w", c.Query, err)
+		}
+		br := Result{Kept: b.Kept, Of: b.Words, Exact: b.Kept == b.Words && b.Count > 0}
+		for _, h := range b.Hits {
+			br.Hits = append(br.Hits, h.ID)
+		}
+		whittle, baseline = append(whittle, w), append(baseline, br)
+	}
+	return NewReport(cases, whittle, baseline, products, k), nil
+}
+
+// rescue is whittle's result for one query: the top k of the plan its
+// rescue settles on, and how many of the query's constraints (filler
+// aside) that plan keeps.
+func rescue(ctx context.Context, eng Engine, rw *rewrite.Rewriter, q string, k int) (Result, error) {
+	o, err := rw.Rescue(ctx, q)
+	if err != nil {
+		return Result{}, err
+	}
+	res := Result{Exact: o.Exact, Note: o.Message}
+	if o.Message == "" {
+		res.Note = fmt.Sprintf("%d found as typed", o.Count)
+	}
+	var kept []int
+	for _, cl := range o.Plan.Clauses {
+		if cl.From >= 0 && cl.From < len(o.Parsed.Constraints) && !slices.Contains(kept, cl.From) {
+			kept = append(kept, cl.From)
+		}
+	}
+	res.Kept = len(kept)
+	for _, c := range o.Parsed.Constraints {
+		if c.Kind != parser.KindFiller {
+			res.Of++
+		}
+	}
+	if o.Count == 0 {
+		return res, nil
+	}
+	hits, err := eng.Search(ctx, o.Plan, k)
+	if err != nil {
+		return Result{}, err
+	}
+	for _, h := range hits {
+		res.Hits = append(res.Hits, h.ID)
+	}
+	return res, nil
+}
+
+// RunOptions tune Run. The zero value is ready to use.
+type RunOptions struct {
+	// Products is the size of the generated demo catalog (default
+	// DefaultProducts).
+	Products int
+	// CatalogSeed seeds the demo catalog (default 1, the demo's own).
+	CatalogSeed int64
+	// Generate tunes the labelled set.
+	Generate Options
+	// K is how many hits each query asks for (default DefaultK).
+	K int
+	// Dir is where the temporary index is built ("" means the system's
+	// temporary directory); it is removed afterwards.
+	Dir string
+	// Log, when set, is told what Run is doing.
+	Log io.Writer
+}
+
+// DefaultProducts is the demo catalog size Run uses by default, the
+// demo's own: every product type comes in many variants, and indexing and
+// evaluating take seconds.
+const DefaultProducts = 20000
+
+func (o *RunOptions) defaults() {
+	if o.Products <= 0 {
+		o.Products = DefaultProducts
+	}
+	if o.CatalogSeed == 0 {
+		o.CatalogSeed = 1
+	}
+}
+
+// Cases returns the labelled set Run evaluates with the same options,
+// without indexing or searching anything.
+func Cases(opts RunOptions) []Case {
+	opts.defaults()
+	return Generate(catalog.Demo(opts.Products, opts.CatalogSeed), opts.Generate)
+}
+
+// Run generates the demo catalog, indexes it in a temporary directory,
+// writes the labelled set from it and evaluates whittle and the baseline
+// on it.
+func Run(ctx context.Context, opts RunOptions) (Report, error) {
+	opts.defaults()
+	logf := func(format string, args ...any) {
+		if opts.Log != nil {
+			fmt.Fprintf(opts.Log, format, args...)
+		}
+	}
+	products := catalog.Demo(opts.Products, opts.CatalogSeed)
+	tmp, err := os.MkdirTemp(opts.Dir, "whittle-eval-")
+	if err != nil {
+		return Report{}, err
+	}
+	defer os.RemoveAll(tmp)
+	logf("indexing %d products of the demo catalog...\n", len(products))
+	idx := filepath.Join(tmp, "index")
+	if _, err := bleveengine.BuildProducts(ctx, products, idx, bleveengine.BuildOptions{Lexicon: opts.Generate.Lexicon}); err != nil {
+		return Report{}, err
+	}
+	eng, err := bleveengine.Open(idx)
+	if err != nil {
+		return Report{}, err
+	}
+	defer eng.Close()
+	cases := Generate(products, opts.Generate)
+	logf("evaluating %d queries...\n", len(cases))
+	var ropts []rewrite.Option
+	if opts.Generate.Lexicon != nil {
+		ropts = append(ropts, rewrite.WithParseOptions(parser.Options{Lexicon: opts.Generate.Lexicon}))
+	}
+	rw := rewrite.New(eng, opts.Generate.Policy, ropts...)
+	rep, err := Evaluate(ctx, eng, rw, cases, products, opts.K)
+	if err != nil {
+		return Report{}, err
+	}
+	rep.Seed = opts.Generate.Seed
+	return rep, nil
+}
