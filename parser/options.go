@@ -8,6 +8,11 @@ import (
 // MaxQueryBytes is the longest query Parse accepts by default.
 const MaxQueryBytes = 1024
 
+// MaxConstraints is how many constraints Parse keeps of a query by
+// default; a shopping query has a handful, and each one kept costs the
+// planner a rung on every relaxation ladder.
+const MaxConstraints = 64
+
 // Options change how a query is read. The zero value is ready to use:
 // default lexicon, US dollars, US customary volume, no category forced.
 type Options struct {
@@ -25,6 +30,9 @@ type Options struct {
 	Category string
 	// MaxBytes overrides MaxQueryBytes when positive.
 	MaxBytes int
+	// MaxConstraints overrides the package's MaxConstraints when
+	// positive.
+	MaxConstraints int
 }
 
 func (o *Options) lexicon() *lexicon.Lexicon {
@@ -39,6 +47,13 @@ func (o *Options) maxBytes() int {
 		return o.MaxBytes
 	}
 	return MaxQueryBytes
+}
+
+func (o *Options) maxConstraints() int {
+	if o.MaxConstraints > 0 {
+		return o.MaxConstraints
+	}
+	return MaxConstraints
 }
 
 // dollarCurrencies are the currencies a "$" may stand for.

@@ -76,6 +76,12 @@ func ParseWith(query string, opts Options) *Result {
 	p := &tagger{q: query, opts: &opts, lex: opts.lexicon(), res: r}
 	p.checkUTF8()
 	p.run()
+	if max := opts.maxConstraints(); len(r.Constraints) > max {
+		c := r.Constraints[max]
+		r.Errors = append(r.Errors, &Error{Start: c.Start, End: len(query),
+			Msg: fmt.Sprintf("query has %d constraints; the limit is %d, so the rest from here are not read", len(r.Constraints), max)})
+		r.Constraints = r.Constraints[:max]
+	}
 	sort.SliceStable(r.Errors, func(i, j int) bool { return r.Errors[i].Start < r.Errors[j].Start })
 	for _, e := range r.Errors {
 		e.Query = query
