@@ -50,6 +50,10 @@ type Stats struct {
 
 type vocabulary struct {
 	Colours []vocabColour `json:"colours"`
+	// Documents is how many documents the build wrote (products and
+	// palette entries), for Open to check that the index holds them all:
+	// bleve opens an index whose segment is damaged as an empty one.
+	Documents uint64 `json:"documents"`
 }
 
 type vocabColour struct {
@@ -97,7 +101,8 @@ func Build(ctx context.Context, r io.Reader, dir string, opts BuildOptions) (*St
 	if err != nil {
 		return nil, err
 	}
-	if err := writeVocabulary(filepath.Join(tmp, vocabFile), stats.colours); err != nil {
+	docs := uint64(stats.Products + len(stats.colours))
+	if err := writeVocabulary(filepath.Join(tmp, vocabFile), stats.colours, docs); err != nil {
 		return nil, err
 	}
 	stats.Colours = len(stats.colours)
@@ -263,8 +268,8 @@ func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 	return nil
 }
 
-func writeVocabulary(path string, cs map[string]*vocabColour) error {
-	v := vocabulary{}
+func writeVocabulary(path string, cs map[string]*vocabColour, docs uint64) error {
+	v := vocabulary{Documents: docs}
 	for _, c := range cs {
 		v.Colours = append(v.Colours, *c)
 	}

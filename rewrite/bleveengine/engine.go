@@ -54,6 +54,13 @@ func Open(dir string) (*Engine, error) {
 	if err != nil {
 		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
 	}
+	if n, err := idx.DocCount(); err != nil || v.Documents > 0 && n != v.Documents {
+		idx.Close()
+		if err == nil {
+			err = fmt.Errorf("it holds %d documents where the build wrote %d", n, v.Documents)
+		}
+		return nil, fmt.Errorf("the index at %s is damaged (rebuild it with whittle index): %w", dir, err)
+	}
 	adv, err := idx.Advanced()
 	if err != nil {
 		idx.Close()

@@ -1,0 +1,143 @@
+package bleveengine
+
+import (
+	"context"
+	"os"
+	"path/filepath"
+	"runtime"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/whittle-search/whittle/rewrite"
+)
+
+// shopDir builds the test shop's index and returns its directory.
+func shopDir(t *testing.T) string {
+	t.Helper()
+	f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	dir := filepath.Join(t.TempDir(), "idx")
+	if _, err := Build(context.Background(), f, dir, BuildOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	return dir
+}
+
+// A damaged or missing index gives a clear error from Open or from the
+// first query, never a panic.
+func TestDamagedIndex(t *testing.T) {
+	garbage := []byte(strings.Repeat("not an index\n", 100))
+	for _, tc := range []struct {
+		name   string
+		damage func(t *testing.T, dir string)
+		want   string
+	}{
+		{"no directory", func(t *testing.T, dir string) { os.RemoveAll(dir) }, "no index at"},
+		{"a file, not a directory", func(t *testing.T, dir string) {
+			os.RemoveAll(dir)
+			os.WriteFile(dir, garbage, 0o644)
+		}, "not an index directory"},
+		{"no vocabulary", func(t *testing.T, dir string) { os.Remove(filepath.Join(dir, vocabFile)) }, "not a whittle index"},
+		{"damaged vocabulary", func(t *testing.T, dir string) { os.WriteFile(filepath.Join(dir, vocabFile), garbage, 0o644) }, "vocabulary is damaged"},
+		{"no bleve index", func(t *testing.T, dir string) { os.RemoveAll(filepath.Join(dir, "index")) }, "opening the index"},
+		{"damaged root", func(t *testing.T, dir string) {
+			overwrite(t, filepath.Join(dir, "index", "store"), "root.bolt", garbage)
+		}, ""},
+		{"damaged segment", func(t *testing.T, dir string) { overwrite(t, filepath.Join(dir, "index", "store"), ".zap", garbage) }, ""},
+		// bleve opens an index whose only segment is empty as an empty index;
+		// the document count the build wrote down tells it apart.
+		{"truncated segment", func(t *testing.T, dir string) { overwrite(t, filepath.Join(dir, "index", "store"), ".zap", nil) }, "is damaged"},
+		{"damaged metadata", func(t *testing.T, dir string) { overwrite(t, filepath.Join(dir, "index"), "index_meta.json", garbage) }, ""},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			dir := shopDir(t)
+			tc.damage(t, dir)
+			err := openAndAsk(dir)
+			if err == nil {
+				t.Fatal("a damaged index gave no error")
+			}
+			if tc.want != "" && !strings.Contains(err.Error(), tc.want) {
+				t.Errorf("error %q, want one saying %q", err, tc.want)
+			}
+			t.Logf("%s: %v", tc.name, err)
+		})
+	}
+}
+
+// overwrite replaces the first file in dir whose name ends in suffix.
+func overwrite(t *testing.T, dir, suffix string, b []byte) {
+	t.Helper()
+	es, err := os.ReadDir(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, e := range es {
+		if strings.HasSuffix(e.Name(), suffix) {
+			if err := os.WriteFile(filepath.Join(dir, e.Name()), b, 0o644); err != nil {
+				t.Fatal(err)
+			}
+			return
+		}
+	}
+	t.Fatalf("no file ending in %s in %s", suffix, dir)
+}
+
+// openAndAsk opens the index and asks it a count, a list and a facet.
+func openAndAsk(dir string) (err error) {
+	e, err := Open(dir)
+	if err != nil {
+		return err
+	}
+	defer e.Close()
+	ctx := context.Background()
+	p := rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"rain jacket"}}}}
+	if _, err := e.Count(ctx, p); err != nil {
+		return err
+	}
+	if _, err := e.Show(ctx, p, 3); err != nil {
+		return err
+	}
+	_, err = e.Values(ctx, "size", "", p)
+	return err
+}
+
+// Opening, using and closing an index leaves no goroutine and no file
+// descriptor behind.
+func TestCloseLeaksNothing(t *testing.T) {
+	dir := shopDir(t)
+	if err := openAndAsk(dir); err != nil { // warm up: lexicon, caches
+		t.Fatal(err)
+	}
+	fds := func() int {
+		es, err := os.ReadDir("/proc/self/fd")
+		if err != nil {
+			t.Skip("no /proc/self/fd here to count file descriptors")
+		}
+		return len(es)
+	}
+	settle := func(want int, now func() int) int {
+		// Goroutines bleve starts end shortly after Close returns.
+		n := now()
+		for i := 0; i < 200 && n > want; i++ {
+			time.Sleep(10 * time.Millisecond)
+			n = now()
+		}
+		return n
+	}
+	g0, f0 := runtime.NumGoroutine(), fds()
+	for range 20 {
+		if err := openAndAsk(dir); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if g := settle(g0, runtime.NumGoroutine); g > g0 {
+		t.Errorf("%d goroutines after 20 opens and closes, %d before", g, g0)
+	}
+	if f := settle(f0, fds); f > f0 {
+		t.Errorf("%d file descriptors after 20 opens and closes, %d before", f, f0)
+	}
+}
