@@ -114,6 +114,7 @@ func TestBuildErrors(t *testing.T) {
 		{"bad measure", `{"id": "a", "title": "x", "measures": {"length": "long"}}`, 1, "measures", "length"},
 		{"duplicate id", "{\"id\": \"a\", \"title\": \"x\"}\n{\"id\": \"a\", \"title\": \"y\"}\n", 2, "id", "line 1"},
 		{"wrong type", `{"id": "a", "title": "x", "sizes": "m"}`, 1, "sizes", "want"},
+		{"a 10 MB line", "{\"id\": \"a\", \"title\": \"x\"}\n{\"id\": \"b\", \"title\": \"" + strings.Repeat("x", 10<<20) + "\"}\n", 2, "", "longer than"},
 		{"control character in id", `{"id": "a\u001eb", "title": "x"}`, 1, "id", "control character"},
 		{"bad spec", `{"id": "a", "title": "x", "spec": ["3x5"]}`, 1, "spec", "not a standard designation"},
 		{"bad currency", `{"id": "a", "title": "x", "price": {"amount": "5", "currency": "XYZ"}}`, 1, "price", "ISO 4217"},

@@ -2,10 +2,12 @@ package bleveengine
 
 import (
 	"context"
+	"fmt"
 	"os"
 	"path/filepath"
 	"runtime"
 	"strings"
+	"sync"
 	"testing"
 	"time"
 
@@ -139,5 +141,81 @@ func TestCloseLeaksNothing(t *testing.T) {
 	}
 	if f := settle(f0, fds); f > f0 {
 		t.Errorf("%d file descriptors after 20 opens and closes, %d before", f, f0)
+	}
+}
+
+// 64 goroutines parse, rescue and list queries on one engine at once,
+// with its caches cold; each result equals the one a single goroutine
+// gets on an engine of its own.
+func TestMixedCallsFrom64Goroutines(t *testing.T) {
+	queries := []string{"rain jacket", "mustard rain jacket", "striped rain jacket", "merino crew sweater oatmeal",
+		"trail running shoes size 13", "85 lens", "50mm lens for jx-10", "2x4 12 ft", "5x8 rug", "rain jacket under $50",
+		"14 awg wire", "not black lens", "fn-3520", "zorblax", "womens rain jacket size m"}
+	type result struct {
+		parsed  string
+		message string
+		count   int
+		ids     string
+	}
+	ask := func(e *Engine, rw *rewrite.Rewriter, q string) (result, error) {
+		r := rw.Parse(q)
+		var kinds []string
+		for _, c := range r.Constraints {
+			kinds = append(kinds, fmt.Sprintf("%s:%d-%d", c.Kind, c.Start, c.End))
+		}
+		o, err := rw.RescueParsed(context.Background(), r)
+		if err != nil {
+			return result{}, err
+		}
+		shown, err := e.Show(context.Background(), o.Plan, 5)
+		var ids []string
+		for _, s := range shown {
+			ids = append(ids, s.ID)
+		}
+		return result{strings.Join(kinds, " "), o.Message, o.Count, strings.Join(ids, ",")}, err
+	}
+	seqDir, parDir := shopDir(t), shopDir(t)
+	seq, err := Open(seqDir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer seq.Close()
+	want := map[string]result{}
+	for _, q := range queries {
+		r, err := ask(seq, rewrite.New(seq, nil), q)
+		if err != nil {
+			t.Fatal(err)
+		}
+		want[q] = r
+	}
+	par, err := Open(parDir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer par.Close()
+	rw := rewrite.New(par, nil)
+	var wg sync.WaitGroup
+	errs := make(chan error, 64*len(queries))
+	for g := range 64 {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for j := range queries {
+				q := queries[(j+g)%len(queries)]
+				got, err := ask(par, rw, q)
+				if err != nil {
+					errs <- err
+					continue
+				}
+				if got != want[q] {
+					errs <- fmt.Errorf("%q: got %+v, want %+v", q, got, want[q])
+				}
+			}
+		}()
+	}
+	wg.Wait()
+	close(errs)
+	for err := range errs {
+		t.Error(err)
 	}
 }

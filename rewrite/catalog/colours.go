@@ -14,8 +14,10 @@ import (
 	"github.com/whittle-search/whittle/lexicon/colour"
 )
 
-// MaxLine is the longest catalog line read, in bytes.
-const MaxLine = 16 << 20
+// MaxLine is the longest catalog line read, in bytes: 1 MiB, far past
+// any product's line, so that a feed that lost its line breaks is
+// stopped at its first line instead of read whole into memory.
+const MaxLine = 1 << 20
 
 // LineError is a malformed catalog line.
 type LineError struct {
