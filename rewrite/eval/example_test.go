@@ -121,3 +121,18 @@ func ExampleCases() {
 	fmt.Println(len(cases), cases[0].Failure)
 	// Output: 5 colour
 }
+
+// In the long style a query has four to seven constraints. This rug has
+// only a type too short to misspell, a brand and a price, so of ten turns
+// only the two extra-word turns give a case: the type, the brand, a
+// price ceiling and the extra word.
+func ExampleGenerate_long() {
+	rug := []catalog.Product{{ID: "RG-9", Title: "Mossel rug", ProductType: "rug", Category: "home", Brand: "Mossel",
+		Price: &catalog.Price{Amount: "100.00", Currency: "USD"}}}
+	for _, c := range eval.Generate(rug, eval.Options{Queries: 5, Seed: 1, Style: eval.StyleLong}) {
+		fmt.Println(c.Style, c.Failure, len(c.Typed))
+	}
+	// Output:
+	// long keyword 4
+	// long keyword 4
+}
