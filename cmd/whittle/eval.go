@@ -15,13 +15,13 @@ func evalCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("eval", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	n := fs.Int("products", eval.DefaultProducts, "size of the generated demo catalog")
-	queries := fs.Int("queries", eval.DefaultQueries, "how many labelled queries to write")
+	queries := fs.Int("queries", eval.DefaultQueries, "how many labelled queries to write in each style")
 	seed := fs.Uint64("seed", 1, "seed of the labelled set: the same seed gives the same queries")
 	hits := fs.Int("hits", eval.DefaultK, "how many hits each query asks for (the k of top k)")
 	policy := fs.String("policy", "", "a strictness policy laid over the built-in one")
 	dir := fs.String("dir", os.TempDir(), "where to build the temporary index")
-	asJSON := fs.Bool("json", false, "write the report as one JSON object")
-	cases := fs.Bool("cases", false, "write the labelled set, one JSON object a line, and evaluate nothing")
+	asJSON := fs.Bool("json", false, "write each style's report as one JSON object, one a line")
+	cases := fs.Bool("cases", false, "write the labelled set of each style, one JSON object a line, and evaluate nothing")
 	style := fs.String("style", "both", "how the queries are written: short (about 3 constraints), long (4 to 7) or both, one set each")
 	fs.Usage = func() {
 		fmt.Fprint(stderr, `usage: whittle eval [--products N] [--queries N] [--seed S] [--style short|long|both] [--hits K] [--policy FILE] [--dir DIR] [--json | --cases]
@@ -37,11 +37,12 @@ ranks and how much of each query was kept; the goals beside them; the
 figures by kind of failure; and examples of where whittle does worse.
 
 The queries come in two styles: short (the product type and a few of its
-attributes, about three constraints) and long (four to seven constraints,
-brand, silhouette and a price ceiling among them). --style both, the
-default, writes a set of --queries queries in each style, reports on each
-in turn and ends with the goals of both side by side; --json then writes
-one object a style, one a line, and --cases both sets.
+attributes, about three constraints) and long (four to seven constraints
+drawn from more of its attributes, among them its brand, silhouette and a
+price ceiling it meets). --style both, the default, writes a set of
+--queries queries in each style, reports on each in turn and ends with
+the goals of both side by side; --json then writes one object a style,
+one a line, and --cases both sets.
 
 exit status: 0 evaluated (whether or not the goals are met), 1 the run
 failed, 2 bad usage.
