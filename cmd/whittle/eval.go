@@ -15,15 +15,16 @@ func evalCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("eval", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	n := fs.Int("products", eval.DefaultProducts, "size of the generated demo catalog")
-	queries := fs.Int("queries", eval.DefaultQueries, "how many labelled queries to write")
+	queries := fs.Int("queries", eval.DefaultQueries, "how many labelled queries to write in each style")
 	seed := fs.Uint64("seed", 1, "seed of the labelled set: the same seed gives the same queries")
 	hits := fs.Int("hits", eval.DefaultK, "how many hits each query asks for (the k of top k)")
 	policy := fs.String("policy", "", "a strictness policy laid over the built-in one")
 	dir := fs.String("dir", os.TempDir(), "where to build the temporary index")
-	asJSON := fs.Bool("json", false, "write the report as one JSON object")
-	cases := fs.Bool("cases", false, "write the labelled set, one JSON object a line, and evaluate nothing")
+	asJSON := fs.Bool("json", false, "write each style's report as one JSON object, one a line")
+	cases := fs.Bool("cases", false, "write the labelled set of each style, one JSON object a line, and evaluate nothing")
+	style := fs.String("style", "both", "how the queries are written: short (about 3 constraints), long (4 to 7) or both, one set each")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, `usage: whittle eval [--products N] [--queries N] [--seed S] [--hits K] [--policy FILE] [--dir DIR] [--json | --cases]
+		fmt.Fprint(stderr, `usage: whittle eval [--products N] [--queries N] [--seed S] [--style short|long|both] [--hits K] [--policy FILE] [--dir DIR] [--json | --cases]
 
 Generates the demo catalog, writes from it a labelled set of queries that
 each miss their exact match in one known way (a colour the shop does not
@@ -34,6 +35,14 @@ prints, for both, the rescue rate, the share of hits that keep every hard
 constraint, the share also of the type meant, where the product meant
 ranks and how much of each query was kept; the goals beside them; the
 figures by kind of failure; and examples of where whittle does worse.
+
+The queries come in two styles: short (the product type and a few of its
+attributes, about three constraints) and long (four to seven constraints
+drawn from more of its attributes, among them its brand, silhouette and a
+price ceiling it meets). --style both, the default, writes a set of
+--queries queries in each style, reports on each in turn and ends with
+the goals of both side by side; --json then writes one object a style,
+one a line, and --cases both sets.
 
 exit status: 0 evaluated (whether or not the goals are met), 1 the run
 failed, 2 bad usage.
@@ -57,31 +66,73 @@ flags:
 			return 2
 		}
 	}
+	styles, ok := evalStyles(*style, stderr)
+	if !ok {
+		return 2
+	}
 	pol, ok := loadPolicy("eval", *policy, lexicon.Default(), stderr)
 	if !ok {
 		return 2
 	}
 	opts := eval.RunOptions{Products: *n, Generate: eval.Options{Queries: *queries, Seed: *seed, Policy: pol}, K: *hits, Dir: *dir, Log: stderr}
 	if *cases {
-		return writeCases(stdout, stderr, eval.Cases(opts))
+		var all []eval.Case
+		for _, s := range styles {
+			opts.Generate.Style = s
+			all = append(all, eval.Cases(opts)...)
+		}
+		return writeCases(stdout, stderr, all)
 	}
 	ctx, stop := interruptible()
 	defer stop()
-	rep, err := eval.Run(ctx, opts)
-	if err != nil {
-		fmt.Fprintf(stderr, "whittle eval: %v\n", err)
-		return 1
-	}
-	if *asJSON {
-		err = json.NewEncoder(stdout).Encode(rep)
-	} else {
-		err = rep.WriteText(stdout)
+	reps, err := eval.RunStyles(ctx, opts, styles)
+	if err == nil {
+		err = writeReports(stdout, reps, *asJSON)
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle eval: %v\n", err)
 		return 1
 	}
 	return 0
+}
+
+// evalStyles reads --style.
+func evalStyles(s string, stderr io.Writer) ([]eval.Style, bool) {
+	switch s {
+	case "both":
+		return eval.Styles, true
+	case string(eval.StyleShort), string(eval.StyleLong):
+		return []eval.Style{eval.Style(s)}, true
+	}
+	fmt.Fprintf(stderr, "whittle eval: --style is short, long or both, not %q\n", s)
+	return nil, false
+}
+
+// writeReports writes each report, as JSON one a line or as text one
+// after the other, then, for more than one, their goals side by side.
+func writeReports(w io.Writer, reps []eval.Report, asJSON bool) error {
+	if asJSON {
+		enc := json.NewEncoder(w)
+		for _, r := range reps {
+			if err := enc.Encode(r); err != nil {
+				return err
+			}
+		}
+		return nil
+	}
+	for i, r := range reps {
+		if i > 0 {
+			fmt.Fprintln(w)
+		}
+		if err := r.WriteText(w); err != nil {
+			return err
+		}
+	}
+	if len(reps) < 2 {
+		return nil
+	}
+	fmt.Fprintln(w, "\ngoals by style:")
+	return eval.WriteGoals(w, reps)
 }
 
 // writeCases writes the labelled set as JSON Lines.

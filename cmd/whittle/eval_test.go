@@ -27,6 +27,8 @@ func TestEvalUsage(t *testing.T) {
 		{"no hits", []string{"eval", "--hits", "0"}, 2, "--hits must be at least 1", "a top 0 holds nothing"},
 		{"bad seed", []string{"eval", "--seed", "-1"}, 2, "invalid value", "a seed is a whole number from 0"},
 		{"bad policy", []string{"eval", "--policy", bad}, 2, "did you mean", "a policy with an unknown key is refused, with the nearest key"},
+		{"bad style", []string{"eval", "--style", "medium"}, 2, "--style is short, long or both", "there are two styles, and both"},
+		{"help names the styles", []string{"eval", "-h"}, 0, "--style short|long|both", "the usage line lists the style flag"},
 		{"stray argument", []string{"eval", "lens"}, 2, "usage: whittle eval", "eval takes no query"},
 		{"unknown flag", []string{"eval", "--nope"}, 2, "flag provided but not defined", "unknown flags are refused"},
 	} {
@@ -39,13 +41,15 @@ func TestEvalUsage(t *testing.T) {
 	}
 }
 
-// A small run prints both engines' figures and the goals with a verdict.
+// A small run prints both engines' figures and the goals with a verdict,
+// for each style by default, and the goals of both side by side.
 func TestEvalText(t *testing.T) {
 	code, out, stderr := runCLI("", "eval", "--products", "300", "--queries", "20", "--dir", t.TempDir())
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	for _, want := range []string{"20 queries on 300 products (seed 1)", "rescue rate (some hits)", "attribute precision vs baseline", "failure"} {
+	for _, want := range []string{"20 short queries on 300 products (seed 1)", "20 long queries on 300 products (seed 1)",
+		"rescue rate (some hits)", "attribute precision vs baseline", "failure", "goals by style:", "short (20 queries)  long (20 queries)"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("output lacks %q:\n%s", want, out)
 		}
@@ -55,25 +59,45 @@ func TestEvalText(t *testing.T) {
 	}
 }
 
-// --json writes one object with both engines' figures and the goals.
+// --json writes one object a style, one a line, each with both engines'
+// figures and the goals.
 func TestEvalJSON(t *testing.T) {
-	code, out, stderr := runCLI("", "eval", "--products", "300", "--queries", "10", "--json", "--dir", t.TempDir())
-	if code != 0 {
-		t.Fatalf("exit %d: %s", code, stderr)
-	}
-	var rep map[string]json.RawMessage
-	if err := json.Unmarshal([]byte(out), &rep); err != nil {
-		t.Fatalf("not JSON: %v\n%s", err, out)
-	}
-	for _, k := range []string{"whittle", "baseline", "by_failure", "goals", "losses"} {
-		if _, ok := rep[k]; !ok {
-			t.Errorf("the report lacks %q", k)
-		}
+	for _, tc := range []struct {
+		name, style, reason string
+		want                []string
+	}{
+		{name: "both", style: "both", want: []string{"short", "long"}, reason: "both styles, short first"},
+		{name: "long", style: "long", want: []string{"long"}, reason: "one style, one object"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			code, out, stderr := runCLI("", "eval", "--products", "300", "--queries", "10", "--json", "--style", tc.style, "--dir", t.TempDir())
+			if code != 0 {
+				t.Fatalf("exit %d: %s", code, stderr)
+			}
+			var styles []string
+			for _, line := range strings.Split(strings.TrimSpace(out), "\n") {
+				var rep map[string]json.RawMessage
+				if err := json.Unmarshal([]byte(line), &rep); err != nil {
+					t.Fatalf("not JSON: %v\n%s", err, line)
+				}
+				for _, k := range []string{"whittle", "baseline", "by_failure", "goals", "losses"} {
+					if _, ok := rep[k]; !ok {
+						t.Errorf("the report lacks %q", k)
+					}
+				}
+				var s string
+				json.Unmarshal(rep["style"], &s)
+				styles = append(styles, s)
+			}
+			if strings.Join(styles, " ") != strings.Join(tc.want, " ") {
+				t.Errorf("%s: styles %v, want %v", tc.reason, styles, tc.want)
+			}
+		})
 	}
 }
 
-// --cases writes the labelled set, one case a line, and the same seed
-// writes the same set.
+// --cases writes the labelled sets, one case a line, and the same seed
+// writes the same sets: 10 short cases, then 10 long ones.
 func TestEvalCases(t *testing.T) {
 	_, a, _ := runCLI("", "eval", "--products", "300", "--queries", "10", "--cases")
 	_, b, _ := runCLI("", "eval", "--products", "300", "--queries", "10", "--cases")
@@ -84,14 +108,17 @@ func TestEvalCases(t *testing.T) {
 	n := 0
 	for sc.Scan() {
 		var c struct {
-			Query, Product, Failure string
+			Query, Product, Failure, Style string
 		}
 		if err := json.Unmarshal(sc.Bytes(), &c); err != nil || c.Query == "" || c.Product == "" || c.Failure == "" {
 			t.Errorf("line %q: %v", sc.Text(), err)
 		}
+		if want := map[bool]string{true: "short", false: "long"}[n < 10]; c.Style != want {
+			t.Errorf("case %d is %q, want %q: the short set comes first", n, c.Style, want)
+		}
 		n++
 	}
-	if n != 10 {
-		t.Errorf("%d cases, want 10", n)
+	if n != 20 {
+		t.Errorf("%d cases, want 20", n)
 	}
 }

@@ -35,6 +35,22 @@ const (
 // them.
 var Failures = []Failure{FailColour, FailPattern, FailTypo, FailKeyword, FailMeasure}
 
+// Style names how the queries of a set are written.
+type Style string
+
+// The styles Generate writes in.
+const (
+	// StyleShort writes the product type with a few attributes, about
+	// three constraints a query.
+	StyleShort Style = "short"
+	// StyleLong writes four to seven constraints a query, from more of
+	// the product's attributes: brand, silhouette and a price ceiling too.
+	StyleLong Style = "long"
+)
+
+// Styles lists every style, in the order reports give them.
+var Styles = []Style{StyleShort, StyleLong}
+
 // Attr is one attribute a query asks for, as the generator wrote it.
 type Attr struct {
 	// Kind is the constraint kind the words express.
@@ -43,7 +59,8 @@ type Attr struct {
 	Dimension string `json:"dimension,omitempty"`
 	// Value is the attribute as the catalog writes it: a product type,
 	// colour, pattern or material name, a size, a designation, a model
-	// code, an audience, a measure with its unit ("85 mm"), a word.
+	// code, an audience, a brand, a measure with its unit ("85 mm"), a
+	// word, or for a price the ceiling with its currency ("90 USD").
 	Value string `json:"value"`
 	// Text is how the query writes it ("85mm", "sz l", "fits jx-10").
 	Text string `json:"text"`
@@ -51,8 +68,10 @@ type Attr struct {
 
 // Case is one labelled query.
 type Case struct {
-	// Query is the text a shopper would type.
+	// Query is the text a shopper would type, and Style how it was
+	// written.
 	Query string `json:"query"`
+	Style Style  `json:"style"`
 	// Product is the id of the product the query was written for, and
 	// ProductType its type.
 	Product     string `json:"product"`
@@ -71,7 +90,8 @@ type Case struct {
 // Satisfies reports whether product p has attribute a, read from the
 // product's own fields: a size among its sizes, a designation among its
 // specs, a model among those it fits, an equal name, a measure equal in
-// base units, a keyword among the words of its title and description.
+// base units, a price at or under the ceiling in the same currency, a
+// keyword among the words of its title and description.
 func Satisfies(p *catalog.Product, a Attr) bool {
 	switch a.Kind {
 	case parser.KindProductType:
@@ -82,6 +102,12 @@ func Satisfies(p *catalog.Product, a Attr) bool {
 		return strings.EqualFold(p.Pattern, a.Value)
 	case parser.KindMaterial:
 		return strings.EqualFold(p.Material, a.Value)
+	case parser.KindSilhouette:
+		return strings.EqualFold(p.Silhouette, a.Value)
+	case parser.KindBrand:
+		return strings.EqualFold(p.Brand, a.Value)
+	case parser.KindPrice:
+		return withinCeiling(p.Price, a.Value)
 	case parser.KindAudience:
 		return strings.EqualFold(p.Audience, a.Value)
 	case parser.KindSize:
@@ -142,4 +168,16 @@ func textWords(p *catalog.Product) []string {
 	return strings.FieldsFunc(strings.ToLower(p.Title+" "+p.Description), func(r rune) bool {
 		return !(r >= 'a' && r <= 'z' || r >= '0' && r <= '9')
 	})
+}
+
+// withinCeiling reports whether price is at most ceiling ("90 USD"), in
+// the same currency, compared in hundredths.
+func withinCeiling(price *catalog.Price, ceiling string) bool {
+	amount, cur, ok := strings.Cut(ceiling, " ")
+	if price == nil || !ok || !strings.EqualFold(price.Currency, cur) {
+		return false
+	}
+	have, err1 := strconv.ParseFloat(price.Amount, 64)
+	limit, err2 := strconv.ParseFloat(amount, 64)
+	return err1 == nil && err2 == nil && math.Round(have*100) <= math.Round(limit*100)
 }

@@ -7,11 +7,14 @@
 // and phrasings, then makes the query miss its exact match in one known
 // way (a [Failure]). Each [Case] keeps the truth: the product meant, the
 // attributes typed, which of them the policy makes hard, and what was
-// injected.
+// injected. A set is written in one [Style]: short queries of about three
+// constraints, or long ones of four to seven, from more of the product's
+// attributes (brand, silhouette and a price ceiling too).
 //
 // [Evaluate] runs every case through whittle and through the baseline on
 // the same engine, and [Score] checks each hit against the real
 // attributes of the product it names. [Run] does it all on the demo
-// catalog, in a temporary index. A [Report] holds the figures of both,
+// catalog, in a temporary index, and [RunStyles] does it for several
+// styles on one index. A [Report] holds the figures of both,
 // the goals they are held to, and the cases where whittle does worse.
 package eval

@@ -27,6 +27,8 @@ type Options struct {
 	// Policy says which attributes are hard and how far a colour or a
 	// measure may be widened; nil means the built-in policy.
 	Policy *rewrite.Policy
+	// Style is how the queries are written; "" means StyleShort.
+	Style Style
 }
 
 // DefaultQueries is how many cases Generate writes when Options.Queries
@@ -36,6 +38,10 @@ const DefaultQueries = 500
 // genStream is the second word of the generator's PCG state; any fixed
 // value will do.
 const genStream = 0x6576616c73657473 // "evalsets"
+
+// longStream is the long style's second word, so that its set is not
+// drawn in step with the short one of the same seed.
+const longStream = 0x6c6f6e6771756572 // "longquer"
 
 // tries bounds how many products Generate draws for one case before it
 // gives up on that case's failure.
@@ -77,6 +83,11 @@ const tries = 64
 // The attributes the policy makes hard for the product's category and
 // type (sizes, designations, compatible models, audiences, a camera's
 // focal length, a paint's colour) are kept as the case's Hard attributes.
+//
+// With opts.Style set to StyleLong, steps 2 and 4 follow the long style's
+// rules instead (see [StyleLong] and the README): four to seven
+// constraints a query, from more of the product's attributes, in more
+// word orders; the failures, step 3 and step 5 are the same.
 func Generate(products []catalog.Product, opts Options) []Case {
 	n := opts.Queries
 	if n <= 0 {
@@ -85,8 +96,15 @@ func Generate(products []catalog.Product, opts Options) []Case {
 	if len(products) == 0 {
 		return nil
 	}
+	if opts.Style == "" {
+		opts.Style = StyleShort
+	}
 	g := newGenerator(products, opts)
-	r := rand.New(rand.NewPCG(opts.Seed, genStream))
+	stream := uint64(genStream)
+	if opts.Style == StyleLong {
+		stream = longStream
+	}
+	r := rand.New(rand.NewPCG(opts.Seed, stream))
 	var out []Case
 	for i := 0; len(out) < n && i < 2*n; i++ {
 		fail := Failures[i%len(Failures)]
@@ -103,6 +121,7 @@ func Generate(products []catalog.Product, opts Options) []Case {
 
 // generator holds what Generate knows of the catalog.
 type generator struct {
+	style  Style
 	lex    *lexicon.Lexicon
 	policy *rewrite.Policy
 	pal    *colour.Palette
@@ -117,7 +136,7 @@ type generator struct {
 }
 
 func newGenerator(ps []catalog.Product, opts Options) *generator {
-	g := &generator{lex: opts.Lexicon, policy: opts.Policy, byType: map[string][]*catalog.Product{},
+	g := &generator{style: opts.Style, lex: opts.Lexicon, policy: opts.Policy, byType: map[string][]*catalog.Product{},
 		typePatterns: map[string]map[string]bool{}, catPatterns: map[string][]string{},
 		colourNames: map[string]bool{}, known: map[string]bool{}}
 	if g.lex == nil {
@@ -174,7 +193,14 @@ func (g *generator) write(r *rand.Rand, p *catalog.Product, fail Failure) (Case,
 	if !ok || hard(eff, inj.Kind, inj.Dimension) {
 		return Case{}, false
 	}
-	c := Case{Product: p.ID, ProductType: p.ProductType, Failure: fail, Injected: said, Typed: g.attributes(r, p, entry, inj)}
+	c := Case{Style: g.style, Product: p.ID, ProductType: p.ProductType, Failure: fail, Injected: said}
+	if g.style == StyleLong {
+		if c.Typed, ok = g.longAttributes(r, p, entry, inj); !ok {
+			return Case{}, false
+		}
+	} else {
+		c.Typed = g.attributes(r, p, entry, inj)
+	}
 	for _, a := range c.Typed {
 		if hard(eff, a.Kind, a.Dimension) {
 			c.Hard = append(c.Hard, a)
@@ -183,7 +209,7 @@ func (g *generator) write(r *rand.Rand, p *catalog.Product, fail Failure) (Case,
 	if g.matchesAsTyped(c) {
 		return Case{}, false
 	}
-	c.Query = phrase(r, c.Typed)
+	c.Query = phrase(r, c.Typed, g.orders())
 	return c, true
 }
 
@@ -237,49 +263,86 @@ func (g *generator) inject(r *rand.Rand, p *catalog.Product, entry *lexicon.Entr
 // always, a size and a designation whenever p has them, the others at
 // random.
 func (g *generator) attributes(r *rand.Rand, p *catalog.Product, entry *lexicon.Entry, inj Attr) []Attr {
+	w := g.writers(r, p, entry)
 	var out []Attr
-	take := func(kind parser.Kind, chosen bool, a func() Attr) {
+	take := func(kind parser.Kind, chosen bool) {
 		switch {
 		case inj.Kind == kind:
 			out = append(out, inj)
 		case chosen:
-			out = append(out, a())
+			out = append(out, w[kind].write())
 		}
 	}
-	take(parser.KindProductType, true, func() Attr {
-		return Attr{Kind: parser.KindProductType, Value: p.ProductType, Text: g.typeText(r, entry)}
-	})
-	lexColour := p.Colour != "" && p.ColourHex == "" && g.isColour(p.Colour)
-	take(parser.KindColour, lexColour && r.IntN(2) == 0, func() Attr {
-		return Attr{Kind: parser.KindColour, Value: p.Colour, Text: g.colourText(r, p.Colour)}
-	})
-	take(parser.KindPattern, p.Pattern != "" && p.Pattern != "solid" && r.IntN(3) == 0, func() Attr {
-		return Attr{Kind: parser.KindPattern, Value: p.Pattern, Text: p.Pattern}
-	})
-	take(parser.KindMaterial, p.Material != "" && r.IntN(3) == 0, func() Attr {
-		return Attr{Kind: parser.KindMaterial, Value: p.Material, Text: p.Material}
-	})
-	take(parser.KindAudience, p.Audience != "" && r.IntN(2) == 0, func() Attr {
-		return Attr{Kind: parser.KindAudience, Value: p.Audience, Text: audienceText(r, p.Audience)}
-	})
-	take(parser.KindSize, len(p.Sizes) > 0, func() Attr {
-		s := p.Sizes[r.IntN(len(p.Sizes))]
-		return Attr{Kind: parser.KindSize, Value: s, Text: sizeText(r, s)}
-	})
-	take(parser.KindSpec, len(p.Spec) > 0, func() Attr {
-		s := p.Spec[r.IntN(len(p.Spec))]
-		return Attr{Kind: parser.KindSpec, Value: s, Text: strings.ToLower(s)}
-	})
-	take(parser.KindCompatibility, len(p.CompatibleWith) > 0 && r.IntN(2) == 0, func() Attr {
-		m := p.CompatibleWith[r.IntN(len(p.CompatibleWith))]
-		return Attr{Kind: parser.KindCompatibility, Value: m, Text: compatText(r, m)}
-	})
-	slot, value, hasMeasure := mainMeasure(entry, p)
-	take(parser.KindMeasure, hasMeasure && r.IntN(2) == 0, func() Attr {
-		return Attr{Kind: parser.KindMeasure, Dimension: slot.Dimension, Value: value, Text: measureText(r, slot, value)}
-	})
-	take(parser.KindKeyword, false, nil)
+	take(parser.KindProductType, true)
+	take(parser.KindColour, w[parser.KindColour].has && r.IntN(2) == 0)
+	take(parser.KindPattern, w[parser.KindPattern].has && r.IntN(3) == 0)
+	take(parser.KindMaterial, w[parser.KindMaterial].has && r.IntN(3) == 0)
+	take(parser.KindAudience, w[parser.KindAudience].has && r.IntN(2) == 0)
+	take(parser.KindSize, w[parser.KindSize].has)
+	take(parser.KindSpec, w[parser.KindSpec].has)
+	take(parser.KindCompatibility, w[parser.KindCompatibility].has && r.IntN(2) == 0)
+	take(parser.KindMeasure, w[parser.KindMeasure].has && r.IntN(2) == 0)
+	take(parser.KindKeyword, false)
 	return out
+}
+
+// writer says whether a product has an attribute a shopper could type,
+// and writes it.
+type writer struct {
+	has   bool
+	write func() Attr
+}
+
+// writers are the attributes of p a query may ask for, by kind, each
+// written from p's own value: the product type, a lexicon colour (not a
+// shop's own name), a pattern other than solid, the material,
+// silhouette, audience and brand, one of its sizes, designations and
+// compatible models, its main measure, and a price ceiling it meets.
+func (g *generator) writers(r *rand.Rand, p *catalog.Product, entry *lexicon.Entry) map[parser.Kind]writer {
+	slot, value, hasMeasure := mainMeasure(entry, p)
+	price, hasPrice := dollars(p.Price)
+	return map[parser.Kind]writer{
+		parser.KindProductType: {true, func() Attr {
+			return Attr{Kind: parser.KindProductType, Value: p.ProductType, Text: g.typeText(r, entry)}
+		}},
+		parser.KindColour: {p.Colour != "" && p.ColourHex == "" && g.isColour(p.Colour), func() Attr {
+			return Attr{Kind: parser.KindColour, Value: p.Colour, Text: g.colourText(r, p.Colour)}
+		}},
+		parser.KindPattern: {p.Pattern != "" && p.Pattern != "solid", func() Attr {
+			return Attr{Kind: parser.KindPattern, Value: p.Pattern, Text: p.Pattern}
+		}},
+		parser.KindMaterial: {p.Material != "", func() Attr {
+			return Attr{Kind: parser.KindMaterial, Value: p.Material, Text: p.Material}
+		}},
+		parser.KindSilhouette: {p.Silhouette != "", func() Attr {
+			return Attr{Kind: parser.KindSilhouette, Value: p.Silhouette, Text: g.silhouetteText(r, p.Silhouette)}
+		}},
+		parser.KindAudience: {p.Audience != "", func() Attr {
+			return Attr{Kind: parser.KindAudience, Value: p.Audience, Text: audienceText(r, p.Audience)}
+		}},
+		parser.KindBrand: {p.Brand != "", func() Attr {
+			return Attr{Kind: parser.KindBrand, Value: p.Brand, Text: brandText(r, p.Brand)}
+		}},
+		parser.KindSize: {len(p.Sizes) > 0, func() Attr {
+			s := p.Sizes[r.IntN(len(p.Sizes))]
+			return Attr{Kind: parser.KindSize, Value: s, Text: sizeText(r, s)}
+		}},
+		parser.KindSpec: {len(p.Spec) > 0, func() Attr {
+			s := p.Spec[r.IntN(len(p.Spec))]
+			return Attr{Kind: parser.KindSpec, Value: s, Text: strings.ToLower(s)}
+		}},
+		parser.KindCompatibility: {len(p.CompatibleWith) > 0, func() Attr {
+			m := p.CompatibleWith[r.IntN(len(p.CompatibleWith))]
+			return Attr{Kind: parser.KindCompatibility, Value: m, Text: compatText(r, m)}
+		}},
+		parser.KindMeasure: {hasMeasure, func() Attr {
+			return Attr{Kind: parser.KindMeasure, Dimension: slot.Dimension, Value: value, Text: measureText(r, slot, value)}
+		}},
+		parser.KindPrice: {hasPrice, func() Attr {
+			c := priceCeiling(r, price)
+			return Attr{Kind: parser.KindPrice, Value: strconv.Itoa(c) + " USD", Text: priceText(r, c)}
+		}},
+	}
 }
 
 // isColour reports whether name is a lexicon colour with a value.

@@ -143,9 +143,16 @@ func TestGenerateSeeded(t *testing.T) {
 // On a demo catalog every case keeps the truth it claims: the product
 // exists and is in stock, has every hard attribute, the query writes
 // every attribute, and no product at all has every attribute as asked.
+// In the long style a query also has 4 to 7 constraints.
 func TestGenerateDemoTruth(t *testing.T) {
 	ps := catalog.Demo(2000, 1)
-	cases := Generate(ps, Options{Queries: 250, Seed: 1})
+	for _, style := range Styles {
+		t.Run(string(style), func(t *testing.T) { demoTruth(t, ps, style) })
+	}
+}
+
+func demoTruth(t *testing.T, ps []catalog.Product, style Style) {
+	cases := Generate(ps, Options{Queries: 250, Seed: 1, Style: style})
 	if len(cases) != 250 {
 		t.Fatalf("%d cases, want 250", len(cases))
 	}
@@ -165,6 +172,12 @@ func TestGenerateDemoTruth(t *testing.T) {
 			if !strings.Contains(c.Query, a.Text) {
 				t.Errorf("%q does not write %q", c.Query, a.Text)
 			}
+			if a.Kind == parser.KindPrice && !Satisfies(p, a) {
+				t.Errorf("%q: %s at %s is over the ceiling %s", c.Query, p.ID, p.Price.Amount, a.Value)
+			}
+		}
+		if n := len(c.Typed); style == StyleLong && (n < 4 || n > 7) || c.Style != style {
+			t.Errorf("%q: %d constraints in the %s style", c.Query, n, c.Style)
 		}
 		for i := range ps {
 			if SatisfiesAll(&ps[i], c.Typed) {
@@ -235,7 +248,7 @@ func TestPhrase(t *testing.T) {
 		{name: "seed 3", seed: 3, reason: "another draw, the same words"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			q := phrase(rand.New(rand.NewPCG(tc.seed, 0)), typed)
+			q := phrase(rand.New(rand.NewPCG(tc.seed, 0)), typed, orders)
 			words := strings.Fields(q)
 			slices.Sort(words)
 			want := []string{"m", "navy", "size", "sturdy", "sweater"}

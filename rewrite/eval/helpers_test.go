@@ -10,11 +10,13 @@ import (
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
-// tiny reads testdata/eval/tiny.jsonl, six invented products: two skirts
-// (SK-1 black cotton in s and m, SK-2 "morning fog" floral linen in l and
-// xl), a cable knit wool sweater SW-1 in "ember" (m, l), two black prime
-// lenses (LN-1 50 mm for zk-3, LN-2 85 mm for zk-5, out of stock) and a
-// persian wool rug RG-1, 5 by 8 ft, in "dune".
+// tiny reads testdata/eval/tiny.jsonl, six invented products: two
+// women's skirts (SK-1 black cotton in s and m, $39.95; SK-2 "morning
+// fog" floral linen in l and xl, $54.00), both by Brellow; a cable knit
+// wool sweater SW-1 by Quillet in "ember" (m, l), $89.00; two black prime
+// lenses by Tarrow (LN-1 50 mm for zk-3, $249.00; LN-2 85 mm for zk-5,
+// $449.00, out of stock) and a persian wool rug RG-1 by Mossel, 5 by 8
+// ft, in "dune", $189.99. No brand is a lexicon word.
 func tiny(t *testing.T) []catalog.Product {
 	t.Helper()
 	f, err := os.Open(filepath.Join("..", "..", "testdata", "eval", "tiny.jsonl"))

@@ -27,7 +27,7 @@ var orders = []map[parser.Kind]int{
 }
 
 // phrase writes the attributes' texts in one of the orders.
-func phrase(r *rand.Rand, typed []Attr) string {
+func phrase(r *rand.Rand, typed []Attr, orders []map[parser.Kind]int) string {
 	rank := orders[r.IntN(len(orders))]
 	var kw []string
 	var rest []Attr

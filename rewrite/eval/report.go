@@ -30,6 +30,8 @@ const ExamplesPerFailure = 3
 // Report holds the figures of whittle and of the baseline on one set of
 // cases, by failure too, the goals, and examples of where whittle loses.
 type Report struct {
+	// Style is how the set's queries were written; "" when not said.
+	Style    Style  `json:"style,omitempty"`
 	Products int    `json:"products"`
 	Seed     uint64 `json:"seed"`
 	// K is how many hits each query asked for.
@@ -145,18 +147,14 @@ func (r Report) Met() bool {
 // baseline, the goals, the figures by failure, and examples of losses.
 func (r Report) WriteText(w io.Writer) error {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "%d queries on %d products (seed %d), top %d hits each\n\n", r.Whittle.Queries, r.Products, r.Seed, r.K)
+	fmt.Fprintf(tw, "%d %squeries on %d products (seed %d), top %d hits each\n\n", r.Whittle.Queries, styleWord(r.Style), r.Products, r.Seed, r.K)
 	fmt.Fprintln(tw, "measure\twhittle\tbaseline")
 	for _, row := range figureRows(r.Whittle, r.Baseline, r.K) {
 		fmt.Fprintf(tw, "%s\t%s\t%s\n", row[0], row[1], row[2])
 	}
 	fmt.Fprintln(tw, "\ngoal\ttarget\tmeasured\tresult")
 	for _, g := range r.Goals {
-		v := percent(g.Value)
-		if strings.HasSuffix(g.Target, "×") {
-			v = times(g.Value)
-		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\n", g.Name, g.Target, v, metText(g.Met))
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\n", g.Name, g.Target, goalValue(g), metText(g.Met))
 	}
 	fmt.Fprintln(tw, "\nfailure\tqueries\trescued (w / b)\tprecision (w / b)\tfound (w / b)\twhittle lost")
 	for _, row := range r.ByFailure {
@@ -177,6 +175,55 @@ func (r Report) WriteText(w io.Writer) error {
 		fmt.Fprintf(w, "  [%s] %q (%s; meant %s): %s\n      whittle: %s\n", l.Failure, l.Query, l.Injected, l.Product, l.Why, l.Whittle)
 	}
 	return nil
+}
+
+// WriteGoals writes the goals of several reports side by side, a column
+// a report headed by its style: what each measured, and whether it met
+// the goal.
+func WriteGoals(w io.Writer, reps []Report) error {
+	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	fmt.Fprint(tw, "goal\ttarget")
+	for _, r := range reps {
+		fmt.Fprintf(tw, "\t%s (%d queries)", styleName(r.Style), r.Whittle.Queries)
+	}
+	fmt.Fprintln(tw)
+	if len(reps) > 0 {
+		for i, g := range reps[0].Goals {
+			fmt.Fprintf(tw, "%s\t%s", g.Name, g.Target)
+			for _, r := range reps {
+				if i < len(r.Goals) {
+					fmt.Fprintf(tw, "\t%s %s", goalValue(r.Goals[i]), metText(r.Goals[i].Met))
+				}
+			}
+			fmt.Fprintln(tw)
+		}
+	}
+	return tw.Flush()
+}
+
+// styleName is a report's style as a column heading.
+func styleName(s Style) string {
+	if s == "" {
+		return "set"
+	}
+	return string(s)
+}
+
+// styleWord is a style followed by a space, or "" for none.
+func styleWord(s Style) string {
+	if s == "" {
+		return ""
+	}
+	return string(s) + " "
+}
+
+// goalValue writes a goal's measured value: a ratio for a "×" target,
+// else a percentage.
+func goalValue(g Goal) string {
+	if strings.HasSuffix(g.Target, "×") {
+		return times(g.Value)
+	}
+	return percent(g.Value)
 }
 
 // figureRows are the lines of the main table.

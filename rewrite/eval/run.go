@@ -128,9 +128,20 @@ func Cases(opts RunOptions) []Case {
 }
 
 // Run generates the demo catalog, indexes it in a temporary directory,
-// writes the labelled set from it and evaluates whittle and the baseline
-// on it.
+// writes the labelled set from it in the style of opts.Generate and
+// evaluates whittle and the baseline on it.
 func Run(ctx context.Context, opts RunOptions) (Report, error) {
+	reps, err := RunStyles(ctx, opts, []Style{opts.Generate.Style})
+	if err != nil {
+		return Report{}, err
+	}
+	return reps[0], nil
+}
+
+// RunStyles is Run for several styles on one index: a labelled set and a
+// report for each style, in the order given, each set drawn with the
+// same seed.
+func RunStyles(ctx context.Context, opts RunOptions, styles []Style) ([]Report, error) {
 	opts.defaults()
 	logf := func(format string, args ...any) {
 		if opts.Log != nil {
@@ -140,30 +151,39 @@ func Run(ctx context.Context, opts RunOptions) (Report, error) {
 	products := catalog.Demo(opts.Products, opts.CatalogSeed)
 	tmp, err := os.MkdirTemp(opts.Dir, "whittle-eval-")
 	if err != nil {
-		return Report{}, err
+		return nil, err
 	}
 	defer os.RemoveAll(tmp)
 	logf("indexing %d products of the demo catalog...\n", len(products))
 	idx := filepath.Join(tmp, "index")
 	if _, err := bleveengine.BuildProducts(ctx, products, idx, bleveengine.BuildOptions{Lexicon: opts.Generate.Lexicon}); err != nil {
-		return Report{}, err
+		return nil, err
 	}
 	eng, err := bleveengine.Open(idx)
 	if err != nil {
-		return Report{}, err
+		return nil, err
 	}
 	defer eng.Close()
-	cases := Generate(products, opts.Generate)
-	logf("evaluating %d queries...\n", len(cases))
 	var ropts []rewrite.Option
 	if opts.Generate.Lexicon != nil {
 		ropts = append(ropts, rewrite.WithParseOptions(parser.Options{Lexicon: opts.Generate.Lexicon}))
 	}
 	rw := rewrite.New(eng, opts.Generate.Policy, ropts...)
-	rep, err := Evaluate(ctx, eng, rw, cases, products, opts.K)
-	if err != nil {
-		return Report{}, err
+	var reps []Report
+	for _, style := range styles {
+		if style == "" {
+			style = StyleShort
+		}
+		gen := opts.Generate
+		gen.Style = style
+		cases := Generate(products, gen)
+		logf("evaluating %d %s queries...\n", len(cases), style)
+		rep, err := Evaluate(ctx, eng, rw, cases, products, opts.K)
+		if err != nil {
+			return nil, err
+		}
+		rep.Seed, rep.Style = gen.Seed, style
+		reps = append(reps, rep)
 	}
-	rep.Seed = opts.Generate.Seed
-	return rep, nil
+	return reps, nil
 }
