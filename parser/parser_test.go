@@ -153,6 +153,19 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindPrice, "$90 max", "≤ 90.00 USD")},
 	},
 	{
+		name: "max before a price", query: "size 12 max $60", reason: "a bound word with a price right after it bounds the price, not the size before it",
+		want: []tagged{tg(KindSize, "size 12", "12 (numeric)").hard(), tg(KindPrice, "max $60", "≤ 60.00 USD")},
+	},
+	{
+		name: "max between a measure and a price", query: "9200mah max $45", reason: "the capacity stays a capacity; max bounds the price",
+		want: []tagged{tg(KindMeasure, "9200mah", "9200 mAh"), tg(KindPrice, "max $45", "≤ 45.00 USD")},
+	},
+	{
+		name: "price then tyre size", query: "up to $160 225/65r17", reason: "a price is never a mixed number: $160, then a tyre size, not $163.46",
+		category: "tyres",
+		want:     []tagged{tg(KindPrice, "up to $160", "≤ 160.00 USD"), tg(KindSpec, "225/65r17", "225/65R17 (tyre)").hard()},
+	},
+	{
 		name: "price plus", query: "$40+", reason: "+ after a price sets a floor",
 		want: []tagged{tg(KindPrice, "$40+", "≥ 40.00 USD")},
 	},

@@ -35,7 +35,7 @@ type single struct {
 func (p *tagger) readSingle(s *grammar.Single) (single, bool) {
 	out := single{start: s.Pos.Offset, end: s.EndPos.Offset}
 	if m := s.Money; m != nil {
-		n, err := parseNum(m.Amount)
+		n, err := parseNum(&grammar.Num{Pos: m.Amount.Pos, EndPos: m.Amount.EndPos, Whole: m.Amount.Number})
 		if err != nil {
 			p.res.Errors = append(p.res.Errors, err)
 			return out, false

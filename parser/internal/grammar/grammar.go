@@ -84,14 +84,16 @@ type Tyre struct {
 }
 
 // Value is a single value, or a range of two, with an optional trailing
-// bound word: "20-30 mm", "$20 to $30", "$90 max", "2 tb or more".
+// bound word: "20-30 mm", "$20 to $30", "$90 max", "2 tb or more". A
+// bound word with a value right after it bounds that value instead:
+// in "size 12 max $60" the ceiling is on the price, not on the 12.
 type Value struct {
 	Pos    lexer.Position
 	EndPos lexer.Position
 
 	From *Single `parser:"@@"`
 	To   *Single `parser:"( Space? (Dash | 'to') Space? @@ )?"`
-	Post string  `parser:"( Space? @('max' | 'min' | 'maximum' | 'minimum' | 'or' Space ('less' | 'more' | 'under' | 'over' | 'fewer' | 'lower' | 'higher' | 'below' | 'above' | 'cheaper') | 'and' Space ('under' | 'up' | 'over' | 'below' | 'above')) | @Plus )?"`
+	Post string  `parser:"( Space? @('max' | 'min' | 'maximum' | 'minimum' | 'or' Space ('less' | 'more' | 'under' | 'over' | 'fewer' | 'lower' | 'higher' | 'below' | 'above' | 'cheaper') | 'and' Space ('under' | 'up' | 'over' | 'below' | 'above')) (?! Space? (Number | Cur | Vulgar)) | @Plus )?"`
 }
 
 // Single is a price or a quantity (possibly a dimension of several).
@@ -110,8 +112,18 @@ type Money struct {
 	Pos    lexer.Position
 	EndPos lexer.Position
 
-	Symbol string `parser:"@Cur Space?"`
-	Amount *Num   `parser:"@@"`
+	Symbol string  `parser:"@Cur Space?"`
+	Amount *Amount `parser:"@@"`
+}
+
+// Amount is the number of a price: a whole or decimal number, never a
+// fraction, so that "$160 225/65r17" is $160 and a tyre size, not
+// $163.46.
+type Amount struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	Number string `parser:"@Number"`
 }
 
 // Dims is one quantity or several joined by "x": "18x18", "2x4x8",
