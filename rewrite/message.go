@@ -15,8 +15,11 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	}
 	noun := "results"
 	var phrases []string
+	fix := ""
 	for _, r := range out.Relaxations {
 		switch {
+		case r.Kind == parser.KindProductType && r.Operator == OpReplace:
+			fix = ", " + r.Phrase
 		case r.Kind == parser.KindProductType && r.Operator == OpWiden:
 			noun = strings.TrimPrefix(r.Phrase, "other ")
 		case r.Kind == parser.KindProductType && r.Operator == OpDrop:
@@ -33,6 +36,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	if len(phrases) > 0 {
 		msg += " " + strings.Join(phrases, ", ")
 	}
+	msg += fix
 	if out.Count < out.Policy.MinResults {
 		msg += fmt.Sprintf(" (still only %d)", out.Count)
 	}
@@ -62,6 +66,9 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		parts = append(parts, s)
 	}
 	msg := fmt.Sprintf("No results for “%s”.", strings.TrimSpace(out.Query))
+	if out.Corrected != "" {
+		msg = fmt.Sprintf("No results for “%s”, read as “%s”.", strings.TrimSpace(out.Query), strings.TrimSpace(out.Corrected))
+	}
 	if len(parts) > 0 {
 		msg += " " + strings.Join(parts, ". ") + "."
 	}
