@@ -98,6 +98,7 @@ func (rw *Rewriter) readFixed(r *parser.Result, c parser.Constraint, fixed strin
 	if !keepsHard(r, p) {
 		return nil
 	}
+	p.Constraints[h].Evidence += fmt.Sprintf("; %q read as %q", c.Name, fixed)
 	head := p.Constraints[h]
 	return &reading{parsed: p, policy: e, corrected: text, fix: Relaxation{
 		Constraint: h, Text: head.Text, Kind: parser.KindProductType, Operator: OpReplace,
