@@ -245,6 +245,15 @@ func (rw *Rewriter) Parse(query string) *parser.Result {
 // common one costs less to drop than a rare one). It never counts the
 // same plan twice. When the budget or the deadline runs out it returns
 // the best plan found so far, with a Note.
+//
+// When r as typed finds too little and an unknown word of it is a typo
+// of a product type, or of a word of one, that then heads the query
+// ("uv filtar", "ceeiling fan"), the query is read again with the word
+// fixed, with the rewriter's parse options, and planned from that
+// reading: its spans mapped back onto the query as typed, the fix a
+// replace relaxation in every plan after the first (Outcome.Corrected).
+// A reading that would change a head r already had, or loosen a
+// constraint hard in r, is not used.
 func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcome, error) {
 	e := rw.policy.Apply(r, rw.lex)
 	out := &Outcome{Query: r.Query, Parsed: r, Policy: e}
