@@ -72,7 +72,11 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 	if len(parts) > 0 {
 		msg += " " + strings.Join(parts, ". ") + "."
 	}
-	return msg, "the hard constraints alone find nothing, so none is relaxed; " + strings.Join(parts, "; ")
+	why := "the hard constraints alone find nothing, so none is relaxed; "
+	if out.Corrected != "" {
+		why = fmt.Sprintf("read again as %q; %s", out.Corrected, why)
+	}
+	return msg, why + strings.Join(parts, "; ")
 }
 
 // summarise writes a list of carried values, a range when they are many

@@ -84,6 +84,9 @@ func TestRereadMisspeltProductType(t *testing.T) {
 			if !strings.Contains(o.Message, tc.message) {
 				t.Errorf("%s: message %q lacks %q", tc.reason, o.Message, tc.message)
 			}
+			if tc.corrected != "" && !strings.Contains(o.Explanation, tc.corrected) {
+				t.Errorf("the explanation does not say the query was read as %q:\n%s", tc.corrected, o.Explanation)
+			}
 			if o.Parsed.Query != tc.query {
 				t.Errorf("the parse is of %q, want the query as typed", o.Parsed.Query)
 			}
