@@ -55,6 +55,9 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 	var parts []string
 	for _, m := range out.Missing {
 		c := out.Parsed.Constraints[m.Constraint]
+		if c.Kind == parser.KindProductType && in != "" && len(out.Missing) > 1 {
+			continue // "in lenses" already names it; the rest say what is missing
+		}
 		what := m.Text
 		if c.Measure != nil && c.Inferred {
 			what = c.Value() // "85 mm", not "85"

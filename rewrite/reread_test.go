@@ -16,6 +16,7 @@ var typoShop = append(slices.Clone(shop),
 	product{ID: "UF-2", Type: "uv filter", Colour: "black", Hex: "#000000", Measures: map[string]float64{"thread_diameter": 58}, Price: 34},
 	product{ID: "CF-1", Type: "ceiling fan", Colour: "white", Hex: "#ffffff", Measures: map[string]float64{"blade_span": 1320.8}, Price: 150},
 	product{ID: "DF-1", Type: "fan", Colour: "white", Hex: "#ffffff", Measures: map[string]float64{"diameter": 304.8}, Price: 25},
+	product{ID: "EC-1", Type: "extension cord", Colour: "orange", Hex: "#ffa500", Specs: map[string]string{"awg": "14 awg"}, Measures: map[string]float64{"length": 15240}, Price: 30},
 )
 
 // span is a constraint's kind and byte offsets in the query as typed.
@@ -67,6 +68,12 @@ func TestRereadMisspeltProductType(t *testing.T) {
 			message: "reading “ceeiling” as “ceiling”",
 			// 52 is bytes 12..14 corrected, 13..15 as typed.
 			spans: []span{{parser.KindProductType, 0, 12, parser.Firm}, {parser.KindMeasure, 13, 15, parser.Firm}}},
+		{name: "a wire gauge stays hard, the fix one byte shorter", query: "extenssion cord 12 awg",
+			reason:    "extenssion (10 letters, so two edits allowed) is one from extension; the one extension cord is 14 AWG and the gauge is never swapped, so nothing is shown (WR-1, the 12 AWG wire, is no extension cord) and the gauges carried are named",
+			corrected: "extension cord 12 awg", count: 0, ops: []string{"replace product_type"},
+			message: "No results for “extenssion cord 12 awg”, read as “extension cord 12 awg”. 12 awg is not carried in extension cords; specs carried: 14 awg.",
+			// "extenssion cord" is 0..15 as typed (0..14 corrected); "12 awg" 16..22 (15..21 corrected).
+			spans: []span{{parser.KindProductType, 0, 15, parser.Firm}, {parser.KindSpec, 16, 22, parser.Hard}}},
 		{name: "no reread where a hard constraint would soften", query: "2x4 sweter",
 			reason: "with no product type 2x4 is a lumber size (hard); read with sweater it would be a plain dimension, so the query is not read again: the typo is replaced as a word, finds nothing with the studs, and is dropped",
 			count:  2, ops: []string{"drop keyword"},
