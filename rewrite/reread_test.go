@@ -16,6 +16,8 @@ var typoShop = append(slices.Clone(shop),
 	product{ID: "UF-2", Type: "uv filter", Colour: "black", Hex: "#000000", Measures: map[string]float64{"thread_diameter": 58}, Price: 34},
 	product{ID: "CF-1", Type: "ceiling fan", Colour: "white", Hex: "#ffffff", Measures: map[string]float64{"blade_span": 1320.8}, Price: 150},
 	product{ID: "DF-1", Type: "fan", Colour: "white", Hex: "#ffffff", Measures: map[string]float64{"diameter": 304.8}, Price: 25},
+	product{ID: "CP-1", Type: "chalk paint", Colour: "cream", Hex: "#fffdd0", Measures: map[string]float64{"volume": 946.352946}, Price: 28},
+	product{ID: "PT-1", Type: "paint", Colour: "cream", Hex: "#fffdd0", Measures: map[string]float64{"volume": 3785.411784}, Price: 40},
 	product{ID: "EC-1", Type: "extension cord", Colour: "orange", Hex: "#ffa500", Specs: map[string]string{"awg": "14 awg"}, Measures: map[string]float64{"length": 15240}, Price: 30},
 )
 
@@ -74,6 +76,12 @@ func TestRereadMisspeltProductType(t *testing.T) {
 			message: "No results for “extenssion cord 12 awg”, read as “extension cord 12 awg”. 12 awg is not carried in extension cords; specs carried: 14 awg.",
 			// "extenssion cord" is 0..15 as typed (0..14 corrected); "12 awg" 16..22 (15..21 corrected).
 			spans: []span{{parser.KindProductType, 0, 15, parser.Firm}, {parser.KindSpec, 16, 22, parser.Hard}}},
+		{name: "a word of a type that is also another kind's word", query: "cream chak paint",
+			reason:    "chak is one edit from chalk, a colour alias and a word of \"chalk paint\"; read so, the head is chalk paint (taking in the paint typed) and cream stays hard, as colour is in paint: CP-1, not PT-1",
+			corrected: "cream chalk paint", count: 1, ops: []string{"replace product_type"},
+			message: "Showing chalk paints, reading “chak” as “chalk”.",
+			// "chak paint" is 6..16 as typed, "chalk paint" 6..17 corrected.
+			spans: []span{{parser.KindColour, 0, 5, parser.Hard}, {parser.KindProductType, 6, 16, parser.Firm}}},
 		{name: "no reread where a hard constraint would soften", query: "2x4 sweter",
 			reason: "with no product type 2x4 is a lumber size (hard); read with sweater it would be a plain dimension, so the query is not read again: the typo is replaced as a word, finds nothing with the studs, and is dropped",
 			count:  2, ops: []string{"drop keyword"},

@@ -147,23 +147,35 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 }
 
 // partWords are the words of four letters or more of the phrases of
-// several words, once each, less those the vocabulary already holds.
+// several words, once each, less those the vocabulary already holds;
+// those it holds ("chalk", a colour, of "chalk paint") it marks as words
+// of a product type.
 func partWords(phrases []string, vocab []wordEntry) []wordEntry {
-	seen := make(map[string]bool, len(vocab))
-	for _, w := range vocab {
-		seen[w.word] = true
-	}
-	var out []wordEntry
+	parts := make(map[string]bool)
+	var order []string
 	for _, p := range phrases {
 		ws := strings.Fields(p)
 		if len(ws) < 2 {
 			continue
 		}
 		for _, w := range ws {
-			if len(w) >= 4 && !strings.ContainsAny(w, "-0123456789") && !seen[w] {
-				seen[w] = true
-				out = append(out, wordEntry{word: w, kind: parser.KindKeyword, typeWord: true})
+			if len(w) >= 4 && !strings.ContainsAny(w, "-0123456789") && !parts[w] {
+				parts[w] = true
+				order = append(order, w)
 			}
+		}
+	}
+	held := make(map[string]bool)
+	for i := range vocab {
+		if parts[vocab[i].word] {
+			vocab[i].typeWord = true
+			held[vocab[i].word] = true
+		}
+	}
+	var out []wordEntry
+	for _, w := range order {
+		if !held[w] {
+			out = append(out, wordEntry{word: w, kind: parser.KindKeyword, typeWord: true})
 		}
 	}
 	return out
