@@ -18,6 +18,8 @@ var typoShop = append(slices.Clone(shop),
 	product{ID: "DF-1", Type: "fan", Colour: "white", Hex: "#ffffff", Measures: map[string]float64{"diameter": 304.8}, Price: 25},
 	product{ID: "CP-1", Type: "chalk paint", Colour: "cream", Hex: "#fffdd0", Measures: map[string]float64{"volume": 946.352946}, Price: 28},
 	product{ID: "PT-1", Type: "paint", Colour: "cream", Hex: "#fffdd0", Measures: map[string]float64{"volume": 3785.411784}, Price: 40},
+	product{ID: "WC-1", Type: "wall clock", Colour: "black", Hex: "#000000", Price: 22},
+	product{ID: "CL-1", Type: "clog", Colour: "black", Hex: "#000000", Sizes: []string{"8", "9"}, Price: 45},
 	product{ID: "EC-1", Type: "extension cord", Colour: "orange", Hex: "#ffa500", Specs: map[string]string{"awg": "14 awg"}, Measures: map[string]float64{"length": 15240}, Price: 30},
 )
 
@@ -82,6 +84,11 @@ func TestRereadMisspeltProductType(t *testing.T) {
 			message: "Showing chalk paints, reading “chak” as “chalk”.",
 			// "chak paint" is 6..16 as typed, "chalk paint" 6..17 corrected.
 			spans: []span{{parser.KindColour, 0, 5, parser.Hard}, {parser.KindProductType, 6, 16, parser.Firm}}},
+		{name: "the reading whose head takes in most wins", query: "wall clok",
+			reason:    "clok is one edit from clog (a catalog type, first in the vocabulary) and from clock; \"wall clock\" takes in both words where \"clog\" takes one: WC-1",
+			corrected: "wall clock", count: 1, ops: []string{"replace product_type"},
+			message: "Showing wall clocks, reading “clok” as “clock”.",
+			spans:   []span{{parser.KindProductType, 0, 9, parser.Firm}}},
 		{name: "no reread where a hard constraint would soften", query: "2x4 sweter",
 			reason: "with no product type 2x4 is a lumber size (hard); read with sweater it would be a plain dimension, so the query is not read again: the typo is replaced as a word, finds nothing with the studs, and is dropped",
 			count:  2, ops: []string{"drop keyword"},
