@@ -162,3 +162,11 @@ func ExampleNearWords() {
 	fmt.Println(i, d)
 	// Output: 1 1
 }
+
+func ExampleNearWords_AllNearest() {
+	// "clok" is one edit from both "clock" and "clog".
+	nw := lexicon.NewNearWords([]string{"clog", "coat", "clock"})
+	all, d := nw.AllNearest("clok", 1)
+	fmt.Println(all, d)
+	// Output: [0 2] 1
+}

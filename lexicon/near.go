@@ -1,6 +1,9 @@
 package lexicon
 
-import "unicode/utf8"
+import (
+	"slices"
+	"unicode/utf8"
+)
 
 // NearWords finds, among a fixed list of words, the one nearest to a
 // misspelt word in edit distance, without comparing it with every word.
@@ -41,7 +44,7 @@ func NewNearWords(words []string) *NearWords {
 func (n *NearWords) Nearest(w string, limit int) (int, int) {
 	limit = max(limit, 0)
 	best, bestD := -1, limit+1
-	consider := func(j int) {
+	n.candidates(w, limit, func(j int) {
 		if j == best {
 			return
 		}
@@ -49,22 +52,49 @@ func (n *NearWords) Nearest(w string, limit int) (int, int) {
 		if d <= limit && (d < bestD || d == bestD && j < best) {
 			best, bestD = j, d
 		}
-	}
+	})
+	return best, bestD
+}
+
+// AllNearest returns the indexes, in the list's order, of every word at
+// the least edit distance from w, and that distance, if it is at most
+// limit; else nil and limit+1. Its first index is Nearest's.
+func (n *NearWords) AllNearest(w string, limit int) ([]int, int) {
+	limit = max(limit, 0)
+	var all []int
+	bestD := limit + 1
+	n.candidates(w, limit, func(j int) {
+		d := EditDistanceWithin(w, n.words[j], min(bestD, limit))
+		switch {
+		case d > limit || d > bestD:
+		case d < bestD:
+			all, bestD = []int{j}, d
+		default:
+			all = append(all, j)
+		}
+	})
+	slices.Sort(all)
+	return slices.Compact(all), bestD
+}
+
+// candidates calls f with the index of every word that may be within
+// limit of w, some more than once: for a limit of 1, the words that
+// share a deletion with w; else those whose length is within the limit.
+func (n *NearWords) candidates(w string, limit int, f func(j int)) {
 	if limit <= 1 {
 		for _, d := range deletions(w) {
 			for _, j := range n.byDel[d] {
-				consider(int(j))
+				f(int(j))
 			}
 		}
-		return best, bestD
+		return
 	}
 	l := utf8.RuneCountInString(w)
 	for k := l - limit; k <= l+limit; k++ {
 		for _, j := range n.byLength[k] {
-			consider(int(j))
+			f(int(j))
 		}
 	}
-	return best, bestD
 }
 
 // deletions lists w and every distinct string made by deleting one of

@@ -1,6 +1,7 @@
 package lexicon
 
 import (
+	"slices"
 	"strings"
 	"testing"
 )
@@ -61,11 +62,31 @@ func TestNearWordsAgreesWithScan(t *testing.T) {
 				if gj != wj || gd != wd {
 					t.Fatalf("Nearest(%q, %d) = %d (%q), %d; the scan finds %d, %d", m, limit, gj, at(words, gj), gd, wj, wd)
 				}
+				if all, ad := nw.AllNearest(m, limit); !slices.Equal(all, scanAll(words, m, limit)) || ad != wd {
+					t.Fatalf("AllNearest(%q, %d) = %v, %d; the scan finds %v, %d", m, limit, all, ad, scanAll(words, m, limit), wd)
+				}
 				checked++
 			}
 		}
 	}
 	t.Logf("%d lookups agree over %d words", checked, len(words))
+}
+
+// scanAll is the plain scan AllNearest stands in for: every word of the
+// least distance, within limit, in the list's order.
+func scanAll(words []string, w string, limit int) []int {
+	var all []int
+	best := limit + 1
+	for j, v := range words {
+		d := EditDistanceWithin(w, v, limit)
+		if d < best {
+			all, best = nil, d
+		}
+		if d == best && d <= limit {
+			all = append(all, j)
+		}
+	}
+	return all
 }
 
 func at(words []string, i int) string {

@@ -10,7 +10,9 @@
 // the catalog colours near it, a measure by its tolerance or to the sizes
 // around it, a product type to its parent, a price ceiling by its
 // stretch) before it is dropped; an unknown word may be read as the word
-// it is a typo of; soft constraints are dropped; hard constraints and
+// it is a typo of, and a misspelt product type is fixed and the query
+// read again, so that the type's category and measure slots apply; soft
+// constraints are dropped; hard constraints and
 // exclusions are never touched. The search is best-first over sets of
 // relaxations, within a budget of engine counts and the context's
 // deadline. When the hard constraints alone find nothing, nothing is

@@ -104,3 +104,20 @@ func ExampleRewriter_Parse() {
 	// product_type rain jacket
 	// true 1
 }
+
+// A misspelt product type is fixed and the query read again; the spans
+// still point into the query as typed.
+func ExampleOutcome_Corrected() {
+	eng := shopEngine{{"ceiling fan", "white"}, {"fan", "white"}}
+	out, err := rewrite.New(eng, nil).Rescue(context.Background(), "ceeiling fan")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	head := out.Parsed.Constraints[0]
+	fmt.Println(out.Corrected, "|", head.Name, "|", head.Text)
+	fmt.Println(out.Count, out.Message)
+	// Output:
+	// ceiling fan | ceiling fan | ceeiling fan
+	// 1 No exact match for “ceeiling fan”. Showing ceiling fans, reading “ceeiling” as “ceiling”.
+}

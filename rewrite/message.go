@@ -15,8 +15,11 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	}
 	noun := "results"
 	var phrases []string
+	fix := ""
 	for _, r := range out.Relaxations {
 		switch {
+		case r.Kind == parser.KindProductType && r.Operator == OpReplace:
+			fix = ", " + r.Phrase
 		case r.Kind == parser.KindProductType && r.Operator == OpWiden:
 			noun = strings.TrimPrefix(r.Phrase, "other ")
 		case r.Kind == parser.KindProductType && r.Operator == OpDrop:
@@ -33,6 +36,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	if len(phrases) > 0 {
 		msg += " " + strings.Join(phrases, ", ")
 	}
+	msg += fix
 	if out.Count < out.Policy.MinResults {
 		msg += fmt.Sprintf(" (still only %d)", out.Count)
 	}
@@ -51,6 +55,9 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 	var parts []string
 	for _, m := range out.Missing {
 		c := out.Parsed.Constraints[m.Constraint]
+		if c.Kind == parser.KindProductType && in != "" && len(out.Missing) > 1 {
+			continue // "in lenses" already names it; the rest say what is missing
+		}
 		what := m.Text
 		if c.Measure != nil && c.Inferred {
 			what = c.Value() // "85 mm", not "85"
@@ -62,10 +69,17 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		parts = append(parts, s)
 	}
 	msg := fmt.Sprintf("No results for “%s”.", strings.TrimSpace(out.Query))
+	if out.Corrected != "" {
+		msg = fmt.Sprintf("No results for “%s”, read as “%s”.", strings.TrimSpace(out.Query), strings.TrimSpace(out.Corrected))
+	}
 	if len(parts) > 0 {
 		msg += " " + strings.Join(parts, ". ") + "."
 	}
-	return msg, "the hard constraints alone find nothing, so none is relaxed; " + strings.Join(parts, "; ")
+	why := "the hard constraints alone find nothing, so none is relaxed; "
+	if out.Corrected != "" {
+		why = fmt.Sprintf("read again as %q; %s", out.Corrected, why)
+	}
+	return msg, why + strings.Join(parts, "; ")
 }
 
 // summarise writes a list of carried values, a range when they are many

@@ -60,6 +60,14 @@ type item struct {
 // allows it. Hard constraints and exclusions have only their exact state;
 // filler has none (it is dropped before anything is searched).
 func (rw *Rewriter) ladders(ctx context.Context, r *parser.Result, e Effective) []*item {
+	items := rw.exactItems(r)
+	rw.addRelaxations(ctx, items, e)
+	return items
+}
+
+// exactItems are the constraints of r that ask for something (filler
+// aside), each with its exact state only.
+func (rw *Rewriter) exactItems(r *parser.Result) []*item {
 	var items []*item
 	for i, c := range r.Constraints {
 		if c.Kind == parser.KindFiller || c.Strictness == parser.Filler {
@@ -68,6 +76,11 @@ func (rw *Rewriter) ladders(ctx context.Context, r *parser.Result, e Effective) 
 		exact := rw.exactClause(i, c)
 		items = append(items, &item{index: i, c: c, solo: -1, levels: []level{{clause: &exact}}})
 	}
+	return items
+}
+
+// addRelaxations gives each item the states below its exact one.
+func (rw *Rewriter) addRelaxations(ctx context.Context, items []*item, e Effective) {
 	// What the catalog carries is asked among the products of the same
 	// kind: those the product type and the hard constraints allow.
 	var within Plan
@@ -81,7 +94,6 @@ func (rw *Rewriter) ladders(ctx context.Context, r *parser.Result, e Effective) 
 			rw.relaxations(ctx, it, e, without(within, it.index))
 		}
 	}
-	return items
 }
 
 // without is p less the clause that comes from constraint i.
@@ -292,22 +304,10 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 // edits from: distance 1 for words of 4 to 7 letters, 2 for longer ones;
 // never for numbers or codes.
 func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint) (*Clause, string) {
-	w := c.Name
-	n := len([]rune(w))
-	if n < 4 || strings.ContainsAny(w, "0123456789 -") {
+	best := rw.nearestWord(ctx, c.Name)
+	if best == nil {
 		return nil, ""
 	}
-	limit := 1
-	if n >= 8 {
-		limit = 2
-	}
-	// The first word, in the vocabulary's order, of the least distance.
-	words := rw.words(ctx)
-	bestJ, _ := rw.near.Nearest(w, limit)
-	if bestJ < 0 {
-		return nil, ""
-	}
-	best := &words[bestJ]
 	name := best.word
 	if best.entry != nil {
 		name = best.entry.Name
@@ -315,6 +315,52 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 	fixed := parser.Constraint{Kind: best.kind, Name: name, Text: c.Text}
 	cl := rw.exactClause(i, fixed)
 	return &cl, name
+}
+
+// nearestWord is the vocabulary word an unknown word w is a typo of: the
+// first, in the vocabulary's order, of the least edit distance, within 1
+// for words of 4 to 7 letters and 2 for longer ones; nil for shorter
+// words, numbers and codes, or when no word is that near.
+func (rw *Rewriter) nearestWord(ctx context.Context, w string) *wordEntry {
+	limit, ok := typoLimit(w)
+	if !ok {
+		return nil
+	}
+	words := rw.words(ctx)
+	j, _ := rw.near.Nearest(w, limit)
+	if j < 0 {
+		return nil
+	}
+	return &words[j]
+}
+
+// nearestWords are all the vocabulary words of the least edit distance
+// from w, in the vocabulary's order, within nearestWord's limits.
+func (rw *Rewriter) nearestWords(ctx context.Context, w string) []*wordEntry {
+	limit, ok := typoLimit(w)
+	if !ok {
+		return nil
+	}
+	words := rw.words(ctx)
+	all, _ := rw.near.AllNearest(w, limit)
+	out := make([]*wordEntry, len(all))
+	for i, j := range all {
+		out[i] = &words[j]
+	}
+	return out
+}
+
+// typoLimit is how many edits a typo of w may be: 1 for words of 4 to 7
+// letters, 2 for longer ones; none for shorter words, numbers and codes.
+func typoLimit(w string) (int, bool) {
+	n := len([]rune(w))
+	if n < 4 || strings.ContainsAny(w, "0123456789 -") {
+		return 0, false
+	}
+	if n >= 8 {
+		return 2, true
+	}
+	return 1, true
 }
 
 func kindOfEntry(e *lexicon.Entry) parser.Kind {

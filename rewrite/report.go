@@ -3,7 +3,10 @@ package rewrite
 // Report is the JSON contract of `whittle search`: what was asked, every
 // plan counted, what was chosen, the shopper's message and the hits.
 type Report struct {
-	Query      string       `json:"query"`
+	Query string `json:"query"`
+	// Corrected is the query with a misspelt product type fixed, when
+	// the plans after the first come from reading it so.
+	Corrected  string       `json:"corrected,omitempty"`
 	ExactCount int          `json:"exact_count"`
 	Steps      []ReportStep `json:"steps"`
 	Chosen     ReportStep   `json:"chosen"`
@@ -47,7 +50,7 @@ func NewReport(o *Outcome, hits []ReportHit) Report {
 		}
 		return out
 	}
-	rep := Report{Query: o.Query, Message: o.Message, HardUnmet: o.Missing, Note: o.Note, Hits: hits,
+	rep := Report{Query: o.Query, Corrected: o.Corrected, Message: o.Message, HardUnmet: o.Missing, Note: o.Note, Hits: hits,
 		Chosen: ReportStep{Relaxations: conv(o.Relaxations), Count: o.Count}, Steps: []ReportStep{}}
 	if rep.HardUnmet == nil {
 		rep.HardUnmet = []Missing{}

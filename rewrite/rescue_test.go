@@ -24,6 +24,16 @@ func ops(o *Outcome) []string {
 	return out
 }
 
+// mustRescue rescues query on an in-memory engine over products.
+func mustRescue(t *testing.T, products []product, query string) *Outcome {
+	t.Helper()
+	o, err := New(&memEngine{products: products}, nil).Rescue(context.Background(), query)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return o
+}
+
 // The counts below follow from the invented shop in memengine_test.go.
 func TestRescue(t *testing.T) {
 	for _, tc := range []struct {
@@ -41,8 +51,8 @@ func TestRescue(t *testing.T) {
 			count: 4, ops: []string{"drop pattern"}, message: "Showing rain jackets in any pattern."},
 		{name: "culprit is not the last word", query: "merino crew sweater oatmeal", reason: "the oatmeal sweater is wool: merino, the first word, goes, not the colour",
 			count: 1, ops: []string{"drop material"}, message: "Showing sweaters in any material."},
-		{name: "replace a typo", query: "sweter merino", reason: "sweter is one edit from sweater",
-			count: 1, ops: []string{"replace keyword"}},
+		{name: "replace a typo", query: "sweter merino", reason: "sweter is one edit from sweater, a product type, so the query is read again as \"sweater merino\": SW-1 is the one merino sweater",
+			count: 1, ops: []string{"replace product_type"}, message: "Showing sweaters, reading “sweter” as “sweater”."},
 		{name: "replace a typo with the catalog's word", query: "glaciar rain jacket", reason: "glaciar is one edit from glacier, a colour only the catalog names",
 			count: 1, ops: []string{"replace keyword"}, message: "for “glacier”"},
 		{name: "widen product type", query: "chelsea boots", reason: "no chelsea boot; the hiking boot is a boot",
@@ -67,11 +77,7 @@ func TestRescue(t *testing.T) {
 			count: 4, ops: []string{"drop keyword"}},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			eng := &memEngine{products: shop}
-			o, err := New(eng, nil).Rescue(context.Background(), tc.query)
-			if err != nil {
-				t.Fatal(err)
-			}
+			o := mustRescue(t, shop, tc.query)
 			if o.Exact != tc.exact || o.Count != tc.count || !slices.Equal(ops(o), tc.ops) {
 				t.Errorf("%s: exact=%v count=%d ops=%v; want exact=%v count=%d ops=%v\n%s", tc.reason, o.Exact, o.Count, ops(o), tc.exact, tc.count, tc.ops, o.Explanation)
 			}
@@ -200,15 +206,34 @@ func TestRescueProperties(t *testing.T) {
 			t.Logf("%q: not deterministic", q)
 			return false
 		}
-		// Brute force over the whole lattice when it is small.
+		// Reading the query again with a misspelt product type fixed
+		// keeps every hard constraint of the query as typed hard, at
+		// the same span.
+		typed := parser.Parse(string(q))
+		rw.policy.Apply(typed, rw.lex)
+		for _, c := range typed.Constraints {
+			if c.Strictness == parser.Hard && !slices.ContainsFunc(o.Parsed.Constraints, func(d parser.Constraint) bool {
+				return d.Start == c.Start && d.End == c.End && d.Strictness == parser.Hard && d.Excluded == c.Excluded
+			}) {
+				t.Logf("%q: read again as %q, hard %q was lost", q, o.Corrected, c.Text)
+				return false
+			}
+		}
+		// Brute force over the whole lattice of the reading the planner
+		// planned from, when it is small.
 		r := parser.Parse(string(q))
+		counted := 2 // the query as typed, the hard constraints alone
+		if o.Corrected != "" {
+			r = &parser.Result{Query: o.Parsed.Query, Category: o.Parsed.Category, Constraints: slices.Clone(o.Parsed.Constraints)}
+			counted++ // the query as read again
+		}
 		e := rw.policy.Apply(r, rw.lex)
 		items := rw.ladders(context.Background(), r, e)
 		total := 1
 		for _, it := range items {
 			total *= len(it.levels)
 		}
-		if total+len(items)+2 <= DefaultBudget && len(o.Missing) == 0 && o.Note == "" {
+		if total+len(items)+counted <= DefaultBudget && len(o.Missing) == 0 && o.Note == "" {
 			s := &search{rw: rw, ctx: context.Background(), out: &Outcome{Parsed: r}, seen: map[string]int{}, budget: 1 << 20, items: items}
 			any := false
 			var walk func(i int, st []int)

@@ -89,18 +89,25 @@ func (rw *Rewriter) palette(ctx context.Context) *colour.Palette {
 }
 
 // wordEntry is a word a typo may be read as: a lexicon entry's name or
-// alias, or a value the catalog carries (entry nil).
+// alias, a value the catalog carries (entry nil), or one word of a
+// product type of several words (entry nil, kind keyword). typeWord marks
+// the words of product types, whole or in part, after whose fix the
+// query is read again.
 type wordEntry struct {
-	word  string
-	entry *lexicon.Entry
-	kind  parser.Kind
+	word     string
+	entry    *lexicon.Entry
+	kind     parser.Kind
+	typeWord bool
 }
 
 // words are the single words of the lexicon, and of the catalog's own
 // product types, colours, brands, materials and patterns, that a typo may
-// be read as.
+// be read as; then the words of the product types of several words
+// ("ceiling" of "ceiling fan"), which come last so that a whole entry
+// wins a tie.
 func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 	rw.wordOnce.Do(func() {
+		var phrases []string // product types of several words
 		if cat, ok := rw.engine.(Catalog); ok {
 			for _, f := range []parser.Kind{parser.KindProductType, parser.KindColour, parser.KindBrand, parser.KindMaterial, parser.KindPattern} {
 				vals, err := cat.Values(ctx, string(f), "", Plan{})
@@ -108,8 +115,11 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 					continue
 				}
 				for _, v := range sortedKeys(vals) {
+					if f == parser.KindProductType {
+						phrases = append(phrases, v)
+					}
 					if !strings.ContainsAny(v, " -") && len(v) >= 4 {
-						rw.vocab = append(rw.vocab, wordEntry{word: v, kind: f})
+						rw.vocab = append(rw.vocab, wordEntry{word: v, kind: f, typeWord: f == parser.KindProductType})
 					}
 				}
 			}
@@ -117,12 +127,16 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 		for _, k := range []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern, lexicon.Silhouette, lexicon.Brand} {
 			for _, e := range rw.lex.Entries(k) {
 				for _, w := range append([]string{e.Name}, e.Aliases...) {
+					if k == lexicon.ProductType {
+						phrases = append(phrases, w)
+					}
 					if !strings.ContainsAny(w, " -") && len(w) >= 4 {
-						rw.vocab = append(rw.vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e)})
+						rw.vocab = append(rw.vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e), typeWord: k == lexicon.ProductType})
 					}
 				}
 			}
 		}
+		rw.vocab = append(rw.vocab, partWords(phrases, rw.vocab)...)
 		list := make([]string, len(rw.vocab))
 		for i, w := range rw.vocab {
 			list[i] = w.word
@@ -130,6 +144,41 @@ func (rw *Rewriter) words(ctx context.Context) []wordEntry {
 		rw.near = lexicon.NewNearWords(list)
 	})
 	return rw.vocab
+}
+
+// partWords are the words of four letters or more of the phrases of
+// several words, once each, less those the vocabulary already holds;
+// those it holds ("chalk", a colour, of "chalk paint") it marks as words
+// of a product type.
+func partWords(phrases []string, vocab []wordEntry) []wordEntry {
+	parts := make(map[string]bool)
+	var order []string
+	for _, p := range phrases {
+		ws := strings.Fields(p)
+		if len(ws) < 2 {
+			continue
+		}
+		for _, w := range ws {
+			if len(w) >= 4 && !strings.ContainsAny(w, "-0123456789") && !parts[w] {
+				parts[w] = true
+				order = append(order, w)
+			}
+		}
+	}
+	held := make(map[string]bool)
+	for i := range vocab {
+		if parts[vocab[i].word] {
+			vocab[i].typeWord = true
+			held[vocab[i].word] = true
+		}
+	}
+	var out []wordEntry
+	for _, w := range order {
+		if !held[w] {
+			out = append(out, wordEntry{word: w, kind: parser.KindKeyword, typeWord: true})
+		}
+	}
+	return out
 }
 
 // Step is one plan the planner asked the engine to count.
@@ -177,6 +226,11 @@ type Outcome struct {
 	// Unavailable lists the products the query named that are not
 	// available; Plan then finds available products like them.
 	Unavailable []string `json:"unavailable,omitempty"`
+	// Corrected is the query with a misspelt product type fixed, when
+	// the plan comes from reading it so ("uv filter 52 millimeter" for
+	// "uv filtar 52 millimeter"); Parsed is then that reading, its spans
+	// pointing into Query, and the fix is the first of Relaxations.
+	Corrected string `json:"corrected,omitempty"`
 }
 
 // Rescue parses query, applies the policy, and relaxes it until the
@@ -203,14 +257,22 @@ func (rw *Rewriter) Parse(query string) *parser.Result {
 // common one costs less to drop than a rare one). It never counts the
 // same plan twice. When the budget or the deadline runs out it returns
 // the best plan found so far, with a Note.
+//
+// When r as typed finds too little and an unknown word of it is a typo
+// of a product type, or of a word of one, that then heads the query
+// ("uv filtar", "ceeiling fan"), the query is read again with the word
+// fixed, with the rewriter's parse options, and planned from that
+// reading: its spans mapped back onto the query as typed, the fix a
+// replace relaxation in every plan after the first (Outcome.Corrected).
+// A reading that would change a head r already had, or loosen a
+// constraint hard in r, is not used.
 func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcome, error) {
 	e := rw.policy.Apply(r, rw.lex)
 	out := &Outcome{Query: r.Query, Parsed: r, Policy: e}
 	s := &search{rw: rw, ctx: ctx, out: out, seen: make(map[string]int), budget: rw.budget}
-	items := rw.ladders(ctx, r, e)
-	s.items = items
+	s.items = rw.exactItems(r)
 
-	exact := make([]int, len(items))
+	exact := make([]int, len(s.items))
 	n, err := s.count(exact)
 	if err == errStop {
 		if ctx.Err() != nil {
@@ -222,14 +284,28 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 		return nil, err
 	}
 	if n >= e.MinResults {
-		out.Exact, out.Count, out.Plan = true, n, s.plan(exact)
-		out.Message = ""
-		out.Explanation = fmt.Sprintf("the query as typed finds %d", n)
-		if rw.alternatives(ctx, s, out.Plan) {
-			out.Explanation += "; every match is unavailable, so available products like them are shown"
-		}
-		return out, nil
+		out.Exact = true
+		return rw.settle(s, exact, n), nil
 	}
+	// A misspelt product type: plan from the query read again with it
+	// fixed, the fix being part of every plan from here on.
+	if rd := rw.reread(ctx, r); rd != nil {
+		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: rw.exactItems(rd.parsed)}
+		fixedExact := make([]int, len(fixed.items))
+		if fn, err := fixed.count(fixedExact); err == nil {
+			r, e, s, exact, n = rd.parsed, rd.policy, fixed, fixedExact, fn
+			out.Parsed, out.Policy, out.Corrected = r, e, rd.corrected
+			if n >= e.MinResults {
+				return rw.settle(s, exact, n), nil
+			}
+		} else if err != errStop {
+			return nil, err
+		} else {
+			s.stopReason = fixed.stopReason
+			return rw.settle(s, exact, n), nil
+		}
+	}
+	rw.addRelaxations(ctx, s.items, e)
 	// The hard constraints alone: if they find nothing, stop.
 	hard := s.hardOnly()
 	if hn, err := s.countPlan(hard, nil, "the hard constraints alone"); err != nil {
@@ -238,23 +314,34 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 		rw.missing(ctx, s, hard)
 		out.Plan = hard
 		out.Count = hn
+		out.Relaxations = s.relaxationsOf(nil)
 		out.Message, out.Explanation = rw.hardStopMessage(out)
 		return out, nil
 	}
 	best, bestN := exact, n
-	if found, state, fn := s.bestFirst(e.MinResults); found {
-		best, bestN = state, fn
-	} else if state != nil && fn > bestN {
+	if found, state, fn := s.bestFirst(e.MinResults); found || state != nil && fn > bestN {
 		best, bestN = state, fn
 	}
-	out.Count, out.Plan, out.Relaxations = bestN, s.plan(best), s.relaxationsOf(best)
+	return rw.settle(s, best, bestN), nil
+}
+
+// settle makes state, which counted n, the outcome of the search: its
+// plan, relaxations, message and explanation, and available products
+// like its matches if they are all unavailable.
+func (rw *Rewriter) settle(s *search, state []int, n int) *Outcome {
+	out := s.out
+	out.Count, out.Plan, out.Relaxations = n, s.plan(state), s.relaxationsOf(state)
 	out.Note = s.stopReason
-	out.Message = rw.message(out, items, best)
-	out.Explanation = s.explain(best)
-	if bestN > 0 && rw.alternatives(ctx, s, out.Plan) {
+	if out.Exact {
+		out.Explanation = fmt.Sprintf("the query as typed finds %d", n)
+	} else {
+		out.Message = rw.message(out, s.items, state)
+		out.Explanation = s.explain(state)
+	}
+	if n > 0 && rw.alternatives(s.ctx, s, out.Plan) {
 		out.Explanation += "; every match is unavailable, so available products like them are shown"
 	}
-	return out, nil
+	return out
 }
 
 // search is the state of one rescue.
@@ -266,6 +353,9 @@ type search struct {
 	seen       map[string]int // plan key → count
 	budget     int
 	stopReason string
+	// fix is the misspelt product type fixed before planning, or nil; it
+	// is part of every plan counted after the query as typed.
+	fix *Relaxation
 }
 
 // plan builds the plan of a state: each item's clause at its level.
@@ -300,7 +390,13 @@ func (s *search) keepsNothing(state []int) bool {
 
 func (s *search) relaxationsOf(state []int) []Relaxation {
 	var rs []Relaxation
+	if s.fix != nil {
+		rs = append(rs, *s.fix)
+	}
 	for i, it := range s.items {
+		if i >= len(state) {
+			break
+		}
 		if r := it.levels[state[i]].relax; r != nil {
 			rs = append(rs, *r)
 		}
@@ -310,6 +406,9 @@ func (s *search) relaxationsOf(state []int) []Relaxation {
 
 func (s *search) cost(state []int) float64 {
 	var c float64
+	if s.fix != nil {
+		c = costReplace
+	}
 	for i, it := range s.items {
 		c += it.scaled(state[i])
 	}
@@ -373,6 +472,8 @@ func (s *search) countPlan(p Plan, state []int, label string) (int, error) {
 	step := Step{Label: label, Count: n}
 	if state != nil {
 		step.Relaxations, step.Cost = s.relaxationsOf(state), s.cost(state)
+	} else if s.fix != nil {
+		step.Label += fmt.Sprintf(", reading %q", s.out.Corrected)
 	}
 	s.out.Steps = append(s.out.Steps, step)
 	return n, nil

@@ -38,6 +38,23 @@ func TestIndexAndSearch(t *testing.T) {
 		len(rep.Hits) != 1 || rep.Hits[0].ID != "RJ-1" || rep.HardUnmet == nil {
 		t.Errorf("unexpected report %+v", rep)
 	}
+	// sweter is read as sweater: apparel, where l is a size; SW-1 is the
+	// merino sweater in l (shop.jsonl).
+	code, out, _ = runCLI("", "search", "--index", dir, "--json", "merino sweter l")
+	var fixed struct {
+		Corrected string `json:"corrected"`
+		Chosen    struct {
+			Relaxations []struct{ Op, Kind, Text string } `json:"relaxations"`
+		} `json:"chosen"`
+		Hits []struct{ ID string }
+	}
+	if err := json.Unmarshal([]byte(out), &fixed); code != 0 || err != nil {
+		t.Fatalf("search: exit %d, %v in %s", code, err, out)
+	}
+	if fixed.Corrected != "merino sweater l" || len(fixed.Chosen.Relaxations) != 1 || fixed.Chosen.Relaxations[0].Op != "replace" ||
+		fixed.Chosen.Relaxations[0].Text != "sweter" || len(fixed.Hits) != 1 || fixed.Hits[0].ID != "SW-1" {
+		t.Errorf("a misspelt type: unexpected report %+v", fixed)
+	}
 	code, out, _ = runCLI("", "search", "--index", dir, "trail running shoes size 13")
 	if code != 0 || !strings.Contains(out, "sizes carried: 7, 8, 9, 10, 11, 12") {
 		t.Errorf("hard stop: exit %d\n%s", code, out)

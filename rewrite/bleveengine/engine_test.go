@@ -66,6 +66,9 @@ func TestRescueOnTheIndex(t *testing.T) {
 		{"rain jacket under $50", "the cheapest is 55.00; a 15% stretch reaches 57.50: RJ-3", false, 1, []string{"widen price"}, "up to 57.50 USD"},
 		{"14 awg wire", "12 AWG only; a gauge is never substituted", false, 0, nil, "12 awg"},
 		{"not black lens", "both lenses are black", false, 0, nil, ""},
+		{"merino sweter l", "sweter is read as sweater, so the query is apparel and l a hard letter size: SW-1 is merino in l", false, 1, []string{"replace product_type"}, "Showing sweaters, reading “sweter” as “sweater”."},
+		{"trail runing shoes size 13", "runing is a word of \"trail running shoe\", read as running: the size stays hard and is not carried", false, 0, []string{"replace product_type"},
+			"No results for “trail runing shoes size 13”, read as “trail running shoes size 13”. size 13 is not carried in trail running shoes; sizes carried: 7, 8, 9, 10, 11, 12."},
 		{"fn-3520", "LN-2 is out of stock; LN-1 is an available black lens fitting jx-10", false, 1, nil, "“fn-3520” is unavailable. Showing available lenses like it: near its colour, fitting jx-10."},
 	} {
 		t.Run(tc.query, func(t *testing.T) {

@@ -39,7 +39,7 @@ func TestRun(t *testing.T) {
 		"(inferred)",                        // the unit inferred
 		"is not carried",                    // the hard size kept
 		"in any colour",                     // the compatibility kept, colour dropped
-		"Showing results for",               // the typo replaced
+		", reading “",                       // the typo replaced, the query read again
 		"is unavailable. Showing available", // alternatives
 		"blind partial match",
 	} {
