@@ -40,3 +40,18 @@ func TestRelaxOrder(t *testing.T) {
 		})
 	}
 }
+
+// Product types in messages: regular plurals, and words a shop leaves as
+// they are (common usage).
+func TestPlural(t *testing.T) {
+	for _, tc := range []struct{ in, want string }{
+		{"rain jacket", "rain jackets"}, {"lens", "lenses"}, {"battery", "batteries"}, {"box", "boxes"},
+		{"bench", "benches"}, {"brush", "brushes"}, {"tray", "trays"}, {"headphones", "headphones"},
+		{"jeans", "jeans"}, {"lumber", "lumber"}, {"dress shoes", "dress shoes"}, {"shoe", "shoes"},
+		{"glass", "glasses"}, {"bus", "buses"}, {"vase", "vases"},
+	} {
+		if got := plural(tc.in); got != tc.want {
+			t.Errorf("plural(%q) = %q, want %q", tc.in, got, tc.want)
+		}
+	}
+}

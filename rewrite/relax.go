@@ -381,14 +381,30 @@ func kindOfEntry(e *lexicon.Entry) parser.Kind {
 	return parser.KindKeyword
 }
 
+// plural is the plural of a product type, for messages: "rain jackets",
+// "lenses", "batteries". A type already plural in form ("headphones",
+// "jeans") or a mass noun ("lumber") stays as it is.
 func plural(s string) string {
+	last := s[strings.LastIndexByte(s, ' ')+1:]
 	switch {
+	case unchangedPlural[last], strings.HasSuffix(s, "es") && !strings.HasSuffix(s, "ies") && len(last) > 3:
+		return s
 	case strings.HasSuffix(s, "s"), strings.HasSuffix(s, "x"), strings.HasSuffix(s, "ch"), strings.HasSuffix(s, "sh"):
 		return s + "es"
 	case strings.HasSuffix(s, "y") && !strings.HasSuffix(s, "ey") && !strings.HasSuffix(s, "ay") && !strings.HasSuffix(s, "oy"):
 		return s[:len(s)-1] + "ies"
 	}
 	return s + "s"
+}
+
+// unchangedPlural are nouns whose plural, as a shop writes it, is the
+// word itself: plural in form, or uncounted (common usage).
+var unchangedPlural = map[string]bool{
+	"jeans": true, "pants": true, "shorts": true, "trousers": true, "leggings": true, "tights": true, "chinos": true,
+	"joggers": true, "sweatpants": true, "overalls": true, "pyjamas": true, "pajamas": true, "scissors": true,
+	"pliers": true, "tongs": true, "binoculars": true, "earbuds": true, "glasses": true, "sunglasses": true,
+	"lumber": true, "luggage": true, "furniture": true, "flooring": true, "decking": true, "mulch": true,
+	"soil": true, "gravel": true, "sand": true, "cement": true, "concrete": true, "insulation": true,
 }
 
 // dropPhrase says to a shopper what dropping c means.
