@@ -110,6 +110,16 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for jx-10", "fits jx-10")},
 	},
 	{
+		name: "a word after a model code", query: "phone case for jx-10 roomy", category: "electronics",
+		reason: "a model code ends the target; the word after it is the shopper's, not the model's",
+		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for jx-10", "fits jx-10"), tg(KindKeyword, "roomy", "roomy")},
+	},
+	{
+		name: "a variant after a model code", query: "phone case for jx-10 pro", category: "electronics",
+		reason: "pro names a variant of the model (common practice)",
+		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for jx-10 pro", "fits jx-10 pro")},
+	},
+	{
 		name: "compatible with, then a colour", query: "phone case compatible with jx-10 black", category: "electronics",
 		reason: "the target stops at the next tagged span (the colour)",
 		want: []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "compatible with jx-10", "fits jx-10"),

@@ -557,6 +557,7 @@ func (p *tagger) compat(k, n int) int {
 	j := k + n
 	end := -1
 	var parts []string
+	code := false // a model code is in the target
 	for ; j < len(p.units); j++ {
 		v := &p.units[j]
 		if v.kind == uWord {
@@ -582,11 +583,17 @@ func (p *tagger) compat(k, n int) int {
 			if _, ok := letterSizes[v.text]; ok {
 				break
 			}
+			// A model code ends the target but for the words a maker
+			// puts after one ("zk-3 pro"): "for zk-3 roomy" fits zk-3.
+			if code && !modelSuffixes[v.text] {
+				break
+			}
 			parts, end = append(parts, v.text), v.end
 			continue
 		}
 		if v.kind == uItem && (v.item.Code != nil || (len(parts) > 0 && p.bareNumber(v) && !p.countAfter(j))) {
 			parts, end = append(parts, strings.ToLower(p.q[v.start:v.end])), v.end
+			code = code || v.item.Code != nil
 			continue
 		}
 		// "stand for 65 inch tv": a measure and the product it measures.
@@ -604,6 +611,11 @@ func (p *tagger) compat(k, n int) int {
 		Evidence: fmt.Sprintf("target after %q", p.q[p.units[k].start:p.units[k+n-1].end])})
 	return j - k - 1
 }
+
+// modelSuffixes are the words makers put after a model code to name a
+// variant of it (common practice).
+var modelSuffixes = map[string]bool{"pro": true, "max": true, "plus": true, "mini": true, "ultra": true, "lite": true,
+	"se": true, "xl": true, "air": true, "neo": true, "edge": true}
 
 // symbol handles punctuation: "#10-24" opens a unified thread.
 func (p *tagger) symbol(k int) int {
