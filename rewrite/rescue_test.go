@@ -418,3 +418,56 @@ func TestAlternativesKeepHardConstraints(t *testing.T) {
 		})
 	}
 }
+
+// The budget and the deadline hold for the heaviest queries the parser
+// lets through: 64 constraints (its limit), 1,024 bytes (its limit),
+// every constraint relaxable. However large the lattice, a rescue asks
+// the engine for at most its budget of counts, and a deadline reached
+// part way stops it with the best plan so far.
+func TestLimitsUnderHeavyQueries(t *testing.T) {
+	words := []string{"red", "striped", "merino", "crew", "sweater", "oatmeal", "charcoal", "wool", "nylon", "rain", "jacket", "zorblax"}
+	var b strings.Builder
+	for i := 0; b.Len() < parser.MaxQueryBytes-10; i++ {
+		b.WriteString(words[i%len(words)] + " ")
+	}
+	heavy := []string{
+		strings.TrimSpace(b.String()),
+		strings.TrimSpace(strings.Repeat("-red ", 200)),
+		strings.TrimSpace(strings.Repeat("q ", 500)),
+	}
+	for _, q := range heavy {
+		r := parser.Parse(q)
+		if len(r.Constraints) > parser.MaxConstraints {
+			t.Fatalf("%.30q: %d constraints past the parser's limit", q, len(r.Constraints))
+		}
+		for _, budget := range []int{1, 5, DefaultBudget} {
+			eng := &memEngine{products: shop}
+			o, err := New(eng, nil, WithBudget(budget)).Rescue(context.Background(), q)
+			if err != nil {
+				t.Fatalf("%.30q, budget %d: %v", q, budget, err)
+			}
+			if n := len(eng.counted); n > budget {
+				t.Errorf("%.30q: %d counts for a budget of %d", q, n, budget)
+			}
+			if len(o.Steps) > budget {
+				t.Errorf("%.30q: %d steps for a budget of %d", q, len(o.Steps), budget)
+			}
+		}
+		ctx, cancel := context.WithCancel(context.Background())
+		calls := 0
+		eng := &memEngine{products: shop, delay: func(context.Context) error {
+			if calls++; calls == 2 {
+				cancel()
+			}
+			return nil
+		}}
+		o, err := New(eng, nil).Rescue(ctx, q)
+		cancel()
+		if err != nil && !errors.Is(err, context.Canceled) {
+			t.Fatalf("%.30q, deadline: %v", q, err)
+		}
+		if err == nil && !strings.Contains(o.Note, "deadline") && len(o.Steps) > 2 {
+			t.Errorf("%.30q: %d steps after the deadline, note %q", q, len(o.Steps), o.Note)
+		}
+	}
+}

@@ -308,7 +308,11 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 	rw.addRelaxations(ctx, s.items, e)
 	// The hard constraints alone: if they find nothing, stop.
 	hard := s.hardOnly()
-	if hn, err := s.countPlan(hard, nil, "the hard constraints alone"); err != nil {
+	if hn, err := s.countPlan(hard, nil, "the hard constraints alone"); err == errStop {
+		// The budget or the deadline ran out here: the query as typed is
+		// the best plan counted, and the note says why.
+		return rw.settle(s, exact, n), nil
+	} else if err != nil {
 		return nil, err
 	} else if hn < e.MinResults && s.stopReason == "" {
 		rw.missing(ctx, s, hard)
@@ -440,6 +444,10 @@ func (s *search) count(state []int) (int, error) {
 	return s.countPlan(s.plan(state), state, label)
 }
 
+// maxVisits bounds the relaxation sets one rescue looks at, counted or
+// already seen: sixteen for each count of the budget.
+func maxVisits(budget int) int { return max(64, 16*budget) }
+
 // errStop marks a count refused because the budget or deadline ran out.
 var errStop = fmt.Errorf("stopped")
 
@@ -516,7 +524,20 @@ func (s *search) bestFirst(min int) (bool, []int, int) {
 	s.push(pq, start, visited)
 	var best []int
 	bestN := -1
+	// Plans that match the same products are counted once, so states
+	// whose plan was seen cost no budget; the visits are bounded too, or
+	// a query of many alike constraints (64 exclusions of one colour)
+	// would walk a lattice of 2^64 states.
+	visits, most := 0, maxVisits(s.rw.budget)
 	for pq.Len() > 0 {
+		if visits++; visits > most {
+			s.stopReason = fmt.Sprintf("%d relaxation sets were tried, the most one rescue looks at; showing the best plan found so far", most)
+			break
+		}
+		if s.ctx.Err() != nil {
+			s.stopReason = "the deadline passed; showing the best plan found so far"
+			break
+		}
 		st := heap.Pop(pq).(entry).state
 		n, err := s.count(st)
 		if err == errStop {
