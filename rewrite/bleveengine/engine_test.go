@@ -22,6 +22,18 @@ import (
 // expected value below is worked out by hand from it.
 func openShop(t *testing.T) *Engine {
 	t.Helper()
+	e, err := Open(shopDir(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Cleanup(func() { e.Close() })
+	return e
+}
+
+// shopDir builds the test shop's index in batches of 4, so that it has
+// several segments, and returns its directory.
+func shopDir(t *testing.T) string {
+	t.Helper()
 	f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
 	if err != nil {
 		t.Fatal(err)
@@ -35,12 +47,7 @@ func openShop(t *testing.T) *Engine {
 	if st.Products != 13 {
 		t.Errorf("indexed %d products, want 13", st.Products)
 	}
-	e, err := Open(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	t.Cleanup(func() { e.Close() })
-	return e
+	return dir
 }
 
 func TestRescueOnTheIndex(t *testing.T) {

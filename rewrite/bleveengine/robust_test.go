@@ -14,21 +14,6 @@ import (
 	"github.com/whittle-search/whittle/rewrite"
 )
 
-// shopDir builds the test shop's index and returns its directory.
-func shopDir(t *testing.T) string {
-	t.Helper()
-	f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
-	if err != nil {
-		t.Fatal(err)
-	}
-	defer f.Close()
-	dir := filepath.Join(t.TempDir(), "idx")
-	if _, err := Build(context.Background(), f, dir, BuildOptions{}); err != nil {
-		t.Fatal(err)
-	}
-	return dir
-}
-
 // A damaged or missing index gives a clear error from Open or from the
 // first query, never a panic.
 func TestDamagedIndex(t *testing.T) {
