@@ -221,7 +221,8 @@ type Outcome struct {
 	// Message is for the shopper; Explanation for developers.
 	Message     string `json:"message"`
 	Explanation string `json:"explanation"`
-	// Note says why the search stopped early (budget or deadline), or "".
+	// Note says why the search stopped early (the budget, the deadline, or
+	// the most relaxation sets one rescue looks at), or "".
 	Note string `json:"note,omitempty"`
 	// Unavailable lists the products the query named that are not
 	// available; Plan then finds available products like them.
