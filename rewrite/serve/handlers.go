@@ -172,7 +172,7 @@ func unreadable(r *parser.Result) *Error {
 // engineError is the answer to a failed rescue: the deadline, or an
 // internal failure, logged.
 func (s *Server) engineError(r *http.Request, err error) *Error {
-	if errors.Is(err, context.DeadlineExceeded) {
+	if errors.Is(err, context.DeadlineExceeded) || errors.Is(r.Context().Err(), context.DeadlineExceeded) {
 		return errorf(CodeDeadlineExceeded, fmt.Sprintf("the deadline of %s passed before the index answered", s.limits.Deadline))
 	}
 	s.log.Error("rescue failed", "endpoint", "rescue", "err", err.Error())

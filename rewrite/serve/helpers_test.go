@@ -12,6 +12,7 @@ import (
 	"path/filepath"
 	"strings"
 	"sync"
+	"sync/atomic"
 	"testing"
 
 	"github.com/whittle-search/whittle/rewrite"
@@ -71,11 +72,19 @@ type gated struct {
 	entered chan struct{} // gets a value when a Count starts, if not nil
 	release chan struct{} // Count waits on it, if not nil
 	panics  bool
+	// stallAfter, when above 0, makes every Count after that many wait
+	// for the request's deadline.
+	stallAfter int32
+	counts     atomic.Int32
 }
 
 func (g *gated) Count(ctx context.Context, p rewrite.Plan) (int, error) {
 	if g.panics {
 		panic("a failing engine")
+	}
+	if n := g.counts.Add(1); g.stallAfter > 0 && n > g.stallAfter {
+		<-ctx.Done()
+		return 0, ctx.Err()
 	}
 	if g.entered != nil {
 		g.entered <- struct{}{}

@@ -170,6 +170,41 @@ func TestDeadlineExceeded(t *testing.T) {
 	}
 }
 
+func TestDeadlineStopsThePlanner(t *testing.T) {
+	for _, tc := range []struct {
+		name   string
+		counts int32
+		status int
+		code   Code
+		reason string
+	}{
+		{"at the hard constraints", 1, 504, CodeDeadlineExceeded,
+			"mustard rain jacket finds nothing as typed (count 1); the deadline passes while the hard constraints alone are counted, so there is no plan to give"},
+		{"in the search", 4, 200, "",
+			"the query as typed, the hard constraints alone, mustard alone and rain jacket alone are counted; the deadline passes at the first widening, and the best plan so far is answered with a note"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			g := &gated{Engine: openShop(t), stallAfter: tc.counts}
+			s := newServer(t, g, Limits{Deadline: 20 * time.Millisecond}, nil, false)
+			w := do(s.Handler(), http.MethodPost, Prefix+"rescue", `{"query": "mustard rain jacket"}`)
+			if w.Code != tc.status {
+				t.Fatalf("%s: status %d, %s", tc.reason, w.Code, w.Body)
+			}
+			if tc.code != "" {
+				if e := errorOf(t, w); e.Code != tc.code {
+					t.Errorf("%s: %+v", tc.reason, e)
+				}
+				return
+			}
+			var got struct{ Note string }
+			decodeBody(t, w, &got)
+			if !strings.Contains(got.Note, "deadline") {
+				t.Errorf("%s: note %q", tc.reason, got.Note)
+			}
+		})
+	}
+}
+
 func TestInFlightCap(t *testing.T) {
 	g := &gated{Engine: openShop(t), entered: make(chan struct{}, 1), release: make(chan struct{})}
 	s := newServer(t, g, Limits{MaxInFlight: 1, RetryAfter: 3 * time.Second}, nil, false)

@@ -94,3 +94,32 @@ func TestServeStopsWithNothingLeft(t *testing.T) {
 	client.CloseIdleConnections()
 	checkGoroutines(t, before)
 }
+
+func TestReadTimeoutClosesASlowClient(t *testing.T) {
+	s := newServer(t, openShop(t), Limits{ReadTimeout: 20 * time.Millisecond}, nil, false)
+	base, stop := running(t, s)
+	conn, err := net.Dial("tcp", strings.TrimPrefix(base, "http://"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer conn.Close()
+	// Half a request, then nothing: the server must give up on it rather
+	// than hold the connection; a read then ends (EOF, or the 408 Go's
+	// server may write first), and does not wait for ever.
+	if _, err := conn.Write([]byte("POST " + Prefix + "parse HTTP/1.1\r\nHost: x\r\n")); err != nil {
+		t.Fatal(err)
+	}
+	conn.SetReadDeadline(time.Now().Add(time.Minute)) // a guard against hanging the suite, not a measure
+	buf := make([]byte, 512)
+	for {
+		if _, err := conn.Read(buf); err != nil {
+			if ne, ok := err.(net.Error); ok && ne.Timeout() {
+				t.Fatal("the server kept a half-sent request open")
+			}
+			break
+		}
+	}
+	if err := stop(); err != nil {
+		t.Errorf("Serve: %v", err)
+	}
+}
