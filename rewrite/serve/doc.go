@@ -13,7 +13,7 @@
 // Every error is a JSON object with a stable code of whittle's own (the
 // Code constants), a message, and the byte span of the problem in the
 // query where there is one. A panic in a handler is recovered, logged and
-// answered with [CodeInternal]; no stack trace leaves the server.
+// answered with [CodeServerFault]; no stack trace leaves the server.
 //
 // Limits hold for every request: the size of the body and of the query, a
 // deadline that the planner's search honours, a cap on requests in flight

@@ -34,18 +34,18 @@ const (
 	CodeBadHits Code = "bad_hits"
 	// CodeMethodNotAllowed: the endpoint takes another method (405).
 	CodeMethodNotAllowed Code = "method_not_allowed"
-	// CodeNotFound: no endpoint has that path (404).
-	CodeNotFound Code = "not_found"
+	// CodeNoEndpoint: no endpoint has that path (404).
+	CodeNoEndpoint Code = "no_endpoint"
 	// CodeBusy: too many requests are in flight; retry after the
 	// Retry-After header's seconds (503).
 	CodeBusy Code = "busy"
 	// CodeDraining: the server is shutting down (503, from ready).
 	CodeDraining Code = "draining"
-	// CodeDeadlineExceeded: the request's deadline passed before the
+	// CodeDeadlinePassed: the request's deadline passed before the
 	// engine answered anything (504).
-	CodeDeadlineExceeded Code = "deadline_exceeded"
-	// CodeInternal: the server failed; the log says why (500).
-	CodeInternal Code = "internal"
+	CodeDeadlinePassed Code = "deadline_passed"
+	// CodeServerFault: the server failed; the log says why (500).
+	CodeServerFault Code = "server_fault"
 )
 
 // status is the HTTP status of each code.
@@ -54,9 +54,9 @@ var status = map[Code]int{
 	CodeQueryTooLong: http.StatusBadRequest, CodeQueryEmpty: http.StatusBadRequest, CodeQueryUnreadable: http.StatusBadRequest,
 	CodeUnknownCategory: http.StatusBadRequest, CodeUnknownProductType: http.StatusBadRequest,
 	CodeBadTuning: http.StatusBadRequest, CodeBadHits: http.StatusBadRequest,
-	CodeMethodNotAllowed: http.StatusMethodNotAllowed, CodeNotFound: http.StatusNotFound,
+	CodeMethodNotAllowed: http.StatusMethodNotAllowed, CodeNoEndpoint: http.StatusNotFound,
 	CodeBusy: http.StatusServiceUnavailable, CodeDraining: http.StatusServiceUnavailable,
-	CodeDeadlineExceeded: http.StatusGatewayTimeout, CodeInternal: http.StatusInternalServerError,
+	CodeDeadlinePassed: http.StatusGatewayTimeout, CodeServerFault: http.StatusInternalServerError,
 }
 
 // Span is a byte range of the query: query[Start:End].
@@ -91,7 +91,7 @@ func errorf(code Code, msg string) *Error { return &Error{Code: code, Message: m
 func writeJSON(w http.ResponseWriter, st int, v any) {
 	b, err := json.Marshal(v)
 	if err != nil {
-		st, b = http.StatusInternalServerError, []byte(`{"error":{"code":"internal","message":"the answer could not be written"}}`)
+		st, b = http.StatusInternalServerError, []byte(`{"error":{"code":"server_fault","message":"the answer could not be written"}}`)
 	}
 	w.Header().Set("Content-Type", "application/json")
 	w.Header().Set("Content-Length", strconv.Itoa(len(b)+1))

@@ -173,10 +173,10 @@ func unreadable(r *parser.Result) *Error {
 // internal failure, logged.
 func (s *Server) engineError(r *http.Request, err error) *Error {
 	if errors.Is(err, context.DeadlineExceeded) || errors.Is(r.Context().Err(), context.DeadlineExceeded) {
-		return errorf(CodeDeadlineExceeded, fmt.Sprintf("the deadline of %s passed before the index answered", s.limits.Deadline))
+		return errorf(CodeDeadlinePassed, fmt.Sprintf("the deadline of %s passed before the index answered", s.limits.Deadline))
 	}
 	s.log.Error("rescue failed", "endpoint", "rescue", "err", err.Error())
-	return errorf(CodeInternal, "the search failed; the server's log says why")
+	return errorf(CodeServerFault, "the search failed; the server's log says why")
 }
 
 // handlePolicy answers the effective policy for ?category= and

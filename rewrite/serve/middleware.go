@@ -50,7 +50,7 @@ func (w *recorder) Write(b []byte) (int, error) {
 }
 
 // observe wraps every request: it recovers a panic (logged with its
-// stack, answered 500 with CodeInternal), writes the request's log line
+// stack, answered 500 with CodeServerFault), writes the request's log line
 // and counts it.
 func (s *Server) observe(endpoint string, next http.Handler) http.Handler {
 	return http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
@@ -62,7 +62,7 @@ func (s *Server) observe(endpoint string, next http.Handler) http.Handler {
 			if v := recover(); v != nil {
 				s.log.Error("panic", "endpoint", endpoint, "panic", fmt.Sprint(v), "stack", string(debug.Stack()))
 				if rec.status == 0 {
-					writeError(rec, r, errorf(CodeInternal, "the server failed; its log says why"))
+					writeError(rec, r, errorf(CodeServerFault, "the server failed; its log says why"))
 				}
 			}
 			s.finish(r, in, rec, time.Since(start))
@@ -140,7 +140,7 @@ func (s *Server) routes() http.Handler {
 		mux.Handle(Prefix+e.name, s.observe(e.name, h))
 	}
 	mux.Handle("/", s.observe("other", http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
-		writeError(w, r, errorf(CodeNotFound, fmt.Sprintf("no endpoint at %s; they lie under %s", r.URL.Path, Prefix)))
+		writeError(w, r, errorf(CodeNoEndpoint, fmt.Sprintf("no endpoint at %s; they lie under %s", r.URL.Path, Prefix)))
 	})))
 	return mux
 }

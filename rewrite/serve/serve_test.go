@@ -117,6 +117,11 @@ func TestRescueBaseline(t *testing.T) {
 	}
 }
 
+// The statuses follow RFC 9110 (HTTP Semantics): 400 for a request the
+// server will not process (15.5.1), 404 (15.5.5), 405 with an Allow
+// header listing the methods the endpoint takes (15.5.6, 10.2.1), 413
+// for content larger than the server will take (15.5.14). The codes and
+// messages are whittle's own.
 func TestErrors(t *testing.T) {
 	s := newServer(t, openShop(t), Limits{MaxBodyBytes: 200, MaxQueryBytes: 40}, nil, false)
 	long := strings.Repeat("a", 45)
@@ -142,7 +147,7 @@ func TestErrors(t *testing.T) {
 		{"bad hits", "POST", "rescue", `{"query": "rug", "hits": 101}`, CodeBadHits, 400, nil, "100 at most by default"},
 		{"method not allowed", "GET", "rescue", "", CodeMethodNotAllowed, 405, nil, "rescue takes POST"},
 		{"method not allowed on policy", "DELETE", "policy", "", CodeMethodNotAllowed, 405, nil, "the policy is read-only"},
-		{"not found", "GET", "explain", "", CodeNotFound, 404, nil, "no such endpoint"},
+		{"not found", "GET", "explain", "", CodeNoEndpoint, 404, nil, "no such endpoint"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			w := do(s.Handler(), tc.method, Prefix+tc.path, tc.body)
@@ -160,13 +165,15 @@ func TestErrors(t *testing.T) {
 	}
 }
 
-func TestDeadlineExceeded(t *testing.T) {
+// 504 is the status of a gateway that did not get an answer in time
+// (RFC 9110, 15.6.5): here the index, behind the service.
+func TestDeadlinePassed(t *testing.T) {
 	// A deadline of a nanosecond has passed before the first count, so
 	// the planner has no plan at all to give back.
 	s := newServer(t, openShop(t), Limits{Deadline: time.Nanosecond}, nil, false)
 	w := do(s.Handler(), http.MethodPost, Prefix+"rescue", `{"query": "mustard rain jacket"}`)
-	if e := errorOf(t, w); w.Code != http.StatusGatewayTimeout || e.Code != CodeDeadlineExceeded {
-		t.Errorf("status %d, %+v; want 504 %s", w.Code, e, CodeDeadlineExceeded)
+	if e := errorOf(t, w); w.Code != http.StatusGatewayTimeout || e.Code != CodeDeadlinePassed {
+		t.Errorf("status %d, %+v; want 504 %s", w.Code, e, CodeDeadlinePassed)
 	}
 }
 
@@ -178,7 +185,7 @@ func TestDeadlineStopsThePlanner(t *testing.T) {
 		code   Code
 		reason string
 	}{
-		{"at the hard constraints", 1, 504, CodeDeadlineExceeded,
+		{"at the hard constraints", 1, 504, CodeDeadlinePassed,
 			"mustard rain jacket finds nothing as typed (count 1); the deadline passes while the hard constraints alone are counted, so there is no plan to give"},
 		{"in the search", 4, 200, "",
 			"the query as typed, the hard constraints alone, mustard alone and rain jacket alone are counted; the deadline passes at the first widening, and the best plan so far is answered with a note"},
@@ -205,6 +212,8 @@ func TestDeadlineStopsThePlanner(t *testing.T) {
 	}
 }
 
+// RFC 9110: 503 means the server is overloaded for now (15.6.4), and
+// Retry-After may be a whole number of seconds to wait (10.2.3).
 func TestInFlightCap(t *testing.T) {
 	g := &gated{Engine: openShop(t), entered: make(chan struct{}, 1), release: make(chan struct{})}
 	s := newServer(t, g, Limits{MaxInFlight: 1, RetryAfter: 3 * time.Second}, nil, false)
@@ -234,8 +243,8 @@ func TestPanicRecovered(t *testing.T) {
 	var log bytes.Buffer
 	s := newServer(t, &gated{Engine: openShop(t), panics: true}, Limits{}, &log, false)
 	w := do(s.Handler(), http.MethodPost, Prefix+"rescue", `{"query": "rug"}`)
-	if e := errorOf(t, w); w.Code != 500 || e.Code != CodeInternal || strings.Contains(w.Body.String(), "goroutine") {
-		t.Errorf("status %d, %q; want 500 internal without a stack", w.Code, w.Body)
+	if e := errorOf(t, w); w.Code != 500 || e.Code != CodeServerFault || strings.Contains(w.Body.String(), "goroutine") {
+		t.Errorf("status %d, %q; want 500 server_fault without a stack", w.Code, w.Body)
 	}
 	if !strings.Contains(log.String(), "a failing engine") {
 		t.Errorf("the panic is not logged: %s", log.String())
@@ -296,11 +305,16 @@ func TestHealthReadyMetrics(t *testing.T) {
 			t.Errorf("metrics lack %q", line)
 		}
 	}
+	// Prometheus's text-based exposition format is served as text/plain
+	// (version=0.0.4), per its "Exposition formats" documentation.
 	if !strings.HasPrefix(w.Header().Get("Content-Type"), "text/plain") {
 		t.Errorf("metrics content type %q; want the text format", w.Header().Get("Content-Type"))
 	}
 }
 
+// Keeping search text out of request logs unless allowed is common
+// practice, since shoppers paste names, addresses and order numbers into
+// search boxes.
 func TestLogPrivacy(t *testing.T) {
 	for _, tc := range []struct {
 		name  string
