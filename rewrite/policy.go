@@ -75,6 +75,7 @@ type TuningError struct {
 	Message string
 }
 
+// Error returns the message, which names the field and its range.
 func (e *TuningError) Error() string { return e.Message }
 
 // Check returns the first value of t out of the range a policy file

@@ -48,15 +48,23 @@ const (
 	CodeServerFault Code = "server_fault"
 )
 
-// status is the HTTP status of each code.
-var status = map[Code]int{
-	CodeBadJSON: http.StatusBadRequest, CodeBodyTooLarge: http.StatusRequestEntityTooLarge,
-	CodeQueryTooLong: http.StatusBadRequest, CodeQueryEmpty: http.StatusBadRequest, CodeQueryUnreadable: http.StatusBadRequest,
-	CodeUnknownCategory: http.StatusBadRequest, CodeUnknownProductType: http.StatusBadRequest,
-	CodeBadTuning: http.StatusBadRequest, CodeBadHits: http.StatusBadRequest,
-	CodeMethodNotAllowed: http.StatusMethodNotAllowed, CodeNoEndpoint: http.StatusNotFound,
-	CodeBusy: http.StatusServiceUnavailable, CodeDraining: http.StatusServiceUnavailable,
-	CodeDeadlinePassed: http.StatusGatewayTimeout, CodeServerFault: http.StatusInternalServerError,
+// Status is the HTTP status c is answered with.
+func (c Code) Status() int {
+	switch c {
+	case CodeBodyTooLarge:
+		return http.StatusRequestEntityTooLarge
+	case CodeMethodNotAllowed:
+		return http.StatusMethodNotAllowed
+	case CodeNoEndpoint:
+		return http.StatusNotFound
+	case CodeBusy, CodeDraining:
+		return http.StatusServiceUnavailable
+	case CodeDeadlinePassed:
+		return http.StatusGatewayTimeout
+	case CodeServerFault:
+		return http.StatusInternalServerError
+	}
+	return http.StatusBadRequest
 }
 
 // Span is a byte range of the query: query[Start:End].
@@ -82,6 +90,7 @@ type Problem struct {
 	Message string `json:"message"`
 }
 
+// Error returns the code and the message.
 func (e *Error) Error() string { return string(e.Code) + ": " + e.Message }
 
 // errorf makes an Error without a span.
@@ -104,7 +113,7 @@ func writeError(w http.ResponseWriter, r *http.Request, e *Error) {
 	if in := infoOf(r); in != nil {
 		in.code = e.Code
 	}
-	writeJSON(w, status[e.Code], struct {
+	writeJSON(w, e.Code.Status(), struct {
 		Error *Error `json:"error"`
 	}{e})
 }

@@ -106,3 +106,9 @@ func ExampleServer_Handler() {
 	fmt.Print(w.Code, " ", w.Body.String())
 	// Output: 200 {"status":"ready"}
 }
+
+// Each error code has one HTTP status.
+func ExampleCode_Status() {
+	fmt.Println(serve.CodeBusy.Status(), serve.CodeQueryTooLong.Status(), serve.CodeDeadlinePassed.Status())
+	// Output: 503 400 504
+}
