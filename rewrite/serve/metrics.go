@@ -3,6 +3,7 @@ package serve
 import (
 	"net/http"
 	"strconv"
+	"sync/atomic"
 	"time"
 
 	"github.com/prometheus/client_golang/prometheus"
@@ -22,6 +23,9 @@ type metrics struct {
 	zeroAsTyped prometheus.Counter
 	zeroRescued prometheus.Counter
 	promHandler http.Handler
+	// asked and empty count rescues and those left with nothing, for the
+	// zero-result ratio.
+	asked, empty atomic.Int64
 }
 
 // newMetrics registers the service's metrics.
@@ -41,7 +45,9 @@ func newMetrics() *metrics {
 		Help: "Queries that found nothing as typed."})
 	m.zeroRescued = prometheus.NewCounter(prometheus.CounterOpts{Name: "whittle_rescue_zero_results_total",
 		Help: "Queries that found nothing even after rescue."})
-	m.reg.MustRegister(m.requests, m.errors, m.latency, m.relaxations, m.rescues, m.zeroAsTyped, m.zeroRescued)
+	ratio := prometheus.NewGaugeFunc(prometheus.GaugeOpts{Name: "whittle_rescue_zero_result_ratio",
+		Help: "Share of the queries since the server started that found nothing even after rescue (0 before any)."}, m.zeroRatio)
+	m.reg.MustRegister(m.requests, m.errors, m.latency, m.relaxations, m.rescues, m.zeroAsTyped, m.zeroRescued, ratio)
 	m.promHandler = promhttp.HandlerFor(m.reg, promhttp.HandlerOpts{})
 	return m
 }
@@ -58,15 +64,26 @@ func (m *metrics) request(endpoint string, status int, code Code, took time.Dura
 // rescued counts a rescue's outcome.
 func (m *metrics) rescued(o *rewrite.Outcome) {
 	m.rescues.Inc()
+	m.asked.Add(1)
 	if len(o.Steps) > 0 && o.Steps[0].Count == 0 {
 		m.zeroAsTyped.Inc()
 	}
 	if o.Count == 0 {
 		m.zeroRescued.Inc()
+		m.empty.Add(1)
 	}
 	for _, r := range o.Relaxations {
 		m.relaxations.WithLabelValues(r.Operator).Inc()
 	}
+}
+
+// zeroRatio is the share of rescues left with nothing.
+func (m *metrics) zeroRatio() float64 {
+	n := m.asked.Load()
+	if n == 0 {
+		return 0
+	}
+	return float64(m.empty.Load()) / float64(n)
 }
 
 // serve writes the metrics in the Prometheus text format.

@@ -300,6 +300,7 @@ func TestHealthReadyMetrics(t *testing.T) {
 		`whittle_rescue_queries_total 3`,
 		`whittle_rescue_zero_as_typed_total 2`,
 		`whittle_rescue_zero_results_total 1`,
+		`whittle_rescue_zero_result_ratio 0.3333333333333333`, // 1 of 3
 	} {
 		if !strings.Contains(body, line+"\n") {
 			t.Errorf("metrics lack %q", line)
