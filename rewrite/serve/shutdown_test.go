@@ -2,6 +2,7 @@ package serve
 
 import (
 	"context"
+	"io"
 	"net"
 	"net/http"
 	"runtime"
@@ -119,6 +120,26 @@ func TestReadTimeoutClosesASlowClient(t *testing.T) {
 			break
 		}
 	}
+	if err := stop(); err != nil {
+		t.Errorf("Serve: %v", err)
+	}
+}
+
+func TestWriteTimeoutCutsALateAnswer(t *testing.T) {
+	// The engine stalls until the request's deadline, which comes well
+	// after the write timeout: the answer is then too late to be sent,
+	// and the client sees the connection end instead of an answer.
+	g := &gated{Engine: openShop(t), stallAfter: 1}
+	s := newServer(t, g, Limits{Deadline: 300 * time.Millisecond, WriteTimeout: 10 * time.Millisecond}, nil, false)
+	base, stop := running(t, s)
+	client := &http.Client{Transport: &http.Transport{}}
+	resp, err := client.Post(base+Prefix+"rescue", "application/json", strings.NewReader(`{"query": "mustard rain jacket"}`))
+	if err == nil {
+		_, err = io.ReadAll(resp.Body)
+		resp.Body.Close()
+		t.Errorf("an answer came after the write timeout: %d (read: %v)", resp.StatusCode, err)
+	}
+	client.CloseIdleConnections()
 	if err := stop(); err != nil {
 		t.Errorf("Serve: %v", err)
 	}
