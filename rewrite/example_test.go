@@ -121,3 +121,45 @@ func ExampleOutcome_Corrected() {
 	// ceiling fan | ceiling fan | ceeiling fan
 	// 1 No exact match for “ceeiling fan”. Showing ceiling fans, reading “ceeiling” as “ceiling”.
 }
+
+// Read is the reading `whittle explain` shows: the query parsed and the
+// policy's strictness applied (the README's table of "85 lens": focal
+// length is hard in camera).
+func ExamplePolicy_Read() {
+	r := rewrite.DefaultPolicy().Read("85 lens", parser.Options{})
+	for _, c := range r.Constraints {
+		fmt.Println(c.Kind, c.Text, c.Strictness)
+	}
+	// Output:
+	// measure 85 hard
+	// product_type lens firm
+}
+
+// A tuning changes a policy's numbers at every level, here apparel's
+// colour tolerance of 4, and leaves its strictness alone.
+func ExamplePolicy_Tuned() {
+	tol := 1.5
+	p := rewrite.DefaultPolicy().Tuned(rewrite.Tuning{ColourTolerance: &tol})
+	e := p.For("apparel", "", lexicon.Default())
+	fmt.Println(e.ColourTolerance, e.Strictness[parser.KindSize])
+	// Output: 1.5 hard
+}
+
+// Check refuses a tuning a policy file could not hold.
+func ExampleTuning_Check() {
+	none := 0
+	fmt.Println(rewrite.Tuning{MinResults: &none}.Check())
+	// Output: min_results 0: want 1 to 10000
+}
+
+// Tuned gives one request its own numbers: with a minimum of 2, the one
+// red rain jacket is no longer enough as typed.
+func ExampleRewriter_Tuned() {
+	eng := shopEngine{{"rain jacket", "red"}}
+	rw := rewrite.New(eng, nil)
+	two := 2
+	typed, _ := rw.Rescue(context.Background(), "red rain jacket")
+	tuned, _ := rw.Tuned(rewrite.Tuning{MinResults: &two}).Rescue(context.Background(), "red rain jacket")
+	fmt.Println(typed.Exact, tuned.Exact)
+	// Output: true false
+}

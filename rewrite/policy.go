@@ -53,6 +53,79 @@ type Policy struct {
 	// Warnings are things a valid policy does that deserve a second look,
 	// such as relaxing a standard designation.
 	Warnings []string
+	// tuning is laid over every level (Tuned).
+	tuning Settings
+}
+
+// Tuning is a change of a policy's numbers for a single request: each
+// set field holds at every level, over the defaults, categories and
+// product types. It holds no strictness, so it cannot make a hard
+// constraint (a wire gauge, a tyre size, a thread) soft.
+type Tuning struct {
+	MinResults       *int     `json:"min_results,omitempty"`
+	ColourTolerance  *float64 `json:"colour_tolerance,omitempty"`
+	MeasureTolerance *float64 `json:"measure_tolerance,omitempty"`
+	PriceStretch     *float64 `json:"price_stretch,omitempty"`
+}
+
+// TuningError is a value of a Tuning out of its range; Field is its JSON
+// and policy-file name.
+type TuningError struct {
+	Field   string
+	Message string
+}
+
+// Error returns the message, which names the field and its range.
+func (e *TuningError) Error() string { return e.Message }
+
+// Check returns the first value of t out of the range a policy file
+// allows, as a *TuningError, or nil.
+func (t Tuning) Check() error {
+	if ps := t.problems(); len(ps) > 0 {
+		return &ps[0]
+	}
+	return nil
+}
+
+// problems are the values of t out of range, in field order.
+func (t Tuning) problems() []TuningError {
+	var out []TuningError
+	if v := t.MinResults; v != nil && (*v < 1 || *v > 10000) {
+		out = append(out, TuningError{"min_results", fmt.Sprintf("min_results %d: want 1 to 10000", *v)})
+	}
+	for _, f := range []struct {
+		name     string
+		v        *float64
+		min, max float64
+	}{
+		{"colour_tolerance", t.ColourTolerance, 0, 100},
+		{"measure_tolerance", t.MeasureTolerance, 0, 1},
+		{"price_stretch", t.PriceStretch, 0, 10},
+	} {
+		if f.v != nil && (math.IsNaN(*f.v) || *f.v < f.min || *f.v > f.max) {
+			out = append(out, TuningError{f.name, fmt.Sprintf("%s %g: want %g to %g", f.name, *f.v, f.min, f.max)})
+		}
+	}
+	return out
+}
+
+// Tuned returns p with t laid over every level; p is unchanged.
+func (p *Policy) Tuned(t Tuning) *Policy {
+	out := *p
+	out.tuning = merge(p.tuning, Settings{MinResults: t.MinResults, ColourTolerance: t.ColourTolerance, MeasureTolerance: t.MeasureTolerance, PriceStretch: t.PriceStretch})
+	return &out
+}
+
+// Read parses query with opts and applies p to it: the reading `whittle
+// explain` shows. The lexicon is opts.Lexicon, or the default.
+func (p *Policy) Read(query string, opts parser.Options) *parser.Result {
+	lex := opts.Lexicon
+	if lex == nil {
+		lex = lexicon.Default()
+	}
+	r := parser.ParseWith(query, opts)
+	p.Apply(r, lex)
+	return r
 }
 
 // settingsTOML is the TOML form of Settings.
@@ -184,21 +257,8 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 	out := Settings{MinResults: s.MinResults, ColourTolerance: s.ColourTolerance, MeasureTolerance: s.MeasureTolerance,
 		PriceStretch: s.PriceStretch, Dimensions: s.Dimensions, StandardSizes: s.StandardSizes}
 	sub := func(k ...string) []string { return append(slices.Clone(key), k...) }
-	if v := s.MinResults; v != nil && (*v < 1 || *v > 10000) {
-		at(sub("min_results"), "min_results %d: want 1 to 10000", *v)
-	}
-	for _, f := range []struct {
-		name     string
-		v        *float64
-		min, max float64
-	}{
-		{"colour_tolerance", s.ColourTolerance, 0, 100},
-		{"measure_tolerance", s.MeasureTolerance, 0, 1},
-		{"price_stretch", s.PriceStretch, 0, 10},
-	} {
-		if f.v != nil && (math.IsNaN(*f.v) || *f.v < f.min || *f.v > f.max) {
-			at(sub(f.name), "%s %g: want %g to %g", f.name, *f.v, f.min, f.max)
-		}
+	for _, p := range (Tuning{MinResults: s.MinResults, ColourTolerance: s.ColourTolerance, MeasureTolerance: s.MeasureTolerance, PriceStretch: s.PriceStretch}).problems() {
+		at(sub(p.Field), "%s", p.Message)
 	}
 	if len(s.Strictness) > 0 {
 		out.Strictness = make(map[parser.Kind]parser.Strictness, len(s.Strictness))
@@ -231,7 +291,7 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 // Overlay returns p with q's settings laid over it, level by level.
 func (p *Policy) Overlay(q *Policy) *Policy {
 	out := &Policy{Defaults: merge(p.Defaults, q.Defaults), Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings),
-		Warnings: append(slices.Clone(p.Warnings), q.Warnings...)}
+		Warnings: append(slices.Clone(p.Warnings), q.Warnings...), tuning: merge(p.tuning, q.tuning)}
 	for _, m := range []struct{ dst, a, b map[string]Settings }{{out.Categories, p.Categories, q.Categories}, {out.ProductTypes, p.ProductTypes, q.ProductTypes}} {
 		for k, v := range m.a {
 			m.dst[k] = v
@@ -308,6 +368,7 @@ func (p *Policy) For(category, productType string, lex *lexicon.Lexicon) Effecti
 			}
 		}
 	}
+	s = merge(s, p.tuning)
 	e := Effective{Category: category, ProductType: productType, MinResults: 1, Strictness: make(map[parser.Kind]parser.Strictness),
 		Dimensions: s.Dimensions, StandardSizes: s.StandardSizes}
 	for _, k := range parser.AllKinds {

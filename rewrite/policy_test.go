@@ -2,6 +2,7 @@ package rewrite
 
 import (
 	"errors"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -132,5 +133,61 @@ func TestApply(t *testing.T) {
 		if diff := cmp.Diff(tc.want, got); diff != "" {
 			t.Errorf("%q: %s (-want +got):\n%s", tc.query, tc.reason, diff)
 		}
+	}
+}
+
+func TestTuned(t *testing.T) {
+	lex := lexicon.Default()
+	p := DefaultPolicy()
+	three, five := 3.0, 5
+	tuned := p.Tuned(Tuning{ColourTolerance: &three, MinResults: &five})
+	for _, tc := range []struct {
+		name, category, productType string
+		colour                      float64
+		min                         int
+		reason                      string
+	}{
+		{"apparel", "apparel", "sweater", 3, 5, "the tuning lies over the category's 4 (policy.toml) and the default minimum of 1"},
+		{"paint", "paint", "", 3, 5, "the tuning lies over paint's 2 as well: every level"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			e := tuned.For(tc.category, tc.productType, lex)
+			if e.ColourTolerance != tc.colour || e.MinResults != tc.min {
+				t.Errorf("tolerance %g, min %d; want %g, %d (%s)", e.ColourTolerance, e.MinResults, tc.colour, tc.min, tc.reason)
+			}
+			if before := p.For(tc.category, tc.productType, lex); before.ColourTolerance == three || before.MinResults != 1 {
+				t.Errorf("the policy tuned changed: %+v", before)
+			}
+			if e.Strictness[parser.KindSpec] != parser.Hard {
+				t.Errorf("spec is %s under a tuning; want hard", e.Strictness[parser.KindSpec])
+			}
+		})
+	}
+}
+
+func TestTuningCheck(t *testing.T) {
+	zero, big, nan, fine := 0, 20000, math.NaN(), 1.5
+	for _, tc := range []struct {
+		name   string
+		tuning Tuning
+		field  string // "" when it is valid
+	}{
+		{"empty", Tuning{}, ""},
+		{"in range", Tuning{ColourTolerance: &fine}, ""},
+		{"no results wanted", Tuning{MinResults: &zero}, "min_results"},
+		{"too many results", Tuning{MinResults: &big}, "min_results"},
+		{"not a number", Tuning{ColourTolerance: &nan}, "colour_tolerance"},
+		{"measure over 100%", Tuning{MeasureTolerance: &fine}, "measure_tolerance"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			err := tc.tuning.Check()
+			var te *TuningError
+			switch {
+			case tc.field == "" && err != nil:
+				t.Errorf("Check: %v; want nil", err)
+			case tc.field != "" && (!errors.As(err, &te) || te.Field != tc.field):
+				t.Errorf("Check: %v; want a TuningError of %s", err, tc.field)
+			}
+		})
 	}
 }

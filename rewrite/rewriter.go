@@ -28,6 +28,13 @@ type Rewriter struct {
 	parse  parser.Options
 	budget int
 
+	// known is what has been read of the catalog, shared with the
+	// rewriters Tuned makes from this one.
+	*known
+}
+
+// known caches the catalog's colours and typo vocabulary.
+type known struct {
 	mu       sync.Mutex
 	palDone  bool
 	pal      *colour.Palette
@@ -48,7 +55,7 @@ func WithParseOptions(o parser.Options) Option { return func(rw *Rewriter) { rw.
 // New returns a Rewriter that asks engine and follows policy (nil means
 // the built-in policy).
 func New(engine Engine, policy *Policy, opts ...Option) *Rewriter {
-	rw := &Rewriter{engine: engine, policy: policy, budget: DefaultBudget}
+	rw := &Rewriter{engine: engine, policy: policy, budget: DefaultBudget, known: &known{}}
 	for _, o := range opts {
 		o(rw)
 	}
@@ -63,6 +70,16 @@ func New(engine Engine, policy *Policy, opts ...Option) *Rewriter {
 		rw.budget = 1
 	}
 	return rw
+}
+
+// Tuned returns a rewriter like rw whose policy has t laid over every
+// level, for a single request: it shares rw's engine, options and what
+// rw has read of the catalog, and leaves rw as it was. A tuning sets no
+// strictness, so it cannot loosen a hard constraint.
+func (rw *Rewriter) Tuned(t Tuning) *Rewriter {
+	c := *rw
+	c.policy = rw.policy.Tuned(t)
+	return &c
 }
 
 // palette is the catalog's colours, asked of the engine until it answers.

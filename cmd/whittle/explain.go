@@ -79,8 +79,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	defer out.Flush()
 	status := 0
 	emit := func(q string, first bool) {
-		r := parser.ParseWith(q, opts)
-		pol.Apply(r, lx)
+		r := pol.Read(q, opts)
 		if len(r.Errors) > 0 {
 			status = 1
 		}

@@ -46,38 +46,15 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		return 1
 	}
 	defer eng.Close()
-	ctx := context.Background()
-	o, err := rewrite.New(eng, pol, rewrite.WithBudget(*budget)).Rescue(ctx, rest[0])
+	rw := rewrite.New(eng, pol, rewrite.WithBudget(*budget))
+	res, err := eng.Rescue(context.Background(), rw, rw.Parse(rest[0]), *k, *baseline)
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle search: %v\n", err)
 		return 1
 	}
-	var hits []rewrite.ReportHit
-	if o.Count > 0 && *k > 0 {
-		shown, err := eng.Show(ctx, o.Plan, *k)
-		if err != nil {
-			fmt.Fprintf(stderr, "whittle search: %v\n", err)
-			return 1
-		}
-		hits = shown
-	}
-	rep := rewrite.NewReport(o, hits)
-	var base *bleveengine.Baseline
-	if *baseline {
-		if base, err = eng.Baseline(ctx, rest[0], *k); err != nil {
-			fmt.Fprintf(stderr, "whittle search: %v\n", err)
-			return 1
-		}
-	}
+	o, rep, hits, base := res.Outcome, res.Report, res.Hits, res.Baseline
 	if *asJSON {
-		var v any = rep
-		if base != nil {
-			v = struct {
-				rewrite.Report
-				Baseline *bleveengine.Baseline `json:"baseline"`
-			}{rep, base}
-		}
-		b, err := json.Marshal(v)
+		b, err := json.Marshal(res)
 		if err != nil {
 			fmt.Fprintf(stderr, "whittle search: %v\n", err)
 			return 1

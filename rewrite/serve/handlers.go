@@ -1,0 +1,210 @@
+package serve
+
+import (
+	"context"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"net/http"
+	"slices"
+	"strings"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+)
+
+// ParseRequest is the body of POST /whittle/v1/parse.
+type ParseRequest struct {
+	Query string `json:"query"`
+	// Category, when set, reads the query as being in that category, as
+	// `whittle explain --category` does.
+	Category string `json:"category,omitempty"`
+}
+
+// RescueRequest is the body of POST /whittle/v1/rescue.
+type RescueRequest struct {
+	Query string `json:"query"`
+	// Category is the category the shopper searched in, used when the
+	// query names no product type of its own.
+	Category string `json:"category,omitempty"`
+	// Hits is how many hits to show (10 when absent; 0 to 100 by
+	// default).
+	Hits *int `json:"hits,omitempty"`
+	// Baseline also runs the blind partial match, for comparison.
+	Baseline bool `json:"baseline,omitempty"`
+	// Tuning changes the policy's numbers for this request only; it can
+	// set no strictness.
+	Tuning rewrite.Tuning `json:"tuning"`
+}
+
+// decode reads the body into v: one JSON object of known fields.
+func decode(r *http.Request, v any) *Error {
+	dec := json.NewDecoder(r.Body)
+	dec.DisallowUnknownFields()
+	err := dec.Decode(v)
+	if err == nil && dec.More() {
+		err = errors.New("more than one JSON value")
+	}
+	var tooBig *http.MaxBytesError
+	switch {
+	case errors.As(err, &tooBig):
+		return errorf(CodeBodyTooLarge, fmt.Sprintf("the body is over %d bytes", tooBig.Limit))
+	case err != nil:
+		return errorf(CodeBadJSON, "the body is not a JSON object of this endpoint's fields: "+err.Error())
+	}
+	return nil
+}
+
+// checkQuery refuses a query that is blank or too long.
+func (s *Server) checkQuery(r *http.Request, q string) *Error {
+	if in := infoOf(r); in != nil {
+		in.query = q
+	}
+	if n := len(q); n > s.limits.MaxQueryBytes {
+		e := errorf(CodeQueryTooLong, fmt.Sprintf("the query is %d bytes; at most %d are read", n, s.limits.MaxQueryBytes))
+		e.Span = &Span{Start: s.limits.MaxQueryBytes, End: n}
+		return e
+	}
+	if strings.TrimSpace(q) == "" {
+		return errorf(CodeQueryEmpty, "the query is empty")
+	}
+	return nil
+}
+
+// checkCategory refuses a category the lexicon does not have.
+func checkCategory(c string) *Error {
+	if c == "" || slices.Contains(lexicon.Categories, c) {
+		return nil
+	}
+	return errorf(CodeUnknownCategory, fmt.Sprintf("unknown category %q; known: %s", c, strings.Join(lexicon.Categories, ", ")))
+}
+
+// handleParse answers the reading of a query, the contract of `whittle
+// explain --json`; badly formed parts are in its "errors", with spans.
+func (s *Server) handleParse(w http.ResponseWriter, r *http.Request) {
+	var req ParseRequest
+	if e := firstOf(func() *Error { return decode(r, &req) }, func() *Error { return s.checkQuery(r, req.Query) },
+		func() *Error { return checkCategory(req.Category) }); e != nil {
+		writeError(w, r, e)
+		return
+	}
+	opts := s.parse
+	opts.Category = req.Category
+	writeJSON(w, http.StatusOK, s.policy.Read(req.Query, opts))
+}
+
+// firstOf runs checks in order and returns the first failure.
+func firstOf(checks ...func() *Error) *Error {
+	for _, c := range checks {
+		if e := c(); e != nil {
+			return e
+		}
+	}
+	return nil
+}
+
+// handleRescue rescues a query against the server's index and answers
+// the contract of `whittle search --json`.
+func (s *Server) handleRescue(w http.ResponseWriter, r *http.Request) {
+	var req RescueRequest
+	if e := firstOf(func() *Error { return decode(r, &req) }, func() *Error { return s.checkQuery(r, req.Query) },
+		func() *Error { return checkCategory(req.Category) }, func() *Error { return s.checkHits(req.Hits) },
+		func() *Error { return checkTuning(req.Tuning) }); e != nil {
+		writeError(w, r, e)
+		return
+	}
+	rw := s.rw
+	if req.Tuning != (rewrite.Tuning{}) {
+		rw = rw.Tuned(req.Tuning)
+	}
+	parsed := rw.Parse(req.Query)
+	if e := unreadable(parsed); e != nil {
+		writeError(w, r, e)
+		return
+	}
+	if parsed.Category == "" {
+		parsed.Category = req.Category
+	}
+	k := 10
+	if req.Hits != nil {
+		k = *req.Hits
+	}
+	res, err := s.engine.Rescue(r.Context(), rw, parsed, k, req.Baseline)
+	if err != nil {
+		writeError(w, r, s.engineError(r, err))
+		return
+	}
+	s.metrics.rescued(res.Outcome)
+	writeJSON(w, http.StatusOK, res)
+}
+
+// checkHits refuses a number of hits out of range.
+func (s *Server) checkHits(h *int) *Error {
+	if h != nil && (*h < 0 || *h > s.limits.MaxHits) {
+		return errorf(CodeBadHits, fmt.Sprintf("hits %d: want 0 to %d", *h, s.limits.MaxHits))
+	}
+	return nil
+}
+
+// checkTuning refuses a tuning out of the ranges a policy file allows.
+func checkTuning(t rewrite.Tuning) *Error {
+	var te *rewrite.TuningError
+	if err := t.Check(); errors.As(err, &te) {
+		return errorf(CodeBadTuning, "tuning."+te.Message)
+	}
+	return nil
+}
+
+// unreadable is the error for a reading with badly formed parts, or nil.
+func unreadable(r *parser.Result) *Error {
+	if len(r.Errors) == 0 {
+		return nil
+	}
+	first := r.Errors[0]
+	e := &Error{Code: CodeQueryUnreadable, Message: first.Msg, Span: &Span{Start: first.Start, End: first.End}}
+	for _, pe := range r.Errors {
+		e.Problems = append(e.Problems, Problem{Span: Span{Start: pe.Start, End: pe.End}, Message: pe.Msg})
+	}
+	return e
+}
+
+// engineError is the answer to a failed rescue: the deadline, or an
+// internal failure, logged.
+func (s *Server) engineError(r *http.Request, err error) *Error {
+	if errors.Is(err, context.DeadlineExceeded) || errors.Is(r.Context().Err(), context.DeadlineExceeded) {
+		return errorf(CodeDeadlinePassed, fmt.Sprintf("the deadline of %s passed before the index answered", s.limits.Deadline))
+	}
+	s.log.Error("rescue failed", "endpoint", "rescue", "err", err.Error())
+	return errorf(CodeServerFault, "the search failed; the server's log says why")
+}
+
+// handlePolicy answers the effective policy for ?category= and
+// ?product_type= (either may be absent).
+func (s *Server) handlePolicy(w http.ResponseWriter, r *http.Request) {
+	c, t := r.URL.Query().Get("category"), r.URL.Query().Get("product_type")
+	if e := checkCategory(c); e != nil {
+		writeError(w, r, e)
+		return
+	}
+	if _, ok := s.lex.Lookup(lexicon.ProductType, t); t != "" && !ok {
+		writeError(w, r, errorf(CodeUnknownProductType, fmt.Sprintf("unknown product type %q", t)))
+		return
+	}
+	writeJSON(w, http.StatusOK, s.policy.For(c, t, s.lex))
+}
+
+// handleHealth says the process is up.
+func (s *Server) handleHealth(w http.ResponseWriter, r *http.Request) {
+	writeJSON(w, http.StatusOK, map[string]string{"status": "up"})
+}
+
+// handleReady says whether the server takes requests: not once it is
+// shutting down.
+func (s *Server) handleReady(w http.ResponseWriter, r *http.Request) {
+	if s.draining.Load() {
+		writeError(w, r, errorf(CodeDraining, "the server is shutting down"))
+		return
+	}
+	writeJSON(w, http.StatusOK, map[string]string{"status": "ready"})
+}
