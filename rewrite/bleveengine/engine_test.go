@@ -22,7 +22,7 @@ import (
 // expected value below is worked out by hand from it.
 func openShop(t *testing.T) *Engine {
 	t.Helper()
-	e, err := Open(shopDir(t))
+	e, err := Open(shopDir(t, 4))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -30,9 +30,9 @@ func openShop(t *testing.T) *Engine {
 	return e
 }
 
-// shopDir builds the test shop's index in batches of 4, so that it has
-// several segments, and returns its directory.
-func shopDir(t *testing.T) string {
+// shopDir builds the test shop's index in batches of the given size (4
+// gives it several segments; 0, one) and returns its directory.
+func shopDir(t *testing.T, batch int) string {
 	t.Helper()
 	f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
 	if err != nil {
@@ -40,7 +40,7 @@ func shopDir(t *testing.T) string {
 	}
 	defer f.Close()
 	dir := filepath.Join(t.TempDir(), "idx")
-	st, err := Build(context.Background(), f, dir, BuildOptions{BatchSize: 4})
+	st, err := Build(context.Background(), f, dir, BuildOptions{BatchSize: batch})
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -51,7 +51,7 @@ func TestDamagedIndex(t *testing.T) {
 		{"damaged metadata", func(t *testing.T, dir string) { overwrite(t, filepath.Join(dir, "index"), "index_meta.json", garbage) }, ""},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			dir := shopDir(t)
+			dir := shopDir(t, 0) // one segment, so that damage to it is damage to the index
 			tc.damage(t, dir)
 			err := openAndAsk(dir)
 			if err == nil {
@@ -105,7 +105,7 @@ func openAndAsk(dir string) (err error) {
 // Opening, using and closing an index leaves no goroutine and no file
 // descriptor behind.
 func TestCloseLeaksNothing(t *testing.T) {
-	dir := shopDir(t)
+	dir := shopDir(t, 4)
 	if err := openAndAsk(dir); err != nil { // warm up: lexicon, caches
 		t.Fatal(err)
 	}
@@ -169,7 +169,7 @@ func TestMixedCallsFrom64Goroutines(t *testing.T) {
 		}
 		return result{strings.Join(kinds, " "), o.Message, o.Count, strings.Join(ids, ",")}, err
 	}
-	seqDir, parDir := shopDir(t), shopDir(t)
+	seqDir, parDir := shopDir(t, 4), shopDir(t, 4)
 	seq, err := Open(seqDir)
 	if err != nil {
 		t.Fatal(err)
