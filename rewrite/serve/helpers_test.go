@@ -29,7 +29,7 @@ var shop struct {
 }
 
 // openShop opens a fresh engine on the shop's index.
-func openShop(t *testing.T) *bleveengine.Engine {
+func openShop(t testing.TB) *bleveengine.Engine {
 	t.Helper()
 	shop.once.Do(func() {
 		f, err := os.Open(filepath.Join("..", "..", "testdata", "catalog", "shop.jsonl"))
@@ -96,7 +96,7 @@ func (g *gated) Count(ctx context.Context, p rewrite.Plan) (int, error) {
 }
 
 // newServer is a server on engine e with limits l, logging to log.
-func newServer(t *testing.T, e Engine, l Limits, log io.Writer, logQueries bool) *Server {
+func newServer(t testing.TB, e Engine, l Limits, log io.Writer, logQueries bool) *Server {
 	t.Helper()
 	if log == nil {
 		log = io.Discard
