@@ -131,6 +131,7 @@ func (s *Server) routes() http.Handler {
 		{"policy", http.MethodGet, s.handlePolicy, true},
 		{"health", http.MethodGet, s.handleHealth, false},
 		{"ready", http.MethodGet, s.handleReady, false},
+		{"workbench", http.MethodGet, s.handleWorkbench, true},
 		{"metrics", http.MethodGet, s.metrics.serve, false},
 	} {
 		h := only(e.method, e.h)
