@@ -2,7 +2,6 @@ package serve
 
 import (
 	"context"
-	"net"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -34,17 +33,8 @@ func TestWorkbenchInABrowser(t *testing.T) {
 		t.Skip("no Chromium here (install Debian's chromium package; .ci/run does): the browser test is skipped")
 	}
 	s := newServer(t, openShop(t), Limits{}, nil, false)
-	l, err := net.Listen("tcp", "127.0.0.1:0")
-	if err != nil {
-		t.Fatal(err)
-	}
-	ctx, stop := context.WithCancel(context.Background())
-	served := make(chan error, 1)
-	go func() { served <- s.Serve(ctx, l) }()
-	defer func() {
-		stop()
-		<-served
-	}()
+	base, stop := running(t, s)
+	defer stop()
 
 	opts := append(chromedp.DefaultExecAllocatorOptions[:], chromedp.ExecPath(bin), chromedp.NoSandbox, chromedp.Headless)
 	actx, cancelA := chromedp.NewExecAllocator(context.Background(), opts...)
@@ -54,8 +44,8 @@ func TestWorkbenchInABrowser(t *testing.T) {
 	bctx, cancelT := context.WithTimeout(bctx, 60*time.Second)
 	defer cancelT()
 
-	err = chromedp.Do(bctx,
-		chromedp.Navigate("http://"+l.Addr().String()+Prefix+"workbench"),
+	err := chromedp.Do(bctx,
+		chromedp.Navigate(base+Prefix+"workbench"),
 		chromedp.WaitVisible(`#q`),
 		chromedp.SendKeys(`#q`, "mustard rain jacket\n"),
 		chromedp.WaitVisible(`#hits`),

@@ -3,7 +3,6 @@ package serve
 import (
 	"context"
 	"fmt"
-	"net"
 	"net/http"
 	"os"
 	"path/filepath"
@@ -167,16 +166,9 @@ func TestLoad(t *testing.T) {
 				eng, busy = h, func() { once.Do(func() { close(h.gate) }) }
 			}
 			s := newServer(t, eng, Limits{MaxInFlight: tc.cap}, nil, false)
-			l, err := net.Listen("tcp", "127.0.0.1:0")
-			if err != nil {
-				t.Fatal(err)
-			}
-			ctx, stop := context.WithCancel(context.Background())
-			served := make(chan error, 1)
-			go func() { served <- s.Serve(ctx, l) }()
-			r := runLoad(t, "http://"+l.Addr().String()+Prefix+"rescue", bodies, 32, requests, busy)
-			stop()
-			if err := <-served; err != nil {
+			base, stop := running(t, s)
+			r := runLoad(t, base+Prefix+"rescue", bodies, 32, requests, busy)
+			if err := stop(); err != nil {
 				t.Errorf("Serve: %v", err)
 			}
 			ok, turned := r.statuses[http.StatusOK], r.statuses[http.StatusServiceUnavailable]
