@@ -47,9 +47,13 @@ func decode(r *http.Request, v any) *Error {
 		err = errors.New("more than one JSON value")
 	}
 	var tooBig *http.MaxBytesError
+	var wrongType *json.UnmarshalTypeError
 	switch {
 	case errors.As(err, &tooBig):
 		return errorf(CodeBodyTooLarge, fmt.Sprintf("the body is over %d bytes", tooBig.Limit))
+	case errors.As(err, &wrongType) && wrongType.Field != "":
+		// Said in the body's own terms, not the decoder's Go types.
+		return errorf(CodeBadJSON, fmt.Sprintf("the body's %q is a JSON %s, which that field cannot hold", wrongType.Field, wrongType.Value))
 	case err != nil:
 		return errorf(CodeBadJSON, "the body is not a JSON object of this endpoint's fields: "+err.Error())
 	}

@@ -335,3 +335,14 @@ func TestLogPrivacy(t *testing.T) {
 		})
 	}
 }
+
+// A field of the wrong type is named in the body's terms, not in the
+// server's Go types.
+func TestWrongTypeNamesTheField(t *testing.T) {
+	s := newServer(t, openShop(t), Limits{}, nil, false)
+	w := do(s.Handler(), http.MethodPost, Prefix+"rescue", `{"query": 5}`)
+	e := errorOf(t, w)
+	if w.Code != http.StatusBadRequest || e.Code != CodeBadJSON || !strings.Contains(e.Message, `"query" is a JSON number`) || strings.Contains(e.Message, "Go") {
+		t.Errorf("status %d, %+v", w.Code, e)
+	}
+}
