@@ -71,14 +71,7 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 		if !tty {
 			return
 		}
-		el := time.Since(start).Seconds()
-		rate := float64(n) / max(el, 1e-9)
-		eta := ""
-		if done := cr.n.Load(); size > 0 && done > 0 {
-			left := el * float64(size-done) / float64(done)
-			eta = fmt.Sprintf(", about %.0fs left", left)
-		}
-		fmt.Fprintf(stderr, "\r%s  %d products, %.0f/s%s   ", bar(cr.n.Load(), size), n, rate, eta)
+		showProgress(stderr, cr, size, start, n, "products")
 	}
 	st, err := bleveengine.Build(ctx, cr, *dir, bleveengine.BuildOptions{SkipBad: *skipBad, Progress: progress})
 	if tty {
@@ -94,6 +87,18 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "indexed %d products (%d colour names, %d lines skipped) into %s in %.1fs\n",
 		st.Products, st.Colours, len(st.Skipped), *dir, time.Since(start).Seconds())
 	return 0
+}
+
+// showProgress redraws the progress line of a long command on a
+// terminal: a bar of the bytes read of size, n things done so far, their
+// rate, and the time left at the rate the bytes are read.
+func showProgress(w io.Writer, cr *countingReader, size int64, start time.Time, n int, things string) {
+	el := time.Since(start).Seconds()
+	eta := ""
+	if done := cr.n.Load(); size > 0 && done > 0 {
+		eta = fmt.Sprintf(", about %.0fs left", el*float64(size-done)/float64(done))
+	}
+	fmt.Fprintf(w, "\r%s  %d %s, %.0f/s%s   ", bar(cr.n.Load(), size), n, things, float64(n)/max(el, 1e-9), eta)
 }
 
 // isTerminal reports whether w is a terminal, where progress is shown.

@@ -86,12 +86,7 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			if n%100 != 0 {
 				return
 			}
-			el := time.Since(start).Seconds()
-			eta := ""
-			if done := cr.n.Load(); size > 0 && done > 0 {
-				eta = fmt.Sprintf(", about %.0fs left", el*float64(size-done)/float64(done))
-			}
-			fmt.Fprintf(stderr, "\r%s  %d queries, %.0f/s%s   ", bar(cr.n.Load(), size), n, float64(n)/max(el, 1e-9), eta)
+			showProgress(stderr, cr, size, start, n, "queries")
 		}
 	}
 	sum, err := replay.Run(ctx, rewrite.New(eng, pol, rewrite.WithBudget(*budget)), replay.Read(cr), opts, emit)
