@@ -163,3 +163,9 @@ func ExampleRewriter_Tuned() {
 	fmt.Println(typed.Exact, tuned.Exact)
 	// Output: true false
 }
+
+func ExampleRewriter_ParseIn() {
+	rw := rewrite.New(shopEngine{{"rain jacket", "red"}}, nil)
+	fmt.Println(rw.ParseIn("red", "apparel").Category, rw.ParseIn("red rain jacket", "home").Category)
+	// Output: apparel apparel
+}

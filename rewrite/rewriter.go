@@ -259,10 +259,21 @@ func (rw *Rewriter) Rescue(ctx context.Context, query string) (*Outcome, error) 
 }
 
 // Parse reads query with the rewriter's parse options, as Rescue does;
-// a caller may adjust the result (say, give it the category the
-// shopper searched in) before RescueParsed.
+// a caller may adjust the result before RescueParsed (ParseIn gives it
+// the category the shopper searched in).
 func (rw *Rewriter) Parse(query string) *parser.Result {
 	return parser.ParseWith(query, rw.parse)
+}
+
+// ParseIn is Parse for a query searched in a category (a log's, a page's):
+// the category stands for the query's own when the query names no
+// product type that gives one.
+func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
+	r := rw.Parse(query)
+	if r.Category == "" {
+		r.Category = category
+	}
+	return r
 }
 
 // RescueParsed rescues a parsed query. Hard constraints and exclusions

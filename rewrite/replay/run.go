@@ -179,10 +179,7 @@ func Run(ctx context.Context, rw *rewrite.Rewriter, entries iter.Seq2[Entry, err
 // when the query names no product type that gives one.
 func rescue(ctx context.Context, rw *rewrite.Rewriter, e Entry) (*Result, error) {
 	start := time.Now()
-	r := rw.Parse(e.Query)
-	if r.Category == "" && e.Category != "" {
-		r.Category = e.Category
-	}
+	r := rw.ParseIn(e.Query, e.Category)
 	o, err := rw.RescueParsed(ctx, r)
 	if err != nil {
 		return nil, err

@@ -122,13 +122,10 @@ func (s *Server) handleRescue(w http.ResponseWriter, r *http.Request) {
 	if req.Tuning != (rewrite.Tuning{}) {
 		rw = rw.Tuned(req.Tuning)
 	}
-	parsed := rw.Parse(req.Query)
+	parsed := rw.ParseIn(req.Query, req.Category)
 	if e := unreadable(parsed); e != nil {
 		writeError(w, r, e)
 		return
-	}
-	if parsed.Category == "" {
-		parsed.Category = req.Category
 	}
 	k := 10
 	if req.Hits != nil {

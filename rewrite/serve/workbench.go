@@ -81,10 +81,7 @@ func (s *Server) workbenchAnswer(r *http.Request, p *workbenchPage) {
 		}
 		rw = rw.Tuned(t)
 	}
-	parsed := rw.Parse(p.Query)
-	if parsed.Category == "" {
-		parsed.Category = p.Category
-	}
+	parsed := rw.ParseIn(p.Query, p.Category)
 	p.Read, p.Segments = parsed, segments(parsed)
 	if e := unreadable(parsed); e != nil {
 		p.Problem = e.Message
