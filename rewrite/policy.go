@@ -55,6 +55,8 @@ type Policy struct {
 	Warnings []string
 	// tuning is laid over every level (Tuned).
 	tuning Settings
+	// signals is the [signals] table, for whittle tune.
+	signals SignalSettings
 }
 
 // Tuning is a change of a policy's numbers for a single request: each
@@ -143,6 +145,7 @@ type policyTOML struct {
 	Defaults     settingsTOML            `toml:"defaults"`
 	Categories   map[string]settingsTOML `toml:"category"`
 	ProductTypes map[string]settingsTOML `toml:"product_type"`
+	Signals      signalsTOML             `toml:"signals"`
 }
 
 // PolicyError is a problem in a policy file, with its line and column.
@@ -189,7 +192,9 @@ func LoadPolicy(path string, lex *lexicon.Lexicon) (*Policy, error) {
 	if err != nil {
 		return nil, err
 	}
-	return DefaultPolicy().Overlay(user), nil
+	out := DefaultPolicy().Overlay(user)
+	out.checkWeightOrder()
+	return out, nil
 }
 
 // ParsePolicy reads a policy in whittle's TOML layout (see policy.toml).
@@ -222,6 +227,7 @@ func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	}
 	pol := &Policy{Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings)}
 	pol.Defaults = pol.settings([]string{"defaults"}, raw.Defaults, at, lex)
+	pol.signals = pol.signalSettings(raw.Signals, at)
 	for _, c := range sortedKeys(raw.Categories) {
 		key := []string{"category", c}
 		if !slices.Contains(lexicon.Categories, c) {
@@ -291,7 +297,7 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 // Overlay returns p with q's settings laid over it, level by level.
 func (p *Policy) Overlay(q *Policy) *Policy {
 	out := &Policy{Defaults: merge(p.Defaults, q.Defaults), Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings),
-		Warnings: append(slices.Clone(p.Warnings), q.Warnings...), tuning: merge(p.tuning, q.tuning)}
+		Warnings: append(slices.Clone(p.Warnings), q.Warnings...), tuning: merge(p.tuning, q.tuning), signals: mergeSignals(p.signals, q.signals)}
 	for _, m := range []struct{ dst, a, b map[string]Settings }{{out.Categories, p.Categories, q.Categories}, {out.ProductTypes, p.ProductTypes, q.ProductTypes}} {
 		for k, v := range m.a {
 			m.dst[k] = v

@@ -69,7 +69,9 @@ var settingKeys = []string{"min_results", "colour_tolerance", "measure_tolerance
 func knownKeys(k []string) []string {
 	switch {
 	case len(k) == 1:
-		return []string{"defaults", "category", "product_type"}
+		return []string{"defaults", "category", "product_type", "signals"}
+	case k[0] == "signals" && len(k) == 2:
+		return signalKeys
 	case k[0] == "defaults" && len(k) == 2, (k[0] == "category" || k[0] == "product_type") && len(k) == 3:
 		return settingKeys
 	}

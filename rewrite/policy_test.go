@@ -7,6 +7,7 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+	"time"
 
 	"github.com/google/go-cmp/cmp"
 
@@ -62,6 +63,13 @@ func TestParsePolicyErrors(t *testing.T) {
 		{"min results out of range", "[defaults]\nmin_results = 0\n", 2, 1, "want 1 to 10000"},
 		{"tolerance out of range", "[category.apparel]\nmeasure_tolerance = 1.5\n", 2, 1, "want 0 to 1"},
 		{"bad standard size", "[category.lumber.standard_sizes]\nlength = [\"8 ft\", \"ten\"]\n", 2, 1, `"ten"`},
+		{"unknown signals key", "[signals]\nkeep_shares = 0.8\n", 2, 1, `did you mean "keep_share"`},
+		{"unknown interaction", "[signals.weights]\npurchases = 10\n", 2, 1, `did you mean "purchase"`},
+		{"negative weight", "[signals.weights]\nclick = -1\n", 2, 1, "want 0 to 1000"},
+		{"bad window", "[signals]\njoin_window = \"half an hour\"\n", 2, 1, `want a duration`},
+		{"window too short", "[signals]\njoin_window = \"10ms\"\n", 2, 1, "want 1s to 168h"},
+		{"share out of range", "[signals]\nkeep_share = 1.5\n", 2, 1, "up to 1"},
+		{"bias out of range", "[signals]\nposition_bias = 9\n", 2, 1, "want 0 to 5"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			_, err := ParsePolicy("test.toml", tc.text, lexicon.Default())
@@ -76,6 +84,33 @@ func TestParsePolicyErrors(t *testing.T) {
 				t.Errorf("render lacks the caret or the message: %q", r)
 			}
 		})
+	}
+}
+
+// The [signals] table: the built-in values, a file overriding some of
+// them, and a warning when a purchase is worth less than a click.
+func TestSignalSettings(t *testing.T) {
+	def := DefaultPolicy().Signals()
+	// The built-in weights rise from impression to purchase (common
+	// practice: the costlier the signal to the shopper, the more it says).
+	want := Signals{Weights: map[string]float64{"impression": 0.05, "click": 1, "add_to_cart": 3, "purchase": 10},
+		PositionBias: 1, EstimateBias: true, JoinWindow: 30 * time.Minute, MinSearches: 100, KeepShare: 0.8}
+	if diff := cmp.Diff(want, def); diff != "" {
+		t.Errorf("built-in signals (-want +got):\n%s", diff)
+	}
+	path := filepath.Join(t.TempDir(), "shop.toml")
+	os.WriteFile(path, []byte("[signals]\njoin_window = \"2h\"\n\n[signals.weights]\nclick = 20\n"), 0o644)
+	p, err := LoadPolicy(path, lexicon.Default())
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := p.Signals()
+	want.JoinWindow, want.Weights["click"] = 2*time.Hour, 20
+	if diff := cmp.Diff(want, got); diff != "" {
+		t.Errorf("overlaid signals (-want +got):\n%s", diff)
+	}
+	if len(p.Warnings) != 1 || !strings.Contains(p.Warnings[0], "add_to_cart (3) is worth less than click (20)") {
+		t.Errorf("warnings %q, want one about add_to_cart below click", p.Warnings)
 	}
 }
 

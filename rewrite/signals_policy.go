@@ -1,0 +1,158 @@
+package rewrite
+
+import (
+	"fmt"
+	"math"
+	"slices"
+	"time"
+)
+
+// SignalSettings are the policy's [signals] table: how `whittle tune`
+// weighs shoppers' signals. A nil pointer means "as the level below"
+// (the built-in policy sets every one).
+type SignalSettings struct {
+	// Weights is what each interaction type is worth, by its name in the
+	// signals log (impression, click, add_to_cart, purchase).
+	Weights map[string]float64
+	// PositionBias is η in the examination propensity (1/rank)^η.
+	PositionBias *float64
+	// EstimateBias says to estimate η from searches whose results were
+	// shuffled, when the log has enough of them.
+	EstimateBias *bool
+	// JoinWindow is how long after a search an interaction still counts
+	// for it, and how long a session may be idle before it closes.
+	JoinWindow *time.Duration
+	// MinSearches is the fewest searches behind a figure before tune
+	// recommends a change from it.
+	MinSearches *int
+	// KeepShare is the share of exact-match engagement at which a
+	// relaxation counts as accepted by shoppers.
+	KeepShare *float64
+}
+
+// Signals are the [signals] settings settled: every value set.
+type Signals struct {
+	Weights      map[string]float64 `json:"weights"`
+	PositionBias float64            `json:"position_bias"`
+	EstimateBias bool               `json:"estimate_position_bias"`
+	JoinWindow   time.Duration      `json:"join_window"`
+	MinSearches  int                `json:"min_searches"`
+	KeepShare    float64            `json:"keep_share"`
+}
+
+// SignalWeightNames are the interaction types a weight may be set for,
+// cheapest first.
+var SignalWeightNames = []string{"impression", "click", "add_to_cart", "purchase"}
+
+// Signals returns the [signals] settings in force.
+func (p *Policy) Signals() Signals {
+	s := p.signals
+	out := Signals{Weights: map[string]float64{}}
+	for k, v := range s.Weights {
+		out.Weights[k] = v
+	}
+	if s.PositionBias != nil {
+		out.PositionBias = *s.PositionBias
+	}
+	if s.EstimateBias != nil {
+		out.EstimateBias = *s.EstimateBias
+	}
+	if s.JoinWindow != nil {
+		out.JoinWindow = *s.JoinWindow
+	}
+	if s.MinSearches != nil {
+		out.MinSearches = *s.MinSearches
+	}
+	if s.KeepShare != nil {
+		out.KeepShare = *s.KeepShare
+	}
+	return out
+}
+
+// signalsTOML is the TOML form of SignalSettings.
+type signalsTOML struct {
+	Weights      map[string]float64 `toml:"weights"`
+	PositionBias *float64           `toml:"position_bias"`
+	EstimateBias *bool              `toml:"estimate_position_bias"`
+	JoinWindow   *string            `toml:"join_window"`
+	MinSearches  *int               `toml:"min_searches"`
+	KeepShare    *float64           `toml:"keep_share"`
+}
+
+var signalKeys = []string{"weights", "position_bias", "estimate_position_bias", "join_window", "min_searches", "keep_share"}
+
+// signalSettings checks the [signals] table and converts it; at reports
+// a problem at a key.
+func (pol *Policy) signalSettings(s signalsTOML, at func([]string, string, ...any)) SignalSettings {
+	key := func(k ...string) []string { return append([]string{"signals"}, k...) }
+	out := SignalSettings{PositionBias: s.PositionBias, EstimateBias: s.EstimateBias, MinSearches: s.MinSearches, KeepShare: s.KeepShare}
+	if len(s.Weights) > 0 {
+		out.Weights = make(map[string]float64, len(s.Weights))
+	}
+	for _, k := range sortedKeys(s.Weights) {
+		v := s.Weights[k]
+		switch {
+		case !slices.Contains(SignalWeightNames, k):
+			at(key("weights", k), "unknown interaction %q%s", k, didYouMean(k, SignalWeightNames))
+		case math.IsNaN(v) || v < 0 || v > 1000:
+			at(key("weights", k), "weight of %s %g: want 0 to 1000", k, v)
+		default:
+			out.Weights[k] = v
+		}
+	}
+	if v := s.PositionBias; v != nil && (math.IsNaN(*v) || *v < 0 || *v > 5) {
+		at(key("position_bias"), "position_bias %g: want 0 to 5", *v)
+	}
+	if v := s.MinSearches; v != nil && (*v < 1 || *v > 1e9) {
+		at(key("min_searches"), "min_searches %d: want 1 or more", *v)
+	}
+	if v := s.KeepShare; v != nil && (math.IsNaN(*v) || *v <= 0 || *v > 1) {
+		at(key("keep_share"), "keep_share %g: want more than 0, up to 1", *v)
+	}
+	if s.JoinWindow != nil {
+		d, err := time.ParseDuration(*s.JoinWindow)
+		switch {
+		case err != nil:
+			at(key("join_window"), "join_window %q: want a duration such as \"30m\" or \"2h\"", *s.JoinWindow)
+		case d < time.Second || d > 7*24*time.Hour:
+			at(key("join_window"), "join_window %s: want 1s to 168h", d)
+		default:
+			out.JoinWindow = &d
+		}
+	}
+	return out
+}
+
+// checkWeightOrder warns when the settled weights do not rise from
+// impression to purchase: a purchase should count for more than a click.
+func (p *Policy) checkWeightOrder() {
+	w := p.Signals().Weights
+	for i := 1; i < len(SignalWeightNames); i++ {
+		a, b := SignalWeightNames[i-1], SignalWeightNames[i]
+		if w[b] < w[a] {
+			p.Warnings = append(p.Warnings, fmt.Sprintf("signals.weights: %s (%g) is worth less than %s (%g); tune then prizes the cheaper signal", b, w[b], a, w[a]))
+		}
+	}
+}
+
+// mergeSignals lays b over a.
+func mergeSignals(a, b SignalSettings) SignalSettings {
+	out := a
+	out.Weights = mergeMap(a.Weights, b.Weights)
+	if b.PositionBias != nil {
+		out.PositionBias = b.PositionBias
+	}
+	if b.EstimateBias != nil {
+		out.EstimateBias = b.EstimateBias
+	}
+	if b.JoinWindow != nil {
+		out.JoinWindow = b.JoinWindow
+	}
+	if b.MinSearches != nil {
+		out.MinSearches = b.MinSearches
+	}
+	if b.KeepShare != nil {
+		out.KeepShare = b.KeepShare
+	}
+	return out
+}
