@@ -101,6 +101,11 @@ type Facts struct {
 	Measures    map[string]float64 `json:"measures,omitempty"`
 	Compat      []string           `json:"compatible_with,omitempty"`
 	InStock     bool               `json:"in_stock"`
+	// Category, Colour and Brand are the catalog's names for the
+	// product's category, colour and brand, or "".
+	Category string `json:"category,omitempty"`
+	Colour   string `json:"colour,omitempty"`
+	Brand    string `json:"brand,omitempty"`
 }
 
 // Describer is what an engine may also do: describe one product, so that

@@ -430,3 +430,21 @@ func TestBaselineTiesByID(t *testing.T) {
 		t.Errorf("hits %v, want a b c d: equal scores, so id order", got)
 	}
 }
+
+// Describe returns the facts stored for a product, read from the line of
+// testdata/catalog/shop.jsonl for RJ-1 by hand, and an error naming an
+// id the index lacks.
+func TestDescribe(t *testing.T) {
+	e := openShop(t)
+	f, err := e.Describe(context.Background(), "RJ-1")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if f.ProductType != "rain jacket" || f.Category != "apparel" || f.Colour != "harvest gold" || f.Brand != "korvane" ||
+		!f.InStock || f.Lab == nil || f.Measures["length"] != 740 {
+		t.Errorf("RJ-1 facts = %+v", f)
+	}
+	if _, err := e.Describe(context.Background(), "NO-SUCH"); err == nil || !strings.Contains(err.Error(), `"NO-SUCH"`) {
+		t.Errorf("unknown id: err = %v", err)
+	}
+}

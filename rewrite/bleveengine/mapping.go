@@ -255,7 +255,8 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 		words = append(words, m)
 	}
 	d[fWords] = strings.Join(words, " ")
-	facts := rewrite.Facts{ProductType: norm(p.ProductType), Compat: compat, InStock: in, Measures: map[string]float64{}}
+	facts := rewrite.Facts{ProductType: norm(p.ProductType), Compat: compat, InStock: in, Measures: map[string]float64{},
+		Category: norm(p.Category), Colour: norm(p.Colour), Brand: norm(p.Brand)}
 	for dim, v := range ms {
 		switch x := v.(type) {
 		case float64:
