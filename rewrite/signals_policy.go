@@ -1,6 +1,7 @@
 package rewrite
 
 import (
+	"encoding/json"
 	"fmt"
 	"math"
 	"slices"
@@ -38,6 +39,15 @@ type Signals struct {
 	JoinWindow   time.Duration      `json:"join_window"`
 	MinSearches  int                `json:"min_searches"`
 	KeepShare    float64            `json:"keep_share"`
+}
+
+// MarshalJSON writes the join window as a duration ("30m0s").
+func (s Signals) MarshalJSON() ([]byte, error) {
+	type plain Signals
+	return json.Marshal(struct {
+		plain
+		JoinWindow string `json:"join_window"`
+	}{plain(s), s.JoinWindow.String()})
 }
 
 // SignalWeightNames are the interaction types a weight may be set for,
