@@ -115,8 +115,8 @@ func mean(shown float64, worth *[maxRank]float64, inv *[maxRank]float64) float64
 type Figure struct {
 	// Searches is how many searches the figure rests on; Shown, how many
 	// products they showed.
-	Searches int     `json:"searches"`
-	Shown    int     `json:"shown"`
+	Searches int `json:"searches"`
+	Shown    int `json:"shown"`
 	// Engagement is the weighted worth per product shown.
 	Engagement float64 `json:"engagement"`
 	// Ratio is Engagement over that of exact matches in the category;
