@@ -4,6 +4,7 @@ import (
 	"context"
 	"errors"
 	"fmt"
+	"os"
 	"slices"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -168,4 +169,24 @@ func ExampleRewriter_ParseIn() {
 	rw := rewrite.New(shopEngine{{"rain jacket", "red"}}, nil)
 	fmt.Println(rw.ParseIn("red", "apparel").Category, rw.ParseIn("red rain jacket", "home").Category)
 	// Output: apparel apparel
+}
+
+func ExamplePolicy_WriteTOML() {
+	p, err := rewrite.ParsePolicy("shop.toml", "[category.apparel]\ncolour_tolerance = 8\n\n[category.apparel.strictness]\nsize = \"hard\"\n", lexicon.Default())
+	if err != nil {
+		panic(err)
+	}
+	p.WriteTOML(os.Stdout)
+	// Output:
+	// [category.apparel]
+	// colour_tolerance = 8.0
+	//
+	// [category.apparel.strictness]
+	// size = "hard"
+}
+
+func ExamplePolicy_Signals() {
+	s := rewrite.DefaultPolicy().Signals()
+	fmt.Println(s.Weights["purchase"], s.JoinWindow, s.KeepShare)
+	// Output: 10 30m0s 0.8
 }
