@@ -4,44 +4,9 @@ import (
 	"fmt"
 	"html/template"
 	"io"
-	"strings"
+
+	"github.com/whittle-search/whittle/rewrite/internal/svgchart"
 )
-
-// bar is one bar of a chart: a label, a value and how it is written.
-type bar struct {
-	label string
-	value float64
-	text  string
-}
-
-// hbars draws a horizontal bar chart as inline SVG, bars scaled to the
-// largest value.
-func hbars(title string, bars []bar) template.HTML {
-	const (
-		width, labelW, row, top = 640, 220, 24, 28
-	)
-	h := top + row*len(bars) + 8
-	var b strings.Builder
-	fmt.Fprintf(&b, `<svg xmlns="http://www.w3.org/2000/svg" role="img" aria-label="%s" width="%d" height="%d" viewBox="0 0 %d %d">`,
-		template.HTMLEscapeString(title), width, h, width, h)
-	fmt.Fprintf(&b, `<text x="0" y="18" class="t">%s</text>`, template.HTMLEscapeString(title))
-	most := 0.0
-	for _, x := range bars {
-		most = max(most, x.value)
-	}
-	for i, x := range bars {
-		yy := top + row*i
-		w := 0.0
-		if most > 0 {
-			w = (width - labelW - 90) * x.value / most
-		}
-		fmt.Fprintf(&b, `<text x="0" y="%d" class="l">%s</text>`, yy+16, template.HTMLEscapeString(x.label))
-		fmt.Fprintf(&b, `<rect x="%d" y="%d" width="%.1f" height="%d" class="b"/>`, labelW, yy+3, w, row-8)
-		fmt.Fprintf(&b, `<text x="%.1f" y="%d" class="v">%s</text>`, float64(labelW)+w+6, yy+16, template.HTMLEscapeString(x.text))
-	}
-	b.WriteString(`</svg>`)
-	return template.HTML(b.String())
-}
 
 var page = template.Must(template.New("replay").Parse(`<!doctype html>
 <html lang="en"><head><meta charset="utf-8">
@@ -50,7 +15,7 @@ var page = template.Must(template.New("replay").Parse(`<!doctype html>
 body{font:15px/1.45 system-ui,sans-serif;max-width:720px;margin:2em auto;padding:0 1em;color:#1d2327}
 h1{font-size:1.4em}h2{font-size:1.1em;margin-top:2em}
 table{border-collapse:collapse}td,th{padding:2px 10px 2px 0;text-align:left}td.n{text-align:right}
-svg .t{font-weight:600;font-size:14px}svg .l,svg .v{font-size:13px}svg .b{fill:#5b7f95}
+{{.Style}}
 </style></head><body>
 <h1>{{.Title}}</h1>
 <p>{{.R.All.Queries}} queries, {{.R.All.Searches}} searches{{if .R.SkippedLines}}; {{.R.SkippedLines}} malformed lines skipped{{end}}.</p>
@@ -77,18 +42,18 @@ svg .t{font-weight:600;font-size:14px}svg .l,svg .v{font-size:13px}svg .b{fill:#
 // SVG: it needs nothing from the network and reads offline.
 func WriteHTML(w io.Writer, title string, r Report) error {
 	pct := func(x float64) string { return fmt.Sprintf("%.1f%%", 100*x) }
-	zero := hbars("Share finding nothing", []bar{
-		{"queries, as typed", r.RateBefore.Queries, pct(r.RateBefore.Queries)},
-		{"queries, after rescue", r.RateAfter.Queries, pct(r.RateAfter.Queries)},
-		{"searches, as typed", r.RateBefore.Searches, pct(r.RateBefore.Searches)},
-		{"searches, after rescue", r.RateAfter.Searches, pct(r.RateAfter.Searches)},
+	zero := svgchart.HBars("Share finding nothing", []svgchart.Bar{
+		{Label: "queries, as typed", Value: r.RateBefore.Queries, Text: pct(r.RateBefore.Queries)},
+		{Label: "queries, after rescue", Value: r.RateAfter.Queries, Text: pct(r.RateAfter.Queries)},
+		{Label: "searches, as typed", Value: r.RateBefore.Searches, Text: pct(r.RateBefore.Searches)},
+		{Label: "searches, after rescue", Value: r.RateAfter.Searches, Text: pct(r.RateAfter.Searches)},
 	})
-	var ch []bar
+	var ch []svgchart.Bar
 	for _, c := range r.Changes {
-		ch = append(ch, bar{c.Op + " " + c.Kind, float64(c.Searches), fmt.Sprintf("%d searches", c.Searches)})
+		ch = append(ch, svgchart.Bar{Label: c.Op + " " + c.Kind, Value: float64(c.Searches), Text: fmt.Sprintf("%d searches", c.Searches)})
 	}
 	// The histogram from its first bucket with a rescue to its last.
-	var lat []bar
+	var lat []svgchart.Bar
 	first, last := -1, -1
 	for i, b := range r.Latency {
 		if b.Count > 0 {
@@ -106,10 +71,10 @@ func WriteHTML(w io.Writer, title string, r Report) error {
 		if i == len(r.Latency)-1 && i > 0 {
 			label = "over " + fmtDur(r.Latency[i-1].UpTo)
 		}
-		lat = append(lat, bar{label, float64(r.Latency[i].Count), fmt.Sprint(r.Latency[i].Count)})
+		lat = append(lat, svgchart.Bar{Label: label, Value: float64(r.Latency[i].Count), Text: fmt.Sprint(r.Latency[i].Count)})
 	}
 	return page.Execute(w, map[string]any{
-		"Title": title, "R": r, "ZeroChart": zero, "ChangeChart": hbars("Searches rescued, by relaxation", ch),
-		"LatencyChart": hbars("Rescues by time taken", lat), "P50": fmtDur(r.P50), "P99": fmtDur(r.P99),
+		"Title": title, "R": r, "Style": template.CSS(svgchart.Style), "ZeroChart": zero, "ChangeChart": svgchart.HBars("Searches rescued, by relaxation", ch),
+		"LatencyChart": svgchart.HBars("Rescues by time taken", lat), "P50": fmtDur(r.P50), "P99": fmtDur(r.P99),
 	})
 }
