@@ -1,0 +1,106 @@
+package tune_test
+
+import (
+	"context"
+	"fmt"
+	"strings"
+	"time"
+
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/signals"
+	"github.com/whittle-search/whittle/rewrite/tune"
+)
+
+// exampleSessions are invented: exact matches for "rain jacket" that
+// shoppers click, and searches that dropped the size, which they never
+// click.
+func exampleSessions() []*signals.Session {
+	at := time.Date(2026, 11, 2, 9, 0, 0, 0, time.UTC)
+	var out []*signals.Session
+	for i := range 300 {
+		id := fmt.Sprintf("s%03d", i)
+		ev := signals.Event{Type: signals.Search, Session: id, Time: at.Add(time.Duration(i) * time.Minute),
+			Query: "rain jacket size m", Category: "apparel", Shown: []string{"RJ-1", "RJ-2", "RJ-3"}}
+		j := signals.Joined{Search: ev}
+		if i%2 == 0 {
+			j.Engagements = []signals.Engagement{{Type: signals.Click, Time: ev.Time, Rank: 1 + i%3}}
+		} else {
+			j.Search.Relaxations = []signals.Relaxed{{Op: "drop", Kind: parser.KindSize, Text: "size m"}}
+		}
+		out = append(out, &signals.Session{ID: id, Searches: []signals.Joined{j}})
+	}
+	return out
+}
+
+// exampleTuner has read exampleSessions under a policy that lets
+// apparel drop the size.
+func exampleTuner() *tune.Tuner {
+	user, err := rewrite.ParsePolicy("shop.toml", "[category.apparel.strictness]\nsize = \"soft\"\n", lexicon.Default())
+	if err != nil {
+		panic(err)
+	}
+	t := tune.New(tune.Options{Policy: rewrite.DefaultPolicy().Overlay(user)})
+	for _, s := range exampleSessions() {
+		if err := t.Add(context.Background(), s); err != nil {
+			panic(err)
+		}
+	}
+	return t
+}
+
+func ExampleNew() {
+	for _, c := range exampleTuner().Report().Changes {
+		fmt.Println(c.Key, c.From, "→", c.To)
+	}
+	// Output: category.apparel.strictness.size soft → hard
+}
+
+func ExampleTuner_Report() {
+	r := exampleTuner().Report()
+	k := r.Categories[0].Kinds[0]
+	fmt.Printf("%s %s: %d searches, %.0f%% of exact-match engagement\n", k.Kind, k.Ops[0].Op, k.Ops[0].Searches, 100*k.Ops[0].Ratio)
+	// Output: size drop: 150 searches, 0% of exact-match engagement
+}
+
+func ExampleWriteText() {
+	var b strings.Builder
+	if err := tune.WriteText(&b, exampleTuner().Report()); err != nil {
+		panic(err)
+	}
+	first, _, _ := strings.Cut(b.String(), "\n")
+	fmt.Println(first)
+	// Output: 300 sessions, 300 searches: 150 exact, 150 relaxed (0 relaxed more than one kind and are set aside), 0 found nothing.
+}
+
+func ExampleWriteHTML() {
+	var b strings.Builder
+	if err := tune.WriteHTML(&b, "Tune", exampleTuner().Report()); err != nil {
+		panic(err)
+	}
+	fmt.Println(strings.Count(b.String(), "<svg"))
+	// Output: 1
+}
+
+func ExampleWritePolicy() {
+	var b strings.Builder
+	if err := tune.WritePolicy(&b, exampleTuner().Report()); err != nil {
+		panic(err)
+	}
+	// The proposal is a policy file like any other.
+	p, err := rewrite.ParsePolicy("proposed.toml", b.String(), lexicon.Default())
+	if err != nil {
+		panic(err)
+	}
+	fmt.Println(p.For("apparel", "", lexicon.Default()).Strictness[parser.KindSize])
+	// Output: hard
+}
+
+func ExampleDiff() {
+	fmt.Print(tune.Diff([]tune.Change{{Key: "category.apparel.strictness.size", From: "soft", To: "hard"}}))
+	// Output:
+	// [category.apparel.strictness]
+	// - size = "soft"
+	// + size = "hard"
+}
