@@ -169,3 +169,33 @@ func ExampleRewriter_ParseIn() {
 	fmt.Println(rw.ParseIn("red", "apparel").Category, rw.ParseIn("red rain jacket", "home").Category)
 	// Output: apparel apparel
 }
+
+// Loosen gives the cheapest plan one step looser than a rescue's: here
+// the query matched as typed, and the head is widened to its parent
+// type. A paint's colour is hard, and paint has no parent type, so
+// "sage paint" has no looser plan.
+func ExampleRewriter_Loosen() {
+	rw := rewrite.New(shopEngine{{"rain jacket", "ember"}, {"paint", "sage"}}, nil)
+	for _, q := range []string{"ember rain jacket", "sage paint"} {
+		out, err := rw.Rescue(context.Background(), q)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		l, err := rw.Loosen(context.Background(), out)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		if l == nil {
+			fmt.Printf("%s: no looser plan\n", q)
+			continue
+		}
+		for _, r := range l.Added {
+			fmt.Printf("%s: %s %s %q %s\n", q, r.Operator, r.Kind, r.Text, r.Detail)
+		}
+	}
+	// Output:
+	// ember rain jacket: widen product_type "rain jacket" to the broader type jacket
+	// sage paint: no looser plan
+}
