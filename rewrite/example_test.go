@@ -199,3 +199,19 @@ func ExampleRewriter_Loosen() {
 	// ember rain jacket: widen product_type "rain jacket" to the broader type jacket
 	// sage paint: no looser plan
 }
+
+// AddExplored puts a product from a looser plan among the hits: here at
+// rank 2 of at most 3, so the last hit drops off.
+func ExampleReport_AddExplored() {
+	rep := rewrite.Report{Hits: []rewrite.ReportHit{{ID: "RJ-1"}, {ID: "RJ-2"}, {ID: "RJ-3"}}}
+	rep.AddExplored(rewrite.ReportHit{ID: "RJ-9"}, 2, 3, []rewrite.Relaxation{{Text: "mustard", Kind: parser.KindColour, Operator: rewrite.OpDrop, Detail: "dropped"}})
+	for _, h := range rep.Hits {
+		fmt.Println(h.ID, h.Explored)
+	}
+	fmt.Println(rep.Explored.Rank, rep.Explored.Relaxations[0].Op, rep.Explored.Relaxations[0].Text)
+	// Output:
+	// RJ-1 false
+	// RJ-9 true
+	// RJ-2 false
+	// 2 drop mustard
+}
