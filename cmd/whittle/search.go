@@ -47,7 +47,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	defer eng.Close()
 	rw := rewrite.New(eng, pol, rewrite.WithBudget(*budget))
-	res, err := eng.Rescue(context.Background(), rw, rw.Parse(rest[0]), *k, *baseline)
+	res, err := eng.Rescue(context.Background(), rw, rw.Parse(rest[0]), bleveengine.RescueOptions{K: *k, Baseline: *baseline})
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle search: %v\n", err)
 		return 1
