@@ -190,3 +190,49 @@ func ExamplePolicy_Signals() {
 	fmt.Println(s.Weights["purchase"], s.JoinWindow, s.KeepShare)
 	// Output: 10 30m0s 0.8
 }
+
+// Loosen gives the cheapest plan one step looser than a rescue's: here
+// the query matched as typed, and the head is widened to its parent
+// type. A paint's colour is hard, and paint has no parent type, so
+// "sage paint" has no looser plan.
+func ExampleRewriter_Loosen() {
+	rw := rewrite.New(shopEngine{{"rain jacket", "ember"}, {"paint", "sage"}}, nil)
+	for _, q := range []string{"ember rain jacket", "sage paint"} {
+		out, err := rw.Rescue(context.Background(), q)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		l, err := rw.Loosen(context.Background(), out)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		if l == nil {
+			fmt.Printf("%s: no looser plan\n", q)
+			continue
+		}
+		for _, r := range l.Added {
+			fmt.Printf("%s: %s %s %q %s\n", q, r.Operator, r.Kind, r.Text, r.Detail)
+		}
+	}
+	// Output:
+	// ember rain jacket: widen product_type "rain jacket" to the broader type jacket
+	// sage paint: no looser plan
+}
+
+// AddExplored puts a product from a looser plan among the hits: here at
+// rank 2 of at most 3, so the last hit drops off.
+func ExampleReport_AddExplored() {
+	rep := rewrite.Report{Hits: []rewrite.ReportHit{{ID: "RJ-1"}, {ID: "RJ-2"}, {ID: "RJ-3"}}}
+	rep.AddExplored(rewrite.ReportHit{ID: "RJ-9"}, 2, 3, []rewrite.Relaxation{{Text: "mustard", Kind: parser.KindColour, Operator: rewrite.OpDrop, Detail: "dropped"}})
+	for _, h := range rep.Hits {
+		fmt.Println(h.ID, h.Explored)
+	}
+	fmt.Println(rep.Explored.Rank, rep.Explored.Relaxations[0].Op, rep.Explored.Relaxations[0].Text)
+	// Output:
+	// RJ-1 false
+	// RJ-9 true
+	// RJ-2 false
+	// 2 drop mustard
+}

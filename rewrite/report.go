@@ -1,5 +1,7 @@
 package rewrite
 
+import "slices"
+
 // Report is the JSON contract of `whittle search`: what was asked, every
 // plan counted, what was chosen, the shopper's message and the hits.
 type Report struct {
@@ -14,6 +16,19 @@ type Report struct {
 	HardUnmet  []Missing    `json:"hard_unmet"`
 	Note       string       `json:"note,omitempty"`
 	Hits       []ReportHit  `json:"hits"`
+	// Explored is set when one of Hits was put there to explore: a
+	// product from a plan one step looser than Chosen, which Chosen's
+	// own plan did not show.
+	Explored *ReportExplored `json:"explored,omitempty"`
+}
+
+// ReportExplored says which hit was shown to explore and how its plan
+// was looser than the chosen one.
+type ReportExplored struct {
+	// Rank is the hit's position in Hits, from 1.
+	Rank int `json:"rank"`
+	// Relaxations are what the looser plan adds to Chosen's.
+	Relaxations []ReportRelaxation `json:"relaxations"`
 }
 
 // ReportStep is one plan counted.
@@ -39,19 +54,14 @@ type ReportHit struct {
 	Colour  string  `json:"colour,omitempty"`
 	InStock bool    `json:"in_stock"`
 	Score   float64 `json:"score"`
+	// Explored marks the hit shown to explore (see Report.Explored).
+	Explored bool `json:"explored,omitempty"`
 }
 
 // NewReport writes an outcome and its hits in the contract's form.
 func NewReport(o *Outcome, hits []ReportHit) Report {
-	conv := func(rs []Relaxation) []ReportRelaxation {
-		out := []ReportRelaxation{}
-		for _, r := range rs {
-			out = append(out, ReportRelaxation{Op: r.Operator, Kind: string(r.Kind), Text: r.Text, Detail: r.Detail})
-		}
-		return out
-	}
 	rep := Report{Query: o.Query, Corrected: o.Corrected, Message: o.Message, HardUnmet: o.Missing, Note: o.Note, Hits: hits,
-		Chosen: ReportStep{Relaxations: conv(o.Relaxations), Count: o.Count}, Steps: []ReportStep{}}
+		Chosen: ReportStep{Relaxations: reportRelaxations(o.Relaxations), Count: o.Count}, Steps: []ReportStep{}}
 	if rep.HardUnmet == nil {
 		rep.HardUnmet = []Missing{}
 	}
@@ -62,7 +72,32 @@ func NewReport(o *Outcome, hits []ReportHit) Report {
 		if i == 0 {
 			rep.ExactCount = s.Count
 		}
-		rep.Steps = append(rep.Steps, ReportStep{Label: s.Label, Relaxations: conv(s.Relaxations), Count: s.Count})
+		rep.Steps = append(rep.Steps, ReportStep{Label: s.Label, Relaxations: reportRelaxations(s.Relaxations), Count: s.Count})
 	}
 	return rep
+}
+
+// reportRelaxations writes relaxations in the contract's form; never nil.
+func reportRelaxations(rs []Relaxation) []ReportRelaxation {
+	out := []ReportRelaxation{}
+	for _, r := range rs {
+		out = append(out, ReportRelaxation{Op: r.Operator, Kind: string(r.Kind), Text: r.Text, Detail: r.Detail})
+	}
+	return out
+}
+
+// AddExplored puts hit, found by a plan that adds the relaxations added
+// to the chosen one, at rank (from 1) of the report's hits, marked as
+// explored, and says so in Explored. At most k hits are shown (k below 1
+// is taken as 1): when the hits are already k, the last drops off. A
+// rank below 1 is taken as 1, and one past the last place as the last
+// place (len(Hits)+1, or k).
+// The report's hits are copied, not changed in place.
+func (r *Report) AddExplored(hit ReportHit, rank, k int, added []Relaxation) {
+	last := min(len(r.Hits)+1, max(k, 1))
+	rank = min(max(rank, 1), last)
+	hit.Explored = true
+	hits := slices.Insert(slices.Clone(r.Hits), rank-1, hit)
+	r.Hits = hits[:min(len(hits), last)]
+	r.Explored = &ReportExplored{Rank: rank, Relaxations: reportRelaxations(added)}
 }

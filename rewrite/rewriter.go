@@ -249,6 +249,12 @@ type Outcome struct {
 	// "uv filtar 52 millimeter"); Parsed is then that reading, its spans
 	// pointing into Query, and the fix is the first of Relaxations.
 	Corrected string `json:"corrected,omitempty"`
+
+	// settled is the search the outcome settled on, for Loosen; nil when
+	// its plan is not a state of the search (a hard stop, or available
+	// products found for unavailable ones), or once it has been read back
+	// from JSON.
+	settled *settled
 }
 
 // Rescue parses query, applies the policy, and relaxes it until the
@@ -335,6 +341,7 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 		}
 	}
 	rw.addRelaxations(ctx, s.items, e)
+	s.laddered = true
 	// The hard constraints alone: if they find nothing, stop.
 	hard := s.hardOnly()
 	if hn, err := s.countPlan(hard, nil, "the hard constraints alone"); err == errStop {
@@ -371,8 +378,10 @@ func (rw *Rewriter) settle(s *search, state []int, n int) *Outcome {
 		out.Message = rw.message(out, s.items, state)
 		out.Explanation = s.explain(state)
 	}
+	out.settled = &settled{items: s.items, state: slices.Clone(state), fix: s.fix, laddered: s.laddered}
 	if n > 0 && rw.alternatives(s.ctx, s, out.Plan) {
 		out.Explanation += "; every match is unavailable, so available products like them are shown"
+		out.settled = nil
 	}
 	return out
 }
@@ -389,6 +398,9 @@ type search struct {
 	// fix is the misspelt product type fixed before planning, or nil; it
 	// is part of every plan counted after the query as typed.
 	fix *Relaxation
+	// laddered is set once the items have their states below the exact
+	// one.
+	laddered bool
 }
 
 // plan builds the plan of a state: each item's clause at its level.
@@ -588,23 +600,35 @@ func (s *search) bestFirst(min int) (bool, []int, int) {
 
 // push queues the states one step down from st.
 func (s *search) push(pq *queue, st []int, visited map[string]bool) {
-	for i, it := range s.items {
-		if st[i]+1 >= len(it.levels) {
-			continue
-		}
-		next := append([]int(nil), st...)
-		next[i]++
+	for _, next := range s.looser(st) {
 		k := stateKey(next)
 		if visited[k] {
 			continue
 		}
 		visited[k] = true
-		if s.keepsNothing(next) {
-			continue
-		}
 		heap.Push(pq, entry{state: next, cost: s.cost(next), order: pq.n})
 		pq.n++
 	}
+}
+
+// looser are the states one step down from st, one constraint one level
+// further down its ladder, in the order of the constraints, less those
+// that would keep nothing asked for. A ladder holds only the states the
+// policy allows, so no state here relaxes a hard constraint or drops the
+// head product type.
+func (s *search) looser(st []int) [][]int {
+	var out [][]int
+	for i, it := range s.items {
+		if st[i]+1 >= len(it.levels) {
+			continue
+		}
+		next := slices.Clone(st)
+		next[i]++
+		if !s.keepsNothing(next) {
+			out = append(out, next)
+		}
+	}
+	return out
 }
 
 func stateKey(st []int) string { return fmt.Sprint(st) }

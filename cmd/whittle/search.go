@@ -2,16 +2,21 @@ package main
 
 import (
 	"context"
+	crand "crypto/rand"
 	"encoding/json"
 	"flag"
 	"fmt"
 	"io"
+	"math/rand/v2"
+	"os"
 	"strings"
 	"text/tabwriter"
+	"time"
 
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
+	"github.com/whittle-search/whittle/rewrite/signals"
 )
 
 func searchCmd(args []string, stdout, stderr io.Writer) int {
@@ -23,13 +28,21 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	policyFile := fs.String("policy", "", "policy file laid over the built-in policy")
 	budget := fs.Int("budget", rewrite.DefaultBudget, "most engine counts one rescue may spend")
 	baseline := fs.Bool("baseline", false, "also run the blind partial match a plain engine would, and show both")
+	explore := fs.Float64("explore", 0, "chance `P`, from 0 to 1, that one hit shown is the best new product of the plan one step looser than the rescue's, marked as explored")
+	seed := fs.Uint64("seed", 0, "seed `N` of the explore draw (default: from the clock, so each run draws anew)")
+	signalsFile := fs.String("signals", "", "append the search event, one JSON line, to `FILE`")
+	session := fs.String("session", "", "session `ID` of the search event (default: a new random id each run)")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] QUERY\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
 	}
 	rest, code, ok := parseFlags(fs, args, 1)
 	if !ok {
 		return code
+	}
+	if !(*explore >= 0 && *explore <= 1) {
+		fmt.Fprintf(stderr, "whittle search: --explore %g: want a chance from 0 to 1\n", *explore)
+		return 2
 	}
 	if *k < 0 || *budget < 1 {
 		fs.Usage()
@@ -47,10 +60,17 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	defer eng.Close()
 	rw := rewrite.New(eng, pol, rewrite.WithBudget(*budget))
-	res, err := eng.Rescue(context.Background(), rw, rw.Parse(rest[0]), *k, *baseline)
+	opts := bleveengine.RescueOptions{K: *k, Baseline: *baseline, Explore: *explore, Rand: exploreSource(fs, *seed)}
+	res, err := eng.Rescue(context.Background(), rw, rw.Parse(rest[0]), opts)
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle search: %v\n", err)
 		return 1
+	}
+	if *signalsFile != "" {
+		if err := appendSearchEvent(*signalsFile, *session, res.Report); err != nil {
+			fmt.Fprintf(stderr, "whittle search: %v\n", err)
+			return 1
+		}
 	}
 	o, rep, hits, base := res.Outcome, res.Report, res.Hits, res.Baseline
 	if *asJSON {
@@ -90,7 +110,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 			if !h.InStock {
 				stock = "unavailable"
 			}
-			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\n", h.ID, h.Title, h.Colour, h.Price, stock)
+			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s%s\n", h.ID, h.Title, h.Colour, h.Price, stock, exploredMark(h, rep.Explored))
 		}
 		tw.Flush()
 	}
@@ -103,4 +123,49 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		tw.Flush()
 	}
 	return 0
+}
+
+// exploreSource is the source of the explore draw: seeded by --seed when
+// it is given, else by the clock.
+func exploreSource(fs *flag.FlagSet, seed uint64) *rand.Rand {
+	given := false
+	fs.Visit(func(f *flag.Flag) { given = given || f.Name == "seed" })
+	if !given {
+		seed = uint64(time.Now().UnixNano())
+	}
+	return rand.New(rand.NewPCG(seed, 0))
+}
+
+// appendSearchEvent appends the search event of rep, in session (a new
+// random id when ""), as one JSON line to file.
+func appendSearchEvent(file, session string, rep rewrite.Report) error {
+	if session == "" {
+		session = crand.Text()
+	}
+	b, err := json.Marshal(signals.SearchEvent(session, time.Now().UTC(), "", rep))
+	if err != nil {
+		return err
+	}
+	f, err := os.OpenFile(file, os.O_APPEND|os.O_CREATE|os.O_WRONLY, 0o644)
+	if err != nil {
+		return err
+	}
+	if _, err := f.Write(append(b, '\n')); err != nil {
+		f.Close()
+		return err
+	}
+	return f.Close()
+}
+
+// exploredMark says, after a hit shown to explore, how its plan was
+// looser than the rescue's.
+func exploredMark(h rewrite.ReportHit, x *rewrite.ReportExplored) string {
+	if !h.Explored || x == nil {
+		return ""
+	}
+	var what []string
+	for _, r := range x.Relaxations {
+		what = append(what, fmt.Sprintf("%s %s %q", r.Op, r.Kind, r.Text))
+	}
+	return "  (explored, one step looser: " + strings.Join(what, ", ") + ")"
 }

@@ -4,6 +4,8 @@ import (
 	"encoding/json"
 	"os"
 	"path/filepath"
+	"regexp"
+	"slices"
 	"strings"
 	"testing"
 )
@@ -82,6 +84,11 @@ func TestIndexAndSearchErrors(t *testing.T) {
 		{"skip bad", []string{"index", "--catalog", bad, "--index", filepath.Join(dir, "i"), "--skip-bad"}, 0, "skipped", "--skip-bad reports and goes on"},
 		{"no index", []string{"search", "--index", filepath.Join(dir, "missing"), "rug"}, 1, "no index", "search needs an index"},
 		{"no query", []string{"search", "--index", dir}, 2, "usage", "a query is needed"},
+		{"explore below 0", []string{"search", "--index", dir, "--explore", "-0.5", "rug"}, 2, "--explore -0.5: want a chance from 0 to 1", "a chance is at least 0"},
+		{"explore above 1", []string{"search", "--index", dir, "--explore", "1.5", "rug"}, 2, "--explore 1.5: want a chance from 0 to 1", "a chance is at most 1"},
+		{"explore not a number", []string{"search", "--index", dir, "--explore", "NaN", "rug"}, 2, "want a chance from 0 to 1", "NaN is no chance"},
+		{"explore not a float", []string{"search", "--index", dir, "--explore", "often", "rug"}, 2, "invalid value", "the flag package refuses it"},
+		{"bad seed", []string{"search", "--index", dir, "--seed", "-1", "rug"}, 2, "invalid value", "a seed is a whole number from 0"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			code, _, stderr := runCLI("", tc.args...)
@@ -111,5 +118,125 @@ func TestSearchBaseline(t *testing.T) {
 	}
 	if len(rep.Hits) != 0 || rep.Baseline.Count != 2 || rep.Baseline.Kept >= rep.Baseline.Words {
 		t.Errorf("report %+v", rep)
+	}
+}
+
+// exploredReport is what the explore tests read of a --json report.
+type exploredReport struct {
+	Hits []struct {
+		ID       string `json:"id"`
+		Explored bool   `json:"explored"`
+	} `json:"hits"`
+	Explored *struct {
+		Rank        int `json:"rank"`
+		Relaxations []struct{ Op, Kind, Text string }
+	} `json:"explored"`
+}
+
+// signalLine is what the explore tests read of a search event.
+type signalLine struct {
+	Type, Session, Query string
+	Shown                []string
+	Explored             *struct{ Rank int }
+}
+
+// readSignals reads every line of a signals file.
+func readSignals(t *testing.T, file string) []signalLine {
+	t.Helper()
+	b, err := os.ReadFile(file)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []signalLine
+	for _, l := range strings.Split(strings.TrimSuffix(string(b), "\n"), "\n") {
+		var s signalLine
+		if err := json.Unmarshal([]byte(l), &s); err != nil {
+			t.Fatalf("%v in %q", err, l)
+		}
+		out = append(out, s)
+	}
+	return out
+}
+
+// testdata/catalog/shop.jsonl: RJ-1 and RJ-2 are the nylon rain jackets;
+// dropping the soft material, the cheapest step looser, finds RJ-3.
+func TestSearchExploreAndSignals(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	if code, _, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", dir); code != 0 {
+		t.Fatal(stderr)
+	}
+	log := filepath.Join(t.TempDir(), "signals.jsonl")
+	args := []string{"search", "--index", dir, "--json", "--explore", "1", "--seed", "5", "--signals", log, "--session", "s1", "nylon rain jacket"}
+	code, out, stderr := runCLI("", args...)
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, stderr)
+	}
+	var rep exploredReport
+	if err := json.Unmarshal([]byte(out), &rep); err != nil {
+		t.Fatalf("%v in %s", err, out)
+	}
+	if rep.Explored == nil || len(rep.Hits) != 3 || rep.Explored.Rank < 1 || rep.Explored.Rank > 3 ||
+		rep.Hits[rep.Explored.Rank-1].ID != "RJ-3" || !rep.Hits[rep.Explored.Rank-1].Explored ||
+		len(rep.Explored.Relaxations) != 1 || rep.Explored.Relaxations[0].Op != "drop" || rep.Explored.Relaxations[0].Text != "nylon" {
+		t.Fatalf("--explore 1: RJ-3 should be explored among three hits: %s", out)
+	}
+	// The same seed draws the same rank; the line is appended, not
+	// written over.
+	if code, again, _ := runCLI("", args...); code != 0 || again != out {
+		t.Errorf("--seed 5 twice gave\n%s\n%s", out, again)
+	}
+	lines := readSignals(t, log)
+	if len(lines) != 2 {
+		t.Fatalf("%d lines in the signals file, want 2", len(lines))
+	}
+	l := lines[0]
+	var shown []string
+	for _, h := range rep.Hits {
+		shown = append(shown, h.ID)
+	}
+	if l.Type != "search" || l.Session != "s1" || l.Query != "nylon rain jacket" || !slices.Equal(l.Shown, shown) ||
+		l.Explored == nil || l.Explored.Rank != rep.Explored.Rank {
+		t.Errorf("the line %+v does not match the report %s", l, out)
+	}
+	// No --session: a new id each run.
+	runCLI("", "search", "--index", dir, "--signals", log, "rain jacket")
+	runCLI("", "search", "--index", dir, "--signals", log, "rain jacket")
+	lines = readSignals(t, log)
+	if len(lines) != 4 || lines[2].Session == "" || lines[2].Session == lines[3].Session || lines[2].Explored != nil {
+		t.Errorf("sessions of runs without --session: %+v", lines[2:])
+	}
+	// Without --explore nothing is explored; as text, the explored hit
+	// is marked.
+	code, out, _ = runCLI("", "search", "--index", dir, "--json", "nylon rain jacket")
+	if code != 0 || strings.Contains(out, "explored") {
+		t.Errorf("no --explore: exit %d\n%s", code, out)
+	}
+	code, out, _ = runCLI("", "search", "--index", dir, "--explore", "1", "nylon rain jacket")
+	if code != 0 || !regexp.MustCompile(`RJ-3 .*\(explored, one step looser: drop material "nylon"\)`).MatchString(out) {
+		t.Errorf("text: exit %d\n%s", code, out)
+	}
+	// A wire gauge is hard and wire has no parent type: nothing to explore.
+	code, out, _ = runCLI("", "search", "--index", dir, "--json", "--explore", "1", "12 awg wire")
+	if code != 0 || strings.Contains(out, "explored") || !strings.Contains(out, `"WR-1"`) {
+		t.Errorf("hard only: exit %d\n%s", code, out)
+	}
+}
+
+// A signals file is appended to, its folder not made; --help tells the
+// truth about the defaults.
+func TestSearchExploreFlags(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	if code, _, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", dir); code != 0 {
+		t.Fatal(stderr)
+	}
+	code, _, stderr := runCLI("", "search", "--index", dir, "--signals", filepath.Join(dir, "no", "such", "file"), "rain jacket")
+	if code != 1 || !strings.Contains(stderr, "no such file") {
+		t.Errorf("signals in a missing folder: exit %d, stderr %q", code, stderr)
+	}
+	_, _, help := runCLI("", "search", "-h")
+	for _, want := range []string{"--explore P", "default: from the clock", "--signals FILE", "default: a new random id"} {
+		if !strings.Contains(help, want) {
+			t.Errorf("--help lacks %q:\n%s", want, help)
+		}
 	}
 }

@@ -12,6 +12,7 @@ import (
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
 )
 
 // ParseRequest is the body of POST /whittle/v1/parse.
@@ -131,7 +132,7 @@ func (s *Server) handleRescue(w http.ResponseWriter, r *http.Request) {
 	if req.Hits != nil {
 		k = *req.Hits
 	}
-	res, err := s.engine.Rescue(r.Context(), rw, parsed, k, req.Baseline)
+	res, err := s.engine.Rescue(r.Context(), rw, parsed, bleveengine.RescueOptions{K: k, Baseline: req.Baseline})
 	if err != nil {
 		writeError(w, r, s.engineError(r, err))
 		return

@@ -28,7 +28,7 @@ const DefaultAddr = "127.0.0.1:7391"
 // a parsed query and show its hits. *bleveengine.Engine is one.
 type Engine interface {
 	rewrite.Engine
-	Rescue(ctx context.Context, rw *rewrite.Rewriter, r *parser.Result, k int, baseline bool) (*bleveengine.Result, error)
+	Rescue(ctx context.Context, rw *rewrite.Rewriter, r *parser.Result, opts bleveengine.RescueOptions) (*bleveengine.Result, error)
 }
 
 // Limits bound what one request may cost. A zero field takes the default

@@ -87,7 +87,7 @@ func (s *Server) workbenchAnswer(r *http.Request, p *workbenchPage) {
 		p.Problem = e.Message
 		return
 	}
-	res, err := s.engine.Rescue(r.Context(), rw, parsed, 10, true)
+	res, err := s.engine.Rescue(r.Context(), rw, parsed, bleveengine.RescueOptions{K: 10, Baseline: true})
 	if err != nil {
 		p.Problem = s.engineError(r, err).Message
 		return
