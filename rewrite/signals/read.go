@@ -1,0 +1,247 @@
+package signals
+
+import (
+	"bufio"
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"iter"
+	"time"
+
+	"github.com/go-json-experiment/json"
+	"github.com/go-json-experiment/json/jsontext"
+
+	"github.com/whittle-search/whittle/rewrite/catalog"
+)
+
+// MaxLine is the longest line read, in bytes: 1 MiB, far past any
+// search's line, so that a log that lost its line breaks costs one
+// error a MiB instead of being read whole into memory.
+const MaxLine = 1 << 20
+
+// LineError is a malformed line of a signals log: a catalog.LineError
+// with the file it is in. errors.As finds the catalog.LineError in it
+// too, so code that handles malformed lines of a catalog or query log
+// handles these the same way.
+type LineError struct {
+	// File is the name given to Read, or "" when none was.
+	File string
+	catalog.LineError
+}
+
+// Error renders "file: line N: field: message".
+func (e *LineError) Error() string {
+	if e.File == "" {
+		return e.LineError.Error()
+	}
+	return e.File + ": " + e.LineError.Error()
+}
+
+// Unwrap returns the catalog.LineError, for errors.As.
+func (e *LineError) Unwrap() error { return &e.LineError }
+
+// Read yields the events of one signals log, a file of JSON Lines with
+// one event a line, each with File set to file and Line to its line
+// number (from 1). Blank lines are skipped. A malformed line yields a
+// *LineError naming the file, the line and the field at fault, and
+// reading goes on with the next line; an error of the reader itself
+// ends the sequence.
+//
+// Reading is strict: a field of no event, a field that belongs to
+// another type of event, a type, operator or kind whittle does not know
+// and a time that is not RFC 3339 are all refused (see the package
+// documentation for the layout).
+func Read(r io.Reader, file string) iter.Seq2[Event, error] {
+	return func(yield func(Event, error) bool) {
+		lr := lineReader{br: bufio.NewReaderSize(r, 64<<10)}
+		var d decoder
+		for {
+			b, long, err := lr.next()
+			if err != nil {
+				if err != io.EOF {
+					yield(Event{}, err)
+				}
+				return
+			}
+			if long {
+				if !yield(Event{}, lineError(file, lr.line, "", fmt.Sprintf("longer than %d bytes", MaxLine))) {
+					return
+				}
+				continue
+			}
+			b = bytes.TrimSpace(b)
+			if len(b) == 0 {
+				continue
+			}
+			e, ferr := d.decode(b)
+			if ferr != nil {
+				if !yield(Event{}, lineError(file, lr.line, ferr.field, ferr.msg)) {
+					return
+				}
+				continue
+			}
+			e.File, e.Line = file, lr.line
+			if !yield(e, nil) {
+				return
+			}
+		}
+	}
+}
+
+func lineError(file string, line int, field, msg string) *LineError {
+	return &LineError{File: file, LineError: catalog.LineError{Line: line, Field: field, Msg: msg}}
+}
+
+// lineReader splits its reader into lines, as bufio.Scanner does, but
+// goes on past a line longer than MaxLine, which it skips.
+type lineReader struct {
+	br   *bufio.Reader
+	long []byte // a line longer than br's buffer, gathered
+	line int    // the number of the line last returned
+}
+
+// next returns the next line without its line break, or whether it was
+// longer than MaxLine; io.EOF at the end. The line is valid until the
+// next call.
+func (lr *lineReader) next() (line []byte, long bool, err error) {
+	b, err := lr.br.ReadSlice('\n')
+	if err == io.EOF && len(b) == 0 {
+		return nil, false, io.EOF
+	}
+	lr.line++
+	switch err {
+	case nil, io.EOF:
+		return trimBreak(b), len(trimBreak(b)) > MaxLine, nil
+	case bufio.ErrBufferFull:
+	default:
+		return nil, false, err
+	}
+	lr.long = append(lr.long[:0], b...)
+	for {
+		b, err = lr.br.ReadSlice('\n')
+		if len(lr.long) <= MaxLine {
+			lr.long = append(lr.long, b...)
+		}
+		switch err {
+		case nil, io.EOF:
+			return trimBreak(lr.long), len(trimBreak(lr.long)) > MaxLine, nil
+		case bufio.ErrBufferFull:
+		default:
+			return nil, false, err
+		}
+	}
+}
+
+func trimBreak(b []byte) []byte {
+	return bytes.TrimSuffix(b, []byte{'\n'})
+}
+
+// fieldError is what is wrong with a line, before it has a file and a
+// line number.
+type fieldError struct {
+	field, msg string
+}
+
+func fieldErr(field, format string, args ...any) *fieldError {
+	return &fieldError{field, fmt.Sprintf(format, args...)}
+}
+
+// decoder reads lines into events, keeping its buffers from line to
+// line.
+type decoder struct {
+	w   wire
+	buf bytes.Buffer
+	dec *jsontext.Decoder
+}
+
+// unmarshal reads the JSON object on a line into d.w. The decoder reads
+// straight from d.buf, and is made once.
+func (d *decoder) unmarshal(b []byte) error {
+	d.buf.Reset()
+	d.buf.Write(b)
+	if d.dec == nil {
+		d.dec = jsontext.NewDecoder(&d.buf, json.RejectUnknownMembers(true))
+	} else {
+		d.dec.Reset(&d.buf, json.RejectUnknownMembers(true))
+	}
+	d.w.reset()
+	if err := d.w.UnmarshalJSONFrom(d.dec); err != nil {
+		return err
+	}
+	if _, err := d.dec.ReadToken(); err != io.EOF {
+		return &jsontext.SyntacticError{Err: errors.New("text after the end of the object")}
+	}
+	return nil
+}
+
+// decode reads one event from a line that is not blank.
+func (d *decoder) decode(b []byte) (Event, *fieldError) {
+	if b[0] != '{' {
+		return Event{}, fieldErr("", "not a JSON object")
+	}
+	// Strict: an unknown field is refused, as are (by the library's
+	// defaults) a field given twice, text that is not UTF-8 and anything
+	// after the object.
+	if err := d.unmarshal(b); err != nil {
+		return Event{}, jsonError(err)
+	}
+	w := &d.w
+	e := Event{Type: w.Type, Session: w.Session}
+	if !isType(e.Type) {
+		return Event{}, check(&e)
+	}
+	if e.Type != Search {
+		if f := searchField(w); f != "" {
+			return Event{}, searchOnly(f, e.Type)
+		}
+		e.Product = w.Product
+	} else {
+		if w.given[fProduct] {
+			return Event{}, productOnSearch()
+		}
+		e.Query, e.Category, e.Shuffled, e.Explored = w.Query, w.Category, w.Shuffled, w.Explored
+		// Empty lists read as none, as the writer leaves them out.
+		if len(w.Relaxations) > 0 {
+			e.Relaxations = w.Relaxations
+		}
+		if len(w.Shown) > 0 {
+			e.Shown = w.Shown
+		}
+	}
+	if w.given[fTime] {
+		if ferr := readTime(&e.Time, w.Time); ferr != nil {
+			return Event{}, ferr
+		}
+	}
+	if ferr := check(&e); ferr != nil {
+		return Event{}, ferr
+	}
+	return e, nil
+}
+
+// readTime reads an RFC 3339 time. Its offset from UTC must be less
+// than a day, as RFC 3339 has it, so that the writer can write it back.
+func readTime(t *time.Time, s []byte) *fieldError {
+	if err := t.UnmarshalText(s); err != nil {
+		return fieldErr("time", "%q is not an RFC 3339 time, such as 2025-03-14T09:26:53Z", s)
+	}
+	if _, off := t.Zone(); off <= -24*60*60 || off >= 24*60*60 {
+		return fieldErr("time", "%q is offset from UTC by a day or more", s)
+	}
+	return nil
+}
+
+// searchField names the first field of w that belongs to search events,
+// or "".
+func searchField(w *wire) string {
+	for _, f := range []struct {
+		i    int
+		name string
+	}{{fQuery, "query"}, {fCategory, "category"}, {fRelaxations, "relaxations"}, {fShown, "shown"}, {fExplored, "explored"}, {fShuffled, "shuffled"}} {
+		if w.given[f.i] {
+			return f.name
+		}
+	}
+	return ""
+}
