@@ -9,11 +9,14 @@ import (
 
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/signals"
 )
 
 // Report is what tune found and recommends.
 type Report struct {
-	Stats Stats `json:"stats"`
+	// Join sums up the join of the log, when Read joined it.
+	Join  signals.JoinStats `json:"join"`
+	Stats Stats             `json:"stats"`
 	// Signals are the [signals] settings used.
 	Signals rewrite.Signals `json:"signals"`
 	Bias    Bias            `json:"position_bias"`
@@ -108,7 +111,7 @@ func (t *Tuner) judge(f Figure, enough int) verdict {
 
 // Report sums up what the Tuner has read.
 func (t *Tuner) Report() *Report {
-	rep := &Report{Stats: t.stats, Signals: t.sig, Bias: t.biasUsed(), Changes: []Change{}, Aliases: t.aliasList(), Categories: []Category{}}
+	rep := &Report{Join: t.join, Stats: t.stats, Signals: t.sig, Bias: t.biasUsed(), Changes: []Change{}, Aliases: t.aliasList(), Categories: []Category{}}
 	inv := propensities(rep.Bias.Eta)
 	cats := map[string]bool{}
 	for k := range t.groups {

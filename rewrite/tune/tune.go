@@ -87,6 +87,7 @@ type Tuner struct {
 	parsed  map[string]*reading
 	facts   map[string]*rewrite.Facts
 	stats   Stats
+	join    signals.JoinStats
 }
 
 // Stats count what a Tuner read.
@@ -189,7 +190,7 @@ func (t *Tuner) search(ctx context.Context, session string, j *signals.Joined) e
 		main = append(append([]slot(nil), slots[:x.Rank-1]...), slots[x.Rank:]...)
 		xk, xop, xn := single(x.Relaxations)
 		if n == 0 && xn == 1 {
-			if err := t.relaxed(ctx, category, xk, xop, ev, explored, x.Rank-1, &w); err != nil {
+			if err := t.relaxed(ctx, category, xk, xop, ev, explored, &w); err != nil {
 				return err
 			}
 		}
@@ -202,16 +203,15 @@ func (t *Tuner) search(ctx context.Context, session string, j *signals.Joined) e
 	case 0:
 		t.group(groupKey{category: category}).add(main, &w)
 	case 1:
-		return t.relaxed(ctx, category, kind, op, ev, main, -1, &w)
+		return t.relaxed(ctx, category, kind, op, ev, main, &w)
 	}
 	return nil
 }
 
-// relaxed tallies products shown after relaxing one kind: by kind and
-// operator, and for a colour or a measure by how far each strayed.
-// only is the index into ev.Shown of the product when slots is a single
-// explored product, else -1.
-func (t *Tuner) relaxed(ctx context.Context, category string, kind parser.Kind, op string, ev *signals.Event, slots []slot, only int, w *[replicates]uint8) error {
+// relaxed tallies products shown after relaxing one kind (all of a
+// search's, or the one explored): by kind and operator, and for a colour
+// or a measure by how far each strayed.
+func (t *Tuner) relaxed(ctx context.Context, category string, kind parser.Kind, op string, ev *signals.Event, slots []slot, w *[replicates]uint8) error {
 	t.group(groupKey{category: category, kind: kind, op: op}).add(slots, w)
 	if t.opts.Products == nil || (kind != parser.KindColour && kind != parser.KindMeasure) || op == rewrite.OpReplace {
 		return nil
@@ -222,11 +222,7 @@ func (t *Tuner) relaxed(ctx context.Context, category string, kind parser.Kind, 
 	}
 	bins := map[int][]slot{}
 	for _, s := range slots {
-		id := ev.Shown[s.rank-1]
-		if only >= 0 {
-			id = ev.Shown[only]
-		}
-		f, err := t.describe(ctx, id)
+		f, err := t.describe(ctx, ev.Shown[s.rank-1])
 		if err != nil {
 			return err
 		}

@@ -14,6 +14,14 @@ import (
 // the policy in force, and the alias candidates.
 func WriteText(w io.Writer, r *Report) error {
 	p := &printer{w: w}
+	if j := r.Join; j.Events > 0 {
+		p.f("%d events read: %d searches, %d interactions, %d of them joined to the search that showed the product (%d with no search in the window, %d of a product not shown).\n",
+			j.Events, j.Searches, j.Interactions, j.Joined, j.NoSearch, j.NotShown)
+		if j.Late > 0 || j.Bad > 0 || j.SearchOverflow+j.InteractionOverflow > 0 {
+			p.f("%d events came later than the join allows; %d malformed lines were skipped; %d events past a session's limits were dropped.\n",
+				j.Late, j.Bad, j.SearchOverflow+j.InteractionOverflow)
+		}
+	}
 	st := r.Stats
 	p.f("%d sessions, %d searches: %d exact, %d relaxed (%d relaxed more than one kind and are set aside), %d found nothing.\n",
 		st.Sessions, st.Searches, st.Exact, st.Relaxed, st.SetAside, st.FoundNothing)
