@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bufio"
 	"context"
 	"errors"
 	"flag"
@@ -93,4 +94,23 @@ func parseFlags(fs *flag.FlagSet, args []string, want int) (rest []string, code 
 		return nil, 2, false
 	}
 	return rest, 0, true
+}
+
+// writeFile creates file and writes it with write, buffered; a failed
+// write or close is returned.
+func writeFile(file string, write func(io.Writer) error) error {
+	f, err := os.Create(file)
+	if err != nil {
+		return err
+	}
+	w := bufio.NewWriter(f)
+	if err := write(w); err != nil {
+		f.Close()
+		return err
+	}
+	if err := w.Flush(); err != nil {
+		f.Close()
+		return err
+	}
+	return f.Close()
 }

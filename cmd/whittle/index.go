@@ -71,7 +71,7 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 		if !tty {
 			return
 		}
-		showProgress(stderr, cr, size, start, n, "products")
+		showProgress(stderr, cr.n.Load(), size, start, n, "products")
 	}
 	st, err := bleveengine.Build(ctx, cr, *dir, bleveengine.BuildOptions{SkipBad: *skipBad, Progress: progress})
 	if tty {
@@ -92,13 +92,13 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 // showProgress redraws the progress line of a long command on a
 // terminal: a bar of the bytes read of size, n things done so far, their
 // rate, and the time left at the rate the bytes are read.
-func showProgress(w io.Writer, cr *countingReader, size int64, start time.Time, n int, things string) {
+func showProgress(w io.Writer, done, size int64, start time.Time, n int, things string) {
 	el := time.Since(start).Seconds()
 	eta := ""
-	if done := cr.n.Load(); size > 0 && done > 0 {
+	if size > 0 && done > 0 {
 		eta = fmt.Sprintf(", about %.0fs left", el*float64(size-done)/float64(done))
 	}
-	fmt.Fprintf(w, "\r%s  %d %s, %.0f/s%s   ", bar(cr.n.Load(), size), n, things, float64(n)/max(el, 1e-9), eta)
+	fmt.Fprintf(w, "\r%s  %d %s, %.0f/s%s   ", bar(done, size), n, things, float64(n)/max(el, 1e-9), eta)
 }
 
 // isTerminal reports whether w is a terminal, where progress is shown.

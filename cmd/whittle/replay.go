@@ -86,7 +86,7 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			if n%100 != 0 {
 				return
 			}
-			showProgress(stderr, cr, size, start, n, "queries")
+			showProgress(stderr, cr.n.Load(), size, start, n, "queries")
 		}
 	}
 	sum, err := replay.Run(ctx, rewrite.New(eng, pol, rewrite.WithBudget(*budget)), replay.Read(cr), opts, emit)
@@ -109,7 +109,7 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		err = replay.WriteText(out, rep)
 	}
 	if err == nil && *htmlFile != "" {
-		err = writeHTMLReport(*htmlFile, "whittle replay of "+filepath.Base(*logFile), rep)
+		err = writeFile(*htmlFile, func(w io.Writer) error { return replay.WriteHTML(w, "whittle replay of "+filepath.Base(*logFile), rep) })
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle replay: %v\n", err)
@@ -119,21 +119,4 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "replayed %d queries in %.1fs\n", rep.All.Queries, time.Since(start).Seconds())
 	}
 	return 0
-}
-
-func writeHTMLReport(file, title string, rep replay.Report) error {
-	f, err := os.Create(file)
-	if err != nil {
-		return err
-	}
-	w := bufio.NewWriter(f)
-	if err := replay.WriteHTML(w, title, rep); err != nil {
-		f.Close()
-		return err
-	}
-	if err := w.Flush(); err != nil {
-		f.Close()
-		return err
-	}
-	return f.Close()
 }

@@ -32,6 +32,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	seed := fs.Uint64("seed", 0, "seed `N` of the explore draw (default: from the clock, so each run draws anew)")
 	signalsFile := fs.String("signals", "", "append the search event, one JSON line, to `FILE`")
 	session := fs.String("session", "", "session `ID` of the search event (default: a new random id each run)")
+	category := fs.String("category", "", "the shop's category the search is made in, used when the query names none")
 	fs.Usage = func() {
 		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
@@ -48,6 +49,9 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		fs.Usage()
 		return 2
 	}
+	if !checkCategory("search", *category, stderr) {
+		return 2
+	}
 	lex, _ := loadLexicon("search", "", stderr)
 	pol, ok := loadPolicy("search", *policyFile, lex, stderr)
 	if !ok {
@@ -61,13 +65,13 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	defer eng.Close()
 	rw := rewrite.New(eng, pol, rewrite.WithBudget(*budget))
 	opts := bleveengine.RescueOptions{K: *k, Baseline: *baseline, Explore: *explore, Rand: exploreSource(fs, *seed)}
-	res, err := eng.Rescue(context.Background(), rw, rw.Parse(rest[0]), opts)
+	res, err := eng.Rescue(context.Background(), rw, rw.ParseIn(rest[0], *category), opts)
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle search: %v\n", err)
 		return 1
 	}
 	if *signalsFile != "" {
-		if err := appendSearchEvent(*signalsFile, *session, res.Report); err != nil {
+		if err := appendSearchEvent(*signalsFile, *session, res.Outcome.Parsed.Category, res.Report); err != nil {
 			fmt.Fprintf(stderr, "whittle search: %v\n", err)
 			return 1
 		}
@@ -138,11 +142,11 @@ func exploreSource(fs *flag.FlagSet, seed uint64) *rand.Rand {
 
 // appendSearchEvent appends the search event of rep, in session (a new
 // random id when ""), as one JSON line to file.
-func appendSearchEvent(file, session string, rep rewrite.Report) error {
+func appendSearchEvent(file, session, category string, rep rewrite.Report) error {
 	if session == "" {
 		session = crand.Text()
 	}
-	b, err := json.Marshal(signals.SearchEvent(session, time.Now().UTC(), "", rep))
+	b, err := json.Marshal(signals.SearchEvent(session, time.Now().UTC(), category, rep))
 	if err != nil {
 		return err
 	}

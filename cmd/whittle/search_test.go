@@ -135,9 +135,9 @@ type exploredReport struct {
 
 // signalLine is what the explore tests read of a search event.
 type signalLine struct {
-	Type, Session, Query string
-	Shown                []string
-	Explored             *struct{ Rank int }
+	Type, Session, Query, Category string
+	Shown                          []string
+	Explored                       *struct{ Rank int }
 }
 
 // readSignals reads every line of a signals file.
@@ -194,7 +194,7 @@ func TestSearchExploreAndSignals(t *testing.T) {
 	for _, h := range rep.Hits {
 		shown = append(shown, h.ID)
 	}
-	if l.Type != "search" || l.Session != "s1" || l.Query != "nylon rain jacket" || !slices.Equal(l.Shown, shown) ||
+	if l.Type != "search" || l.Session != "s1" || l.Query != "nylon rain jacket" || l.Category != "apparel" || !slices.Equal(l.Shown, shown) ||
 		l.Explored == nil || l.Explored.Rank != rep.Explored.Rank {
 		t.Errorf("the line %+v does not match the report %s", l, out)
 	}
@@ -219,6 +219,25 @@ func TestSearchExploreAndSignals(t *testing.T) {
 	code, out, _ = runCLI("", "search", "--index", dir, "--json", "--explore", "1", "12 awg wire")
 	if code != 0 || strings.Contains(out, "explored") || !strings.Contains(out, `"WR-1"`) {
 		t.Errorf("hard only: exit %d\n%s", code, out)
+	}
+}
+
+// --category is the category of a query that names none, logged with
+// the search; an unknown one is refused.
+func TestSearchCategory(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	if code, _, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", dir); code != 0 {
+		t.Fatal(stderr)
+	}
+	log := filepath.Join(t.TempDir(), "signals.jsonl")
+	if code, _, stderr := runCLI("", "search", "--index", dir, "--category", "camera", "--signals", log, "nylon"); code != 0 {
+		t.Fatalf("exit %d: %s", code, stderr)
+	}
+	if ls := readSignals(t, log); len(ls) != 1 || ls[0].Category != "camera" {
+		t.Errorf("logged %+v, want category camera", ls)
+	}
+	if code, _, stderr := runCLI("", "search", "--index", dir, "--category", "cameras", "nylon"); code != 2 || !strings.Contains(stderr, "camera") {
+		t.Errorf("unknown category: exit %d, %q", code, stderr)
 	}
 }
 
