@@ -23,6 +23,7 @@ usage:
   whittle index --catalog FILE       build the search index of a catalog (JSON Lines)
   whittle search [flags] QUERY       search the index, rescuing a query that finds too little
   whittle replay --log FILE          run a query log through whittle and sum up what would change
+  whittle tune --signals FILE        learn strictness and tolerances from shoppers' signals
   whittle serve [--index DIR]        answer parse and rescue as a JSON service on 127.0.0.1
   whittle bench [--products N]       time index building and rescues on a generated catalog
   whittle eval [flags]               measure rescue quality against the blind partial match
@@ -62,6 +63,8 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return searchCmd(args[1:], stdout, stderr)
 	case "replay":
 		return replayCmd(args[1:], stdin, stdout, stderr)
+	case "tune":
+		return tuneCmd(args[1:], stdout, stderr)
 	case "serve":
 		return serveCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
