@@ -228,20 +228,7 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 			d[fCurrency] = p.Price.Currency
 		}
 	}
-	var lab *colour.Lab
-	switch {
-	case p.ColourLab != nil:
-		lab = &colour.Lab{L: p.ColourLab[0], A: p.ColourLab[1], B: p.ColourLab[2]}
-	case p.ColourHex != "":
-		if rgb, err := colour.ParseHex(p.ColourHex); err == nil {
-			l := rgb.Lab()
-			lab = &l
-		}
-	case p.Colour != "":
-		if _, l, ok := lex.ColourNamed(p.Colour); ok {
-			lab = &l
-		}
-	}
+	lab := p.Lab(lex)
 	price := ""
 	if p.Price != nil {
 		price = p.Price.Amount + " " + p.Price.Currency

@@ -652,3 +652,29 @@ func ExampleDemo() {
 	// HG-000003 Yuvrel 8 in non stick skillet (skillet, kitchen) 45.00 USD
 	// 35 mm [zk-3] KV-3191
 }
+
+// A product's Lab comes from colour_lab, else colour_hex, else the
+// lexicon's value for its name. sRGB white (#ffffff) is L* 100, a* and
+// b* 0 under D65 (IEC 61966-2-1 with the CIE 1976 formulas).
+func TestProductLab(t *testing.T) {
+	lex := lexicon.Default()
+	_, navy, _ := lex.ColourNamed("navy")
+	for _, tc := range []struct {
+		name string
+		p    Product
+		want *colour.Lab
+	}{
+		{"lab first", Product{ColourLab: &[3]float64{50, 1, 2}, ColourHex: "#ffffff", Colour: "navy"}, &colour.Lab{L: 50, A: 1, B: 2}},
+		{"then hex", Product{ColourHex: "#ffffff", Colour: "navy"}, &colour.Lab{L: 100}},
+		{"then the name", Product{Colour: "navy"}, &navy},
+		{"a name the lexicon lacks", Product{Colour: "morning fog"}, nil},
+		{"no colour", Product{}, nil},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			got := tc.p.Lab(lex)
+			if (got == nil) != (tc.want == nil) || got != nil && (math.Abs(got.L-tc.want.L) > 1e-3 || math.Abs(got.A-tc.want.A) > 1e-3 || math.Abs(got.B-tc.want.B) > 1e-3) {
+				t.Errorf("got %v, want %v", got, tc.want)
+			}
+		})
+	}
+}

@@ -29,3 +29,10 @@ func ExampleLineError() {
 	fmt.Println(err)
 	// Output: line 1: title: missing; every line needs it
 }
+
+func ExampleProduct_Lab() {
+	p := catalog.Product{ID: "RJ-1", Title: "Ridgeline rain jacket", Colour: "harvest gold", ColourHex: "#dfaa0a"}
+	l := p.Lab(lexicon.Default())
+	fmt.Printf("L* %.0f\n", l.L)
+	// Output: L* 73
+}

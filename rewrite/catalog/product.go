@@ -1,5 +1,10 @@
 package catalog
 
+import (
+	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/colour"
+)
+
 // Product is one line of a catalog. Only ID and Title are required.
 type Product struct {
 	ID          string `json:"id"`
@@ -35,4 +40,24 @@ type Product struct {
 type Price struct {
 	Amount   string `json:"amount"`
 	Currency string `json:"currency"`
+}
+
+// Lab is the product's colour in CIELAB: its colour_lab, else its
+// colour_hex, else the lexicon's value for its colour name; nil when it
+// has none of them.
+func (p *Product) Lab(lex *lexicon.Lexicon) *colour.Lab {
+	switch {
+	case p.ColourLab != nil:
+		return &colour.Lab{L: p.ColourLab[0], A: p.ColourLab[1], B: p.ColourLab[2]}
+	case p.ColourHex != "":
+		if rgb, err := colour.ParseHex(p.ColourHex); err == nil {
+			l := rgb.Lab()
+			return &l
+		}
+	case p.Colour != "":
+		if _, l, ok := lex.ColourNamed(p.Colour); ok {
+			return &l
+		}
+	}
+	return nil
 }
