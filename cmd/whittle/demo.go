@@ -41,8 +41,9 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	n := fs.Int("products", 100000, "size of the generated catalog")
 	dir := fs.String("dir", os.TempDir(), "where to build the temporary index")
 	replayN := fs.Int("replay", demo.ReplayQueries, "length of the longer query log replayed (the shorter is a tenth of it)")
+	signalsN := fs.Int("signals", demo.SignalEvents, "events in the longer signals log tuned on (the shorter has a tenth of them)")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle bench [--products N] [--replay N] [--dir DIR]\n\nBuilds an index of a generated catalog and times rescues of queries that find nothing, beside the blind partial match; then replays query logs of a tenth of --replay and of --replay lines on it.\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle bench [--products N] [--replay N] [--signals N] [--dir DIR]\n\nBuilds an index of a generated catalog and times rescues of queries that find nothing, beside the blind partial match; then replays query logs of a tenth of --replay and of --replay lines on it, and runs whittle tune on one core over invented signals logs of a tenth of --signals and of --signals events.\n\nflags:\n")
 		fs.PrintDefaults()
 	}
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
@@ -53,11 +54,11 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	ctx, stop := interruptible()
 	defer stop()
-	if *replayN < 1 {
+	if *replayN < 1 || *signalsN < 1 {
 		fs.Usage()
 		return 2
 	}
-	r, err := demo.Bench(ctx, stderr, *dir, *n, *replayN)
+	r, err := demo.Bench(ctx, stderr, demo.BenchOptions{Dir: *dir, Products: *n, Replay: *replayN, Signals: *signalsN})
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle bench: %v\n", err)
 		return 1
@@ -70,6 +71,9 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "blind baseline  p50 %.2f ms, p99 %.2f ms\n", ms(r.BaselineP50), ms(r.BaselineP99))
 	for _, rp := range r.Replays {
 		fmt.Fprintf(stdout, "replay          %d queries, %.0f a second, peak memory %.0f MB\n", rp.Queries, rp.PerSecond, rp.PeakMemoryMB)
+	}
+	for _, tf := range r.Tunes {
+		fmt.Fprintf(stdout, "tune            %d events, %.0f a second on one core, peak memory %.0f MB\n", tf.Events, tf.PerSecond, tf.PeakMemoryMB)
 	}
 	return 0
 }

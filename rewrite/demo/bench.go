@@ -2,6 +2,7 @@ package demo
 
 import (
 	"bufio"
+	"cmp"
 	"context"
 	"encoding/json"
 	"fmt"
@@ -21,6 +22,8 @@ import (
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 	"github.com/whittle-search/whittle/rewrite/replay"
+	"github.com/whittle-search/whittle/rewrite/signals"
+	"github.com/whittle-search/whittle/rewrite/tune"
 )
 
 // BenchResult holds the figures of one benchmark run.
@@ -37,7 +40,33 @@ type BenchResult struct {
 	// Replays: a log of a tenth of the replay length, then one of the
 	// whole, run through whittle replay on the same index.
 	Replays []ReplayFigures `json:"replays"`
+	// Tunes: a signals log of a tenth of the signals length, then one of
+	// the whole, run through whittle tune on the same index on one core.
+	Tunes []TuneFigures `json:"tunes"`
 }
+
+// TuneFigures are one tune's: events read, their rate on one core, and
+// the process's peak resident memory during the run.
+type TuneFigures struct {
+	Events       int     `json:"events"`
+	PerSecond    float64 `json:"per_second"`
+	PeakMemoryMB float64 `json:"peak_memory_mb"`
+}
+
+// BenchOptions size a benchmark run. Zero values take the defaults.
+type BenchOptions struct {
+	// Dir is where the temporary files go (default the system's).
+	Dir string
+	// Products is the size of the generated catalog (default 100,000).
+	Products int
+	// Replay is the length of the longer query log (ReplayQueries).
+	Replay int
+	// Signals is the length of the longer signals log (SignalEvents).
+	Signals int
+}
+
+// SignalEvents is the usual length of the benchmark's longer signals log.
+const SignalEvents = 1000000
 
 // ReplayFigures are one replay's: queries, their rate over all workers,
 // and the process's peak resident memory during the replay.
@@ -55,8 +84,10 @@ const ReplayQueries = 100000
 // the build's time and peak memory; then it times the rescue of queries
 // that find nothing as typed, beside the blind partial match on the same
 // queries.
-func Bench(ctx context.Context, w io.Writer, dir string, n, replayN int) (*BenchResult, error) {
-	tmp, err := os.MkdirTemp(dir, "whittle-bench-")
+func Bench(ctx context.Context, w io.Writer, opts BenchOptions) (*BenchResult, error) {
+	n, replayN := cmp.Or(opts.Products, 100000), cmp.Or(opts.Replay, ReplayQueries)
+	signalsN := cmp.Or(opts.Signals, SignalEvents)
+	tmp, err := os.MkdirTemp(cmp.Or(opts.Dir, os.TempDir()), "whittle-bench-")
 	if err != nil {
 		return nil, err
 	}
@@ -68,6 +99,10 @@ func Bench(ctx context.Context, w io.Writer, dir string, n, replayN int) (*Bench
 	logs := []string{filepath.Join(tmp, "log-short.txt"), filepath.Join(tmp, "log.txt")}
 	queries, err := writeCatalog(file, n, map[string]int{logs[0]: max(replayN/10, 1), logs[1]: max(replayN, 1)})
 	if err != nil {
+		return nil, err
+	}
+	sigLogs := []string{filepath.Join(tmp, "signals-short.jsonl"), filepath.Join(tmp, "signals.jsonl")}
+	if err := writeSignalLogs(sigLogs, n, []int{max(signalsN/10, 1), signalsN}); err != nil {
 		return nil, err
 	}
 	runtime.GC()
@@ -127,7 +162,37 @@ func Bench(ctx context.Context, w io.Writer, dir string, n, replayN int) (*Bench
 		}
 		res.Replays = append(res.Replays, *f)
 	}
+	for _, log := range sigLogs {
+		fmt.Fprintf(w, "tuning on %s...\n", filepath.Base(log))
+		f, err := tuneFigures(ctx, eng, log)
+		if err != nil {
+			return nil, err
+		}
+		res.Tunes = append(res.Tunes, *f)
+	}
 	return res, nil
+}
+
+// tuneFigures runs whittle tune over a signals log on the engine with
+// one core, and measures its rate and peak memory.
+func tuneFigures(ctx context.Context, eng *bleveengine.Engine, log string) (*TuneFigures, error) {
+	f, err := os.Open(log)
+	if err != nil {
+		return nil, err
+	}
+	defer f.Close()
+	defer runtime.GOMAXPROCS(runtime.GOMAXPROCS(1))
+	runtime.GC()
+	debug.FreeOSMemory()
+	resetPeak()
+	start := time.Now()
+	t := tune.New(tune.Options{Products: eng})
+	if err := t.Read(ctx, signals.Read(f, log), signals.JoinOptions{}); err != nil {
+		return nil, err
+	}
+	r := t.Report()
+	el := time.Since(start)
+	return &TuneFigures{Events: r.Join.Events, PerSecond: float64(r.Join.Events) / el.Seconds(), PeakMemoryMB: peakMB()}, nil
 }
 
 // replayFigures replays a log on the engine with a worker a CPU, as

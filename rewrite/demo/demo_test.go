@@ -51,7 +51,7 @@ func TestRun(t *testing.T) {
 
 func TestBench(t *testing.T) {
 	var log bytes.Buffer
-	r, err := Bench(context.Background(), &log, t.TempDir(), 1000, 400)
+	r, err := Bench(context.Background(), &log, BenchOptions{Dir: t.TempDir(), Products: 1000, Replay: 400, Signals: 5000})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -61,6 +61,11 @@ func TestBench(t *testing.T) {
 	// Two replays: 400/10 lines, then 400.
 	if len(r.Replays) != 2 || r.Replays[0].Queries != 40 || r.Replays[1].Queries != 400 || r.Replays[1].PerSecond <= 0 {
 		t.Errorf("replays %+v", r.Replays)
+	}
+	// Two tunes: a tenth of 5,000 events, then 5,000; a log is written a
+	// session at a time, so it may run a session over.
+	if len(r.Tunes) != 2 || r.Tunes[0].Events < 500 || r.Tunes[0].Events > 520 || r.Tunes[1].Events < 5000 || r.Tunes[1].PerSecond <= 0 {
+		t.Errorf("tunes %+v", r.Tunes)
 	}
 	// Every benchmark query finds nothing as typed; most are rescued.
 	if r.RescuedShare < 0.5 {
