@@ -124,12 +124,13 @@ func policyCheck(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, "usage: whittle policy check FILE\n")
 		return 2
 	}
-	b, err := os.ReadFile(args[0])
-	if err != nil {
+	if _, err := os.Stat(args[0]); err != nil {
 		fmt.Fprintf(stderr, "whittle policy: %v\n", err)
 		return 1
 	}
-	pol, err := rewrite.ParsePolicy(args[0], string(b), lexicon.Default())
+	// Read as it is used, laid over the built-in policy, so that a
+	// warning about the settled values (the weights' order) shows too.
+	pol, err := rewrite.LoadPolicy(args[0], lexicon.Default())
 	if err != nil {
 		fmt.Fprintf(stderr, "%s\n", renderPolicyError(err))
 		return 1

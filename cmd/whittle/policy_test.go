@@ -16,6 +16,8 @@ func TestPolicyCommands(t *testing.T) {
 	os.WriteFile(good, []byte("[category.apparel]\ncolour_tolerance = 3\n"), 0o644)
 	os.WriteFile(bad, []byte("[category.aparel]\ncolour_tolerence = 3\n"), 0o644)
 	os.WriteFile(risky, []byte("[category.electrical.strictness]\nspec = \"soft\"\n"), 0o644)
+	cheap := filepath.Join(dir, "cheap.toml")
+	os.WriteFile(cheap, []byte("[signals.weights]\npurchase = 0.5\n"), 0o644)
 	for _, tc := range []struct {
 		name     string
 		args     []string
@@ -33,6 +35,7 @@ func TestPolicyCommands(t *testing.T) {
 		{"check good", []string{"policy", "check", good}, 0, "ok", "", "a valid file"},
 		{"check bad", []string{"policy", "check", bad}, 1, "", "bad.toml:1:1", "positions are given"},
 		{"check risky", []string{"policy", "check", risky}, 0, "warning: category.electrical", "", "relaxing a designation warns"},
+		{"check weights", []string{"policy", "check", cheap}, 0, "warning: signals.weights: purchase (0.5) is worth less than add_to_cart (3)", "", "the weights are checked as laid over the built-in ones"},
 		{"check missing", []string{"policy", "check", filepath.Join(dir, "none.toml")}, 1, "", "no such file", "the file must exist"},
 		{"check usage", []string{"policy", "check"}, 2, "", "usage", "a file is needed"},
 		{"no subcommand", []string{"policy"}, 2, "", "usage", "usage"},
