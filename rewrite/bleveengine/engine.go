@@ -323,22 +323,30 @@ func termsOf(c rewrite.Clause) (string, []string, bool) {
 }
 
 // Describe returns what the planner needs of one product to find
-// available ones like it.
+// available ones like it, and what tune needs of a product shown. It
+// reads the stored facts from the snapshot the engine holds, by id,
+// without a search.
 func (e *Engine) Describe(ctx context.Context, id string) (*rewrite.Facts, error) {
-	q := bleve.NewTermQuery(id)
-	q.SetField(fID)
-	req := bleve.NewSearchRequestOptions(q, 1, 0, false)
-	req.Fields = []string{fFacts}
-	res, err := e.idx.SearchInContext(ctx, req)
+	if err := ctx.Err(); err != nil {
+		return nil, err
+	}
+	doc, err := e.sets.reader.Document(id)
 	if err != nil {
 		return nil, err
 	}
-	if len(res.Hits) == 0 {
+	var stored []byte
+	if doc != nil {
+		doc.VisitFields(func(f index.Field) {
+			if f.Name() == fFacts {
+				stored = f.Value()
+			}
+		})
+	}
+	if stored == nil {
 		return nil, fmt.Errorf("bleveengine: no product %q", id)
 	}
-	s, _ := res.Hits[0].Fields[fFacts].(string)
 	var f rewrite.Facts
-	if err := json.Unmarshal([]byte(s), &f); err != nil {
+	if err := json.Unmarshal(stored, &f); err != nil {
 		return nil, fmt.Errorf("bleveengine: product %q: %w", id, err)
 	}
 	return &f, nil

@@ -447,4 +447,8 @@ func TestDescribe(t *testing.T) {
 	if _, err := e.Describe(context.Background(), "NO-SUCH"); err == nil || !strings.Contains(err.Error(), `"NO-SUCH"`) {
 		t.Errorf("unknown id: err = %v", err)
 	}
+	// A palette entry is a document of the index but no product.
+	if f, err := e.Describe(context.Background(), paletteIDPrefix+"harvest gold"); err == nil {
+		t.Errorf("a palette entry described as %+v", f)
+	}
 }

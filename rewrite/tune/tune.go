@@ -36,7 +36,7 @@ const (
 	measureBin   = 0.02 // share of the asked measure
 	measureBins  = 25   // up to 50% off
 	parseCache   = 1 << 16
-	factsCache   = 1 << 17
+	factsCache   = 1 << 15
 	aliasLimit   = 1 << 16
 	sessionLimit = 1 << 12 // searches of one session looked at for aliases
 )
