@@ -191,8 +191,6 @@ func (w *wire) nested(dec *jsontext.Decoder, f int, v any) error {
 	return err
 }
 
-var stringType = reflect.TypeFor[string]()
-
 // value reads the value of a member that holds a string (kind '"') or
 // true or false (kind 't'), or null for none: it returns nil then.
 func (w *wire) value(dec *jsontext.Decoder, field int, kind jsontext.Kind) (jsontext.Value, error) {
@@ -205,7 +203,7 @@ func (w *wire) value(dec *jsontext.Decoder, field int, kind jsontext.Kind) (json
 		return nil, nil
 	case k == kind, kind == 't' && k == 'f':
 	default:
-		t := stringType
+		t := reflect.TypeFor[string]()
 		if kind == 't' {
 			t = reflect.TypeFor[bool]()
 		}
@@ -279,7 +277,7 @@ func (w *wire) shown(dec *jsontext.Decoder) ([]string, error) {
 			return nil, err
 		}
 		if v.Kind() != '"' {
-			return nil, &json.SemanticError{JSONKind: v.Kind(), GoType: stringType, JSONPointer: jsontext.Pointer("/shown").AppendToken(strconv.Itoa(len(ids)))}
+			return nil, &json.SemanticError{JSONKind: v.Kind(), GoType: reflect.TypeFor[string](), JSONPointer: jsontext.Pointer("/shown").AppendToken(strconv.Itoa(len(ids)))}
 		}
 		w.quote = unquote(w.quote[:0], v)
 		ids = append(ids, string(w.quote))
