@@ -26,7 +26,7 @@ type wire struct {
 	Shown                   []string
 	Explored                *Explored
 	Shuffled                bool
-	given                   [fieldCount]bool
+	given, seen             [fieldCount]bool
 	timeBuf, scratch, quote []byte
 }
 
@@ -82,55 +82,118 @@ func (w *wire) UnmarshalJSONFrom(dec *jsontext.Decoder) error {
 	return err
 }
 
-// member reads the value of the member name.
-func (w *wire) member(dec *jsontext.Decoder, name []byte) error {
-	var err error
+// fieldNames are the names of a line's fields, in the order of their
+// indexes in wire.given.
+const fieldNames = "type session time query category relaxations shown explored shuffled product"
+
+// fieldOf returns the index of the field name, or -1.
+func fieldOf(name []byte) int {
 	switch string(name) {
 	case "type":
+		return fType
+	case "session":
+		return fSession
+	case "time":
+		return fTime
+	case "query":
+		return fQuery
+	case "category":
+		return fCategory
+	case "relaxations":
+		return fRelaxations
+	case "shown":
+		return fShown
+	case "explored":
+		return fExplored
+	case "shuffled":
+		return fShuffled
+	case "product":
+		return fProduct
+	}
+	return -1
+}
+
+// fieldName returns the name of field f, for messages.
+func fieldName(f int) string { return strings.Fields(fieldNames)[f] }
+
+// member reads the value of the member name. The decoder does not look
+// for names given twice, which cost a twentieth of reading a line; this
+// does, for the line's own fields, and the nested objects are read by
+// the library, which does.
+func (w *wire) member(dec *jsontext.Decoder, name []byte) error {
+	f := fieldOf(name)
+	switch {
+	case f < 0:
+		return &json.SemanticError{Err: json.ErrUnknownName, JSONPointer: jsontext.Pointer("").AppendToken(string(name))}
+	case w.seen[f]:
+		return &jsontext.SyntacticError{Err: jsontext.ErrDuplicateName, JSONPointer: jsontext.Pointer("").AppendToken(string(name))}
+	}
+	w.seen[f] = true
+	var err error
+	switch f {
+	case fType:
 		var v jsontext.Value
-		if v, err = w.value(dec, fType, "type", '"'); v != nil {
+		if v, err = w.value(dec, fType, '"'); v != nil {
 			w.quote = unquote(w.quote[:0], v)
 			w.Type = typeOf(w.quote)
 		}
-	case "session":
-		w.Session, err = w.text(dec, fSession, "session")
-	case "time":
+	case fSession:
+		w.Session, err = w.text(dec, fSession)
+	case fTime:
 		var v jsontext.Value
-		if v, err = w.value(dec, fTime, "time", '"'); v != nil {
+		if v, err = w.value(dec, fTime, '"'); v != nil {
 			w.timeBuf = unquote(w.timeBuf[:0], v)
 			w.Time = w.timeBuf
 		}
-	case "query":
-		w.Query, err = w.text(dec, fQuery, "query")
-	case "category":
-		w.Category, err = w.text(dec, fCategory, "category")
-	case "product":
-		w.Product, err = w.text(dec, fProduct, "product")
-	case "shuffled":
+	case fQuery:
+		w.Query, err = w.text(dec, fQuery)
+	case fCategory:
+		w.Category, err = w.text(dec, fCategory)
+	case fProduct:
+		w.Product, err = w.text(dec, fProduct)
+	case fShuffled:
 		var v jsontext.Value
-		if v, err = w.value(dec, fShuffled, "shuffled", 't'); v != nil {
+		if v, err = w.value(dec, fShuffled, 't'); v != nil {
 			w.Shuffled = v.Kind() == 't'
 		}
-	case "shown":
+	case fShown:
 		w.given[fShown] = dec.PeekKind() != 'n'
 		w.Shown, err = w.shown(dec)
-	case "relaxations":
-		w.given[fRelaxations] = dec.PeekKind() != 'n'
-		err = json.UnmarshalDecode(dec, &w.Relaxations)
-	case "explored":
-		w.given[fExplored] = dec.PeekKind() != 'n'
-		err = json.UnmarshalDecode(dec, &w.Explored)
-	default:
-		return &json.SemanticError{Err: json.ErrUnknownName, JSONPointer: jsontext.Pointer("").AppendToken(string(name))}
+	case fRelaxations:
+		err = w.nested(dec, fRelaxations, &w.Relaxations)
+	case fExplored:
+		err = w.nested(dec, fExplored, &w.Explored)
 	}
 	return err
 }
 
-var stringType = reflect.TypeFor[string]()
+// nested reads the value of field f into v with the library's
+// Unmarshal, strict as the line is; its errors point into the line.
+func (w *wire) nested(dec *jsontext.Decoder, f int, v any) error {
+	w.given[f] = dec.PeekKind() != 'n'
+	raw, err := dec.ReadValue()
+	if err != nil {
+		return err
+	}
+	err = json.Unmarshal(raw, v, json.RejectUnknownMembers(true))
+	if err == nil {
+		return nil
+	}
+	at := jsontext.Pointer("").AppendToken(fieldName(f))
+	var se *json.SemanticError
+	var te *jsontext.SyntacticError
+	switch {
+	case errors.As(err, &se):
+		se.JSONPointer = at + se.JSONPointer
+	case errors.As(err, &te):
+		te.JSONPointer = at + te.JSONPointer
+	}
+	return err
+}
 
 // value reads the value of a member that holds a string (kind '"') or
 // true or false (kind 't'), or null for none: it returns nil then.
-func (w *wire) value(dec *jsontext.Decoder, field int, name string, kind jsontext.Kind) (jsontext.Value, error) {
+func (w *wire) value(dec *jsontext.Decoder, field int, kind jsontext.Kind) (jsontext.Value, error) {
 	v, err := dec.ReadValue()
 	if err != nil {
 		return nil, err
@@ -140,19 +203,19 @@ func (w *wire) value(dec *jsontext.Decoder, field int, name string, kind jsontex
 		return nil, nil
 	case k == kind, kind == 't' && k == 'f':
 	default:
-		t := stringType
+		t := reflect.TypeFor[string]()
 		if kind == 't' {
 			t = reflect.TypeFor[bool]()
 		}
-		return nil, &json.SemanticError{JSONKind: k, GoType: t, JSONPointer: jsontext.Pointer("").AppendToken(name)}
+		return nil, &json.SemanticError{JSONKind: k, GoType: t, JSONPointer: jsontext.Pointer("").AppendToken(fieldName(field))}
 	}
 	w.given[field] = true
 	return v, nil
 }
 
 // text reads the value of a member that holds a string.
-func (w *wire) text(dec *jsontext.Decoder, field int, name string) (string, error) {
-	v, err := w.value(dec, field, name, '"')
+func (w *wire) text(dec *jsontext.Decoder, field int) (string, error) {
+	v, err := w.value(dec, field, '"')
 	if v == nil {
 		return "", err
 	}
@@ -214,7 +277,7 @@ func (w *wire) shown(dec *jsontext.Decoder) ([]string, error) {
 			return nil, err
 		}
 		if v.Kind() != '"' {
-			return nil, &json.SemanticError{JSONKind: v.Kind(), GoType: stringType, JSONPointer: jsontext.Pointer("/shown").AppendToken(strconv.Itoa(len(ids)))}
+			return nil, &json.SemanticError{JSONKind: v.Kind(), GoType: reflect.TypeFor[string](), JSONPointer: jsontext.Pointer("/shown").AppendToken(strconv.Itoa(len(ids)))}
 		}
 		w.quote = unquote(w.quote[:0], v)
 		ids = append(ids, string(w.quote))

@@ -87,10 +87,10 @@ const badSample = 5
 // is then emitted with its searches in time order (then by file and
 // line), and forgotten. Sessions close in the order of their last event
 // (then their id); those left at the end are emitted in the order of
-// their first event (then their id). So that the sessions emitted do
-// not depend on the order events came in, as long as none is late; a
-// session with no search is not emitted, its interactions being counted
-// in NoSearch.
+// their first event (then their id). Thus the sessions emitted, and
+// their order, do not depend on the order events came in, as long as
+// none is late. A session with no search is not emitted; its
+// interactions are counted in NoSearch.
 //
 // emit owns the session it is given. An error from emit, a malformed
 // line without SkipBad, an error of the events' reader or the end of
@@ -269,7 +269,7 @@ func (j *joiner) sweep() error {
 		if j.latest.Sub(s.key) <= j.horizon {
 			return nil
 		}
-		n, end := s.firstRun(j.window)
+		n, end := firstRun(s.evs, j.window)
 		if end.After(s.key) {
 			// The first run has grown since it was queued.
 			s.key = end
@@ -407,12 +407,6 @@ func (s *openSession) insert(e *Event) {
 	}
 	i := sort.Search(n, func(i int) bool { return before(e, &s.evs[i]) })
 	s.evs = slices.Insert(s.evs, i, *e)
-}
-
-// firstRun returns the length and end of the session's first run of
-// events.
-func (s *openSession) firstRun(window time.Duration) (int, time.Time) {
-	return firstRun(s.evs, window)
 }
 
 // firstRun returns the length and end of the first run of evs: the

@@ -9,7 +9,6 @@ import (
 	"iter"
 	"time"
 
-	"github.com/go-json-experiment/json"
 	"github.com/go-json-experiment/json/jsontext"
 
 	"github.com/whittle-search/whittle/rewrite/catalog"
@@ -151,19 +150,20 @@ func fieldErr(field, format string, args ...any) *fieldError {
 // line.
 type decoder struct {
 	w   wire
-	buf bytes.Buffer
+	rd  bytes.Reader
 	dec *jsontext.Decoder
 }
 
-// unmarshal reads the JSON object on a line into d.w. The decoder reads
-// straight from d.buf, and is made once.
+// unmarshal reads the JSON object on a line into d.w. The decoder is
+// made once and keeps its buffer. (Given a bytes.Buffer it would read
+// from it in place, but take it over, so that the next line's had to be
+// made again.)
 func (d *decoder) unmarshal(b []byte) error {
-	d.buf.Reset()
-	d.buf.Write(b)
+	d.rd.Reset(b)
 	if d.dec == nil {
-		d.dec = jsontext.NewDecoder(&d.buf, json.RejectUnknownMembers(true))
+		d.dec = jsontext.NewDecoder(&d.rd, jsontext.AllowDuplicateNames(true))
 	} else {
-		d.dec.Reset(&d.buf, json.RejectUnknownMembers(true))
+		d.dec.Reset(&d.rd, jsontext.AllowDuplicateNames(true))
 	}
 	d.w.reset()
 	if err := d.w.UnmarshalJSONFrom(d.dec); err != nil {
@@ -180,9 +180,8 @@ func (d *decoder) decode(b []byte) (Event, *fieldError) {
 	if b[0] != '{' {
 		return Event{}, fieldErr("", "not a JSON object")
 	}
-	// Strict: an unknown field is refused, as are (by the library's
-	// defaults) a field given twice, text that is not UTF-8 and anything
-	// after the object.
+	// Strict: an unknown field is refused, as are a field given twice,
+	// text that is not UTF-8 and anything after the object.
 	if err := d.unmarshal(b); err != nil {
 		return Event{}, jsonError(err)
 	}

@@ -361,3 +361,20 @@ func TestWriteRefuses(t *testing.T) {
 		})
 	}
 }
+
+func TestReadTwiceInNested(t *testing.T) {
+	for _, tc := range []struct{ name, line, field, msg, reason string }{
+		{"in a relaxation", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","relaxations":[{"op":"drop","kind":"colour","op":"widen"}]}`,
+			"relaxations", "relaxation 1: op: given twice", "names are unique within each object (RFC 8259, section 4), nested ones too"},
+		{"in explored", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","shown":["A"],"explored":{"rank":1,"rank":1,"relaxations":[{"op":"drop","kind":"colour"}]}}`,
+			"explored.rank", "given twice", "the same in explored"},
+		{"a null field twice", `{"type":"click","session":"s1","time":"2025-03-14T09:00:10Z","product":"SC-2","query":null,"query":null}`,
+			"query", "given twice", "null is a value given too"},
+	} {
+		_, errs := read(t, tc.line, "")
+		var le *LineError
+		if len(errs) != 1 || !errors.As(errs[0], &le) || le.Field != tc.field || le.Msg != tc.msg {
+			t.Errorf("%s: errors %v, want field %q: %q (%s)", tc.name, errs, tc.field, tc.msg, tc.reason)
+		}
+	}
+}
