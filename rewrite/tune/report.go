@@ -317,9 +317,19 @@ func (t *Tuner) tolerance(cat string, kind parser.Kind, ax axis, width, current 
 		tol.verdict = few
 		tol.Reason = fmt.Sprintf("too few products shown in any one band (want %d searches and products): the current %s stays", t.sig.MinSearches, unit(current))
 		return tol
-	case stop >= 0:
+	case stop == 0:
+		tol.Recommended = 0
+		tol.Reason = fmt.Sprintf("engagement falls clearly below %s of exact matches even in the nearest band: only what was asked holds", pct(t.sig.KeepShare))
+	case stop > 0 && stop <= reach+width/2:
 		tol.Recommended = stop
 		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches up to %s and falls clearly below it from there", pct(t.sig.KeepShare), unit(stop))
+	case stop > 0 && reach == 0:
+		tol.verdict = unclear
+		tol.Reason = fmt.Sprintf("engagement falls clearly below %s of exact matches from %s, and no nearer band has enough products shown to say where it holds: the current %s stays", pct(t.sig.KeepShare), unit(stop), unit(current))
+		return tol
+	case stop > 0:
+		tol.Recommended = reach
+		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches up to %s and falls clearly below it from %s; between them too few products were shown to say, so the nearer bound is taken", pct(t.sig.KeepShare), unit(reach), unit(stop))
 	default:
 		tol.Recommended = reach
 		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches as far as products were shown, %s; shoppers may accept more", pct(t.sig.KeepShare), unit(reach))
