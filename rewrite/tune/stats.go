@@ -25,12 +25,10 @@ type tally struct {
 	searches int
 	shown    float64
 	worth    [maxRank]float64
-	rep      []repTally
-}
-
-type repTally struct {
-	shown float64
-	worth [maxRank]float64
+	// repShown and repWorth are the replicates' sums; repWorth is made
+	// only once something is worth anything, as most bands earn little.
+	repShown []float64
+	repWorth [][maxRank]float64
 }
 
 // slot is one product shown: its rank (from 1) and the raw worth of the
@@ -46,8 +44,8 @@ func (t *tally) add(slots []slot, w *[replicates]uint8) {
 	if len(slots) == 0 {
 		return
 	}
-	if t.rep == nil {
-		t.rep = make([]repTally, replicates)
+	if t.repShown == nil {
+		t.repShown = make([]float64, replicates)
 	}
 	t.searches++
 	n := float64(len(slots))
@@ -72,15 +70,22 @@ func (t *tally) add(slots []slot, w *[replicates]uint8) {
 		}
 		nz[j] += s.worth
 	}
-	for b := range t.rep {
-		k := float64(w[b])
+	for b, k := range w {
+		t.repShown[b] += float64(k) * n
+	}
+	if m == 0 {
+		return
+	}
+	if t.repWorth == nil {
+		t.repWorth = make([][maxRank]float64, replicates)
+	}
+	for b, k := range w {
 		if k == 0 {
 			continue
 		}
-		r := &t.rep[b]
-		r.shown += k * n
+		r := &t.repWorth[b]
 		for j := range m {
-			r.worth[at[j]] += k * nz[j]
+			r[at[j]] += float64(k) * nz[j]
 		}
 	}
 }
@@ -130,15 +135,15 @@ type Figure struct {
 // figure compares t with the exact matches' tally.
 func figure(t, exact *tally, inv *[maxRank]float64) Figure {
 	f := Figure{Searches: t.searches, Shown: int(t.shown), Engagement: mean(t.shown, &t.worth, inv), Ratio: math.NaN(), Low: math.NaN(), High: math.NaN()}
-	if exact == nil || t.rep == nil || exact.rep == nil {
+	if exact == nil || t.repShown == nil || exact.repShown == nil {
 		return f
 	}
 	if e := mean(exact.shown, &exact.worth, inv); e > 0 && !math.IsNaN(f.Engagement) {
 		f.Ratio = f.Engagement / e
 	}
 	rs := make([]float64, 0, replicates)
-	for b := range t.rep {
-		g, e := mean(t.rep[b].shown, &t.rep[b].worth, inv), mean(exact.rep[b].shown, &exact.rep[b].worth, inv)
+	for b := range replicates {
+		g, e := repMean(t, b, inv), repMean(exact, b, inv)
 		if e > 0 && !math.IsNaN(g) {
 			rs = append(rs, g/e)
 		}
@@ -148,6 +153,16 @@ func figure(t, exact *tally, inv *[maxRank]float64) Figure {
 		f.Low, f.High = quantile(rs, 0.025), quantile(rs, 0.975)
 	}
 	return f
+}
+
+// repMean is replicate b's mean worth a product shown.
+func repMean(t *tally, b int, inv *[maxRank]float64) float64 {
+	var zero [maxRank]float64
+	worth := &zero
+	if t.repWorth != nil {
+		worth = &t.repWorth[b]
+	}
+	return mean(t.repShown[b], worth, inv)
 }
 
 // quantile is the q-quantile of sorted xs, interpolated between ranks.
@@ -160,16 +175,26 @@ func quantile(xs []float64, q float64) float64 {
 	return xs[i] + (pos-float64(i))*(xs[i+1]-xs[i])
 }
 
-// poissonCDF is P(X ≤ k) for X ~ Poisson(1), k = 0..7, scaled to 1<<16.
-var poissonCDF = func() [8]uint32 {
-	var out [8]uint32
+// poisson maps 16 random bits to a Poisson(1) draw by inversion of its
+// distribution function, P(X ≤ k) = e⁻¹ Σ 1/i! for i ≤ k: the draw for u
+// is the least k with u < 2¹⁶ P(X ≤ k).
+var poisson = func() *[1 << 16]uint8 {
+	var cdf [8]float64
 	p, c := math.Exp(-1), 0.0
-	for k := range out {
+	for k := range cdf {
 		c += p
-		out[k] = uint32(math.Round(c * (1 << 16)))
+		cdf[k] = c * (1 << 16)
 		p /= float64(k + 1)
 	}
-	return out
+	var t [1 << 16]uint8
+	k := 0
+	for u := range t {
+		for k < 7 && float64(u) >= cdf[k] {
+			k++
+		}
+		t[u] = uint8(k)
+	}
+	return &t
 }()
 
 // draws fills w with Poisson(1) draws from a splitmix64 stream seeded by
@@ -184,12 +209,7 @@ func draws(seed uint64, w *[replicates]uint8) {
 		z = (z ^ (z >> 27)) * 0x94d049bb133111eb
 		z ^= z >> 31
 		for j := 0; j < 4 && i+j < replicates; j++ {
-			u := uint32(z>>(16*j)) & 0xffff
-			k := uint8(0)
-			for k < 7 && u >= poissonCDF[k] {
-				k++
-			}
-			w[i+j] = k
+			w[i+j] = poisson[uint16(z>>(16*j))]
 		}
 	}
 }

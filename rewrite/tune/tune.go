@@ -35,8 +35,8 @@ const (
 	colourBins   = 30   // up to ΔE00 30; further counts in the last bin
 	measureBin   = 0.02 // share of the asked measure
 	measureBins  = 25   // up to 50% off
-	parseCache   = 1 << 16
-	factsCache   = 1 << 15
+	parseCache   = 1 << 13
+	factsCache   = 1 << 17
 	aliasLimit   = 1 << 16
 	sessionLimit = 1 << 12 // searches of one session looked at for aliases
 )
