@@ -28,7 +28,7 @@ func TestTourHasEveryStop(t *testing.T) {
 // stop shows what it says it shows.
 func TestRun(t *testing.T) {
 	var out bytes.Buffer
-	if err := Run(context.Background(), &out, Options{Dir: t.TempDir(), Products: 3000}); err != nil {
+	if err := Run(context.Background(), &out, Options{Dir: t.TempDir(), Products: 3000, Events: 100000}); err != nil {
 		t.Fatal(err)
 	}
 	text := out.String()
@@ -42,6 +42,8 @@ func TestRun(t *testing.T) {
 		", reading “",                       // the typo replaced, the query read again
 		"is unavailable. Showing available", // alternatives
 		"blind partial match",
+		"learning strictness from shoppers", // whittle tune
+		"category.apparel.strictness.size: soft → hard", // what the invented shoppers show
 	} {
 		if !strings.Contains(text, want) {
 			t.Errorf("the demo output lacks %q:\n%s", want, text)

@@ -2,6 +2,7 @@ package demo
 
 import (
 	"context"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -14,6 +15,8 @@ import (
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/signals"
+	"github.com/whittle-search/whittle/rewrite/tune"
 )
 
 // Options tune the demo. The zero value is ready to use.
@@ -27,6 +30,9 @@ type Options struct {
 	Rebuild bool
 	// Hits is how many hits each stop shows (default 3).
 	Hits int
+	// Events is the length of the invented signals log the last stop
+	// learns from (default 1,000,000).
+	Events int
 }
 
 // MinProducts is the smallest generated catalog the demo and the
@@ -43,6 +49,9 @@ func (o *Options) defaults() {
 	}
 	if o.Hits <= 0 {
 		o.Hits = 3
+	}
+	if o.Events <= 0 {
+		o.Events = 1000000
 	}
 	if o.Dir == "" {
 		dir, err := os.UserCacheDir()
@@ -74,10 +83,14 @@ func Run(ctx context.Context, w io.Writer, opts Options) error {
 	}
 	defer eng.Close()
 	rw := rewrite.New(eng, nil)
-	for i, s := range Tour(products, lex) {
+	stops := Tour(products, lex)
+	for i, s := range stops {
 		if err := stop(ctx, w, i+1, s, rw, eng, opts.Hits); err != nil {
 			return err
 		}
+	}
+	if err := learn(ctx, w, len(stops)+1, products, eng, opts.Events); err != nil {
+		return err
 	}
 	fmt.Fprintf(w, "The tour took %.1fs. Try your own: whittle search --index %s QUERY\n", time.Since(start).Seconds(), idxDir)
 	return nil
@@ -126,6 +139,63 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 	fmt.Fprintln(w)
 	return nil
 }
+
+// learn is the tour's last stop: whittle tune on an invented signals
+// log of the demo shop, made by a loose policy (sizes dropped, colours
+// widened to ΔE00 14), whose shoppers never take another size and accept
+// a colour within ΔE00 6. The policy in force is the built-in one with
+// apparel's size soft and its colour tolerance 14.
+func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *bleveengine.Engine, events int) error {
+	user, err := rewrite.ParsePolicy("loose.toml", loosePolicy, lexicon.Default())
+	if err != nil {
+		return err
+	}
+	t := tune.New(tune.Options{Policy: rewrite.DefaultPolicy().Overlay(user), Products: eng})
+	var read error
+	log := func(yield func(signals.Event, error) bool) {
+		stop := errors.New("stop")
+		if _, err := Signals(func(e signals.Event) error {
+			if !yield(e, nil) {
+				return stop
+			}
+			return nil
+		}, ps, events, 1); err != nil && err != stop {
+			read = err
+		}
+	}
+	if err := t.Read(ctx, log, signals.JoinOptions{}); err != nil {
+		return err
+	}
+	if read != nil {
+		return read
+	}
+	r := t.Report()
+	fmt.Fprintf(w, "%d. learning strictness from shoppers (whittle tune)\n", n)
+	fmt.Fprintf(w, "   an invented log of %d events: %d searches in %d sessions, made by a loose policy\n", r.Join.Events, r.Stats.Searches, r.Stats.Sessions)
+	fmt.Fprintf(w, "   (sizes dropped and colours widened to ΔE00 14 everywhere; a twentieth of the searches shuffled)\n")
+	fmt.Fprintf(w, "   its invented shoppers never take another size and accept a colour within ΔE00 %g\n", demoColourLimit)
+	if r.Bias.Estimated {
+		fmt.Fprintf(w, "   position bias fitted from the shuffled searches: η = %.2f\n", r.Bias.Eta)
+	}
+	fmt.Fprintf(w, "   changes it proposes, not applied (review them, then lay them over the policy with --policy):\n")
+	for _, c := range r.Changes {
+		fmt.Fprintf(w, "     %s: %s → %s\n", c.Key, c.From, c.To)
+	}
+	if len(r.Changes) == 0 {
+		fmt.Fprintf(w, "     none\n")
+	}
+	fmt.Fprintln(w)
+	return nil
+}
+
+// loosePolicy is the policy the demo's signals log is made under.
+const loosePolicy = `
+[category.apparel]
+colour_tolerance = 14.0
+
+[category.apparel.strictness]
+size = "soft"
+`
 
 // printHit writes one hit of the tour: its id and title, then its colour
 // and price where it has them.

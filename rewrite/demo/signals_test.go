@@ -16,20 +16,6 @@ import (
 	"github.com/whittle-search/whittle/rewrite/tune"
 )
 
-// loosePolicy is the policy the invented log was made under: sizes may
-// be dropped and colours widened far.
-const loosePolicy = `
-[category.apparel]
-colour_tolerance = 14.0
-
-[category.apparel.strictness]
-size = "soft"
-
-# The log is small for a shop: a quarter of the usual searches a band.
-[signals]
-min_searches = 25
-`
-
 // The demo's signals log goes through the whole of whittle tune (the
 // JSON Lines, the join, the index's facts) and its invented shoppers'
 // habits, set by the generator, come back out: in apparel they never

@@ -181,10 +181,18 @@ func (t *Tuner) category(name string, inv *[maxRank]float64) (Category, []Change
 	}
 	for _, x := range []struct {
 		tol  *Tolerance
+		kind parser.Kind
 		name string
 		dst  **float64
-	}{{cr.Colour, "colour_tolerance", &set.ColourTolerance}, {cr.Measure, "measure_tolerance", &set.MeasureTolerance}} {
+	}{{cr.Colour, parser.KindColour, "colour_tolerance", &set.ColourTolerance}, {cr.Measure, parser.KindMeasure, "measure_tolerance", &set.MeasureTolerance}} {
 		if x.tol == nil || x.tol.Recommended == x.tol.Current || name == "" {
+			continue
+		}
+		// A kind that stays hard is never widened, so its tolerance is
+		// not used: no change is proposed for it.
+		if strict, ok := recommended(cr.Kinds, x.kind); !ok && cur.Strictness[x.kind] == parser.Hard || ok && strict == parser.Hard {
+			x.tol.Reason += fmt.Sprintf("; but %s stays hard here, so its tolerance is not used and is left as it is", x.kind)
+			x.tol.Recommended = x.tol.Current
 			continue
 		}
 		v := x.tol.Recommended
@@ -198,6 +206,16 @@ func (t *Tuner) category(name string, inv *[maxRank]float64) (Category, []Change
 		}
 	}
 	return cr, changes, set
+}
+
+// recommended is the strictness recommended for kind k, if it has a row.
+func recommended(ks []Kind, k parser.Kind) (parser.Strictness, bool) {
+	for _, r := range ks {
+		if r.Kind == k {
+			return r.Recommended, true
+		}
+	}
+	return 0, false
 }
 
 // kind weighs the evidence on one kind and recommends its strictness.
@@ -282,17 +300,32 @@ func (t *Tuner) tolerance(cat string, kind parser.Kind, ax axis, width, current 
 	}
 	tol := &Tolerance{Bins: []Bin{}, Current: current, Recommended: current}
 	reach, stop, judged := 0.0, -1.0, false
+	// Thin bands are pooled with the next ones until the pool has enough
+	// searches and products to judge: a band as wide as the data need.
+	pool, from := (*tally)(nil), 0
 	for b := range n {
-		g := t.groups[groupKey{category: cat, kind: kind, axis: ax, bin: b}]
-		if g == nil {
+		if g := t.groups[groupKey{category: cat, kind: kind, axis: ax, bin: b}]; g != nil {
+			if pool == nil {
+				pool = &tally{}
+			}
+			pool.merge(g)
+		}
+		if pool == nil {
+			from = b + 1
 			continue
 		}
-		f := figure(g, exact, inv)
-		bin := Bin{From: round(float64(b) * width), To: round(float64(b+1) * width), Figure: f}
-		if b == n-1 {
+		last := b == n-1
+		enough := pool.searches >= t.sig.MinSearches && int(pool.shown) >= t.sig.MinSearches
+		if !enough && !last {
+			continue
+		}
+		f := figure(pool, exact, inv)
+		bin := Bin{From: round(float64(from) * width), To: round(float64(b+1) * width), Figure: f}
+		if last {
 			bin.To = math.Inf(1)
 		}
 		tol.Bins = append(tol.Bins, bin)
+		pool, from = nil, b+1
 		if stop >= 0 {
 			continue
 		}
@@ -328,11 +361,15 @@ func (t *Tuner) tolerance(cat string, kind parser.Kind, ax axis, width, current 
 		tol.Reason = fmt.Sprintf("engagement falls clearly below %s of exact matches from %s, and no nearer band has enough products shown to say where it holds: the current %s stays", pct(t.sig.KeepShare), unit(stop), unit(current))
 		return tol
 	case stop > 0:
-		tol.Recommended = reach
-		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches up to %s and falls clearly below it from %s; between them too few products were shown to say, so the nearer bound is taken", pct(t.sig.KeepShare), unit(reach), unit(stop))
+		// Between reach and stop the data cannot say: a setting there
+		// stays, one outside is brought to the nearer end.
+		tol.Recommended = min(max(current, reach), stop)
+		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches up to %s and falls clearly below it from %s; between them too few products were shown to say, so %s", pct(t.sig.KeepShare), unit(reach), unit(stop), settle(current, tol.Recommended, unit))
 	default:
-		tol.Recommended = reach
-		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches as far as products were shown, %s; shoppers may accept more", pct(t.sig.KeepShare), unit(reach))
+		// Nothing shown fell below the share: a wider setting is not
+		// contradicted, a narrower one is raised to what held.
+		tol.Recommended = max(current, reach)
+		tol.Reason = fmt.Sprintf("engagement stays within %s of exact matches as far as products were shown, %s, so %s", pct(t.sig.KeepShare), unit(reach), settle(current, tol.Recommended, unit))
 	}
 	tol.verdict = accepted
 	if tol.Recommended == 0 {
@@ -342,6 +379,14 @@ func (t *Tuner) tolerance(cat string, kind parser.Kind, ax axis, width, current 
 		tol.Recommended = current
 	}
 	return tol
+}
+
+// settle says what becomes of the current setting.
+func settle(current, recommended float64, unit func(float64) string) string {
+	if current == recommended {
+		return fmt.Sprintf("the current %s stays", unit(current))
+	}
+	return fmt.Sprintf("%s, not %s", unit(recommended), unit(current))
 }
 
 func round(x float64) float64 { return math.Round(x*1e6) / 1e6 }

@@ -90,6 +90,35 @@ func (t *tally) add(slots []slot, w *[replicates]uint8) {
 	}
 }
 
+// merge adds o's sums to t, to judge two bands as one. A search in both
+// counts twice in searches; the products shown and their worth are
+// exact.
+func (t *tally) merge(o *tally) {
+	t.searches += o.searches
+	t.shown += o.shown
+	for i := range t.worth {
+		t.worth[i] += o.worth[i]
+	}
+	if o.repShown != nil {
+		if t.repShown == nil {
+			t.repShown = make([]float64, replicates)
+		}
+		for b, v := range o.repShown {
+			t.repShown[b] += v
+		}
+	}
+	if o.repWorth != nil {
+		if t.repWorth == nil {
+			t.repWorth = make([][maxRank]float64, replicates)
+		}
+		for b := range o.repWorth {
+			for i, v := range o.repWorth[b] {
+				t.repWorth[b][i] += v
+			}
+		}
+	}
+}
+
 // propensities returns rank^η for ranks 1 to maxRank: the inverse of the
 // chance (1/rank)^η that a shopper looks at a product at that rank
 // (Joachims, Swaminathan and Schnabel, "Unbiased Learning-to-Rank with
