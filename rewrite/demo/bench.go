@@ -5,6 +5,7 @@ import (
 	"cmp"
 	"context"
 	"encoding/json"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -102,7 +103,11 @@ func Bench(ctx context.Context, w io.Writer, opts BenchOptions) (*BenchResult, e
 		return nil, err
 	}
 	sigLogs := []string{filepath.Join(tmp, "signals-short.jsonl"), filepath.Join(tmp, "signals.jsonl")}
-	if err := writeSignalLogs(sigLogs, n, []int{max(signalsN/10, 1), signalsN}); err != nil {
+	switch err := writeSignalLogs(sigLogs, n, []int{max(signalsN/10, 1), signalsN}); {
+	case errors.Is(err, ErrSmallCatalog):
+		fmt.Fprintf(w, "%d products are too few for a signals log; tune is not timed\n", n)
+		sigLogs = nil
+	case err != nil:
 		return nil, err
 	}
 	runtime.GC()

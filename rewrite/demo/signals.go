@@ -3,6 +3,7 @@ package demo
 import (
 	"bufio"
 	"cmp"
+	"errors"
 	"fmt"
 	"io"
 	"math"
@@ -18,6 +19,10 @@ import (
 	"github.com/whittle-search/whittle/rewrite/catalog"
 	"github.com/whittle-search/whittle/rewrite/signals"
 )
+
+// ErrSmallCatalog is Signals' error for a catalog with no product type
+// of ten products, one of them with a colour: no search could be made.
+var ErrSmallCatalog = errors.New("demo: no product type has ten products with a colour: too small a catalog for a signals log")
 
 // The demo shop's invented shoppers, whose habits a signals log made by
 // Signals follows and whittle tune should find again: they accept a
@@ -43,6 +48,9 @@ const (
 // per session are. It returns the number of events written.
 func Signals(emit func(signals.Event) error, ps []catalog.Product, n int, seed uint64) (int, error) {
 	g := newSignalGen(ps, seed)
+	if !g.searchable() {
+		return 0, ErrSmallCatalog
+	}
 	written := 0
 	for s := 0; written < n; s++ {
 		evs := g.session(s)
@@ -168,6 +176,22 @@ func (g *signalGen) session(n int) []signals.Event {
 		at = at.Add(time.Duration(30+g.rng.IntN(90)) * time.Second)
 	}
 	return out
+}
+
+// searchable says whether some search can be made: some product type
+// has enough products to show, one of them with a colour.
+func (g *signalGen) searchable() bool {
+	for _, is := range g.byType {
+		if len(is) < demoShown {
+			continue
+		}
+		for _, i := range is {
+			if g.labs[i] != nil {
+				return true
+			}
+		}
+	}
+	return false
 }
 
 // colourAsked is the colour query q asks for, as whittle reads it, or

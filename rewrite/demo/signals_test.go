@@ -78,3 +78,11 @@ func TestSignalsRecovered(t *testing.T) {
 		t.Errorf("apparel colour tolerance %+v, want %g ± 2", apparel.Colour, demoColourLimit)
 	}
 }
+
+// A catalog too small to show ten products of a type gets an error, not
+// an endless search for a session to write.
+func TestSignalsTooSmall(t *testing.T) {
+	if _, err := Signals(func(signals.Event) error { return nil }, catalog.Demo(5, 1), 100, 1); err == nil {
+		t.Error("five products made a log")
+	}
+}

@@ -104,3 +104,17 @@ func ExampleDiff() {
 	// - size = "soft"
 	// + size = "hard"
 }
+
+func ExampleTuner_Read() {
+	log := `{"type": "search", "session": "s1", "time": "2026-11-02T09:00:00Z", "query": "rain jacket", "category": "apparel", "shown": ["RJ-1", "RJ-2"]}
+{"type": "click", "session": "s1", "time": "2026-11-02T09:00:20Z", "product": "RJ-2"}
+{"type": "purchase", "session": "s1", "time": "2026-11-02T09:03:00Z", "product": "RJ-2"}
+`
+	t := tune.New(tune.Options{})
+	if err := t.Read(context.Background(), signals.Read(strings.NewReader(log), "signals.jsonl"), signals.JoinOptions{}); err != nil {
+		panic(err)
+	}
+	j := t.Report().Join
+	fmt.Println(j.Events, j.Searches, j.Joined)
+	// Output: 3 1 2
+}
