@@ -16,8 +16,9 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	dir := fs.String("dir", "", "where the demo index lives (default: the user's cache directory)")
 	n := fs.Int("products", 20000, "size of the generated demo catalog")
 	rebuild := fs.Bool("rebuild", false, "build the demo index again even if one is there")
+	signalsFile := fs.String("signals", "", "also write the invented signals log the last stop learns from to `FILE`, to try whittle tune on")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle demo [--dir DIR] [--products N] [--rebuild]\n\nGenerates an invented general store's catalog, indexes it once, and tours what whittle does.\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle demo [--dir DIR] [--products N] [--rebuild] [--signals FILE]\n\nGenerates an invented general store's catalog, indexes it once, tours what whittle does,\nand ends with whittle tune on an invented log of shoppers' signals.\n\nflags:\n")
 		fs.PrintDefaults()
 	}
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
@@ -28,7 +29,7 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	ctx, stop := interruptible()
 	defer stop()
-	if err := demo.Run(ctx, stdout, demo.Options{Dir: *dir, Products: *n, Rebuild: *rebuild}); err != nil {
+	if err := demo.Run(ctx, stdout, demo.Options{Dir: *dir, Products: *n, Rebuild: *rebuild, Signals: *signalsFile}); err != nil {
 		fmt.Fprintf(stderr, "whittle demo: %v\n", err)
 		return 1
 	}

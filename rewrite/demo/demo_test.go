@@ -3,6 +3,8 @@ package demo
 import (
 	"bytes"
 	"context"
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 	"time"
@@ -10,6 +12,7 @@ import (
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/signals"
 )
 
 func TestTourHasEveryStop(t *testing.T) {
@@ -28,10 +31,27 @@ func TestTourHasEveryStop(t *testing.T) {
 // stop shows what it says it shows.
 func TestRun(t *testing.T) {
 	var out bytes.Buffer
-	if err := Run(context.Background(), &out, Options{Dir: t.TempDir(), Products: 3000, Events: 100000}); err != nil {
+	log := filepath.Join(t.TempDir(), "signals.jsonl")
+	if err := Run(context.Background(), &out, Options{Dir: t.TempDir(), Products: 3000, Events: 100000, Signals: log}); err != nil {
 		t.Fatal(err)
 	}
 	text := out.String()
+	// The log the last stop learned from is written, and reads back.
+	f, err := os.Open(log)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	n := 0
+	for _, err := range signals.Read(f, log) {
+		if err != nil {
+			t.Fatalf("the written log: %v", err)
+		}
+		n++
+	}
+	if n < 100000 || !strings.Contains(text, "whittle tune --signals "+log) {
+		t.Errorf("%d events in the written log, want 100,000 or a few more; the output names it: %v", n, strings.Contains(text, log))
+	}
 	for _, want := range []string{
 		"exact matches",                     // the exact hit
 		"in colours close to",               // the colour widened

@@ -1,6 +1,7 @@
 package demo
 
 import (
+	"bufio"
 	"context"
 	"errors"
 	"fmt"
@@ -33,6 +34,9 @@ type Options struct {
 	// Events is the length of the invented signals log the last stop
 	// learns from (default 1,000,000).
 	Events int
+	// Signals, when set, names a file the invented signals log is also
+	// written to, to try whittle tune on.
+	Signals string
 }
 
 // MinProducts is the smallest generated catalog the demo and the
@@ -89,7 +93,7 @@ func Run(ctx context.Context, w io.Writer, opts Options) error {
 			return err
 		}
 	}
-	if err := learn(ctx, w, len(stops)+1, products, eng, opts.Events); err != nil {
+	if err := learn(ctx, w, len(stops)+1, products, eng, idxDir, opts); err != nil {
 		return err
 	}
 	fmt.Fprintf(w, "The tour took %.1fs. Try your own: whittle search --index %s QUERY\n", time.Since(start).Seconds(), idxDir)
@@ -145,21 +149,35 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 // widened to ΔE00 14), whose shoppers never take another size and accept
 // a colour within ΔE00 6. The policy in force is the built-in one with
 // apparel's size soft and its colour tolerance 14.
-func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *bleveengine.Engine, events int) error {
+func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *bleveengine.Engine, idxDir string, opts Options) error {
 	user, err := rewrite.ParsePolicy("loose.toml", loosePolicy, lexicon.Default())
 	if err != nil {
 		return err
 	}
 	t := tune.New(tune.Options{Policy: rewrite.DefaultPolicy().Overlay(user), Products: eng})
+	save := func(signals.Event) error { return nil }
+	var file *os.File
+	var buf *bufio.Writer
+	if opts.Signals != "" {
+		if file, err = os.Create(opts.Signals); err != nil {
+			return err
+		}
+		defer file.Close()
+		buf = bufio.NewWriter(file)
+		save = signals.NewWriter(buf).Write
+	}
 	var read error
 	log := func(yield func(signals.Event, error) bool) {
 		stop := errors.New("stop")
 		if _, err := Signals(func(e signals.Event) error {
+			if err := save(e); err != nil {
+				return err
+			}
 			if !yield(e, nil) {
 				return stop
 			}
 			return nil
-		}, ps, events, 1); err != nil && err != stop {
+		}, ps, opts.Events, 1); err != nil && err != stop {
 			read = err
 		}
 	}
@@ -168,6 +186,14 @@ func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *b
 	}
 	if read != nil {
 		return read
+	}
+	if buf != nil {
+		if err := buf.Flush(); err != nil {
+			return err
+		}
+		if err := file.Close(); err != nil {
+			return err
+		}
 	}
 	r := t.Report()
 	fmt.Fprintf(w, "%d. learning strictness from shoppers (whittle tune)\n", n)
@@ -183,6 +209,9 @@ func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *b
 	}
 	if len(r.Changes) == 0 {
 		fmt.Fprintf(w, "     none\n")
+	}
+	if opts.Signals != "" {
+		fmt.Fprintf(w, "   the log is in %s; tune it against the built-in policy with:\n     whittle tune --signals %s --index %s\n", opts.Signals, opts.Signals, idxDir)
 	}
 	fmt.Fprintln(w)
 	return nil
