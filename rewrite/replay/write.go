@@ -3,6 +3,7 @@ package replay
 import (
 	"encoding/csv"
 	"fmt"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 	"io"
 	"strconv"
 	"strings"
@@ -11,60 +12,49 @@ import (
 
 // WriteText writes a report for a person at a terminal.
 func WriteText(w io.Writer, r Report) error {
-	p := &printer{w: w}
-	p.f("%d queries, %d searches", r.All.Queries, r.All.Searches)
+	p := &textout.Printer{W: w}
+	p.F("%d queries, %d searches", r.All.Queries, r.All.Searches)
 	if r.SkippedLines > 0 {
-		p.f(" (%d malformed lines skipped)", r.SkippedLines)
+		p.F(" (%d malformed lines skipped)", r.SkippedLines)
 	}
-	p.f("\n\n")
-	p.f("finding nothing            queries          searches\n")
-	p.f("  as typed            %7d %6.1f%%  %8d %6.1f%%\n", r.ZeroBefore.Queries, 100*r.RateBefore.Queries, r.ZeroBefore.Searches, 100*r.RateBefore.Searches)
-	p.f("  after rescue        %7d %6.1f%%  %8d %6.1f%%\n", r.ZeroAfter.Queries, 100*r.RateAfter.Queries, r.ZeroAfter.Searches, 100*r.RateAfter.Searches)
-	p.f("  rescued             %7d          %8d\n", r.Rescued.Queries, r.Rescued.Searches)
+	p.F("\n\n")
+	p.F("finding nothing            queries          searches\n")
+	p.F("  as typed            %7d %6.1f%%  %8d %6.1f%%\n", r.ZeroBefore.Queries, 100*r.RateBefore.Queries, r.ZeroBefore.Searches, 100*r.RateBefore.Searches)
+	p.F("  after rescue        %7d %6.1f%%  %8d %6.1f%%\n", r.ZeroAfter.Queries, 100*r.RateAfter.Queries, r.ZeroAfter.Searches, 100*r.RateAfter.Searches)
+	p.F("  rescued             %7d          %8d\n", r.Rescued.Queries, r.Rescued.Searches)
 	if len(r.Changes) > 0 {
-		p.f("\nrelaxations used (queries, searches)\n")
+		p.F("\nrelaxations used (queries, searches)\n")
 		for _, c := range r.Changes {
-			p.f("  %-8s %-16s %7d %8d\n", c.Op, c.Kind, c.Queries, c.Searches)
+			p.F("  %-8s %-16s %7d %8d\n", c.Op, c.Kind, c.Queries, c.Searches)
 		}
 	}
 	if len(r.Unmet) > 0 || r.UnmetOther.Queries > 0 {
-		p.f("\nleft with nothing, by the hard constraint nothing carries (queries, searches)\n")
+		p.F("\nleft with nothing, by the hard constraint nothing carries (queries, searches)\n")
 		for _, u := range r.Unmet[:min(len(r.Unmet), 15)] {
-			p.f("  %-32s %7d %8d\n", u.Constraint, u.Queries, u.Searches)
+			p.F("  %-32s %7d %8d\n", u.Constraint, u.Queries, u.Searches)
 		}
 		if n := len(r.Unmet) - 15; n > 0 {
-			p.f("  ... and %d more constraints\n", n)
+			p.F("  ... and %d more constraints\n", n)
 		}
 		if r.UnmetOther.Queries > 0 {
-			p.f("  %-32s %7d %8d\n", "(no single hard constraint)", r.UnmetOther.Queries, r.UnmetOther.Searches)
+			p.F("  %-32s %7d %8d\n", "(no single hard constraint)", r.UnmetOther.Queries, r.UnmetOther.Searches)
 		}
 	}
 	if len(r.Alerts) > 0 {
-		p.f("\nfrequent queries that find nothing as typed (a head query going empty is\nusually a catalog or publishing fault)\n")
+		p.F("\nfrequent queries that find nothing as typed (a head query going empty is\nusually a catalog or publishing fault)\n")
 		for _, a := range r.Alerts {
 			bound := ""
 			if a.Error > 0 {
 				bound = fmt.Sprintf(" (at most %d over)", a.Error)
 			}
-			p.f("  %8d  %s%s\n", a.Searches, a.Query, bound)
+			p.F("  %8d  %s%s\n", a.Searches, a.Query, bound)
 		}
 	}
-	p.f("\nrescue time: p50 ≤ %s, p99 ≤ %s\n", fmtDur(r.P50), fmtDur(r.P99))
+	p.F("\nrescue time: p50 ≤ %s, p99 ≤ %s\n", fmtDur(r.P50), fmtDur(r.P99))
 	for _, le := range r.Skipped {
-		p.f("skipped %v\n", le)
+		p.F("skipped %v\n", le)
 	}
-	return p.err
-}
-
-type printer struct {
-	w   io.Writer
-	err error
-}
-
-func (p *printer) f(format string, args ...any) {
-	if p.err == nil {
-		_, p.err = fmt.Fprintf(p.w, format, args...)
-	}
+	return p.Err
 }
 
 func fmtDur(d time.Duration) string {

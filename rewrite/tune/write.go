@@ -2,6 +2,7 @@ package tune
 
 import (
 	"fmt"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 	"io"
 	"math"
 	"strconv"
@@ -13,67 +14,56 @@ import (
 // category's figures and recommendations, the changes as a diff against
 // the policy in force, and the alias candidates.
 func WriteText(w io.Writer, r *Report) error {
-	p := &printer{w: w}
+	p := &textout.Printer{W: w}
 	if j := r.Join; j.Events > 0 {
-		p.f("%d events read: %d searches, %d interactions, %d of them joined to the search that showed the product (%d with no search in the window, %d of a product not shown).\n",
+		p.F("%d events read: %d searches, %d interactions, %d of them joined to the search that showed the product (%d with no search in the window, %d of a product not shown).\n",
 			j.Events, j.Searches, j.Interactions, j.Joined, j.NoSearch, j.NotShown)
 		if j.Late > 0 || j.Bad > 0 || j.SearchOverflow+j.InteractionOverflow > 0 {
-			p.f("%d events came later than the join allows; %d malformed lines were skipped; %d events past a session's limits were dropped.\n",
+			p.F("%d events came later than the join allows; %d malformed lines were skipped; %d events past a session's limits were dropped.\n",
 				j.Late, j.Bad, j.SearchOverflow+j.InteractionOverflow)
 		}
 	}
 	st := r.Stats
-	p.f("%d sessions, %d searches: %d exact, %d relaxed (%d relaxed more than one kind and are set aside), %d found nothing.\n",
+	p.F("%d sessions, %d searches: %d exact, %d relaxed (%d relaxed more than one kind and are set aside), %d found nothing.\n",
 		st.Sessions, st.Searches, st.Exact, st.Relaxed, st.SetAside, st.FoundNothing)
 	if st.Explored > 0 || st.Shuffled > 0 {
-		p.f("%d searches showed an explored alternative; %d were shuffled.\n", st.Explored, st.Shuffled)
+		p.F("%d searches showed an explored alternative; %d were shuffled.\n", st.Explored, st.Shuffled)
 	}
 	if st.Undescribed > 0 {
-		p.f("%d shown products are not in the index and were left out of the bands.\n", st.Undescribed)
+		p.F("%d shown products are not in the index and were left out of the bands.\n", st.Undescribed)
 	}
 	b := r.Bias
 	if b.Estimated {
-		p.f("Position bias: η = %.2f, fitted from shuffled searches (%d clicks at %d ranks).\n", b.Eta, b.Clicks, b.Ranks)
+		p.F("Position bias: η = %.2f, fitted from shuffled searches (%d clicks at %d ranks).\n", b.Eta, b.Clicks, b.Ranks)
 	} else {
-		p.f("Position bias: η = %.2f; %s.\n", b.Eta, b.Note)
+		p.F("Position bias: η = %.2f; %s.\n", b.Eta, b.Note)
 	}
 	for _, c := range r.Categories {
-		p.category(c)
+		category(p, c)
 	}
-	p.f("\nChanges to the policy in force (not applied):\n")
+	p.F("\nChanges to the policy in force (not applied):\n")
 	if len(r.Changes) == 0 {
-		p.f("  none\n")
+		p.F("  none\n")
 	} else {
-		p.f("%s", indent(Diff(r.Changes), "  "))
+		p.F("%s", indent(Diff(r.Changes), "  "))
 	}
-	p.f("\nAlias candidates, for a person to review (never added to the lexicon):\n")
+	p.F("\nAlias candidates, for a person to review (never added to the lexicon):\n")
 	if len(r.Aliases) == 0 {
-		p.f("  none\n")
+		p.F("  none\n")
 	}
 	for _, a := range r.Aliases {
-		p.f("  %q → %s %q: %d of the %d sessions where it found nothing\n", a.Words, a.Kind, a.Name, a.Support, a.Sessions)
+		p.F("  %q → %s %q: %d of the %d sessions where it found nothing\n", a.Words, a.Kind, a.Name, a.Support, a.Sessions)
 	}
-	p.f("\n%s\n", Caveat)
-	return p.err
+	p.F("\n%s\n", Caveat)
+	return p.Err
 }
 
-type printer struct {
-	w   io.Writer
-	err error
-}
-
-func (p *printer) f(format string, args ...any) {
-	if p.err == nil {
-		_, p.err = fmt.Fprintf(p.w, format, args...)
-	}
-}
-
-func (p *printer) category(c Category) {
+func category(p *textout.Printer, c Category) {
 	name := c.Name
 	if name == "" {
 		name = "(no category)"
 	}
-	p.f("\n%s: %d exact searches, engagement %s a product shown\n", name, c.Exact.Searches, num(c.Exact.Engagement))
+	p.F("\n%s: %d exact searches, engagement %s a product shown\n", name, c.Exact.Searches, num(c.Exact.Engagement))
 	if len(c.Kinds) > 0 {
 		var b strings.Builder
 		tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
@@ -91,9 +81,9 @@ func (p *printer) category(c Category) {
 			}
 		}
 		tw.Flush()
-		p.f("%s", b.String())
+		p.F("%s", b.String())
 		for _, k := range c.Kinds {
-			p.f("  %s: %s\n", k.Kind, k.Reason)
+			p.F("  %s: %s\n", k.Kind, k.Reason)
 		}
 	}
 	for _, t := range []struct {
@@ -104,15 +94,15 @@ func (p *printer) category(c Category) {
 		if t.tol == nil {
 			continue
 		}
-		p.f("  %s: now %s, recommended %s\n", t.name, t.unit(t.tol.Current), t.unit(t.tol.Recommended))
+		p.F("  %s: now %s, recommended %s\n", t.name, t.unit(t.tol.Current), t.unit(t.tol.Recommended))
 		for _, bin := range t.tol.Bins {
 			to := t.unit(bin.To)
 			if math.IsInf(bin.To, 1) {
 				to = "…"
 			}
-			p.f("    %6s–%-6s %5s  %-22s %d searches\n", t.unit(bin.From), to, pct(bin.Ratio), bar(bin.Ratio), bin.Searches)
+			p.F("    %6s–%-6s %5s  %-22s %d searches\n", t.unit(bin.From), to, pct(bin.Ratio), bar(bin.Ratio), bin.Searches)
 		}
-		p.f("    %s\n", t.tol.Reason)
+		p.F("    %s\n", t.tol.Reason)
 	}
 }
 
@@ -191,15 +181,15 @@ func value(s string) string {
 // WritePolicy writes the proposed policy file, with a header saying
 // where it came from and that it is a proposal.
 func WritePolicy(w io.Writer, r *Report) error {
-	p := &printer{w: w}
-	p.f("# A policy proposed by whittle tune from %d searches in %d sessions.\n", r.Stats.Searches, r.Stats.Sessions)
-	p.f("# It is the policy in force with %d change(s); review it before use.\n", len(r.Changes))
+	p := &textout.Printer{W: w}
+	p.F("# A policy proposed by whittle tune from %d searches in %d sessions.\n", r.Stats.Searches, r.Stats.Sessions)
+	p.F("# It is the policy in force with %d change(s); review it before use.\n", len(r.Changes))
 	for _, c := range r.Changes {
-		p.f("#   %s: %s → %s (%s)\n", c.Key, c.From, c.To, c.Reason)
+		p.F("#   %s: %s → %s (%s)\n", c.Key, c.From, c.To, c.Reason)
 	}
-	p.f("\n")
-	if p.err != nil {
-		return p.err
+	p.F("\n")
+	if p.Err != nil {
+		return p.Err
 	}
 	return r.Proposed.WriteTOML(w)
 }

@@ -1,0 +1,22 @@
+// Package textout writes the reports' text: a printer that keeps the
+// first write error, so that a report is written line by line and its
+// error checked once.
+package textout
+
+import (
+	"fmt"
+	"io"
+)
+
+// Printer writes to W until a write fails; Err is the first failure.
+type Printer struct {
+	W   io.Writer
+	Err error
+}
+
+// F writes a formatted string, unless an earlier write failed.
+func (p *Printer) F(format string, args ...any) {
+	if p.Err == nil {
+		_, p.Err = fmt.Fprintf(p.W, format, args...)
+	}
+}
