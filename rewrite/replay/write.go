@@ -3,11 +3,12 @@ package replay
 import (
 	"encoding/csv"
 	"fmt"
-	"github.com/whittle-search/whittle/rewrite/internal/textout"
 	"io"
 	"strconv"
 	"strings"
 	"time"
+
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 // WriteText writes a report for a person at a terminal.

@@ -2,12 +2,13 @@ package tune
 
 import (
 	"fmt"
-	"github.com/whittle-search/whittle/rewrite/internal/textout"
 	"io"
 	"math"
 	"strconv"
 	"strings"
 	"text/tabwriter"
+
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 // WriteText writes the report for a terminal: what was read, η, each
