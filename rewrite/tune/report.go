@@ -264,6 +264,10 @@ func (t *Tuner) kind(cat string, k parser.Kind, current parser.Strictness, exact
 		say(parser.Hard, fmt.Sprintf("widening %s lost engagement and too few searches dropped it to say more: never relax it", k))
 	case drop == few && widen == few:
 		kr.Reason = fmt.Sprintf("too few searches relaxed %s (want %d): the current setting stays", k, min)
+	case drop == few && widen == accepted:
+		kr.Reason = fmt.Sprintf("widened %s held up, but too few searches dropped it (want %d) to say whether shoppers do without it: the current setting stays", k, min)
+	case drop == unclear:
+		kr.Reason = fmt.Sprintf("%s, an interval across the keep share of %s: the current setting stays", dropped, pct(t.sig.KeepShare))
 	default:
 		kr.Reason = fmt.Sprintf("the evidence on %s is unclear: the current setting stays", k)
 	}

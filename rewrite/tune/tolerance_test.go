@@ -80,3 +80,18 @@ func TestNoToleranceForAHardKind(t *testing.T) {
 		t.Errorf("paint colour tolerance %s", describe(c.Colour))
 	}
 }
+
+// A colour widened and held, but never dropped: the reason says what is
+// known and what is not, and the setting stays.
+func TestWidenedNeverDropped(t *testing.T) {
+	tu := handTuner(t, "", simProducts{})
+	fill(tu, groupKey{category: "apparel"}, 50, 1)
+	fill(tu, groupKey{category: "apparel", kind: parser.KindColour, op: "widen"}, 50, 1)
+	for b := range 3 {
+		fill(tu, groupKey{category: "apparel", kind: parser.KindColour, axis: byColour, bin: b}, 50, 1)
+	}
+	k := findKind(tu.Report(), "apparel", parser.KindColour)
+	if k == nil || k.Recommended != k.Current || !strings.Contains(k.Reason, "too few searches dropped it") {
+		t.Errorf("colour = %+v", k)
+	}
+}

@@ -5,6 +5,7 @@ import (
 	"html/template"
 	"math"
 	"strings"
+	"unicode/utf8"
 )
 
 // Bar is one bar of a chart: a label, a value and how it is written.
@@ -22,15 +23,19 @@ func HBars(title string, bars []Bar) template.HTML {
 	h := top + row*len(bars) + 8
 	var b strings.Builder
 	open(&b, title, width, h)
-	most := 0.0
+	// Room after the longest bar for its text, at about 7 px a
+	// character of the 12 px font.
+	most, room := 0.0, 90
 	for _, x := range bars {
 		most = max(most, x.Value)
+		room = max(room, 7*utf8.RuneCountInString(x.Text)+12)
 	}
+	room = min(room, width-labelW-60)
 	for i, x := range bars {
 		yy := top + row*i
 		w := 0.0
 		if most > 0 {
-			w = (width - labelW - 90) * x.Value / most
+			w = float64(width-labelW-room) * x.Value / most
 		}
 		fmt.Fprintf(&b, `<text x="0" y="%d" class="l">%s</text>`, yy+16, esc(x.Label))
 		fmt.Fprintf(&b, `<rect x="%d" y="%d" width="%.1f" height="%d" class="b"/>`, labelW, yy+3, w, row-8)
@@ -52,10 +57,12 @@ type Point struct {
 // line (NaN for none), labelled lineText. A NaN value draws no bar.
 func Columns(title, yText string, ps []Point, line float64, lineText string) template.HTML {
 	const (
-		height, left, top, bottom, colW = 220, 48, 28, 40, 22
+		height, left, top, bottom, page = 220, 48, 28, 40, 640
 	)
-	width := left + colW*len(ps) + 16
-	width = max(width, 320)
+	// Columns share the width, 12 to 40 px each; many make the chart
+	// wider than the page rather than too thin to read.
+	colW := min(40, max(12, (page-left-16)/max(len(ps), 1)))
+	width := max(page, left+colW*len(ps)+16)
 	var b strings.Builder
 	open(&b, title, width, height)
 	most := 0.0
@@ -87,7 +94,7 @@ func Columns(title, yText string, ps []Point, line float64, lineText string) tem
 			cx := x + colW/2
 			fmt.Fprintf(&b, `<line x1="%d" y1="%.1f" x2="%d" y2="%.1f" class="w"/>`, cx, y(p.Low), cx, y(p.High))
 		}
-		if i%2 == 0 || len(ps) <= 12 {
+		if colW >= 22 || i%2 == 0 {
 			fmt.Fprintf(&b, `<text x="%d" y="%d" class="l">%s</text>`, x+2, height-bottom+14, esc(p.Label))
 		}
 	}
