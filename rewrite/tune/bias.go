@@ -15,9 +15,9 @@ type biasTally struct {
 	shown, clicked [maxRank]float64
 }
 
-// add counts one shuffled search; the explored product, placed at a
-// rank of its own choosing, is left out.
-func (b *biasTally) add(slots []slot, es []signals.Engagement, x *signals.Explored) {
+// add counts one shuffled search's products; the caller leaves out an
+// explored product, placed at a rank of its own choosing.
+func (b *biasTally) add(slots []slot, es []signals.Engagement) {
 	var hit [maxRank + 1]bool
 	for _, e := range es {
 		if e.Type != signals.Impression && e.Rank >= 1 && e.Rank <= maxRank {
@@ -25,7 +25,7 @@ func (b *biasTally) add(slots []slot, es []signals.Engagement, x *signals.Explor
 		}
 	}
 	for _, s := range slots {
-		if s.rank > maxRank || x != nil && s.rank == x.Rank {
+		if s.rank > maxRank {
 			continue
 		}
 		b.shown[s.rank-1]++

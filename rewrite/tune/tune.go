@@ -197,7 +197,7 @@ func (t *Tuner) search(ctx context.Context, session string, j *signals.Joined) e
 	}
 	if ev.Shuffled {
 		t.stats.Shuffled++
-		t.bias.add(main, j.Engagements, ev.Explored)
+		t.bias.add(main, j.Engagements)
 	}
 	switch n {
 	case 0:
