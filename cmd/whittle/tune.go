@@ -2,7 +2,6 @@ package main
 
 import (
 	"bufio"
-	"context"
 	"encoding/json"
 	"errors"
 	"flag"
@@ -114,7 +113,7 @@ func tuneCmd(args []string, stdout, stderr io.Writer) int {
 		return 1
 	}
 	rep := t.Report()
-	if err := writeTune(ctx, stdout, rep, *asJSON); err != nil {
+	if err := writeTune(stdout, rep, *asJSON); err != nil {
 		fmt.Fprintf(stderr, "whittle tune: %v\n", err)
 		return 1
 	}
@@ -141,7 +140,7 @@ func tuneCmd(args []string, stdout, stderr io.Writer) int {
 
 // writeTune writes the report as text, or as JSON with the diff and the
 // proposed policy file beside it.
-func writeTune(_ context.Context, stdout io.Writer, rep *tune.Report, asJSON bool) error {
+func writeTune(stdout io.Writer, rep *tune.Report, asJSON bool) error {
 	out := bufio.NewWriter(stdout)
 	var err error
 	if asJSON {
