@@ -4,6 +4,7 @@ import (
 	"context"
 	"strings"
 
+	"github.com/RoaringBitmap/roaring/v2"
 	"github.com/blevesearch/bleve/v2"
 	"github.com/blevesearch/bleve/v2/search/query"
 )
@@ -23,14 +24,12 @@ type Baseline struct {
 // them, then one fewer, and so on, until something matches. It knows
 // nothing of what the words mean.
 func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, error) {
-	words := strings.Fields(strings.ToLower(q))
+	words := baselineWords(q)
 	b := &Baseline{Words: len(words)}
 	for n := len(words); n >= 1; n-- {
 		var qs []query.Query
 		for _, w := range words {
-			m := bleve.NewMatchQuery(w)
-			m.SetField(fWords)
-			qs = append(qs, m)
+			qs = append(qs, baselineWord(w))
 		}
 		dq := bleve.NewDisjunctionQuery(qs...)
 		dq.SetMin(float64(n))
@@ -55,4 +54,61 @@ func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, erro
 		return b, nil
 	}
 	return b, nil
+}
+
+// BaselineMatches returns the ids of every product the blind partial
+// match finds for q when kept of its words must match, in id order: the
+// whole result set of which Baseline, with the Kept it settled on,
+// returns the best k. Kept below 1 is taken as 1, and above the number
+// of words as all of them.
+func (e *Engine) BaselineMatches(ctx context.Context, q string, kept int) ([]string, error) {
+	words := baselineWords(q)
+	if len(words) == 0 {
+		return nil, nil
+	}
+	kept = min(max(kept, 1), len(words))
+	s := e.sets
+	if err := s.list.load(s.reader); err != nil {
+		return nil, err
+	}
+	// Each word's matches, as a bitmap; a product is in the set when at
+	// least kept of the words match it, a word typed twice counting
+	// twice, as it does in the disjunction Baseline runs.
+	each := make([]*roaring.Bitmap, len(words))
+	any := roaring.New()
+	for i, w := range words {
+		b, err := s.query(ctx, "\x00baseline\x00"+w, baselineWord(w))
+		if err != nil {
+			return nil, err
+		}
+		each[i] = b
+		any.Or(b)
+	}
+	if kept == 1 {
+		return s.list.all(any), nil
+	}
+	in := roaring.New()
+	it := any.Iterator()
+	for it.HasNext() {
+		d, n := it.Next(), 0
+		for _, b := range each {
+			if b.Contains(d) {
+				n++
+			}
+		}
+		if n >= kept {
+			in.Add(d)
+		}
+	}
+	return s.list.all(in), nil
+}
+
+// baselineWords are the words the blind partial match looks for.
+func baselineWords(q string) []string { return strings.Fields(strings.ToLower(q)) }
+
+// baselineWord is the match for one word anywhere in a product's text.
+func baselineWord(w string) query.Query {
+	m := bleve.NewMatchQuery(w)
+	m.SetField(fWords)
+	return m
 }

@@ -127,6 +127,17 @@ func (e *Engine) Search(ctx context.Context, p rewrite.Plan, k int) ([]rewrite.H
 	return hits, nil
 }
 
+// Matches returns the ids of every product p matches, in id order: the
+// whole result set that Count counts and of which Search returns the
+// best k, as a facet or a sort by anything but relevance sees it.
+func (e *Engine) Matches(ctx context.Context, p rewrite.Plan) ([]string, error) {
+	m, err := e.sets.listedMatch(ctx, p)
+	if err != nil {
+		return nil, err
+	}
+	return e.sets.list.all(m), nil
+}
+
 // Shown is a product as a search shows it: the contract's hit.
 type Shown = rewrite.ReportHit
 
@@ -156,10 +167,7 @@ func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, erro
 // showListed shows the first k matches of p in id order.
 func (e *Engine) showListed(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
 	s := e.sets
-	if err := s.list.load(s.reader); err != nil {
-		return nil, err
-	}
-	m, err := s.match(ctx, p)
+	m, err := s.listedMatch(ctx, p)
 	if err != nil {
 		return nil, err
 	}

@@ -141,3 +141,20 @@ func scoredOnly(p rewrite.Plan) bool {
 	}
 	return false
 }
+
+// all returns the ids of every product of m, in id order.
+func (l *listing) all(m *roaring.Bitmap) []string {
+	docs := make([]uint32, 0, m.GetCardinality())
+	it := m.Iterator()
+	for it.HasNext() {
+		if d := it.Next(); int(d) < len(l.rank) {
+			docs = append(docs, d)
+		}
+	}
+	slices.SortFunc(docs, func(a, b uint32) int { return int(l.rank[a]) - int(l.rank[b]) })
+	out := make([]string, len(docs))
+	for i, d := range docs {
+		out[i] = l.ids[d]
+	}
+	return out
+}

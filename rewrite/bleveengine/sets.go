@@ -98,6 +98,15 @@ func (s *sets) match(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap, erro
 	return acc, nil
 }
 
+// listedMatch is match with the listing loaded, for the caller to put
+// the matches in id order.
+func (s *sets) listedMatch(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap, error) {
+	if err := s.list.load(s.reader); err != nil {
+		return nil, err
+	}
+	return s.match(ctx, p)
+}
+
 // clause returns the products c matches, excluded or not.
 func (s *sets) clause(ctx context.Context, c rewrite.Clause) (*roaring.Bitmap, error) {
 	c.Excluded, c.From = false, 0
