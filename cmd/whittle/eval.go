@@ -32,8 +32,10 @@ name, a pattern the type lacks, a misspelt type, an extra word, a measure
 slightly off), indexes the catalog in a temporary directory, and runs
 every query through whittle and through the blind partial match. It
 prints, for both, the rescue rate, the share of hits that keep every hard
-constraint, the share also of the type meant, where the product meant
-ranks and how much of each query was kept; the goals beside them; the
+constraint, the share also of the type meant (in the top K, and in all
+the products the search matched, which its count, its facets and a sort
+by price see), where the product meant ranks and how much of each query
+was kept; the goals beside them; the
 figures by kind of failure; and examples of where whittle does worse.
 
 The queries come in two styles: short (the product type and a few of its

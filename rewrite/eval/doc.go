@@ -13,7 +13,9 @@
 //
 // [Evaluate] runs every case through whittle and through the baseline on
 // the same engine, and [Score] checks each hit against the real
-// attributes of the product it names. [Run] does it all on the demo
+// attributes of the product it names: the top k each search returns,
+// and every product it matched, which its count, its facets and a sort
+// by anything but relevance see ([SetScore]). [Run] does it all on the demo
 // catalog, in a temporary index, and [RunStyles] does it for several
 // styles on one index. A [Report] holds the figures of both,
 // the goals they are held to, and the cases where whittle does worse.

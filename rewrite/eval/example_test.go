@@ -59,14 +59,19 @@ func ExampleScore() {
 func ExampleNewReport() {
 	cases := []eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern,
 		Hard: []eval.Attr{{Kind: parser.KindSize, Value: "xl"}}}}
-	rep := eval.NewReport(cases, []eval.Result{{Hits: []string{"SK-2"}}}, []eval.Result{{Hits: []string{"SK-1", "SK-2"}}}, examples, 10)
+	// whittle's one hit is SK-2, all it matched; the baseline showed and
+	// matched SK-1 (no xl) and SK-2.
+	whittle := eval.Result{Hits: []string{"SK-2"}, Set: eval.SetScore{Matched: 1, OnTarget: 1}}
+	baseline := eval.Result{Hits: []string{"SK-1", "SK-2"}, Set: eval.SetScore{Matched: 2, OnTarget: 1}}
+	rep := eval.NewReport(cases, []eval.Result{whittle}, []eval.Result{baseline}, examples, 10)
 	for _, g := range rep.Goals {
 		fmt.Println(g.Name, g.Met)
 	}
 	// Output:
 	// rescue rate true
 	// hard-constraint preservation true
-	// attribute precision vs baseline true
+	// attribute precision vs baseline, top k true
+	// attribute precision vs baseline, all matches true
 }
 
 func ExampleReport_WriteText() {
@@ -148,20 +153,25 @@ func ExampleRunStyles() {
 }
 
 // The goals of two sets side by side. In the short set whittle's one hit
-// is SK-2, in size xl and a skirt; the baseline's two are SK-1 (no xl)
-// and SK-2: precision 100% against 50%, 2×. In the long set both return
-// SK-2 alone: 1×.
+// is SK-2, in size xl and a skirt, and all it matched; the baseline's two
+// are SK-1 (no xl) and SK-2, all it matched: precision 100% against 50%,
+// 2×, on the top k and on all matches. In the long set both show SK-2
+// alone, 1×, but the baseline matched SK-1 too, and whittle did not:
+// 2× on all matches.
 func ExampleWriteGoals() {
 	xl := []eval.Attr{{Kind: parser.KindSize, Value: "xl"}}
+	one := eval.SetScore{Matched: 1, OnTarget: 1}
+	both := eval.SetScore{Matched: 2, OnTarget: 1}
 	short := eval.NewReport([]eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern, Hard: xl}},
-		[]eval.Result{{Hits: []string{"SK-2"}}}, []eval.Result{{Hits: []string{"SK-1", "SK-2"}}}, examples, 10)
+		[]eval.Result{{Hits: []string{"SK-2"}, Set: one}}, []eval.Result{{Hits: []string{"SK-1", "SK-2"}, Set: both}}, examples, 10)
 	long := eval.NewReport([]eval.Case{{Query: "brellow striped linen skirt size xl under $60", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern, Hard: xl}},
-		[]eval.Result{{Hits: []string{"SK-2"}}}, []eval.Result{{Hits: []string{"SK-2"}}}, examples, 10)
+		[]eval.Result{{Hits: []string{"SK-2"}, Set: one}}, []eval.Result{{Hits: []string{"SK-2"}, Set: both}}, examples, 10)
 	short.Style, long.Style = eval.StyleShort, eval.StyleLong
 	eval.WriteGoals(os.Stdout, []eval.Report{short, long})
 	// Output:
-	// goal                             target  short (1 queries)  long (1 queries)
-	// rescue rate                      ≥ 95%   100.0% met         100.0% met
-	// hard-constraint preservation     100%    100.0% met         100.0% met
-	// attribute precision vs baseline  ≥ 2×    2.00× met          1.00× not met
+	// goal                                          target  short (1 queries)  long (1 queries)
+	// rescue rate                                   ≥ 95%   100.0% met         100.0% met
+	// hard-constraint preservation                  100%    100.0% met         100.0% met
+	// attribute precision vs baseline, top k        ≥ 2×    2.00× met          1.00× not met
+	// attribute precision vs baseline, all matches  ≥ 2×    2.00× met          2.00× met
 }

@@ -26,8 +26,11 @@ func (f Figures) MarshalJSON() ([]byte, error) {
 		MRR                *float64 `json:"mrr"`
 		MeanKept           *float64 `json:"mean_kept"`
 		MeanOf             *float64 `json:"mean_of"`
+		SetPrecision       *float64 `json:"set_precision"`
+		MeanSetPrecision   *float64 `json:"mean_set_precision"`
 	}{counts(f), num(f.RescueRate()), num(f.HardPreservation()), num(f.AttributePrecision()),
-		num(f.FoundRate()), num(f.MRR()), num(f.MeanKept()), num(f.MeanOf())})
+		num(f.FoundRate()), num(f.MRR()), num(f.MeanKept()), num(f.MeanOf()),
+		num(f.SetPrecision()), num(f.MeanSetPrecision())})
 }
 
 // MarshalJSON writes the goal with a value that is null when it is not a

@@ -19,6 +19,29 @@ type Result struct {
 	Exact bool `json:"exact,omitempty"`
 	// Note says what the engine did, for the report of losses.
 	Note string `json:"note,omitempty"`
+	// Set is how the whole result set did, of which Hits are the top k:
+	// what a count, a facet or a sort by price sees. It is scored as it
+	// is read, since it can hold thousands of products.
+	Set SetScore `json:"set"`
+}
+
+// SetScore is how one whole result set did.
+type SetScore struct {
+	// Matched is how many products the set holds; OnTarget how many of
+	// them are of the intended product's type with every hard attribute.
+	Matched  int `json:"matched"`
+	OnTarget int `json:"on_target"`
+}
+
+// scoreSet checks every product of a whole result set against c.
+func scoreSet(c Case, ids []string, byID map[string]*catalog.Product) SetScore {
+	s := SetScore{Matched: len(ids)}
+	for _, id := range ids {
+		if p, ok := byID[id]; ok && p.ProductType == c.ProductType && SatisfiesAll(p, c.Hard) {
+			s.OnTarget++
+		}
+	}
+	return s
 }
 
 // Figures are one engine's counts over a set of cases; the methods turn
@@ -42,6 +65,15 @@ type Figures struct {
 	// Kept and Of sum Result.Kept and Result.Of.
 	Kept int `json:"kept"`
 	Of   int `json:"of"`
+	// Matched is how many products the queries' whole result sets held
+	// (Hits counts only their top k) and MatchedOnTarget how many of them
+	// are of the intended type with every hard attribute. SetQueries is
+	// how many queries matched something, and SetShares sums the share
+	// of each one's set that is on target.
+	Matched         int     `json:"matched"`
+	MatchedOnTarget int     `json:"matched_on_target"`
+	SetQueries      int     `json:"set_queries"`
+	SetShares       float64 `json:"set_shares"`
 }
 
 // RescueRate is the share of queries that returned a hit.
@@ -55,6 +87,22 @@ func (f Figures) HardPreservation() float64 { return ratio(f.HardKept, f.Hits) }
 // product's type that have every hard attribute of their query; NaN when
 // nothing was returned.
 func (f Figures) AttributePrecision() float64 { return ratio(f.OnTarget, f.Hits) }
+
+// SetPrecision is AttributePrecision over the whole result sets: the
+// share of every product matched, over all queries, that is of the
+// intended type with every hard attribute; NaN when nothing matched. A
+// query with many matches weighs as much as its matches.
+func (f Figures) SetPrecision() float64 { return ratio(f.MatchedOnTarget, f.Matched) }
+
+// MeanSetPrecision is the mean, over the queries that matched something,
+// of the share of each one's whole result set that is on target: every
+// query weighs the same.
+func (f Figures) MeanSetPrecision() float64 {
+	if f.SetQueries == 0 {
+		return math.NaN()
+	}
+	return f.SetShares / float64(f.SetQueries)
+}
 
 // FoundRate is the share of queries whose hits hold the intended product.
 func (f Figures) FoundRate() float64 { return ratio(f.Found, f.Queries) }
@@ -126,6 +174,12 @@ func (f *Figures) add(res Result, s caseScore) {
 	}
 	f.Kept += res.Kept
 	f.Of += res.Of
+	if res.Set.Matched > 0 {
+		f.Matched += res.Set.Matched
+		f.MatchedOnTarget += res.Set.OnTarget
+		f.SetQueries++
+		f.SetShares += float64(res.Set.OnTarget) / float64(res.Set.Matched)
+	}
 }
 
 // Score checks every result against its case (results[i] is for

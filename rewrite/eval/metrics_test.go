@@ -19,15 +19,17 @@ func handCases() (cases []Case, whittle, baseline []Result) {
 			Injected: "striped (no sweater has it)", Hard: []Attr{m}},
 		{Query: "wool rgu", Product: "RG-1", ProductType: "rug", Failure: FailTypo, Injected: "rgu (for rug)"},
 	}
+	// Each set is what its hits are drawn from, scored as Evaluate
+	// scores it: here each is just the hits.
 	whittle = []Result{
-		{Hits: []string{"SK-2"}, Kept: 3, Of: 3},
-		{Hits: []string{"SW-1", "SK-1"}, Kept: 2, Of: 3},
+		{Hits: []string{"SK-2"}, Kept: 3, Of: 3, Set: SetScore{Matched: 1, OnTarget: 1}},
+		{Hits: []string{"SW-1", "SK-1"}, Kept: 2, Of: 3, Set: SetScore{Matched: 2, OnTarget: 1}},
 		{Kept: 0, Of: 2, Note: "No results for “wool rgu”."},
 	}
 	baseline = []Result{
-		{Hits: []string{"SK-1", "SK-2"}, Kept: 3, Of: 5},
-		{Hits: []string{"SK-1"}, Kept: 2, Of: 4},
-		{Hits: []string{"RG-1", "SW-1"}, Kept: 1, Of: 2},
+		{Hits: []string{"SK-1", "SK-2"}, Kept: 3, Of: 5, Set: SetScore{Matched: 2, OnTarget: 1}},
+		{Hits: []string{"SK-1"}, Kept: 2, Of: 4, Set: SetScore{Matched: 1, OnTarget: 0}},
+		{Hits: []string{"RG-1", "SW-1"}, Kept: 1, Of: 2, Set: SetScore{Matched: 2, OnTarget: 1}},
 	}
 	return cases, whittle, baseline
 }
@@ -48,6 +50,7 @@ func TestScore(t *testing.T) {
 				Hits: 3, HardKept: 3, OnTarget: 2, // 1 + 2 hits; all in the size; SK-2 and SW-1 of the type
 				Found: 2, ReciprocalRank: 2, // 1/1 + 1/1
 				Kept: 5, Of: 8, // 3+2+0, 3+3+2
+				Matched: 3, MatchedOnTarget: 2, SetQueries: 2, SetShares: 1.5, // 1+2 matched; 1/1 + 1/2
 			}},
 		{name: "baseline", results: baseline,
 			reason: "case 1: SK-1 (s, m) lacks xl, SK-2 has it, at rank 2; case 2: SK-1 comes in m but is a skirt, " +
@@ -57,6 +60,7 @@ func TestScore(t *testing.T) {
 				Hits: 5, HardKept: 4, OnTarget: 2, // 2+1+2; SK-2, SK-1, RG-1, SW-1; SK-2 and RG-1
 				Found: 2, ReciprocalRank: 1.5, // 1/2 + 1/1
 				Kept: 6, Of: 11,
+				Matched: 5, MatchedOnTarget: 2, SetQueries: 3, SetShares: 1, // 2+1+2; 1/2 + 0 + 1/2
 			}},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
@@ -68,7 +72,8 @@ func TestScore(t *testing.T) {
 }
 
 func TestRates(t *testing.T) {
-	w := Figures{Queries: 3, Rescued: 2, Hits: 3, HardKept: 3, OnTarget: 2, Found: 2, ReciprocalRank: 2, Kept: 5, Of: 8}
+	w := Figures{Queries: 3, Rescued: 2, Hits: 3, HardKept: 3, OnTarget: 2, Found: 2, ReciprocalRank: 2, Kept: 5, Of: 8,
+		Matched: 30, MatchedOnTarget: 12, SetQueries: 2, SetShares: 1.2}
 	for _, tc := range []struct {
 		name, reason string
 		got, want    float64
@@ -80,6 +85,9 @@ func TestRates(t *testing.T) {
 		{name: "mrr", got: w.MRR(), want: 2.0 / 3, reason: "(1 + 1 + 0) / 3"},
 		{name: "kept", got: w.MeanKept(), want: 5.0 / 3, reason: "5 constraints kept over 3 queries"},
 		{name: "of", got: w.MeanOf(), want: 8.0 / 3, reason: "8 constraints over 3 queries"},
+		{name: "set precision", got: w.SetPrecision(), want: 12.0 / 30, reason: "12 of the 30 products matched are on target"},
+		{name: "mean set precision", got: w.MeanSetPrecision(), want: 0.6, reason: "shares summing to 1.2 over 2 queries that matched"},
+		{name: "no set", got: Figures{Queries: 1}.MeanSetPrecision(), want: math.NaN(), reason: "no query matched anything"},
 		{name: "no hits", got: Figures{Queries: 1}.HardPreservation(), want: math.NaN(), reason: "a share of no hits is no number"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {

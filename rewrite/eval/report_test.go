@@ -24,8 +24,10 @@ func TestNewReport(t *testing.T) {
 	}{
 		{name: "rescue rate", value: 2.0 / 3, met: false, reason: "2 of 3 queries rescued is under 95%"},
 		{name: "hard-constraint preservation", value: 1, met: true, reason: "all 3 of whittle's hits have the hard size"},
-		{name: "attribute precision vs baseline", value: (2.0 / 3) / (2.0 / 5), met: false,
+		{name: "attribute precision vs baseline, top k", value: (2.0 / 3) / (2.0 / 5), met: false,
 			reason: "whittle 2 of 3 hits on target, the baseline 2 of 5: 1.67 times, under 2"},
+		{name: "attribute precision vs baseline, all matches", value: (2.0 / 3) / (2.0 / 5), met: false,
+			reason: "whittle 2 of 3 products matched on target, the baseline 2 of 5"},
 	} {
 		g := rep.Goals[i]
 		if g.Name != tc.name || math.Abs(g.Value-tc.value) > 1e-12 || g.Met != tc.met {
@@ -33,7 +35,7 @@ func TestNewReport(t *testing.T) {
 		}
 	}
 	if rep.Met() {
-		t.Error("Met() with two goals not met")
+		t.Error("Met() with three goals not met")
 	}
 	// One case a failure, in the order of Failures; whittle lost the typo
 	// only (no hits where the baseline had two).
@@ -144,7 +146,7 @@ func TestReportJSON(t *testing.T) {
 	if back.Whittle.HardPreservation != nil {
 		t.Errorf("hard preservation %v, want null (no hits to share)", *back.Whittle.HardPreservation)
 	}
-	if len(back.Goals) != 3 || back.Goals[1].Value != nil || back.Goals[1].Met {
+	if len(back.Goals) != 4 || back.Goals[1].Value != nil || back.Goals[1].Met {
 		t.Errorf("goals %s, want preservation null and not met", b)
 	}
 }

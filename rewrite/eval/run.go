@@ -15,10 +15,15 @@ import (
 )
 
 // Engine is what Evaluate searches: the planner's engine, which also runs
-// the blind partial match. *bleveengine.Engine is one.
+// the blind partial match and lists whole result sets.
+// *bleveengine.Engine is one.
 type Engine interface {
 	rewrite.Engine
 	Baseline(ctx context.Context, q string, k int) (*bleveengine.Baseline, error)
+	// Matches and BaselineMatches list every product a plan, or the
+	// blind partial match keeping kept of the query's words, matches.
+	Matches(ctx context.Context, p rewrite.Plan) ([]string, error)
+	BaselineMatches(ctx context.Context, q string, kept int) ([]string, error)
 }
 
 // DefaultK is how many hits a query asks for.
@@ -26,36 +31,56 @@ const DefaultK = 10
 
 // Evaluate runs every case through whittle (rw's rescue, then the top k
 // of its plan) and through the baseline on eng, and reports how each did
-// against the products' real attributes.
+// against the products' real attributes, in its top k and in its whole
+// result set.
 func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, cases []Case, products []catalog.Product, k int) (Report, error) {
 	if k <= 0 {
 		k = DefaultK
 	}
+	byID := index(products)
 	whittle := make([]Result, 0, len(cases))
 	baseline := make([]Result, 0, len(cases))
 	for _, c := range cases {
-		w, err := rescue(ctx, eng, rw, c.Query, k)
+		w, err := rescue(ctx, eng, rw, c, k, byID)
 		if err != nil {
 			return Report{}, fmt.Errorf("%q: %w", c.Query, err)
 		}
-		b, err := eng.Baseline(ctx, c.Query, k)
+		b, err := blind(ctx, eng, c, k, byID)
 		if err != nil {
 			return Report{}, fmt.Errorf("%q: the baseline: %w", c.Query, err)
 		}
-		br := Result{Kept: b.Kept, Of: b.Words, Exact: b.Kept == b.Words && b.Count > 0}
-		for _, h := range b.Hits {
-			br.Hits = append(br.Hits, h.ID)
-		}
-		whittle, baseline = append(whittle, w), append(baseline, br)
+		whittle, baseline = append(whittle, w), append(baseline, b)
 	}
 	return NewReport(cases, whittle, baseline, products, k), nil
 }
 
-// rescue is whittle's result for one query: the top k of the plan its
-// rescue settles on, and how many of the query's constraints (filler
-// aside) that plan keeps.
-func rescue(ctx context.Context, eng Engine, rw *rewrite.Rewriter, q string, k int) (Result, error) {
-	o, err := rw.Rescue(ctx, q)
+// blind is the baseline's result for one case: its top k, and its whole
+// result set scored.
+func blind(ctx context.Context, eng Engine, c Case, k int, byID map[string]*catalog.Product) (Result, error) {
+	b, err := eng.Baseline(ctx, c.Query, k)
+	if err != nil {
+		return Result{}, err
+	}
+	res := Result{Kept: b.Kept, Of: b.Words, Exact: b.Kept == b.Words && b.Count > 0}
+	for _, h := range b.Hits {
+		res.Hits = append(res.Hits, h.ID)
+	}
+	if b.Count == 0 {
+		return res, nil
+	}
+	all, err := eng.BaselineMatches(ctx, c.Query, b.Kept)
+	if err != nil {
+		return Result{}, err
+	}
+	res.Set = scoreSet(c, all, byID)
+	return res, nil
+}
+
+// rescue is whittle's result for one case: the top k of the plan its
+// rescue settles on, that plan's whole result set scored, and how many
+// of the query's constraints (filler aside) the plan keeps.
+func rescue(ctx context.Context, eng Engine, rw *rewrite.Rewriter, c Case, k int, byID map[string]*catalog.Product) (Result, error) {
+	o, err := rw.Rescue(ctx, c.Query)
 	if err != nil {
 		return Result{}, err
 	}
@@ -85,6 +110,11 @@ func rescue(ctx context.Context, eng Engine, rw *rewrite.Rewriter, q string, k i
 	for _, h := range hits {
 		res.Hits = append(res.Hits, h.ID)
 	}
+	all, err := eng.Matches(ctx, o.Plan)
+	if err != nil {
+		return Result{}, err
+	}
+	res.Set = scoreSet(c, all, byID)
 	return res, nil
 }
 

@@ -2,6 +2,7 @@ package eval
 
 import (
 	"context"
+	"math"
 	"path/filepath"
 	"testing"
 
@@ -35,9 +36,69 @@ func TestEvaluateTiny(t *testing.T) {
 		// in size m but a sweater.
 		{Query: "cable knit skirt size m", Product: "SK-1", ProductType: "skirt", Failure: FailPattern, Hard: size("m")},
 	}
+	// Each set is no larger than the top 10, so it is the hits: in case
+	// 1 the baseline's 2 words hold only SK-2 (SK-1 has skirt, not xl),
+	// in case 2 its 3 only RG-1 (SW-1 has wool alone), in case 3 its 3
+	// only SW-1 (SK-1 has skirt and m).
 	checkFigures(t, ctx, eng, cases, ps,
-		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 7, Of: 9},
-		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 2, Found: 2, ReciprocalRank: 2, Kept: 8, Of: 13})
+		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 7, Of: 9,
+			Matched: 3, MatchedOnTarget: 3, SetQueries: 3, SetShares: 3},
+		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 2, Found: 2, ReciprocalRank: 2, Kept: 8, Of: 13,
+			Matched: 3, MatchedOnTarget: 2, SetQueries: 3, SetShares: 2})
+}
+
+// With one hit a query, the whole result sets hold more than the hits;
+// their figures do not depend on which match ranks first, so only they
+// are checked, worked out by hand from the tiny catalog.
+func TestEvaluateSetsTiny(t *testing.T) {
+	ps := tiny(t)
+	ctx := context.Background()
+	eng := tinyIndex(t, ctx, ps)
+	defer eng.Close()
+	xl := []Attr{{Kind: parser.KindSize, Value: "xl"}}
+	cases := []Case{
+		// whittle: no rug is ember; widened or dropped, the colour
+		// leaves the wool rug: {RG-1}. Baseline: no product has all
+		// three words; RG-1 has wool and rug, SW-1 ember and wool:
+		// {RG-1, SW-1}, the sweater off target.
+		{Query: "ember wool rug", Product: "RG-1", ProductType: "rug", Failure: FailColour},
+		// whittle: "snazzy" dropped, both black prime lenses match:
+		// {LN-1, LN-2}. Baseline: the lenses have black, prime and
+		// lens, 3 of 4 words: {LN-1, LN-2}. All on target.
+		{Query: "snazzy black prime lens", Product: "LN-1", ProductType: "prime lens", Failure: FailKeyword},
+		// whittle: no skirt in xl is black; the colour goes, size xl
+		// holds: {SK-2}. Baseline: SK-1 has black and skirt, SK-2
+		// skirt and xl, the lenses black alone: {SK-1, SK-2}, SK-1
+		// without the hard xl.
+		{Query: "black skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: FailColour, Hard: xl},
+	}
+	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), cases, ps, 1)
+	if err != nil {
+		t.Fatal(err)
+	}
+	type sets struct {
+		Matched, OnTarget, Queries int
+		Shares                     float64
+	}
+	for _, tc := range []struct {
+		name      string
+		got, want sets
+	}{
+		// 1 + 2 + 1 matched, all on target.
+		{"whittle", sets{rep.Whittle.Matched, rep.Whittle.MatchedOnTarget, rep.Whittle.SetQueries, rep.Whittle.SetShares}, sets{4, 4, 3, 3}},
+		// 2 + 2 + 2 matched, 1 + 2 + 1 on target: shares ½ + 1 + ½.
+		{"baseline", sets{rep.Baseline.Matched, rep.Baseline.MatchedOnTarget, rep.Baseline.SetQueries, rep.Baseline.SetShares}, sets{6, 4, 3, 2}},
+	} {
+		if tc.got != tc.want {
+			t.Errorf("%s: whole sets %+v, worked by hand %+v", tc.name, tc.got, tc.want)
+		}
+		if rep.Whittle.Hits != 3 || rep.Baseline.Hits != 3 {
+			t.Errorf("hits %d and %d, want one a query", rep.Whittle.Hits, rep.Baseline.Hits)
+		}
+	}
+	if got := rep.Baseline.SetPrecision(); math.Abs(got-4.0/6) > 1e-12 {
+		t.Errorf("baseline set precision %v, want 4/6", got)
+	}
 }
 
 // Three long cases on the tiny catalog, written as the long style writes
@@ -82,9 +143,13 @@ func TestEvaluateLongTiny(t *testing.T) {
 	}
 	checkFigures(t, ctx, eng, cases, ps,
 		// One hit a case, each the product meant, at rank 1; 18 of 20.
-		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 18, Of: 20},
+		// Each set is its hits.
+		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 18, Of: 20,
+			Matched: 3, MatchedOnTarget: 3, SetQueries: 3, SetShares: 3},
 		// 1 + 1 + 2 hits; LN-2 keeps no hard attribute; 15 of 27 words.
-		Figures{Queries: 3, Rescued: 3, Hits: 4, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 15, Of: 27})
+		// Each set is its hits: shares 1 + 1 + ½.
+		Figures{Queries: 3, Rescued: 3, Hits: 4, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 15, Of: 27,
+			Matched: 4, MatchedOnTarget: 3, SetQueries: 3, SetShares: 2.5})
 }
 
 // tinyIndex indexes ps in a temporary directory and opens it.
