@@ -20,6 +20,10 @@ type Clause struct {
 	Dimension string `json:"dimension,omitempty"`
 	// Values are the allowed values, any of which matches, lower case:
 	// product type names, colour names, sizes, designations, codes, words.
+	// They are in order of preference, the value asked first: a type
+	// before its subtypes, a colour before the catalog's colours nearest
+	// it. An engine with nothing else to rank by can list the products
+	// that match an earlier value first.
 	Values []string `json:"values,omitempty"`
 	// Min and Max bound a measure (in its base unit) or a price (in
 	// Unit, a currency code); either may be nil.

@@ -33,24 +33,17 @@ func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, erro
 		}
 		dq := bleve.NewDisjunctionQuery(qs...)
 		dq.SetMin(float64(n))
-		req := bleve.NewSearchRequestOptions(dq, k, 0, false)
-		req.Fields = []string{fStored}
-		// Ties by id, as Show breaks them: otherwise equal scores come in
-		// the order of the index's segments, which differs from build to
-		// build.
-		req.SortBy([]string{"-_score", "_id"})
-		res, err := e.idx.SearchInContext(ctx, req)
+		// Ranked as Show ranks: rounded scores, ties by id; otherwise
+		// equal scores come in the order of the index's segments, which
+		// differs from build to build.
+		hits, total, err := e.ranked(ctx, dq, k)
 		if err != nil {
 			return nil, err
 		}
-		if res.Total == 0 {
+		if total == 0 {
 			continue
 		}
-		b.Kept, b.Count = n, int(res.Total)
-		for _, h := range res.Hits {
-			v, _ := h.Fields[fStored].(string)
-			b.Hits = append(b.Hits, shownOf(h.ID, h.Score, v))
-		}
+		b.Kept, b.Count, b.Hits = n, total, hits
 		return b, nil
 	}
 	return b, nil

@@ -143,50 +143,43 @@ type Shown = rewrite.ReportHit
 
 // Show returns the k best products that match p, with what a result
 // list shows of them. A plan that keeps words to match in the text is
-// ranked by bleve's scores, ties by id; one of attributes alone, which
-// every match meets equally, lists its matches in id order with score 1.
+// ranked by bleve's scores, rounded so that products matched alike tie,
+// ties by id. One of attributes alone, which
+// every match meets, lists its matches with score 1 in the order of
+// preference its clauses' values give (see [rewrite.Clause.Values]): the
+// type asked before its subtypes, the nearest colour before farther ones,
+// the product type's clause first; then in id order.
 func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
 	if !scoredOnly(p) {
 		return e.showListed(ctx, p, k)
 	}
-	req := bleve.NewSearchRequestOptions(toQuery(p), k, 0, false)
-	req.Fields = []string{fStored}
-	req.SortBy([]string{"-_score", "_id"})
-	res, err := e.idx.SearchInContext(ctx, req)
-	if err != nil {
-		return nil, err
+	if k <= 0 {
+		return nil, nil
 	}
-	out := make([]Shown, 0, len(res.Hits))
-	for _, h := range res.Hits {
-		v, _ := h.Fields[fStored].(string)
-		out = append(out, shownOf(h.ID, h.Score, v))
-	}
-	return out, nil
+	out, _, err := e.ranked(ctx, toQuery(p), k)
+	return out, err
 }
 
-// showListed shows the first k matches of p in id order.
+// showListed shows the first k matches of p, in the order of its
+// clauses' values, then of id.
 func (e *Engine) showListed(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
 	s := e.sets
 	m, err := s.listedMatch(ctx, p)
 	if err != nil {
 		return nil, err
 	}
-	ids := s.list.first(m, k)
+	prefs, err := s.preferences(ctx, p)
+	if err != nil {
+		return nil, err
+	}
+	ids := s.list.preferred(m, prefs, k)
 	out := make([]Shown, 0, len(ids))
 	for _, id := range ids {
-		doc, err := s.reader.Document(id)
+		sh, err := e.shown(id, 1)
 		if err != nil {
 			return nil, err
 		}
-		var v string
-		if doc != nil {
-			doc.VisitFields(func(f index.Field) {
-				if f.Name() == fStored {
-					v = string(f.Value())
-				}
-			})
-		}
-		out = append(out, shownOf(id, 1, v))
+		out = append(out, sh)
 	}
 	return out, nil
 }

@@ -242,10 +242,11 @@ func TestCountsAgreeWithBleve(t *testing.T) {
 	}
 }
 
-// A plan of attributes alone lists its matches in product id order, the
-// same however bleve numbered the documents (openShop builds in batches
-// of 4, so there are several segments).
-func TestShowListsByID(t *testing.T) {
+// A plan of attributes alone lists its matches by its clauses' values,
+// earlier values first, then in product id order, the same however bleve
+// numbered the documents (openShop builds in batches of 4, so there are
+// several segments). Each list is worked out by hand from shop.jsonl.
+func TestShowListsByPreference(t *testing.T) {
 	e := openShop(t)
 	ctx := context.Background()
 	for _, tc := range []struct {
@@ -257,7 +258,24 @@ func TestShowListsByID(t *testing.T) {
 		// The first five of the thirteen ids in shop.jsonl, sorted.
 		{"everything", rewrite.Plan{}, 5, []string{"LB-1", "LB-2", "LN-1", "LN-2", "RG-1"}},
 		{"rain jackets", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"rain jacket"}}}}, 2, []string{"RJ-1", "RJ-2"}},
-		{"more than match", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens", "stud"}}}}, 10, []string{"LB-1", "LB-2", "LN-1", "LN-2"}},
+		// The lenses, asked first, before the studs (LB-1, LB-2).
+		{"more than match", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens", "stud"}}}}, 10, []string{"LN-1", "LN-2", "LB-1", "LB-2"}},
+		// RJ-2 is morning fog, RJ-1 harvest gold: the colour asked first
+		// comes first, against the id order.
+		{"nearest colour first", rewrite.Plan{Clauses: []rewrite.Clause{
+			{Field: "product_type", Values: []string{"rain jacket"}},
+			{Field: "colour", Values: []string{"morning fog", "harvest gold"}}}}, 10, []string{"RJ-2", "RJ-1"}},
+		// The type's clause comes first, whatever the plan's order: the
+		// rain jackets (RJ-3 ember before RJ-1 harvest gold), then the
+		// sweater SW-2 in oatmeal, the first colour.
+		{"type before colour", rewrite.Plan{Clauses: []rewrite.Clause{
+			{Field: "colour", Values: []string{"oatmeal", "ember", "harvest gold"}},
+			{Field: "product_type", Values: []string{"rain jacket", "sweater"}}}}, 10, []string{"RJ-3", "RJ-1", "SW-2"}},
+		{"the first two of those", rewrite.Plan{Clauses: []rewrite.Clause{
+			{Field: "colour", Values: []string{"oatmeal", "ember", "harvest gold"}},
+			{Field: "product_type", Values: []string{"rain jacket", "sweater"}}}}, 2, []string{"RJ-3", "RJ-1"}},
+		// An excluded clause gives no order: all but the lenses, by id.
+		{"excluded", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens", "sweater"}, Excluded: true}}}, 3, []string{"LB-1", "LB-2", "RG-1"}},
 		{"none", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"zorblax"}}}}, 10, nil},
 	} {
 		t.Run(tc.name, func(t *testing.T) {

@@ -158,3 +158,34 @@ func (l *listing) all(m *roaring.Bitmap) []string {
 	}
 	return out
 }
+
+// preferred returns the ids of the first k products of m in the order
+// prefs gives, then in id order. Each entry of prefs is a clause's values
+// in order of preference, as the products each matches: a product comes
+// before another when, at the first clause where they differ, the first
+// value it matches comes earlier. A product that matches none of a
+// clause's values comes after those that match one.
+func (l *listing) preferred(m *roaring.Bitmap, prefs [][]*roaring.Bitmap, k int) []string {
+	var out []string
+	var walk func(j int, set *roaring.Bitmap)
+	walk = func(j int, set *roaring.Bitmap) {
+		if len(out) >= k || set.IsEmpty() {
+			return
+		}
+		if j == len(prefs) {
+			out = append(out, l.first(set, k-len(out))...)
+			return
+		}
+		rest := set.Clone()
+		for _, b := range prefs[j] {
+			if rest.IsEmpty() || len(out) >= k {
+				return
+			}
+			walk(j+1, roaring.And(rest, b))
+			rest.AndNot(b)
+		}
+		walk(j+1, rest)
+	}
+	walk(0, m)
+	return out
+}

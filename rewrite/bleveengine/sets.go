@@ -107,6 +107,35 @@ func (s *sets) listedMatch(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap
 	return s.match(ctx, p)
 }
 
+// preferences returns, for each clause of p that allows several values
+// and is not excluded, the products each of its values matches, in the
+// order of the values: the product type's clauses first, then the others
+// in the plan's order.
+func (s *sets) preferences(ctx context.Context, p rewrite.Plan) ([][]*roaring.Bitmap, error) {
+	var first, rest [][]*roaring.Bitmap
+	for _, c := range p.Clauses {
+		if c.Excluded || len(c.Values) < 2 {
+			continue
+		}
+		each := make([]*roaring.Bitmap, len(c.Values))
+		for i, v := range c.Values {
+			one := c
+			one.Values = []string{v}
+			b, err := s.clause(ctx, one)
+			if err != nil {
+				return nil, err
+			}
+			each[i] = b
+		}
+		if c.Field == "product_type" {
+			first = append(first, each)
+		} else {
+			rest = append(rest, each)
+		}
+	}
+	return append(first, rest...), nil
+}
+
 // clause returns the products c matches, excluded or not.
 func (s *sets) clause(ctx context.Context, c rewrite.Clause) (*roaring.Bitmap, error) {
 	c.Excluded, c.From = false, 0
