@@ -20,10 +20,17 @@ const scoreGrain = 1e-9
 
 func roundScore(s float64) float64 { return math.Round(s/scoreGrain) * scoreGrain }
 
+// tieReach is how many hits ranked fetches, at most, to hold every
+// product tied with the k-th. Past it (a query whose words thousands of
+// products match alike) the ties it holds are those bleve's exact scores
+// put first.
+const tieReach = 1024
+
 // ranked returns the best k products q matches, by rounded score then
 // id, with what a result list shows of them, and how many match in all.
-// It fetches past the k-th hit until every product tied with it is held,
-// so the k chosen do not depend on the scores' last bits.
+// It fetches k + 16 hits and, when the last of them still ties with the
+// k-th, fetches once more, up to tieReach, so that the k chosen do not
+// depend on the scores' last bits.
 func (e *Engine) ranked(ctx context.Context, q query.Query, k int) ([]Shown, int, error) {
 	if k <= 0 {
 		res, err := e.idx.SearchInContext(ctx, bleve.NewSearchRequestOptions(q, 0, 0, false))
@@ -32,7 +39,7 @@ func (e *Engine) ranked(ctx context.Context, q query.Query, k int) ([]Shown, int
 		}
 		return nil, int(res.Total), nil
 	}
-	for n := k + 16; ; n *= 2 {
+	for n := k + 16; ; n = max(tieReach, k+16) {
 		req := bleve.NewSearchRequestOptions(q, n, 0, false)
 		req.SortBy([]string{"-_score", "_id"})
 		res, err := e.idx.SearchInContext(ctx, req)
@@ -40,7 +47,7 @@ func (e *Engine) ranked(ctx context.Context, q query.Query, k int) ([]Shown, int
 			return nil, 0, err
 		}
 		hits := res.Hits
-		if len(hits) == n && uint64(n) < res.Total && roundScore(hits[n-1].Score) >= roundScore(hits[k-1].Score) {
+		if n < tieReach && len(hits) == n && uint64(n) < res.Total && roundScore(hits[n-1].Score) >= roundScore(hits[k-1].Score) {
 			continue
 		}
 		type scored struct {
