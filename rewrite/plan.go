@@ -30,6 +30,10 @@ type Clause struct {
 	Min  *float64 `json:"min,omitempty"`
 	Max  *float64 `json:"max,omitempty"`
 	Unit string   `json:"unit,omitempty"`
+	// Near, on a measure widened to a range, is the amount asked, in the
+	// same unit: an engine with nothing else to rank by can list the
+	// products nearest it first. It does not change what matches.
+	Near *float64 `json:"near,omitempty"`
 	// Excluded means a product must NOT match the clause.
 	Excluded bool `json:"excluded,omitempty"`
 	// From is the index, in the parsed query, of the constraint the

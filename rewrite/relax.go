@@ -260,7 +260,7 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 	if t := e.MeasureTolerance; t > 0 {
 		cl := rw.exactClause(it.index, it.c)
 		lo, hi := v*(1-t), v*(1+t)
-		cl.Min, cl.Max = &lo, &hi
+		cl.Min, cl.Max, cl.Near = &lo, &hi, &v
 		out = append(out, widening{&cl, fmt.Sprintf("to ±%g%% (%.4g..%.4g %s)", t*100, lo, hi, m.BaseUnit),
 			fmt.Sprintf("about %s", strings.TrimSpace(m.String()))})
 	}
@@ -292,7 +292,7 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 			}
 			lo, hi = math.Min(lo, v), math.Max(hi, v)
 			cl := rw.exactClause(it.index, it.c)
-			cl.Min, cl.Max = &lo, &hi
+			cl.Min, cl.Max, cl.Near = &lo, &hi, &v
 			out = append(out, widening{&cl, fmt.Sprintf("to the standard sizes around it (%.4g..%.4g %s)", lo, hi, m.BaseUnit),
 				"in the nearest standard " + strings.ReplaceAll(m.Dimension, "_", " ") + "s"})
 		}
@@ -466,7 +466,7 @@ func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) *
 		hi = v
 	}
 	cl := rw.exactClause(it.index, it.c)
-	cl.Min, cl.Max = &lo, &hi
+	cl.Min, cl.Max, cl.Near = &lo, &hi, &v
 	return &widening{&cl, fmt.Sprintf("to the nearest amounts carried (%.4g..%.4g %s)", lo, hi, m.BaseUnit),
 		"in the nearest " + strings.ReplaceAll(m.Dimension, "_", " ") + "s carried"}
 }

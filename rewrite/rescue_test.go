@@ -471,3 +471,29 @@ func TestLimitsUnderHeavyQueries(t *testing.T) {
 		}
 	}
 }
+
+// A measure widened to a range keeps the amount asked as Near, inside
+// the range, for an engine to list the nearest first; it does not change
+// what the plan matches.
+func TestWidenedMeasureKeepsTheAmount(t *testing.T) {
+	for _, tc := range []struct{ query, reason string }{
+		{"5x8 rug", "8 ft widened by 10%"},
+		{"2x4 12 ft", "12 ft widened to the standard lengths around it"},
+	} {
+		o := mustRescue(t, shop, tc.query)
+		found := false
+		for _, cl := range o.Plan.Clauses {
+			if cl.Field != "measure" || cl.Min == nil || cl.Max == nil || *cl.Min == *cl.Max {
+				continue
+			}
+			found = true
+			asked := o.Parsed.Constraints[cl.From].Measure.BaseAmount
+			if cl.Near == nil || asked == nil || *cl.Near != *asked || *cl.Near < *cl.Min || *cl.Near > *cl.Max {
+				t.Errorf("%s (%q): clause %+v, near %v, want the amount asked %v within the range", tc.reason, tc.query, cl, cl.Near, asked)
+			}
+		}
+		if !found {
+			t.Errorf("%q: no widened measure in %+v", tc.query, o.Plan)
+		}
+	}
+}

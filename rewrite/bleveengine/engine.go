@@ -144,11 +144,12 @@ type Shown = rewrite.ReportHit
 // Show returns the k best products that match p, with what a result
 // list shows of them. A plan that keeps words to match in the text is
 // ranked by bleve's scores, rounded so that products matched alike tie,
-// ties by id. One of attributes alone, which
-// every match meets, lists its matches with score 1 in the order of
-// preference its clauses' values give (see [rewrite.Clause.Values]): the
-// type asked before its subtypes, the nearest colour before farther ones,
-// the product type's clause first; then in id order.
+// ties by id. One of attributes alone, which every match meets, lists
+// its matches with score 1 in the order of preference its clauses give
+// (see [rewrite.Clause.Values] and [rewrite.Clause.Near]): the type
+// asked before its subtypes, the nearest colour before farther ones, the
+// products nearest a widened measure's amount first, the product type's
+// clause before the others; then in id order.
 func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
 	if !scoredOnly(p) {
 		return e.showListed(ctx, p, k)

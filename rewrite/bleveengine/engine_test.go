@@ -274,6 +274,15 @@ func TestShowListsByPreference(t *testing.T) {
 		{"the first two of those", rewrite.Plan{Clauses: []rewrite.Clause{
 			{Field: "colour", Values: []string{"oatmeal", "ember", "harvest gold"}},
 			{Field: "product_type", Values: []string{"rain jacket", "sweater"}}}}, 2, []string{"RJ-3", "RJ-1"}},
+		// A measure widened around 36 mm: LN-2's 35 mm lies within a
+		// quarter of the way to the bounds (34.5..42), LN-1's 50 mm only
+		// within three quarters (31.5..54), so LN-2 comes first.
+		{"nearest measure first", rewrite.Plan{Clauses: []rewrite.Clause{
+			{Field: "product_type", Values: []string{"lens"}},
+			{Field: "measure", Dimension: "focal_length", Min: ptr(30.0), Max: ptr(60.0), Near: ptr(36.0)}}}, 10, []string{"LN-2", "LN-1"}},
+		{"the same without near", rewrite.Plan{Clauses: []rewrite.Clause{
+			{Field: "product_type", Values: []string{"lens"}},
+			{Field: "measure", Dimension: "focal_length", Min: ptr(30.0), Max: ptr(60.0)}}}, 10, []string{"LN-1", "LN-2"}},
 		// An excluded clause gives no order: all but the lenses, by id.
 		{"excluded", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens", "sweater"}, Excluded: true}}}, 3, []string{"LB-1", "LB-2", "RG-1"}},
 		{"none", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"zorblax"}}}}, 10, nil},
@@ -470,3 +479,5 @@ func TestDescribe(t *testing.T) {
 		t.Errorf("a palette entry described as %+v", f)
 	}
 }
+
+func ptr[T any](v T) *T { return &v }

@@ -109,11 +109,20 @@ func (s *sets) listedMatch(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap
 
 // preferences returns, for each clause of p that allows several values
 // and is not excluded, the products each of its values matches, in the
-// order of the values: the product type's clauses first, then the others
-// in the plan's order.
+// order of the values, and for each measure with the amount asked, the
+// products in bands ever farther from it: the product type's clauses
+// first, then the others in the plan's order.
 func (s *sets) preferences(ctx context.Context, p rewrite.Plan) ([][]*roaring.Bitmap, error) {
 	var first, rest [][]*roaring.Bitmap
 	for _, c := range p.Clauses {
+		if !c.Excluded && c.Near != nil && c.Min != nil && c.Max != nil {
+			bands, err := s.nearBands(ctx, c)
+			if err != nil {
+				return nil, err
+			}
+			rest = append(rest, bands)
+			continue
+		}
 		if c.Excluded || len(c.Values) < 2 {
 			continue
 		}
@@ -134,6 +143,28 @@ func (s *sets) preferences(ctx context.Context, p rewrite.Plan) ([][]*roaring.Bi
 		}
 	}
 	return append(first, rest...), nil
+}
+
+// nearBands are the products in ever wider ranges around c.Near, out to
+// c's own: a quarter, a half, three quarters and all of the way from
+// Near to each bound.
+func (s *sets) nearBands(ctx context.Context, c rewrite.Clause) ([]*roaring.Bitmap, error) {
+	near, lo, hi := *c.Near, *c.Min, *c.Max
+	var out []*roaring.Bitmap
+	for _, f := range []float64{0.25, 0.5, 0.75, 1} {
+		band := c
+		l, h := near-f*(near-lo), near+f*(hi-near)
+		if f == 1 {
+			l, h = lo, hi
+		}
+		band.Min, band.Max, band.Near = &l, &h, nil
+		b, err := s.clause(ctx, band)
+		if err != nil {
+			return nil, err
+		}
+		out = append(out, b)
+	}
+	return out, nil
 }
 
 // clause returns the products c matches, excluded or not.
