@@ -68,20 +68,20 @@ func (e *Engine) BaselineMatches(ctx context.Context, q string, kept int) ([]str
 	// least kept of the words match it, a word typed twice counting
 	// twice, as it does in the disjunction Baseline runs.
 	each := make([]*roaring.Bitmap, len(words))
-	any := roaring.New()
+	union := roaring.New()
 	for i, w := range words {
 		b, err := s.query(ctx, "\x00baseline\x00"+w, baselineWord(w))
 		if err != nil {
 			return nil, err
 		}
 		each[i] = b
-		any.Or(b)
+		union.Or(b)
 	}
 	if kept == 1 {
-		return s.list.all(any), nil
+		return s.list.all(union), nil
 	}
 	in := roaring.New()
-	it := any.Iterator()
+	it := union.Iterator()
 	for it.HasNext() {
 		d, n := it.Next(), 0
 		for _, b := range each {
