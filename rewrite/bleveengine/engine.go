@@ -154,9 +154,6 @@ func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, erro
 	if !scoredOnly(p) {
 		return e.showListed(ctx, p, k)
 	}
-	if k <= 0 {
-		return nil, nil
-	}
 	out, _, err := e.ranked(ctx, toQuery(p), k)
 	return out, err
 }
