@@ -1,9 +1,3 @@
-// Command whittle explains how whittle reads shopping queries.
-//
-//	whittle explain [flags] QUERY...
-//	whittle explain [flags] -        one query a line from standard input
-//
-// Run "whittle help" for the commands and "whittle explain -h" for flags.
 package main
 
 import (
@@ -29,9 +23,10 @@ usage:
   whittle eval [flags]               measure rescue quality against the blind partial match
   whittle help                       show this text
 
-Run "whittle explain -h", "whittle colour -h", "whittle policy -h" or "whittle eval -h" for more.
+Run "whittle COMMAND -h" for a command's flags.
 
-exit status: 0 parsed, 1 a query had an error, 2 bad usage.
+exit status: 0 done, 1 the command failed (explain: a query had an error
+in it), 2 bad usage.
 `
 
 func main() {
