@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"os"
+	"path/filepath"
 	"slices"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -235,4 +236,198 @@ func ExampleReport_AddExplored() {
 	// RJ-9 true
 	// RJ-2 false
 	// 2 drop mustard
+}
+
+// New makes a rewriter that asks an engine and follows a policy. The
+// example's engine knows no sizes, so a size clause matches nothing.
+// The built-in policy (nil) holds a size hard in apparel, so "rain
+// jacket size m" is not relaxed and says what is missing; a shop's
+// policy that makes the size soft lets the rescue drop it.
+func ExampleNew() {
+	eng := shopEngine{{"rain jacket", "ember"}, {"rain jacket", "morning fog"}}
+	soft, err := rewrite.ParsePolicy("shop.toml", "[category.apparel.strictness]\nsize = \"soft\"\n", lexicon.Default())
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, p := range []*rewrite.Policy{nil, soft} {
+		out, err := rewrite.New(eng, p).Rescue(context.Background(), "rain jacket size m")
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		fmt.Println(out.Count, out.Message)
+		for _, r := range out.Relaxations {
+			fmt.Println(" ", r.Operator, r.Kind, r.Text)
+		}
+	}
+	// Output:
+	// 0 No results for “rain jacket size m”. size m is not carried in rain jackets.
+	// 2 No exact match for “rain jacket size m”. Showing rain jackets without “size m”.
+	//   drop size size m
+}
+
+// WithBudget bounds the engine counts of one rescue. With a budget of
+// one, only the query as typed is counted, and it finds nothing; the
+// default budget counts the query, the hard constraints alone (none
+// here, so every product) and each constraint alone, and drops the
+// colour that matches nothing.
+func ExampleWithBudget() {
+	eng := shopEngine{{"rain jacket", "ember"}, {"rain jacket", "morning fog"}}
+	for _, n := range []int{1, rewrite.DefaultBudget} {
+		out, err := rewrite.New(eng, nil, rewrite.WithBudget(n)).Rescue(context.Background(), "mustard rain jacket")
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		fmt.Printf("budget %d: %d counted, %d found. %s\n", n, len(out.Steps), out.Count, out.Note)
+	}
+	// Output:
+	// budget 1: 1 counted, 0 found. the budget of 1 engine counts ran out; showing the best plan found so far
+	// budget 24: 4 counted, 2 found.
+}
+
+// WithParseOptions sets how the rewriter reads queries: here a shop in
+// Canada, where a bare "$" means Canadian dollars. Amounts are written
+// to the currency's minor unit.
+func ExampleWithParseOptions() {
+	eng := shopEngine{{"rain jacket", "ember"}}
+	for _, rw := range []*rewrite.Rewriter{
+		rewrite.New(eng, nil),
+		rewrite.New(eng, nil, rewrite.WithParseOptions(parser.Options{Currency: "CAD"})),
+	} {
+		pr := rw.Parse("rain jacket under $60").Of(parser.KindPrice)[0].Price
+		fmt.Println(*pr.Max, pr.Currency)
+	}
+	// Output:
+	// 60.00 USD
+	// 60.00 CAD
+}
+
+// RescueParsed rescues a query the caller has read and adjusted: here
+// the shopper asked for that colour only, so the colour is made hard
+// before the rescue, and the rescue, which would otherwise show rain
+// jackets in any colour (see Rescue), keeps it and says it is missing.
+func ExampleRewriter_RescueParsed() {
+	eng := shopEngine{{"rain jacket", "ember"}, {"rain jacket", "morning fog"}}
+	rw := rewrite.New(eng, nil)
+	r := rw.Parse("mustard rain jacket")
+	for i, c := range r.Constraints {
+		if c.Kind == parser.KindColour {
+			r.Constraints[i].Strictness = parser.Hard
+		}
+	}
+	out, err := rw.RescueParsed(context.Background(), r)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(out.Count, out.Message)
+	// Output: 0 No results for “mustard rain jacket”. mustard is not carried in rain jackets.
+}
+
+// LoadPolicy reads a shop's policy file over the built-in policy: the
+// file's apparel colour tolerance holds, home keeps its built-in 6, and
+// a purchase weighed below an add to cart earns a warning.
+func ExampleLoadPolicy() {
+	tmp, err := os.MkdirTemp("", "whittle-example")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	defer os.RemoveAll(tmp)
+	path := filepath.Join(tmp, "shop.toml")
+	file := "[category.apparel]\ncolour_tolerance = 8.0\n\n[signals.weights]\npurchase = 0.5\n"
+	if err := os.WriteFile(path, []byte(file), 0o644); err != nil {
+		fmt.Println(err)
+		return
+	}
+	p, err := rewrite.LoadPolicy(path, lexicon.Default())
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	lex := lexicon.Default()
+	fmt.Println(p.For("apparel", "", lex).ColourTolerance, p.For("home", "", lex).ColourTolerance)
+	fmt.Println(p.Warnings)
+	// Output:
+	// 8 6
+	// [signals.weights: purchase (0.5) is worth less than add_to_cart (3); tune then prizes the cheaper signal]
+}
+
+// Overlay lays one policy over another level by level: a file that sets
+// only apparel's colour tolerance has, alone, no measure tolerance or
+// price stretch; laid over the built-in policy, it keeps their 0.1 and
+// 0.15.
+func ExamplePolicy_Overlay() {
+	lex := lexicon.Default()
+	user, err := rewrite.ParsePolicy("shop.toml", "[category.apparel]\ncolour_tolerance = 8.0\n", lex)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, p := range []*rewrite.Policy{user, rewrite.DefaultPolicy().Overlay(user)} {
+		e := p.For("apparel", "", lex)
+		fmt.Println(e.ColourTolerance, e.MeasureTolerance, e.PriceStretch)
+	}
+	// Output:
+	// 8 0 0
+	// 8 0.1 0.15
+}
+
+// For settles the policy for a category and a product type: the
+// defaults' colour tolerance of 5, apparel's 4, then jacket's 3, which
+// a rain jacket, a kind of jacket, inherits; the minimum of 5 results
+// is the rain jacket's own.
+func ExamplePolicy_For() {
+	lex := lexicon.Default()
+	user, err := rewrite.ParsePolicy("shop.toml", "[product_type.jacket]\ncolour_tolerance = 3.0\n\n[product_type.\"rain jacket\"]\nmin_results = 5\n", lex)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	p := rewrite.DefaultPolicy().Overlay(user)
+	for _, t := range []struct{ category, productType string }{{"", ""}, {"apparel", ""}, {"apparel", "jacket"}, {"apparel", "rain jacket"}} {
+		e := p.For(t.category, t.productType, lex)
+		fmt.Printf("%q %q: colour tolerance %g, min results %d\n", t.category, t.productType, e.ColourTolerance, e.MinResults)
+	}
+	// Output:
+	// "" "": colour tolerance 5, min results 1
+	// "apparel" "": colour tolerance 4, min results 1
+	// "apparel" "jacket": colour tolerance 3, min results 1
+	// "apparel" "rain jacket": colour tolerance 3, min results 5
+}
+
+// StrictnessOf gives each constraint its strictness in apparel: the
+// material soft, the product type firm, the size hard, and a quoted
+// phrase, soft as a keyword by the policy, stays as hard as the quotes
+// made it.
+func ExampleEffective_StrictnessOf() {
+	e := rewrite.DefaultPolicy().For("apparel", "sweater", lexicon.Default())
+	for _, c := range parser.Parse(`merino sweater "machine washable" size m`).Constraints {
+		fmt.Println(c.Kind, e.StrictnessOf(c))
+	}
+	// Output:
+	// material soft
+	// product_type firm
+	// keyword hard
+	// size hard
+}
+
+// Key tells plans apart by what they match: the order of the clauses
+// does not change it, and excluding a clause does.
+func ExamplePlan_Key() {
+	jacket := rewrite.Clause{Field: "product_type", Values: []string{"rain jacket"}}
+	large := rewrite.Clause{Field: "size", Values: []string{"l"}}
+	notEmber := rewrite.Clause{Field: "colour", Values: []string{"ember"}, Excluded: true}
+	a := rewrite.Plan{Clauses: []rewrite.Clause{jacket, large}}
+	b := rewrite.Plan{Clauses: []rewrite.Clause{large, jacket}}
+	c := rewrite.Plan{Clauses: []rewrite.Clause{jacket, notEmber}}
+	fmt.Println(a.Key())
+	fmt.Println(a.Key() == b.Key())
+	fmt.Println(c.Key())
+	// Output:
+	// product_type//false/rain jacket & size//false/l
+	// true
+	// colour//true/ember & product_type//false/rain jacket
 }

@@ -2,12 +2,14 @@ package replay_test
 
 import (
 	"context"
+	"errors"
 	"fmt"
 	"os"
 	"slices"
 	"strings"
 
 	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/catalog"
 	"github.com/whittle-search/whittle/rewrite/replay"
 )
 
@@ -105,4 +107,52 @@ func ExampleWriteHTML() {
 	replay.WriteHTML(&b, "Replay", s.Report())
 	fmt.Println(strings.Count(b.String(), "<svg"), "charts")
 	// Output: 3 charts
+}
+
+// NewSummary starts a summary with nothing counted, to which Run or a
+// caller's own loop adds results.
+func ExampleNewSummary() {
+	r := replay.NewSummary().Report()
+	fmt.Println(r.All, r.ZeroBefore, r.RateBefore, len(r.Changes), len(r.Alerts))
+	// Output: {0 0} {0 0} {0 0} 0 0
+}
+
+// Add counts a result once as a query and as many times as it was
+// searched: "red scarf", searched 4 times, found nothing as typed and
+// was rescued by widening its colour; "boots", searched once, matched
+// as typed.
+func ExampleSummary_Add() {
+	s := replay.NewSummary()
+	s.Add(&replay.Result{Entry: replay.Entry{Line: 1, Query: "red scarf", Count: 4}, Rescued: true, FinalCount: 3,
+		Changes: []replay.Change{{Op: "widen", Kind: "colour", Text: "red"}}})
+	s.Add(&replay.Result{Entry: replay.Entry{Line: 2, Query: "boots", Count: 1}, ExactCount: 9, FinalCount: 9})
+	r := s.Report()
+	fmt.Println("all", r.All, "zero as typed", r.ZeroBefore, "rescued", r.Rescued, "after", r.ZeroAfter)
+	fmt.Println(r.Changes[0].Op, r.Changes[0].Kind, r.Changes[0].Tally)
+	// Output:
+	// all {2 5} zero as typed {1 4} rescued {1 4} after {0 0}
+	// widen colour {1 4}
+}
+
+// Skip counts a malformed line of the log passed over, as Run does with
+// SkipBad: here the second line, searched no times, and the third,
+// which has no query. The report lists the first SkippedShown.
+func ExampleSummary_Skip() {
+	log := "boots\n{\"query\": \"red scarf\", \"count\": 0}\n{\"count\": 2}\n"
+	s := replay.NewSummary()
+	for _, err := range replay.Read(strings.NewReader(log)) {
+		var le *catalog.LineError
+		if errors.As(err, &le) {
+			s.Skip(le)
+		}
+	}
+	r := s.Report()
+	fmt.Println(r.SkippedLines, "skipped")
+	for _, le := range r.Skipped {
+		fmt.Println(le)
+	}
+	// Output:
+	// 2 skipped
+	// line 2: count: 0; a query is searched at least once
+	// line 3: query: missing; every JSON line needs it
 }

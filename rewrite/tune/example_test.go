@@ -118,3 +118,27 @@ func ExampleTuner_Read() {
 	fmt.Println(j.Events, j.Searches, j.Joined)
 	// Output: 3 1 2
 }
+
+// Add reads one closed session: here an invented shopper's three
+// searches, an exact match with a click on the second product shown, a
+// search relaxed by dropping the colour, and one that showed nothing.
+func ExampleTuner_Add() {
+	at := time.Date(2026, 11, 2, 9, 0, 0, 0, time.UTC)
+	search := func(q string, shown ...string) signals.Event {
+		return signals.Event{Type: signals.Search, Session: "s1", Time: at, Query: q, Category: "apparel", Shown: shown}
+	}
+	exact := signals.Joined{Search: search("rain jacket", "RJ-1", "RJ-2"),
+		Engagements: []signals.Engagement{{Type: signals.Click, Time: at.Add(20 * time.Second), Rank: 2}}}
+	relaxed := signals.Joined{Search: search("mustard rain jacket", "RJ-1", "RJ-2", "RJ-3")}
+	relaxed.Search.Relaxations = []signals.Relaxed{{Op: rewrite.OpDrop, Kind: parser.KindColour, Text: "mustard"}}
+	nothing := signals.Joined{Search: search("zorblax")}
+
+	t := tune.New(tune.Options{})
+	if err := t.Add(context.Background(), &signals.Session{ID: "s1", Searches: []signals.Joined{exact, relaxed, nothing}}); err != nil {
+		fmt.Println(err)
+		return
+	}
+	s := t.Report().Stats
+	fmt.Println(s.Sessions, "session,", s.Searches, "searches:", s.Exact, "exact,", s.Relaxed, "relaxed,", s.FoundNothing, "found nothing;", s.Engagements, "engagement")
+	// Output: 1 session, 3 searches: 1 exact, 1 relaxed, 1 found nothing; 1 engagement
+}
