@@ -415,7 +415,8 @@ func ExampleEffective_StrictnessOf() {
 }
 
 // Key tells plans apart by what they match: the order of the clauses
-// does not change it, and excluding a clause does.
+// does not change it; excluding a clause does, and so does a price's
+// currency.
 func ExamplePlan_Key() {
 	jacket := rewrite.Clause{Field: "product_type", Values: []string{"rain jacket"}}
 	large := rewrite.Clause{Field: "size", Values: []string{"l"}}
@@ -426,8 +427,13 @@ func ExamplePlan_Key() {
 	fmt.Println(a.Key())
 	fmt.Println(a.Key() == b.Key())
 	fmt.Println(c.Key())
+	sixty := 60.0
+	usd := rewrite.Plan{Clauses: []rewrite.Clause{{Field: "price", Max: &sixty, Unit: "USD"}}}
+	eur := rewrite.Plan{Clauses: []rewrite.Clause{{Field: "price", Max: &sixty, Unit: "EUR"}}}
+	fmt.Println(usd.Key(), usd.Key() == eur.Key())
 	// Output:
 	// product_type//false/rain jacket & size//false/l
 	// true
 	// colour//true/ember & product_type//false/rain jacket
+	// price//false/<=60 USD false
 }

@@ -51,6 +51,12 @@ func (c Clause) key() string {
 	if c.Max != nil {
 		fmt.Fprintf(&b, "<=%g", *c.Max)
 	}
+	// A price's bounds mean nothing without their currency: 60 USD and
+	// 60 EUR match different products. Near is left out, as it orders
+	// the matches without changing them.
+	if c.Unit != "" {
+		fmt.Fprintf(&b, " %s", c.Unit)
+	}
 	return b.String()
 }
 

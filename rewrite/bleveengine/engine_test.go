@@ -200,7 +200,7 @@ func TestBaseline(t *testing.T) {
 // Counts come from clause bitmaps the engine keeps; each must equal the
 // total bleve's own search reports for the same query (bleve, the
 // reference here), and where the catalog makes it plain, the count
-// worked out by hand from shop.jsonl.
+// worked out by hand from shop.jsonl (whose prices are all in USD).
 func TestCountsAgreeWithBleve(t *testing.T) {
 	e := openShop(t)
 	ctx := context.Background()
@@ -219,6 +219,9 @@ func TestCountsAgreeWithBleve(t *testing.T) {
 		{"exclusion alone", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"lens"}, Excluded: true}}}, 11},
 		{"any focal length", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "measure", Dimension: "focal_length", Min: &lo, Max: &hi}}}, 2},
 		{"price", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "price", Min: &p0, Max: &p100, Unit: "USD"}}}, -1},
+		// Right after the same bounds in dollars, so that a count kept
+		// under a key blind to the currency would be given again.
+		{"the same price in euros", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "price", Min: &p0, Max: &p100, Unit: "EUR"}}}, 0},
 		{"a word", rewrite.Plan{Clauses: []rewrite.Clause{{Field: "keyword", Values: []string{"merino"}}}}, -1},
 		{"no such type", rewrite.Plan{Clauses: []rewrite.Clause{typ("zorblax")}}, 0},
 		{"lens for jx-10 in stock", rewrite.Plan{Clauses: []rewrite.Clause{typ("lens"), {Field: "compatibility", Values: []string{"jx-10"}}, {Field: rewrite.FieldInStock, Values: []string{"true"}}}}, 1},
