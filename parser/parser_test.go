@@ -96,6 +96,21 @@ var parseCases = []parseCase{
 			tg(KindProductType, "sweater", "sweater"), tg(KindSilhouette, "without hood", "not hooded").excluded()},
 	},
 	{
+		name: "minus before a battery size", query: "-cr2032 battery", category: "batteries",
+		reason: "a minus stuck to a word excludes the designation the word starts (IEC 60086 CR2032), not just its letters",
+		want:   []tagged{tg(KindSpec, "-cr2032", "not CR2032 (battery)").excluded(), tg(KindProductType, "battery", "battery")},
+	},
+	{
+		name: "minus before a paper size", query: "-a4 paper", category: "office",
+		reason: "the same for ISO 216 A4",
+		want:   []tagged{tg(KindSpec, "-a4", "not A4 (paper)").excluded(), tg(KindProductType, "paper", "paper")},
+	},
+	{
+		name: "minus before a thread", query: "-m8 bolt", category: "hardware",
+		reason: "the same for ISO 261 M8",
+		want:   []tagged{tg(KindSpec, "-m8", "not M8x1.25 (metric_thread)").excluded(), tg(KindProductType, "bolt", "bolt")},
+	},
+	{
 		name: "no zip", query: "hoodie no zip", category: "apparel",
 		reason: "no excludes the next span",
 		want:   []tagged{tg(KindProductType, "hoodie", "hoodie"), tg(KindSilhouette, "no zip", "not zip").excluded()},

@@ -70,6 +70,17 @@ func (p *tagger) segment() []unit {
 			i++
 			continue
 		}
+		if t.Type == grammar.Type(grammar.TDash) && space && i+1 < len(toks) && isWordType(toks[i+1].Type) {
+			// A minus stuck to a word excludes what the word starts:
+			// the word ("-leather"), or the code or size it runs into
+			// ("-cr2032", "-m8", "-a4"), read from the word on as if
+			// no mark were there.
+			flush()
+			out = append(out, unit{kind: uNeg, start: t.Pos.Offset, end: t.Pos.Offset + 1, spaceBefore: space})
+			space = false
+			i++
+			continue
+		}
 		if grammar.Starts(toks[i:]) {
 			it, n := grammar.ParseItem(toks[i:])
 			if it != nil && it.Exclude != nil && !space {
@@ -80,12 +91,7 @@ func (p *tagger) segment() []unit {
 				start, end := t.Pos.Offset, p.tokEnd(i+n-1)
 				if ex := it.Exclude; ex != nil {
 					out = append(out, unit{kind: uNeg, start: start, end: start + 1, spaceBefore: space})
-					if ex.Quoted != nil {
-						out = append(out, unit{kind: uItem, start: ex.Quoted.Pos.Offset, end: end, item: &grammar.Item{Quoted: ex.Quoted}})
-					} else {
-						words = p.addWord(words, i+1, piece, false)
-						piece++
-					}
+					out = append(out, unit{kind: uItem, start: ex.Quoted.Pos.Offset, end: end, item: &grammar.Item{Quoted: ex.Quoted}})
 				} else {
 					out = append(out, unit{kind: uItem, start: start, end: end, item: it, spaceBefore: space})
 				}

@@ -40,14 +40,15 @@ type Quoted struct {
 	Closed bool     `parser:"@Quote?"`
 }
 
-// Exclude is a minus sign stuck to a word or phrase: "-leather".
+// Exclude is a minus sign stuck to a quoted phrase: -"machine washable".
+// A minus stuck to a word ("-leather", "-cr2032") the tagger reads as a
+// mark before whatever the word starts, so it needs no rule here.
 type Exclude struct {
 	Pos    lexer.Position
 	EndPos lexer.Position
 
 	Dash   string  `parser:"@Dash"`
-	Quoted *Quoted `parser:"( @@"`
-	Word   string  `parser:"| @(Word | Unit | CurWord) )"`
+	Quoted *Quoted `parser:"@@"`
 }
 
 // Between is "between A and B".
