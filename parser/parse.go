@@ -46,6 +46,10 @@ func Parse(query string) *Result {
 //     measure slot whose typical range holds it (inferred). In apparel and
 //     footwear a bare number that no slot holds is a size. Otherwise it
 //     stays unitless and the evidence says so.
+//   - A measure whose dimension only its range chose takes no dimension
+//     the query already gives, by a designation or an earlier measure,
+//     when another slot holds it: in "m8 bolt 30 mm" M8 gives the
+//     diameter, so 30 mm is the length.
 //   - A number stuck to a word that is no unit ("200gsm", "1080p") is one
 //     keyword.
 //   - "m", "s" and "l" are letter sizes only in apparel, footwear and
@@ -110,6 +114,11 @@ type tagger struct {
 	// negEnd its end, negIdx the number of constraints when it was seen.
 	neg, negEnd, negIdx int
 	negText             string
+
+	// byRange holds the end offsets of the measures whose dimension was
+	// chosen only because the amount lies in a slot's typical range, for
+	// settleDimensions to reconsider.
+	byRange map[int]bool
 }
 
 func (p *tagger) errorf(start, end int, format string, args ...any) {
@@ -151,5 +160,6 @@ func (p *tagger) run() {
 	p.compounds()
 	p.findHead()
 	p.tag()
+	p.settleDimensions()
 	p.finish()
 }

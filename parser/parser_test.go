@@ -516,6 +516,15 @@ func TestMeasureDimensions(t *testing.T) {
 		{"85 lens", "the lens slot", []string{"focal_length"}},
 		{"43 tv", "the tv slot", []string{"diagonal"}},
 		{"m8 bolts 40mm", "40 mm fits the bolt's length slot, not its diameter", []string{"length"}},
+		// A bolt is named by its thread and its length, M8 × 30 a bolt of
+		// thread M8 and length 30 mm (ISO 4017's designations, from memory);
+		// ISO 261 gives M8 a major diameter of 8 mm.
+		{"m8 bolt 30 mm", "30 mm lies in the bolt's diameter range too, but M8 gives the diameter", []string{"length"}},
+		{"30 mm m8 bolt", "the same, with the thread typed after the measure", []string{"length"}},
+		{"m8 bolt 1", "a bare 1 would be a 1 in diameter; with M8 it is a length, in the length slot's inches", []string{"length"}},
+		{"bolt 8 mm 30 mm", "the first amount is the diameter, so the second is the length", []string{"diameter", "length"}},
+		{"-m8 bolt 30 mm", "a thread excluded gives no diameter, so 30 mm stays the diameter its range says", []string{"diameter"}},
+		{"m8 bolt 5 mm", "5 mm is below the length slot's range, so it stays the diameter its range says", []string{"diameter"}},
 		{`24"w x 36"h rug`, "labels w and h", []string{"width", "height"}},
 		{"20x20 cushion cover", "the cover's two slots in order", []string{"width", "height"}},
 		{"2x4x8", "the third number of a lumber size", []string{"length"}},

@@ -356,6 +356,7 @@ func (p *tagger) bare(start, end int, q quantity) {
 			c := p.measure(start, end, q, s.Dimension, nil, nil, s.Unit)
 			c.Inferred = true
 			c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", s.Unit, p.head.Name, s.Dimension, rangeText(s))
+			p.markByRange(end)
 			p.add(c)
 			return
 		}
@@ -449,6 +450,7 @@ func (p *tagger) measure(start, end int, q quantity, dim string, min, max *float
 			v = *max
 		}
 		dim = p.dimensionFor(u, v)
+		p.markByRange(end)
 	}
 	m := &Measure{Dimension: dim, Quantity: string(u.Quantity), Unit: u.String(), BaseUnit: mustUnit(units.Base(u.Quantity)).String()}
 	if min == nil && max == nil {
