@@ -7,6 +7,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"slices"
 	"strings"
 
 	"golang.org/x/term"
@@ -98,6 +99,10 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			out.WriteString("\n")
 		}
 		r.WriteText(out, style)
+	}
+	if fs.NArg() > 1 && slices.Contains(fs.Args(), "-") {
+		fmt.Fprintln(stderr, `whittle explain: "-" reads the queries from standard input and must be the only argument, after any flags`)
+		return 2
 	}
 	if fs.NArg() == 1 && fs.Arg(0) == "-" {
 		sc := bufio.NewScanner(stdin)

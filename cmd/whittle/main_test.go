@@ -38,6 +38,8 @@ func TestExitCodes(t *testing.T) {
 		{"explain help", []string{"explain", "-h"}, "", 0, "help is not an error"},
 		{"stdin ok", []string{"explain", "-"}, "85 lens\n2x6 12 ft\n", 0, "every line parses"},
 		{"stdin with an error", []string{"explain", "-"}, "85 lens\n\n", 1, "an empty line is an empty query"},
+		{"stdin among queries", []string{"explain", "red shoe", "-"}, "85 lens\n", 2, "- means standard input only as the one argument"},
+		{"flag after stdin", []string{"explain", "-", "--json"}, "85 lens\n", 2, "flags come before -; after it they would be read as queries"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			if code, _, stderr := runCLI(tc.stdin, tc.args...); code != tc.want {
