@@ -14,7 +14,7 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("demo", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	dir := fs.String("dir", "", "where the demo index lives (default: the user's cache directory)")
-	n := fs.Int("products", 20000, "size of the generated demo catalog")
+	n := fs.Int("products", 20000, "size of the generated demo catalog, at least 100 (below 1000 the last stop, tune, is skipped)")
 	rebuild := fs.Bool("rebuild", false, "build the demo index again even if one is there")
 	signalsFile := fs.String("signals", "", "also write the invented signals log the last stop learns from to `FILE`, to try whittle tune on")
 	fs.Usage = func() {
@@ -24,7 +24,7 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !productsOK(*n, stderr) {
+	if !productsOK(fs.Name(), *n, stderr) {
 		return 2
 	}
 	ctx, stop := interruptible()
@@ -50,7 +50,7 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !productsOK(*n, stderr) {
+	if !productsOK(fs.Name(), *n, stderr) {
 		return 2
 	}
 	ctx, stop := interruptible()
@@ -81,9 +81,9 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 
 // productsOK says whether n is a catalog size the demo generator
 // accepts, and tells the user when it is not.
-func productsOK(n int, stderr io.Writer) bool {
+func productsOK(cmd string, n int, stderr io.Writer) bool {
 	if n < demo.MinProducts {
-		fmt.Fprintf(stderr, "whittle: --products must be at least %d\n", demo.MinProducts)
+		fmt.Fprintf(stderr, "whittle %s: --products must be at least %d\n", cmd, demo.MinProducts)
 		return false
 	}
 	return true

@@ -56,7 +56,7 @@ flags:
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !productsOK(*n, stderr) {
+	if !productsOK(fs.Name(), *n, stderr) {
 		return 2
 	}
 	for _, f := range []struct {

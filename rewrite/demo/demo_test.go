@@ -71,6 +71,23 @@ func TestRun(t *testing.T) {
 	}
 }
 
+// The smallest demo catalog is too small for the signals log (no type
+// has ten products in a colour below about 600): the tour still runs,
+// and its last stop says it is skipped and why, instead of failing the
+// demo after every other stop was shown.
+func TestRunSmallestCatalog(t *testing.T) {
+	var out bytes.Buffer
+	if err := Run(context.Background(), &out, Options{Dir: t.TempDir(), Products: MinProducts, Events: 1000}); err != nil {
+		t.Fatal(err)
+	}
+	text := out.String()
+	for _, want := range []string{"blind partial match", "(whittle tune): skipped", "100 products are too few", "The tour took"} {
+		if !strings.Contains(text, want) {
+			t.Errorf("the demo output lacks %q:\n%s", want, text)
+		}
+	}
+}
+
 func TestBench(t *testing.T) {
 	var log bytes.Buffer
 	r, err := Bench(context.Background(), &log, BenchOptions{Dir: t.TempDir(), Products: 1000, Replay: 400, Signals: 5000})

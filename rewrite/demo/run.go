@@ -154,6 +154,12 @@ func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *b
 	if err != nil {
 		return err
 	}
+	if !newSignalGen(ps, 1).searchable() {
+		fmt.Fprintf(w, "%d. learning strictness from shoppers (whittle tune): skipped\n", n)
+		fmt.Fprintf(w, "   %d products are too few for an invented signals log: no product type has ten products\n", len(ps))
+		fmt.Fprintf(w, "   with a colour to show a search; the demo at --products 1000 or more has one\n\n")
+		return nil
+	}
 	t := tune.New(tune.Options{Policy: rewrite.DefaultPolicy().Overlay(user), Products: eng})
 	save := func(signals.Event) error { return nil }
 	var file *os.File
