@@ -23,7 +23,7 @@ usage:
   whittle eval [flags]               measure rescue quality against the blind partial match
   whittle help                       show this text
 
-Run "whittle COMMAND -h" for a command's flags.
+Run "whittle COMMAND -h" or "whittle help COMMAND" for a command's flags.
 
 exit status: 0 done, 1 the command failed (explain: a query had an error
 in it), 2 bad usage.
@@ -32,6 +32,9 @@ in it), 2 bad usage.
 func main() {
 	os.Exit(run(os.Args[1:], os.Stdin, os.Stdout, os.Stderr))
 }
+
+// helpWords ask for the usage text.
+var helpWords = map[string]bool{"help": true, "-h": true, "-help": true, "--help": true}
 
 // run is main without the process: it returns the exit status.
 func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
@@ -63,6 +66,11 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	case "serve":
 		return serveCmd(args[1:], stdout, stderr)
 	case "help", "-h", "-help", "--help":
+		if len(args) > 1 && !helpWords[args[1]] {
+			// "whittle help search" is "whittle search -h"; an
+			// unknown command is refused as it is without help.
+			return run([]string{args[1], "-h"}, stdin, stdout, stderr)
+		}
 		fmt.Fprint(stdout, usage)
 		return 0
 	}
