@@ -73,6 +73,18 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 		fs.Usage()
 		return 2
 	}
+	if *catalogFile == "" {
+		var set []string
+		fs.Visit(func(f *flag.Flag) {
+			if f.Name == "within" || f.Name == "category" || f.Name == "policy" {
+				set = append(set, "--"+f.Name)
+			}
+		})
+		if len(set) > 0 {
+			fmt.Fprintf(stderr, "whittle colour: %s only applies with --catalog\n", strings.Join(set, " and "))
+			return 2
+		}
+	}
 	if *within < 0 || math.IsNaN(*within) || *nearest < 0 {
 		fmt.Fprintln(stderr, "whittle colour: --within and --nearest must not be negative")
 		return 2

@@ -30,7 +30,9 @@ func TestColourExitCodes(t *testing.T) {
 		{"no colour", []string{"colour"}, 2, "usage"},
 		{"three colours", []string{"colour", "red", "green", "blue"}, 2, "usage"},
 		{"catalog with two", []string{"colour", "--catalog", demoCatalog, "red", "blue"}, 2, "a catalog search takes one colour"},
-		{"negative tolerance", []string{"colour", "--within", "-1", "red"}, 2, "a tolerance is not negative"},
+		{"negative tolerance", []string{"colour", "--within", "-1", "--catalog", demoCatalog, "red"}, 2, "a tolerance is not negative"},
+		{"tolerance without a catalog", []string{"colour", "--within", "5", "red"}, 2, "--within has nothing to search without --catalog, so it is refused, not ignored"},
+		{"category without a catalog", []string{"colour", "--category", "paint", "red"}, 2, "the same for --category"},
 		{"unknown category", []string{"colour", "--category", "toys", "red"}, 2, "the category must be known"},
 		{"help", []string{"colour", "-h"}, 0, "help is not an error"},
 	} {
