@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io/fs"
 	"os"
+	"path/filepath"
 	"slices"
 
 	"strings"
@@ -73,7 +74,31 @@ func LoadDir(dir string) (*Lexicon, error) {
 	if !st.IsDir() {
 		return nil, fmt.Errorf("lexicon directory: %s is not a directory", dir)
 	}
-	return Load(overlayFS{top: os.DirFS(dir), dir: dir})
+	l, err := Load(overlayFS{top: os.DirFS(dir), dir: dir})
+	if err != nil {
+		placeIn(dir, err)
+		return nil, err
+	}
+	return l, nil
+}
+
+// placeIn gives each *FileError in err about a file of dir the file's
+// path, so that "colours.wlx:2:19" names the shop's file and not the
+// built-in one of the same name.
+func placeIn(dir string, err error) {
+	var fe *FileError
+	switch e := err.(type) {
+	case interface{ Unwrap() []error }:
+		for _, x := range e.Unwrap() {
+			placeIn(dir, x)
+		}
+	default:
+		if errors.As(err, &fe) && !filepath.IsAbs(fe.File) && !strings.ContainsRune(fe.File, filepath.Separator) {
+			if _, serr := os.Stat(filepath.Join(dir, fe.File)); serr == nil {
+				fe.File = filepath.Join(dir, fe.File)
+			}
+		}
+	}
 }
 
 // overlayFS serves a file from top when it is there, else the embedded one.
