@@ -35,7 +35,8 @@ type BuildOptions struct {
 	// instead of stopping at the first.
 	SkipBad bool
 	// Progress, when set, is called after each batch with the number of
-	// products indexed so far.
+	// products indexed so far (products alone, not the colour palette
+	// entries the build also writes).
 	Progress func(indexed int)
 	// Lexicon reads colour names without a value; nil means the default.
 	Lexicon *lexicon.Lexicon
@@ -234,7 +235,7 @@ type buildStats struct {
 // batch overlaps the indexing of the last ones.
 func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon) (*buildStats, error) {
 	st := &buildStats{colours: make(map[string]*vocabColour)}
-	batches := make(chan *bleve.Batch, 1)
+	batches := make(chan docBatch, 1)
 	readErr := make(chan error, 1)
 	stop := make(chan struct{})
 	go func() {
@@ -258,14 +259,14 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 				if failed {
 					continue // drain, so the reader can finish
 				}
-				err := idx.Batch(b)
+				err := idx.Batch(b.b)
 				mu.Lock()
 				switch {
 				case err != nil && indexErr == nil:
 					indexErr = err
 					close(stop)
 				case err == nil:
-					indexed += b.Size()
+					indexed += b.products
 					if opts.Progress != nil {
 						opts.Progress(indexed)
 					}
@@ -287,18 +288,26 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 	return st, nil
 }
 
+// docBatch is a batch of mapped documents, and how many of them are
+// products (the last batch also holds the palette entries).
+type docBatch struct {
+	b        *bleve.Batch
+	products int
+}
+
 // read turns catalog lines into batches of mapped documents.
 func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon, st *buildStats,
-	out chan<- *bleve.Batch, stop <-chan struct{}) error {
+	out chan<- docBatch, stop <-chan struct{}) error {
 	rd := catalog.NewReader(r, lex)
 	batch := idx.NewBatch()
+	products := 0
 	send := func() bool {
 		if batch.Size() == 0 {
 			return true
 		}
 		select {
-		case out <- batch:
-			batch = idx.NewBatch()
+		case out <- docBatch{batch, products}:
+			batch, products = idx.NewBatch(), 0
 			return true
 		case <-stop:
 			return false
@@ -333,6 +342,7 @@ func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 			return err
 		}
 		st.Products++
+		products++
 		if name := norm(p.Colour); name != "" && lab != nil {
 			c := st.colours[name]
 			if c == nil {

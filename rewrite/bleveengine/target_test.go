@@ -130,6 +130,19 @@ func TestRebuildReplacesOnlyTheIndex(t *testing.T) {
 	}
 }
 
+// Progress counts products, not the palette entries written with them.
+func TestProgressCountsProducts(t *testing.T) {
+	last := 0
+	st, err := Build(context.Background(), strings.NewReader(twoProducts), filepath.Join(t.TempDir(), "idx"),
+		BuildOptions{BatchSize: 1, Progress: func(n int) { last = max(last, n) }})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if st.Colours != 2 || last != 2 {
+		t.Errorf("progress ended at %d with %d colours, want 2, the products", last, st.Colours)
+	}
+}
+
 func build(t *testing.T, dir string) {
 	t.Helper()
 	if _, err := Build(context.Background(), strings.NewReader(twoProducts), dir, BuildOptions{}); err != nil {
