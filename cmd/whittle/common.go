@@ -78,6 +78,13 @@ func interruptible() (context.Context, context.CancelFunc) {
 	return signal.NotifyContext(context.Background(), os.Interrupt)
 }
 
+// interrupted reports whether err, the failure of a command run with
+// ctx from interruptible, is the user's interrupt: the command reports
+// it as "interrupted", not as Go's "context canceled".
+func interrupted(ctx context.Context, err error) bool {
+	return err != nil && (ctx.Err() != nil || errors.Is(err, context.Canceled))
+}
+
 // parseFlags parses a command's flags (anywhere among its arguments) and
 // returns the other arguments. When the command should stop, ok is false
 // and code is its exit status: 0 after -h, 2 for bad usage (want says how

@@ -30,6 +30,10 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	ctx, stop := interruptible()
 	defer stop()
 	if err := demo.Run(ctx, stdout, demo.Options{Dir: *dir, Products: *n, Rebuild: *rebuild, Signals: *signalsFile}); err != nil {
+		if interrupted(ctx, err) {
+			fmt.Fprintln(stderr, "whittle demo: interrupted")
+			return 1
+		}
 		fmt.Fprintf(stderr, "whittle demo: %v\n", err)
 		return 1
 	}
@@ -60,6 +64,10 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 		return 2
 	}
 	r, err := demo.Bench(ctx, stderr, demo.BenchOptions{Dir: *dir, Products: *n, Replay: *replayN, Signals: *signalsN})
+	if interrupted(ctx, err) {
+		fmt.Fprintln(stderr, "whittle bench: interrupted")
+		return 1
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle bench: %v\n", err)
 		return 1

@@ -88,6 +88,10 @@ flags:
 	ctx, stop := interruptible()
 	defer stop()
 	reps, err := eval.RunStyles(ctx, opts, styles)
+	if interrupted(ctx, err) {
+		fmt.Fprintln(stderr, "whittle eval: interrupted")
+		return 1
+	}
 	if err == nil {
 		err = writeReports(stdout, reps, *asJSON)
 	}

@@ -1,6 +1,8 @@
 package main
 
 import (
+	"context"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -73,12 +75,13 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 		}
 		showProgress(stderr, cr.n.Load(), size, start, n, "products")
 	}
+	had := bleveengine.IsIndex(*dir)
 	st, err := bleveengine.Build(ctx, cr, *dir, bleveengine.BuildOptions{SkipBad: *skipBad, Progress: progress})
 	if tty {
 		fmt.Fprint(stderr, "\r\033[K")
 	}
 	if err != nil {
-		fmt.Fprintf(stderr, "whittle index: %s: %v (the index at %s is unchanged)\n", *file, err, *dir)
+		fmt.Fprintf(stderr, "whittle index: %s\n", indexFailure(ctx, err, *file, *dir, had))
 		return 1
 	}
 	for _, le := range st.Skipped {
@@ -87,6 +90,22 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "indexed %d products (%d colour names, %d lines skipped) into %s in %.1fs\n",
 		st.Products, st.Colours, len(st.Skipped), *dir, time.Since(start).Seconds())
 	return 0
+}
+
+// indexFailure says why a build of catalog file at dir failed, and what
+// is at dir now: the index that was there before (had), or none.
+func indexFailure(ctx context.Context, err error, file, dir string, had bool) string {
+	if errors.Is(err, bleveengine.ErrNotIndex) {
+		return err.Error() // it says that nothing at dir was touched
+	}
+	left := "no index was written at " + dir
+	if had {
+		left = "the index at " + dir + " is unchanged"
+	}
+	if interrupted(ctx, err) {
+		return "interrupted; " + left
+	}
+	return fmt.Sprintf("%s: %v (%s)", file, err, left)
 }
 
 // showProgress redraws the progress line of a long command on a

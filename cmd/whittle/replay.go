@@ -93,6 +93,14 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if tty {
 		fmt.Fprint(stderr, "\r\033[K")
 	}
+	if interrupted(ctx, err) {
+		if *asCSV {
+			fmt.Fprintln(stderr, "whittle replay: interrupted; the CSV stops short of the end of the log")
+		} else {
+			fmt.Fprintln(stderr, "whittle replay: interrupted; no summary was written")
+		}
+		return 1
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle replay: %s: %v\n", *logFile, err)
 		return 1

@@ -103,6 +103,10 @@ func tuneCmd(args []string, stdout, stderr io.Writer) int {
 	if tty {
 		fmt.Fprint(stderr, "\r\033[K")
 	}
+	if interrupted(ctx, err) {
+		fmt.Fprintln(stderr, "whittle tune: interrupted; no report or policy was written")
+		return 1
+	}
 	if err != nil {
 		var le *signals.LineError
 		if errors.As(err, &le) {

@@ -6,6 +6,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"io/fs"
 	"os"
 	"path/filepath"
 	"sort"
@@ -34,7 +35,8 @@ type BuildOptions struct {
 	// instead of stopping at the first.
 	SkipBad bool
 	// Progress, when set, is called after each batch with the number of
-	// products indexed so far.
+	// products indexed so far (products alone, not the colour palette
+	// entries the build also writes).
 	Progress func(indexed int)
 	// Lexicon reads colour names without a value; nil means the default.
 	Lexicon *lexicon.Lexicon
@@ -62,9 +64,100 @@ type vocabColour struct {
 	Count int        `json:"count"`
 }
 
+// ErrNotIndex is the error a *TargetError wraps: the path Build was
+// asked to write holds something other than an index Build wrote.
+// Test for it with errors.Is(err, ErrNotIndex).
+var ErrNotIndex = errors.New("not a whittle index")
+
+// TargetError is Build's refusal to write at Dir, because what is there
+// is neither an empty directory nor an index Build wrote (a directory
+// holding exactly whittle-vocabulary.json and the bleve index, index).
+// Nothing at Dir is touched. It wraps ErrNotIndex; errors.As gets it.
+type TargetError struct {
+	Dir string
+	// Reason says what is there: "it is a file", "it is a directory
+	// holding notes.txt", ...
+	Reason string
+}
+
+func (e *TargetError) Error() string {
+	return fmt.Sprintf("refusing to write an index at %s: %s; nothing there was touched (give a new or empty directory, or an index whittle built)", e.Dir, e.Reason)
+}
+
+func (e *TargetError) Unwrap() error { return ErrNotIndex }
+
+// IsIndex reports whether dir holds an index Build wrote, which a build
+// at dir replaces: a directory holding its colour vocabulary,
+// whittle-vocabulary.json, and the bleve index, index, and nothing else.
+func IsIndex(dir string) bool {
+	has, err := checkTarget(filepath.Clean(dir))
+	return has && err == nil
+}
+
+// checkTarget reports whether dir holds an index Build wrote (has). It
+// refuses with a *TargetError anything at dir Build must not replace:
+// everything but an empty directory or such an index.
+func checkTarget(dir string) (has bool, err error) {
+	refuse := func(format string, args ...any) (bool, error) {
+		return false, &TargetError{Dir: dir, Reason: fmt.Sprintf(format, args...)}
+	}
+	st, err := os.Lstat(dir)
+	switch {
+	case errors.Is(err, fs.ErrNotExist):
+		return false, nil
+	case err != nil:
+		return false, err
+	case st.Mode()&fs.ModeSymlink != 0:
+		to, _ := os.Readlink(dir)
+		return refuse("it is a symbolic link, to %s", to)
+	case !st.IsDir():
+		return refuse("it is a file, not a directory")
+	}
+	entries, err := os.ReadDir(dir)
+	if err != nil {
+		return false, err
+	}
+	if len(entries) == 0 {
+		return false, nil
+	}
+	var vocab, index bool
+	var others []string
+	for _, e := range entries {
+		switch {
+		case e.Name() == vocabFile && e.Type().IsRegular():
+			vocab = true
+		case e.Name() == "index" && e.IsDir():
+			index = true
+		default:
+			others = append(others, e.Name())
+		}
+	}
+	if vocab && index && len(others) == 0 {
+		return true, nil
+	}
+	if len(others) == 0 { // one of the two, alone
+		return refuse("it is a directory holding only part of a whittle index (%s)", entries[0].Name())
+	}
+	what := others[0]
+	if len(others) > 1 {
+		what = fmt.Sprintf("%s and %d more", others[0], len(others)-1)
+	}
+	if vocab && index {
+		return refuse("it holds a whittle index but also %s, which whittle did not write", what)
+	}
+	return refuse("it is a directory holding %s, which is not a whittle index", what)
+}
+
 // Build reads a catalog from r and writes an index at dir, replacing any
-// index already there only once the new one is complete.
+// index already there only once the new one is complete. A dir that
+// exists must be an empty directory or an index Build wrote: Build
+// refuses anything else with a *TargetError (see ErrNotIndex) before it
+// reads the catalog, and leaves it as it was.
 func Build(ctx context.Context, r io.Reader, dir string, opts BuildOptions) (*Stats, error) {
+	dir = filepath.Clean(dir)
+	if _, err := checkTarget(dir); err != nil {
+		return nil, err
+	}
 	if opts.BatchSize <= 0 {
 		opts.BatchSize = 1000
 	}
@@ -142,7 +235,7 @@ type buildStats struct {
 // batch overlaps the indexing of the last ones.
 func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon) (*buildStats, error) {
 	st := &buildStats{colours: make(map[string]*vocabColour)}
-	batches := make(chan *bleve.Batch, 1)
+	batches := make(chan docBatch, 1)
 	readErr := make(chan error, 1)
 	stop := make(chan struct{})
 	go func() {
@@ -166,14 +259,14 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 				if failed {
 					continue // drain, so the reader can finish
 				}
-				err := idx.Batch(b)
+				err := idx.Batch(b.b)
 				mu.Lock()
 				switch {
 				case err != nil && indexErr == nil:
 					indexErr = err
 					close(stop)
 				case err == nil:
-					indexed += b.Size()
+					indexed += b.products
 					if opts.Progress != nil {
 						opts.Progress(indexed)
 					}
@@ -195,18 +288,26 @@ func fill(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 	return st, nil
 }
 
+// docBatch is a batch of mapped documents, and how many of them are
+// products (the last batch also holds the palette entries).
+type docBatch struct {
+	b        *bleve.Batch
+	products int
+}
+
 // read turns catalog lines into batches of mapped documents.
 func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon, st *buildStats,
-	out chan<- *bleve.Batch, stop <-chan struct{}) error {
+	out chan<- docBatch, stop <-chan struct{}) error {
 	rd := catalog.NewReader(r, lex)
 	batch := idx.NewBatch()
+	products := 0
 	send := func() bool {
 		if batch.Size() == 0 {
 			return true
 		}
 		select {
-		case out <- batch:
-			batch = idx.NewBatch()
+		case out <- docBatch{batch, products}:
+			batch, products = idx.NewBatch(), 0
 			return true
 		case <-stop:
 			return false
@@ -241,6 +342,7 @@ func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 			return err
 		}
 		st.Products++
+		products++
 		if name := norm(p.Colour); name != "" && lab != nil {
 			c := st.colours[name]
 			if c == nil {
@@ -281,25 +383,36 @@ func writeVocabulary(path string, cs map[string]*vocabColour, docs uint64) error
 	return os.WriteFile(path, b, 0o644)
 }
 
-// swap puts the finished directory tmp at dir: the old index, if any, is
-// moved aside first and removed once the new one is in place.
+// swap puts the finished directory tmp at dir: what is at dir, an empty
+// directory or an old index, is checked again (the build may have taken
+// a while), moved aside into a fresh directory of its own, and removed
+// once the new index is in place.
 func swap(tmp, dir string) error {
-	old := ""
-	if _, err := os.Stat(dir); err == nil {
-		old = dir + ".old"
-		os.RemoveAll(old)
-		if err := os.Rename(dir, old); err != nil {
+	if _, err := checkTarget(dir); err != nil {
+		return err
+	}
+	hold := ""
+	if _, err := os.Lstat(dir); err == nil {
+		if hold, err = os.MkdirTemp(filepath.Dir(dir), "."+filepath.Base(dir)+".old-"); err != nil {
+			return fmt.Errorf("moving the old index aside: %w", err)
+		}
+		if err := os.Rename(dir, filepath.Join(hold, "index")); err != nil {
+			os.Remove(hold)
 			return fmt.Errorf("moving the old index aside: %w", err)
 		}
 	}
 	if err := os.Rename(tmp, dir); err != nil {
-		if old != "" {
-			os.Rename(old, dir)
+		if hold != "" {
+			if rerr := os.Rename(filepath.Join(hold, "index"), dir); rerr != nil {
+				// The old index stays where it was moved, and the error says where.
+				return fmt.Errorf("putting the new index in place: %w (and putting the old one back: %v; it is in %s)", err, rerr, hold)
+			}
+			os.Remove(hold)
 		}
 		return fmt.Errorf("putting the new index in place: %w", err)
 	}
-	if old != "" {
-		os.RemoveAll(old)
+	if hold != "" {
+		os.RemoveAll(hold)
 	}
 	return nil
 }

@@ -12,4 +12,7 @@
 // Build writes the index into a temporary directory beside the target and
 // renames it into place only when every product is in, so a failed or
 // interrupted build never leaves a half-built index where a good one was.
+// It replaces only an empty directory or an index it wrote: anything else
+// at the target is refused with a *TargetError (errors.Is ErrNotIndex)
+// and left as it was.
 package bleveengine

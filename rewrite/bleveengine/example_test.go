@@ -449,3 +449,48 @@ func ExampleEngine_Describe() {
 	// lens camera fennorac black 35 mm [jx-10] in stock: false
 	// bleveengine: no product "LN-9"
 }
+
+// Build refuses a target that is neither new, nor an empty directory,
+// nor an index it wrote, and leaves it alone: here a directory holding
+// someone's notes, given as --index by mistake.
+func ExampleTargetError() {
+	dir, err := os.MkdirTemp("", "whittle-example-")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	defer os.RemoveAll(dir)
+	os.WriteFile(filepath.Join(dir, "notes.txt"), []byte("precious"), 0o644)
+
+	_, err = bleveengine.Build(context.Background(), strings.NewReader(`{"id": "a", "title": "Tarn fleece"}`), dir, bleveengine.BuildOptions{})
+	var te *bleveengine.TargetError
+	fmt.Println(errors.Is(err, bleveengine.ErrNotIndex), errors.As(err, &te) && te.Dir == dir)
+	fmt.Println(te.Reason)
+	notes, _ := os.ReadFile(filepath.Join(dir, "notes.txt"))
+	fmt.Println(string(notes))
+	// Output:
+	// true true
+	// it is a directory holding notes.txt, which is not a whittle index
+	// precious
+}
+
+// IsIndex tells an index Build wrote, which a build replaces, from
+// anything else.
+func ExampleIsIndex() {
+	dir, err := os.MkdirTemp("", "whittle-example-")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	defer os.RemoveAll(dir)
+	idx := filepath.Join(dir, "idx")
+	fmt.Println(bleveengine.IsIndex(idx))
+	if _, err := bleveengine.Build(context.Background(), strings.NewReader(`{"id": "a", "title": "Tarn fleece"}`), idx, bleveengine.BuildOptions{}); err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(bleveengine.IsIndex(idx), bleveengine.IsIndex(dir))
+	// Output:
+	// false
+	// true false
+}

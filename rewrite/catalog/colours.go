@@ -83,7 +83,7 @@ func ReadColours(r io.Reader, lex *lexicon.Lexicon) (*Vocabulary, error) {
 		}
 		var cl colourLine
 		if err := json.Unmarshal([]byte(text), &cl); err != nil {
-			return nil, &LineError{Line: line, Msg: "not a JSON object: " + err.Error()}
+			return nil, &LineError{Line: line, Msg: notAnObject(err)}
 		}
 		id, err := requiredString(cl.ID)
 		if err != nil {
@@ -167,7 +167,7 @@ func lineLab(cl colourLine) (colour.Lab, bool, *fieldErr) {
 	if len(cl.ColourLab) > 0 && string(cl.ColourLab) != "null" {
 		var lab []float64
 		if err := json.Unmarshal(cl.ColourLab, &lab); err != nil || len(lab) != 3 {
-			return colour.Lab{}, false, &fieldErr{"colour_lab", "want three numbers [L, a, b]"}
+			return colour.Lab{}, false, &fieldErr{"colour_lab", "want " + fieldShapes["colour_lab"].want}
 		}
 		for _, x := range lab {
 			if math.IsNaN(x) || math.IsInf(x, 0) {
@@ -210,6 +210,10 @@ func optionalString(raw json.RawMessage) (string, error) {
 	}
 	var s string
 	if err := json.Unmarshal(raw, &s); err != nil {
+		var te *json.UnmarshalTypeError
+		if errors.As(err, &te) {
+			return "", errors.New("want a string, not " + jsonKind(te.Value))
+		}
 		return "", errors.New("want a string")
 	}
 	return s, nil

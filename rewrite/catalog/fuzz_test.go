@@ -28,7 +28,7 @@ func FuzzReadLine(f *testing.F) {
 	}
 	for _, s := range []string{`{"id": "a", "title": "x", "sizes": "m"}`, `{"id": "a", "title": "x", "measures": {"length": "long"}}`,
 		`{"id": "a", "title": "x", "price": {"amount": "5", "currency": "XYZ"}}`, `{"id": "a", "title": "x", "spec": ["3x5"]}`,
-		`{"id": "a", "title": "x", "colour_lab": [150, 1, 1]}`, "not json", `{"id": "a\u001eb", "title": "x"}`} {
+		`{"id": "a", "title": "x", "colour_lab": [150, 1, 1]}`, "not json", "[1, 2]", `{"id": "a", "title": "x", "price": 59}`, `{"id": "a\u001eb", "title": "x"}`} {
 		f.Add(s)
 	}
 	f.Fuzz(func(t *testing.T, line string) {

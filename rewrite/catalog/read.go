@@ -7,6 +7,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"reflect"
 	"strings"
 	"unicode"
 
@@ -93,7 +94,7 @@ func (r *Reader) decode(text []byte) (*Product, error) {
 		p = Product{}
 		var fields map[string]json.RawMessage
 		if err := json.Unmarshal(text, &fields); err != nil {
-			return nil, fail("", "not a JSON object: %v", err)
+			return nil, fail("", "%s", notAnObject(err))
 		}
 		for name, raw := range fields {
 			if err := decodeField(&p, name, raw); err != nil {
@@ -196,11 +197,84 @@ func decodeField(p *Product, name string, raw json.RawMessage) error {
 	if err := json.Unmarshal(raw, dst); err != nil {
 		var te *json.UnmarshalTypeError
 		if errors.As(err, &te) {
-			return fmt.Errorf("want %s, not %s", te.Type, te.Value)
+			return wrongType(name, te, reflect.TypeOf(dst))
 		}
 		return err
 	}
 	return nil
+}
+
+// fieldShape is what a catalog author should write for a field that is
+// not a string: the value, described with an example, and whether it is
+// an array or an object of other values.
+type fieldShape struct {
+	want      string
+	container string // "array" or "object" when the field holds other values
+}
+
+var fieldShapes = map[string]fieldShape{
+	"colour_lab":      {"an array of three numbers [L, a, b], like [53.2, 80.1, 67.2]", "array"},
+	"color_lab":       {"an array of three numbers [L, a, b], like [53.2, 80.1, 67.2]", "array"},
+	"colour_hex":      {`a string like "#1f3a5f"`, ""},
+	"color_hex":       {`a string like "#1f3a5f"`, ""},
+	"sizes":           {`an array of strings, like ["S", "M", "10"]`, "array"},
+	"spec":            {`an array of strings, like ["2x4", "14 awg"]`, "array"},
+	"compatible_with": {`an array of strings, like ["iPhone 15"]`, "array"},
+	"measures":        {`an object of measures written with their units, like {"width": "74 cm"}`, "object"},
+	"price":           {`an object like {"amount": "59.00", "currency": "USD"}`, "object"},
+	"in_stock":        {"true or false", ""},
+}
+
+// wrongType says what field name should hold, in the words of the
+// catalog's JSON rather than of Go's types: te is the type error of
+// decoding the field into dst.
+func wrongType(name string, te *json.UnmarshalTypeError, dst reflect.Type) error {
+	shape, ok := fieldShapes[name]
+	if !ok {
+		shape = fieldShape{want: "a string"}
+	}
+	got := jsonKind(te.Value)
+	for dst.Kind() == reflect.Pointer {
+		dst = dst.Elem()
+	}
+	inner := te.Type
+	for inner.Kind() == reflect.Pointer {
+		inner = inner.Elem()
+	}
+	if inner != dst && shape.container != "" {
+		// The field is an array or object, but a value in it is wrong.
+		if te.Field != "" {
+			return fmt.Errorf("want %s, not an object whose %s is %s", shape.want, te.Field, got)
+		}
+		return fmt.Errorf("want %s, not an %s holding %s", shape.want, shape.container, got)
+	}
+	return fmt.Errorf("want %s, not %s", shape.want, got)
+}
+
+// jsonKind names a kind of JSON value, as encoding/json reports it in a
+// type error ("number", "array"), with its article: "a number".
+func jsonKind(v string) string {
+	switch {
+	case v == "array", v == "object":
+		return "an " + v
+	case v == "bool":
+		return "true or false"
+	case strings.HasPrefix(v, "number"):
+		return "a number"
+	case v == "":
+		return "something else"
+	}
+	return "a " + v
+}
+
+// notAnObject says why a line did not decode as a JSON object: it is
+// another JSON value, or not JSON at all.
+func notAnObject(err error) string {
+	var te *json.UnmarshalTypeError
+	if errors.As(err, &te) {
+		return "want a JSON object for a product, like {\"id\": \"SKU-1\", \"title\": \"Linen shirt\"}, not " + jsonKind(te.Value)
+	}
+	return "not a JSON object: " + err.Error()
 }
 
 // Measure reads a catalog measure ("74 cm", or a range such as a zoom
