@@ -71,3 +71,51 @@ func TestExplainAppliesPolicy(t *testing.T) {
 		t.Errorf("--policy not applied: %s", out)
 	}
 }
+
+// Every command that loads a policy warns, once, on standard error, when
+// the policy makes a standard designation less than hard: a 14 AWG wire
+// shown for a 12 AWG query is rated for less current (NFPA 70, the
+// ampacity table 310.16; from memory), so the operator must know.
+func TestLoadingARiskyPolicyWarns(t *testing.T) {
+	dir := t.TempDir()
+	risky := filepath.Join(dir, "risky.toml")
+	os.WriteFile(risky, []byte("[category.electrical.strictness]\nspec = \"soft\"\n"), 0o644)
+	idx := filepath.Join(dir, "idx")
+	if code, out, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", idx); code != 0 {
+		t.Fatalf("index: exit %d\n%s%s", code, out, stderr)
+	}
+	const warning = "warning: category.electrical: spec is soft"
+	for _, tc := range []struct {
+		name, stdin string
+		args        []string
+		reason      string
+	}{
+		{"explain", "", []string{"explain", "--policy", risky, "12/2 awg wire"}, "explain reads with the policy"},
+		{"search", "", []string{"search", "--index", idx, "--policy", risky, "-k", "1", "12/2 awg wire"}, "search rescues with it"},
+		{"replay", "12/2 awg wire\n", []string{"replay", "--index", idx, "--policy", risky, "--log", "-"}, "replay rescues a whole log with it"},
+		{"policy show", "", []string{"policy", "show", "--policy", risky, "--category", "electrical"}, "show prints the settled policy"},
+		{"colour", "", []string{"colour", "--catalog", shopCatalog, "--policy", risky, "mustard"}, "colour takes its tolerance from it"},
+		{"tune", "", []string{"tune", "--signals", tuneLog(t, ""), "--index", idx, "--policy", risky}, "tune reads it as the policy in force"},
+		{"eval", "", []string{"eval", "--policy", risky, "--products", "300", "--queries", "2", "--style", "short", "--dir", t.TempDir()}, "eval rescues with it"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			code, out, stderr := runCLI(tc.stdin, tc.args...)
+			if code != 0 {
+				t.Fatalf("exit %d\n%s%s", code, out, stderr)
+			}
+			if n := strings.Count(stderr, warning); n != 1 {
+				t.Errorf("%s: the warning is on stderr %d times, want once:\n%s", tc.reason, n, stderr)
+			}
+			if !strings.Contains(stderr, "whittle "+strings.Fields(tc.name)[0]+": "+warning) {
+				t.Errorf("the warning does not name the command:\n%s", stderr)
+			}
+			if strings.Contains(out, warning) {
+				t.Errorf("the warning is in the output, where it would mix with the results:\n%s", out)
+			}
+		})
+	}
+	// Without the file, or with a policy that keeps spec hard, nothing.
+	if _, _, stderr := runCLI("", "explain", "12/2 awg wire"); strings.Contains(stderr, "warning") {
+		t.Errorf("the built-in policy warns: %s", stderr)
+	}
+}
