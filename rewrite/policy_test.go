@@ -317,3 +317,38 @@ func TestPolicyDimensionNames(t *testing.T) {
 		})
 	}
 }
+
+// Settle reads a product type as a query of it is read: in its own
+// category (lexicon/data/product_types.wlx gives each type one).
+func TestSettle(t *testing.T) {
+	p := DefaultPolicy()
+	for _, tc := range []struct {
+		name, category, productType string
+		wantCategory                string
+		colour                      float64
+		problem                     ScopeProblem
+		reason                      string
+	}{
+		{"type brings its category", "", "rain jacket", "apparel", 4, 0, "a rain jacket is apparel, whose colour tolerance is 4 (policy.toml)"},
+		{"category agrees", "apparel", "rain jacket", "apparel", 4, 0, "the same category twice is no contradiction"},
+		{"a type with a parent", "", "chelsea boot", "footwear", 4, 0, "chelsea boot is footwear, tolerance 4"},
+		{"category alone", "paint", "", "paint", 2, 0, "no product type: the category as given, paint's 2"},
+		{"nothing", "", "", "", 5, 0, "the defaults' 5"},
+		{"contradiction", "paint", "rain jacket", "", 0, ScopeCategoryMismatch, "a rain jacket is not paint"},
+		{"unknown category", "toys", "", "", 0, ScopeUnknownCategory, "toys is not a lexicon category"},
+		{"unknown type", "", "hoverboard", "", 0, ScopeUnknownProductType, "no such product type"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			e, err := p.Settle(tc.category, tc.productType, lexicon.Default())
+			var se *ScopeError
+			switch {
+			case tc.problem == 0 && err != nil:
+				t.Fatalf("%v (%s)", err, tc.reason)
+			case tc.problem != 0 && (!errors.As(err, &se) || se.Problem != tc.problem):
+				t.Fatalf("error %v; want problem %d (%s)", err, tc.problem, tc.reason)
+			case tc.problem == 0 && (e.Category != tc.wantCategory || e.ColourTolerance != tc.colour):
+				t.Errorf("category %q, tolerance %g; want %q, %g (%s)", e.Category, e.ColourTolerance, tc.wantCategory, tc.colour, tc.reason)
+			}
+		})
+	}
+}
