@@ -437,3 +437,18 @@ func ExamplePlan_Key() {
 	// colour//true/ember & product_type//false/rain jacket
 	// price//false/<=60 USD false
 }
+
+// Settle takes the category from the product type: a rain jacket is
+// apparel, so it gets apparel's colour tolerance of 4, and a category
+// that says otherwise is refused.
+func ExamplePolicy_Settle() {
+	lex := lexicon.Default()
+	p := rewrite.DefaultPolicy()
+	e, err := p.Settle("", "rain jacket", lex)
+	fmt.Println(e.Category, e.ColourTolerance, err)
+	_, err = p.Settle("paint", "rain jacket", lex)
+	fmt.Println(err)
+	// Output:
+	// apparel 4 <nil>
+	// product type "rain jacket" is in category apparel, not paint
+}

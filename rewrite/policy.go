@@ -130,22 +130,16 @@ func (p *Policy) Read(query string, opts parser.Options) *parser.Result {
 	return r
 }
 
-// settingsTOML is the TOML form of Settings.
+// settingsTOML is one level of a policy file as read (policy_read.go),
+// before it is checked.
 type settingsTOML struct {
-	MinResults       *int                         `toml:"min_results"`
-	ColourTolerance  *float64                     `toml:"colour_tolerance"`
-	MeasureTolerance *float64                     `toml:"measure_tolerance"`
-	PriceStretch     *float64                     `toml:"price_stretch"`
-	Strictness       map[string]parser.Strictness `toml:"strictness"`
-	Dimensions       map[string]parser.Strictness `toml:"dimensions"`
-	StandardSizes    map[string][]string          `toml:"standard_sizes"`
-}
-
-type policyTOML struct {
-	Defaults     settingsTOML            `toml:"defaults"`
-	Categories   map[string]settingsTOML `toml:"category"`
-	ProductTypes map[string]settingsTOML `toml:"product_type"`
-	Signals      signalsTOML             `toml:"signals"`
+	MinResults       *int
+	ColourTolerance  *float64
+	MeasureTolerance *float64
+	PriceStretch     *float64
+	Strictness       map[string]parser.Strictness
+	Dimensions       map[string]parser.Strictness
+	StandardSizes    map[string][]string
 }
 
 // PolicyError is a problem in a policy file, with its line and column.
@@ -198,13 +192,15 @@ func LoadPolicy(path string, lex *lexicon.Lexicon) (*Policy, error) {
 }
 
 // ParsePolicy reads a policy in whittle's TOML layout (see policy.toml).
-// Every problem is a *PolicyError (or several, joined) with a line and
-// column: TOML syntax, a value of the wrong type or range, an unknown
-// key, kind, category or product type (with the nearest known name).
+// Badly formed TOML (a syntax error) is one *PolicyError, at the first
+// fault. In well formed TOML every problem is reported, each a
+// *PolicyError with a line and column, joined: a value of the wrong type
+// or out of range, an unknown key, kind, dimension, category or product
+// type (with the nearest known name).
 func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	lines := strings.Split(text, "\n")
-	var raw policyTOML
-	md, err := toml.Decode(text, &raw)
+	var top map[string]toml.Primitive
+	md, err := toml.Decode(text, &top)
 	if err != nil {
 		return nil, decodeError(name, text, lines, err)
 	}
@@ -217,36 +213,51 @@ func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 		}
 		errs = append(errs, &PolicyError{File: name, Line: p.line, Column: p.col, Msg: fmt.Sprintf(format, args...), Source: lineAt(lines, p.line)})
 	}
-	for _, k := range md.Undecoded() {
-		last := k[len(k)-1]
-		msg := fmt.Sprintf("unknown key %q", strings.Join(k, "."))
-		if sug := nearest(last, knownKeys(k)); sug != "" {
-			msg += fmt.Sprintf("; did you mean %q?", sug)
-		}
-		at(k, "%s", msg)
-	}
+	r := &policyReader{md: md, at: at, dims: parser.Dimensions(lex)}
 	pol := &Policy{Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings)}
-	pol.Defaults = pol.settings([]string{"defaults"}, raw.Defaults, at, lex)
-	pol.signals = pol.signalSettings(raw.Signals, at)
-	for _, c := range sortedKeys(raw.Categories) {
-		key := []string{"category", c}
-		if !slices.Contains(lexicon.Categories, c) {
-			at(key, "unknown category %q%s", c, didYouMean(c, lexicon.Categories))
-			continue
-		}
-		pol.Categories[c] = pol.settings(key, raw.Categories[c], at, lex)
-	}
 	var types []string
 	for _, e := range lex.Entries(lexicon.ProductType) {
 		types = append(types, e.Name)
 	}
-	for _, t := range sortedKeys(raw.ProductTypes) {
-		key := []string{"product_type", t}
-		if _, ok := lex.Lookup(lexicon.ProductType, t); !ok {
-			at(key, "unknown product type %q%s", t, didYouMean(t, types))
-			continue
+	for _, k := range sortedKeys(top) {
+		key := []string{k}
+		switch k {
+		case "defaults":
+			if t, ok := r.table(key, top[k]); ok {
+				pol.Defaults = pol.settings(key, r.settings(key, t), at, lex, r.dims)
+			}
+		case "signals":
+			if t, ok := r.table(key, top[k]); ok {
+				pol.signals = pol.signalSettings(r.signals(t), at)
+			}
+		case "category", "product_type":
+			levels, ok := r.table(key, top[k])
+			if !ok {
+				continue
+			}
+			for _, n := range sortedKeys(levels) {
+				key := []string{k, n}
+				switch {
+				case k == "category" && !slices.Contains(lexicon.Categories, n):
+					at(key, "unknown category %q%s", n, didYouMean(n, lexicon.Categories))
+				case k == "product_type" && !isProductType(lex, n):
+					at(key, "unknown product type %q%s", n, didYouMean(n, types))
+				default:
+					t, ok := r.table(key, levels[n])
+					if !ok {
+						continue
+					}
+					s := pol.settings(key, r.settings(key, t), at, lex, r.dims)
+					if k == "category" {
+						pol.Categories[n] = s
+					} else {
+						pol.ProductTypes[n] = s
+					}
+				}
+			}
+		default:
+			r.unknown(key)
 		}
-		pol.ProductTypes[t] = pol.settings(key, raw.ProductTypes[t], at, lex)
 	}
 	if len(errs) > 0 {
 		sort.SliceStable(errs, func(i, j int) bool {
@@ -258,8 +269,14 @@ func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	return pol, nil
 }
 
+func isProductType(lex *lexicon.Lexicon, name string) bool {
+	_, ok := lex.Lookup(lexicon.ProductType, name)
+	return ok
+}
+
 // settings checks one level of the policy and converts it.
-func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, string, ...any), lex *lexicon.Lexicon) Settings {
+// dims are the dimensions a query may name.
+func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, string, ...any), lex *lexicon.Lexicon, dims []string) Settings {
 	out := Settings{MinResults: s.MinResults, ColourTolerance: s.ColourTolerance, MeasureTolerance: s.MeasureTolerance,
 		PriceStretch: s.PriceStretch, Dimensions: s.Dimensions, StandardSizes: s.StandardSizes}
 	sub := func(k ...string) []string { return append(slices.Clone(key), k...) }
@@ -283,13 +300,33 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 			}
 		}
 	}
-	for dim, sizes := range s.StandardSizes {
+	out.Dimensions = knownDimensions(sub("dimensions"), s.Dimensions, dims, at)
+	out.StandardSizes = knownDimensions(sub("standard_sizes"), s.StandardSizes, dims, at)
+	for dim, sizes := range out.StandardSizes {
 		for _, sz := range sizes {
 			r := parser.ParseWith(sz, parser.Options{Lexicon: lex})
 			if ms := r.Of(parser.KindMeasure); len(ms) != 1 || ms[0].Measure.Unit == "" || len(r.Constraints) != 1 {
 				at(sub("standard_sizes", dim), "standard size %q of %s: want a number with its unit, such as \"8 ft\"", sz, dim)
 			}
 		}
+	}
+	return out
+}
+
+// knownDimensions is m without the dimensions no query is read with
+// (dims are those it is), each reported at its key with the nearest
+// known name.
+func knownDimensions[V any](key []string, m map[string]V, dims []string, at func([]string, string, ...any)) map[string]V {
+	if m == nil {
+		return nil
+	}
+	out := make(map[string]V, len(m))
+	for _, d := range sortedKeys(m) {
+		if !slices.Contains(dims, d) {
+			at(append(slices.Clone(key), d), "unknown dimension %q%s", d, didYouMean(d, dims))
+			continue
+		}
+		out[d] = m[d]
 	}
 	return out
 }

@@ -3,6 +3,7 @@ package rewrite
 import (
 	"fmt"
 	"strings"
+	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon"
 )
@@ -78,12 +79,26 @@ func knownKeys(k []string) []string {
 	return nil
 }
 
-// nearest returns the known key closest to an unknown one.
-func nearest(word string, known []string) string { return lexicon.Closest(word, known) }
+// nearest returns the known name closest to an unknown one, or "":
+// lexicon.Closest, which allows a third of the word's letters to be
+// wrong, and for a word of four or five letters two ("colr" is
+// "colour"), the first of equally close names winning.
+func nearest(word string, known []string) string {
+	if s := lexicon.Closest(word, known); s != "" || utf8.RuneCountInString(word) < 4 {
+		return s
+	}
+	best, bestD := "", 3
+	for _, k := range known {
+		if d := lexicon.EditDistanceWithin(word, k, 2); d < bestD {
+			best, bestD = k, d
+		}
+	}
+	return best
+}
 
-// didYouMean is ` (did you mean "x"?)`, or "" when nothing is close.
+// didYouMean is `; did you mean "x"?`, or "" when nothing is close.
 func didYouMean(word string, known []string) string {
-	if s := lexicon.Closest(word, known); s != "" {
+	if s := nearest(word, known); s != "" {
 		return fmt.Sprintf("; did you mean %q?", s)
 	}
 	return ""

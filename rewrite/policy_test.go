@@ -226,3 +226,129 @@ func TestTuningCheck(t *testing.T) {
 		})
 	}
 }
+
+// A well formed file reports every problem in it, each at its line and
+// column; a file that is not well formed TOML reports the first syntax
+// error alone, since nothing after it can be trusted. Well formed means
+// TOML v1.0.0 (toml.io/en/v1.0.0): an unterminated table header is a
+// syntax error there, a string where this layout wants a number is not.
+func TestParsePolicyReportsEveryProblem(t *testing.T) {
+	type at struct {
+		line, col int
+		msg       string
+	}
+	for _, tc := range []struct {
+		name, text string
+		want       []at
+		reason     string
+	}{
+		{"two wrong values", "[defaults]\nmeasure_tolerance = \"big\"\nprice_stretch = 0.2\n\n[defaults.strictness]\nsize = \"hardish\"\n",
+			[]at{{2, 1, `measure_tolerance: want a number, not a string`}, {6, 1, `unknown strictness "hardish"`}},
+			"a string for a number does not hide the bad strictness four lines on"},
+		{"every bad strictness of a table", "[category.apparel.strictness]\nsize = \"hardish\"\ncolour = \"soft\"\npattern = 3\n",
+			[]at{{2, 1, `unknown strictness "hardish"`}, {4, 1, "pattern: want a strictness: hard, firm, soft or filler, not an integer"}},
+			"each value of a table is read alone: the good colour between the two bad ones is no problem"},
+		{"misspelt dimensions", "[category.camera.dimensions]\nfocal_lenght = \"soft\"\n\n[category.lumber.standard_sizes]\nlenght = [\"8 ft\"]\n",
+			[]at{{2, 1, `unknown dimension "focal_lenght"; did you mean "focal_length"?`}, {5, 1, `unknown dimension "lenght"; did you mean "length"?`}},
+			"a lens's slot is focal_length and a board's length (lexicon/data/product_types.wlx); two swapped letters are one edit"},
+		{"kind with a suggestion", "[defaults.strictness]\ncolr = \"soft\"\nsize = \"firm\"\n",
+			[]at{{2, 1, `unknown constraint kind "colr"; did you mean "colour"?`}},
+			"colr is two letters short of colour, near enough in a four-letter word"},
+		{"a table where a value goes", "[defaults]\nstrictness = \"hard\"\nmin_results = \"two\"\n",
+			[]at{{2, 1, "strictness: want a table, not a string"}, {3, 1, "min_results: want a whole number, not a string"}},
+			"a scalar in place of a table is one problem, and the next key is still read"},
+		{"signals too", "[signals]\nestimate_position_bias = \"yes\"\nmin_searches = 1.5\n\n[signals.weights]\nclick = \"lots\"\n",
+			[]at{{2, 1, "estimate_position_bias: want true or false, not a string"}, {3, 1, "min_searches: want a whole number, not a decimal number"},
+				{6, 1, "click: want a number, not a string"}},
+			"the [signals] table is read value by value as well"},
+		{"syntax stops", "[defaults]\nmin_results = \"one\"\n[defaults.strictness\n",
+			[]at{{3, 21, ""}},
+			"an unterminated table header is a syntax error; the wrong type before it is not reported, as the decoder stops at the syntax"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := ParsePolicy("shop.toml", tc.text, lexicon.Default())
+			if err == nil {
+				t.Fatalf("no error; want %d (%s)", len(tc.want), tc.reason)
+			}
+			errs := []error{err}
+			if j, ok := err.(interface{ Unwrap() []error }); ok {
+				errs = j.Unwrap()
+			}
+			if len(errs) != len(tc.want) {
+				t.Fatalf("%d errors, want %d (%s):\n%v", len(errs), len(tc.want), tc.reason, err)
+			}
+			for i, w := range tc.want {
+				var pe *PolicyError
+				if !errors.As(errs[i], &pe) {
+					t.Fatalf("error %d is %v, not a *PolicyError", i, errs[i])
+				}
+				if pe.Line != w.line || pe.Column != w.col || !strings.Contains(pe.Msg, w.msg) {
+					t.Errorf("error %d: %v; want %d:%d containing %q (%s)", i, pe, w.line, w.col, w.msg, tc.reason)
+				}
+				if r := pe.Render(); !strings.Contains(r, "\n"+strings.Repeat(" ", w.col-1)+"^\n") {
+					t.Errorf("error %d renders without a caret under column %d:\n%s", i, w.col, r)
+				}
+			}
+		})
+	}
+}
+
+// Every dimension a query is read with may be named in a policy, and a
+// misspelt one is refused; the names are the lexicon's slots and the
+// parser's own (parser.Dimensions).
+func TestPolicyDimensionNames(t *testing.T) {
+	for _, tc := range []struct {
+		name, dim string
+		ok        bool
+		reason    string
+	}{
+		{"slot", "focal_length", true, "a lens's slot (lexicon/data/product_types.wlx)"},
+		{"quantity", "mass", true, "a measure with no slot of its quantity is named by the quantity"},
+		{"count", "pack_size", true, `"8 pack" is a count of pack_size`},
+		{"part of a dimension", "depth", true, `"30x20x10 cm" reads width, height, depth`},
+		{"misspelt", "diamter", false, "not a name any query is read with"},
+		{"other word", "colour", false, "a kind, not a dimension"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := ParsePolicy("shop.toml", "[defaults.dimensions]\n"+tc.dim+" = \"soft\"\n", lexicon.Default())
+			if (err == nil) != tc.ok {
+				t.Errorf("%s: error %v; want ok %v (%s)", tc.dim, err, tc.ok, tc.reason)
+			}
+		})
+	}
+}
+
+// Settle reads a product type as a query of it is read: in its own
+// category (lexicon/data/product_types.wlx gives each type one).
+func TestSettle(t *testing.T) {
+	p := DefaultPolicy()
+	for _, tc := range []struct {
+		name, category, productType string
+		wantCategory                string
+		colour                      float64
+		problem                     ScopeProblem
+		reason                      string
+	}{
+		{"type brings its category", "", "rain jacket", "apparel", 4, 0, "a rain jacket is apparel, whose colour tolerance is 4 (policy.toml)"},
+		{"category agrees", "apparel", "rain jacket", "apparel", 4, 0, "the same category twice is no contradiction"},
+		{"a type with a parent", "", "chelsea boot", "footwear", 4, 0, "chelsea boot is footwear, tolerance 4"},
+		{"category alone", "paint", "", "paint", 2, 0, "no product type: the category as given, paint's 2"},
+		{"nothing", "", "", "", 5, 0, "the defaults' 5"},
+		{"contradiction", "paint", "rain jacket", "", 0, ScopeCategoryMismatch, "a rain jacket is not paint"},
+		{"unknown category", "toys", "", "", 0, ScopeUnknownCategory, "toys is not a lexicon category"},
+		{"unknown type", "", "hoverboard", "", 0, ScopeUnknownProductType, "no such product type"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			e, err := p.Settle(tc.category, tc.productType, lexicon.Default())
+			var se *ScopeError
+			switch {
+			case tc.problem == 0 && err != nil:
+				t.Fatalf("%v (%s)", err, tc.reason)
+			case tc.problem != 0 && (!errors.As(err, &se) || se.Problem != tc.problem):
+				t.Fatalf("error %v; want problem %d (%s)", err, tc.problem, tc.reason)
+			case tc.problem == 0 && (e.Category != tc.wantCategory || e.ColourTolerance != tc.colour):
+				t.Errorf("category %q, tolerance %g; want %q, %g (%s)", e.Category, e.ColourTolerance, tc.wantCategory, tc.colour, tc.reason)
+			}
+		})
+	}
+}

@@ -79,14 +79,15 @@ func (p *Policy) Signals() Signals {
 	return out
 }
 
-// signalsTOML is the TOML form of SignalSettings.
+// signalsTOML is the [signals] table as read (policy_read.go), before
+// it is checked.
 type signalsTOML struct {
-	Weights      map[string]float64 `toml:"weights"`
-	PositionBias *float64           `toml:"position_bias"`
-	EstimateBias *bool              `toml:"estimate_position_bias"`
-	JoinWindow   *string            `toml:"join_window"`
-	MinSearches  *int               `toml:"min_searches"`
-	KeepShare    *float64           `toml:"keep_share"`
+	Weights      map[string]float64
+	PositionBias *float64
+	EstimateBias *bool
+	JoinWindow   *string
+	MinSearches  *int
+	KeepShare    *float64
 }
 
 var signalKeys = []string{"weights", "position_bias", "estimate_position_bias", "join_window", "min_searches", "keep_share"}

@@ -40,9 +40,22 @@ func checkCategory(cmd, category string, stderr io.Writer) bool {
 }
 
 // loadPolicy returns the built-in policy, with the file a --policy flag
-// names laid over it; on an error it reports it, rendered, for command
-// cmd.
+// names laid over it, and prints the policy's warnings (a standard
+// designation made less than hard) on stderr; on an error it reports
+// it, rendered, for command cmd.
 func loadPolicy(cmd, file string, lex *lexicon.Lexicon, stderr io.Writer) (*rewrite.Policy, bool) {
+	p, ok := readPolicy(cmd, file, lex, stderr)
+	if ok {
+		for _, w := range p.Warnings {
+			fmt.Fprintf(stderr, "whittle %s: warning: %s\n", cmd, w)
+		}
+	}
+	return p, ok
+}
+
+// readPolicy is loadPolicy without printing the warnings, for a command
+// that logs them.
+func readPolicy(cmd, file string, lex *lexicon.Lexicon, stderr io.Writer) (*rewrite.Policy, bool) {
 	if file == "" {
 		return rewrite.DefaultPolicy(), true
 	}

@@ -25,7 +25,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	fs.SetOutput(stderr)
 	asJSON := fs.Bool("json", false, "write the JSON contract (one object a line) instead of the table")
 	category := fs.String("category", "", "read every query as being in this category: "+strings.Join(lexicon.Categories, ", "))
-	cur := fs.String("currency", "USD", `ISO 4217 code a bare "$" or "dollars" means, when it is a dollar currency`)
+	cur := fs.String("currency", "USD", `ISO 4217 code a bare "$" or "dollars" means: `+strings.Join(parser.DollarCurrencies(), ", ")+" (either case)")
 	imperial := fs.Bool("imperial", false, "read gallons, quarts, pints, cups and fluid ounces as imperial")
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones (missing files fall back)")
 	policyFile := fs.String("policy", "", "policy file laid over the built-in strictness policy")
@@ -46,7 +46,12 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		fs.Usage()
 		return 2
 	}
-	opts := parser.Options{Category: *category, Currency: strings.ToUpper(*cur)}
+	code, err := parser.DollarCurrency(*cur)
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle explain: %v\n", err)
+		return 2
+	}
+	opts := parser.Options{Category: *category, Currency: code}
 	if *imperial {
 		opts.Volume = units.Imperial
 	}

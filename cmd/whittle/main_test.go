@@ -31,6 +31,9 @@ func TestExitCodes(t *testing.T) {
 		{"bad flag", []string{"explain", "--nope", "x"}, "", 2, "unknown flag"},
 		{"bad category", []string{"explain", "--category", "toys", "x"}, "", 2, "category must be known"},
 		{"bad colour", []string{"explain", "--colour", "pink", "x"}, "", 2, "colour must be auto, always or never"},
+		{"currency not in ISO 4217", []string{"explain", "--currency", "XYZ", "$5 shoe"}, "", 2, "ISO 4217 assigns no XYZ (from memory): a usage error, not USD silently"},
+		{"currency not a dollar", []string{"explain", "--currency", "EUR", "$5 shoe"}, "", 2, "ISO 4217's EUR is the euro, which no bare \"$\" means"},
+		{"currency in lower case", []string{"explain", "--currency", "usd", "$5 shoe"}, "", 0, "lower case is accepted, as README says"},
 		{"bad lexicon dir", []string{"explain", "--lexicon", "/no/such/dir", "x"}, "", 2, "lexicon directory must exist"},
 		{"demo too small", []string{"demo", "--products", "5"}, "", 2, "the demo catalog has a smallest size"},
 		{"bench too small", []string{"bench", "--products", "5"}, "", 2, "the benchmark catalog has a smallest size"},
@@ -106,6 +109,12 @@ func TestFlagsReachTheParser(t *testing.T) {
 	_, out, _ := runCLI("", "explain", "--json", "--currency", "cad", "under $50")
 	if !strings.Contains(out, `"currency":"CAD"`) {
 		t.Errorf("--currency cad not applied: %s", out)
+	}
+	// A code outside the dollar currencies is refused in one line that
+	// lists the accepted ISO 4217 codes.
+	if code, out, stderr := runCLI("", "explain", "--json", "--currency", "EUR", "$5 shoe"); code != 2 || out != "" ||
+		strings.Count(stderr, "\n") != 1 || !strings.Contains(stderr, "AUD, CAD, HKD, MXN, NZD, SGD, USD") {
+		t.Errorf("--currency EUR: exit %d, stdout %q, stderr %q; want 2, nothing, one line listing the codes", code, out, stderr)
 	}
 	_, out, _ = runCLI("", "explain", "--json", "--imperial", "5 gal")
 	if !strings.Contains(out, `"base_amount":22730.45`) {

@@ -19,13 +19,38 @@ import (
 const policyUsage = `usage:
   whittle policy show [flags]     print the policy in force (built in, or with --policy laid over it)
   whittle policy check FILE       check a policy file: every problem with its line and column
-
-flags of show:
 `
+
+// showOptions are the flags of policy show.
+type showOptions struct {
+	category, productType, file, lexDir *string
+	asJSON                              *bool
+}
+
+// showFlags defines the flags of policy show on a new flag set.
+func showFlags(stderr io.Writer) (*flag.FlagSet, showOptions) {
+	fs := flag.NewFlagSet("policy show", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	o := showOptions{
+		category:    fs.String("category", "", "category: "+strings.Join(lexicon.Categories, ", ")+" (default: the product type's)"),
+		productType: fs.String("product-type", "", "product type, by its lexicon name (\"rain jacket\"); it brings its category"),
+		file:        fs.String("policy", "", "policy file laid over the built-in policy"),
+		asJSON:      fs.Bool("json", false, "write JSON"),
+		lexDir:      fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones"),
+	}
+	return fs, o
+}
+
+// writePolicyUsage writes the usage of policy and the flags of show.
+func writePolicyUsage(w io.Writer) {
+	fmt.Fprint(w, policyUsage+"\nflags of show:\n")
+	fs, _ := showFlags(w)
+	fs.PrintDefaults()
+}
 
 func policyCmd(args []string, stdout, stderr io.Writer) int {
 	if len(args) == 0 {
-		fmt.Fprint(stderr, policyUsage)
+		writePolicyUsage(stderr)
 		return 2
 	}
 	switch args[0] {
@@ -34,47 +59,37 @@ func policyCmd(args []string, stdout, stderr io.Writer) int {
 	case "check":
 		return policyCheck(args[1:], stdout, stderr)
 	case "-h", "-help", "--help", "help":
-		fmt.Fprint(stdout, policyUsage)
+		writePolicyUsage(stdout)
 		return 0
 	}
-	fmt.Fprintf(stderr, "whittle policy: unknown subcommand %q\n\n%s", args[0], policyUsage)
+	fmt.Fprintf(stderr, "whittle policy: unknown subcommand %q\n\n", args[0])
+	writePolicyUsage(stderr)
 	return 2
 }
 
 func policyShow(args []string, stdout, stderr io.Writer) int {
-	fs := flag.NewFlagSet("policy show", flag.ContinueOnError)
-	fs.SetOutput(stderr)
-	category := fs.String("category", "", "category: "+strings.Join(lexicon.Categories, ", "))
-	productType := fs.String("product-type", "", "product type, by its lexicon name (\"rain jacket\")")
-	file := fs.String("policy", "", "policy file laid over the built-in policy")
-	asJSON := fs.Bool("json", false, "write JSON")
-	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones")
-	fs.Usage = func() {
-		fmt.Fprint(stderr, policyUsage)
-		fs.PrintDefaults()
-	}
+	fs, o := showFlags(stderr)
+	fs.Usage = func() { writePolicyUsage(stderr) }
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !checkCategory("policy", *category, stderr) {
+	if !checkCategory("policy", *o.category, stderr) {
 		return 2
 	}
-	lex, ok := loadLexicon("policy", *lexDir, stderr)
+	lex, ok := loadLexicon("policy", *o.lexDir, stderr)
 	if !ok {
 		return 2
 	}
-	if *productType != "" {
-		if _, ok := lex.Lookup(lexicon.ProductType, *productType); !ok {
-			fmt.Fprintf(stderr, "whittle policy: unknown product type %q\n", *productType)
-			return 2
-		}
-	}
-	pol, ok := loadPolicy("policy", *file, lex, stderr)
+	pol, ok := loadPolicy("policy", *o.file, lex, stderr)
 	if !ok {
 		return 1
 	}
-	e := pol.For(*category, *productType, lex)
-	if *asJSON {
+	e, err := pol.Settle(*o.category, *o.productType, lex)
+	if err != nil {
+		fmt.Fprintf(stderr, "whittle policy: %v\n", err)
+		return 2
+	}
+	if *o.asJSON {
 		b, err := json.MarshalIndent(e, "", "  ")
 		if err != nil {
 			fmt.Fprintf(stderr, "whittle policy: %v\n", err)
@@ -120,17 +135,24 @@ func writePolicy(w io.Writer, e rewrite.Effective) {
 }
 
 func policyCheck(args []string, stdout, stderr io.Writer) int {
-	if len(args) != 1 || strings.HasPrefix(args[0], "-") {
-		fmt.Fprint(stderr, "usage: whittle policy check FILE\n")
-		return 2
+	fs := flag.NewFlagSet("policy check", flag.ContinueOnError)
+	fs.SetOutput(stderr)
+	fs.Usage = func() {
+		fmt.Fprint(stderr, "usage: whittle policy check FILE\n\nChecks a policy file as it would be laid over the built-in policy,\n"+
+			"and prints every problem with its line and column, or its warnings and ok.\n")
 	}
-	if _, err := os.Stat(args[0]); err != nil {
+	rest, code, ok := parseFlags(fs, args, 1)
+	if !ok {
+		return code
+	}
+	file := rest[0]
+	if _, err := os.Stat(file); err != nil {
 		fmt.Fprintf(stderr, "whittle policy: %v\n", err)
 		return 1
 	}
 	// Read as it is used, laid over the built-in policy, so that a
 	// warning about the settled values (the weights' order) shows too.
-	pol, err := rewrite.LoadPolicy(args[0], lexicon.Default())
+	pol, err := rewrite.LoadPolicy(file, lexicon.Default())
 	if err != nil {
 		fmt.Fprintf(stderr, "%s\n", renderPolicyError(err))
 		return 1
@@ -138,6 +160,6 @@ func policyCheck(args []string, stdout, stderr io.Writer) int {
 	for _, w := range pol.Warnings {
 		fmt.Fprintf(stdout, "warning: %s\n", w)
 	}
-	fmt.Fprintf(stdout, "%s: ok\n", args[0])
+	fmt.Fprintf(stdout, "%s: ok\n", file)
 	return 0
 }

@@ -32,6 +32,15 @@ func TestPolicyCommands(t *testing.T) {
 		{"show bad file", []string{"policy", "show", "--policy", bad}, 1, "", `did you mean "apparel"`, "errors are rendered"},
 		{"show unknown category", []string{"policy", "show", "--category", "toys"}, 2, "", "unknown category", "usage"},
 		{"show unknown product type", []string{"policy", "show", "--product-type", "hoverboard"}, 2, "", "unknown product type", "usage"},
+		{"product type brings its category", []string{"policy", "show", "--product-type", "rain jacket"}, 0, "category apparel, product type rain jacket", "",
+			"a rain jacket is apparel (lexicon/data/product_types.wlx), as a query of it is read"},
+		{"product type's tolerance", []string{"policy", "show", "--product-type", "rain jacket"}, 0, "colour_tolerance   4", "", "apparel's 4, not the defaults' 5"},
+		{"category contradicts product type", []string{"policy", "show", "--category", "paint", "--product-type", "rain jacket"}, 2, "",
+			`product type "rain jacket" is in category apparel, not paint`, "a usage error: no query reads a rain jacket in paint"},
+		{"help lists show's flags", []string{"policy", "-h"}, 0, "-product-type", "", "the usage ends with the flags of show, not an empty list"},
+		{"show help", []string{"policy", "show", "-h"}, 0, "", "-product-type", "help is not an error"},
+		{"check help", []string{"policy", "check", "-h"}, 0, "", "usage: whittle policy check FILE", "help is not an error, as for every other -h"},
+		{"check two files", []string{"policy", "check", good, bad}, 2, "", "usage", "one file at a time"},
 		{"check good", []string{"policy", "check", good}, 0, "ok", "", "a valid file"},
 		{"check bad", []string{"policy", "check", bad}, 1, "", "bad.toml:1:1", "positions are given"},
 		{"check risky", []string{"policy", "check", risky}, 0, "warning: category.electrical", "", "relaxing a designation warns"},
@@ -69,5 +78,53 @@ func TestExplainAppliesPolicy(t *testing.T) {
 	_, out, _ = runCLI("", "explain", "--json", "--policy", file, "sage paint")
 	if !strings.Contains(out, `"kind":"colour","text":"sage","start":0,"end":4,"strictness":"firm"`) {
 		t.Errorf("--policy not applied: %s", out)
+	}
+}
+
+// Every command that loads a policy warns, once, on standard error, when
+// the policy makes a standard designation less than hard: a 14 AWG wire
+// shown for a 12 AWG query is rated for less current (NFPA 70, the
+// ampacity table 310.16; from memory), so the operator must know.
+func TestLoadingARiskyPolicyWarns(t *testing.T) {
+	dir := t.TempDir()
+	risky := filepath.Join(dir, "risky.toml")
+	os.WriteFile(risky, []byte("[category.electrical.strictness]\nspec = \"soft\"\n"), 0o644)
+	idx := filepath.Join(dir, "idx")
+	if code, out, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", idx); code != 0 {
+		t.Fatalf("index: exit %d\n%s%s", code, out, stderr)
+	}
+	const warning = "warning: category.electrical: spec is soft"
+	for _, tc := range []struct {
+		name, stdin string
+		args        []string
+		reason      string
+	}{
+		{"explain", "", []string{"explain", "--policy", risky, "12/2 awg wire"}, "explain reads with the policy"},
+		{"search", "", []string{"search", "--index", idx, "--policy", risky, "-k", "1", "12/2 awg wire"}, "search rescues with it"},
+		{"replay", "12/2 awg wire\n", []string{"replay", "--index", idx, "--policy", risky, "--log", "-"}, "replay rescues a whole log with it"},
+		{"policy show", "", []string{"policy", "show", "--policy", risky, "--category", "electrical"}, "show prints the settled policy"},
+		{"colour", "", []string{"colour", "--catalog", shopCatalog, "--policy", risky, "mustard"}, "colour takes its tolerance from it"},
+		{"tune", "", []string{"tune", "--signals", tuneLog(t, ""), "--index", idx, "--policy", risky}, "tune reads it as the policy in force"},
+		{"eval", "", []string{"eval", "--policy", risky, "--products", "300", "--queries", "2", "--style", "short", "--dir", t.TempDir()}, "eval rescues with it"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			code, out, stderr := runCLI(tc.stdin, tc.args...)
+			if code != 0 {
+				t.Fatalf("exit %d\n%s%s", code, out, stderr)
+			}
+			if n := strings.Count(stderr, warning); n != 1 {
+				t.Errorf("%s: the warning is on stderr %d times, want once:\n%s", tc.reason, n, stderr)
+			}
+			if !strings.Contains(stderr, "whittle "+strings.Fields(tc.name)[0]+": "+warning) {
+				t.Errorf("the warning does not name the command:\n%s", stderr)
+			}
+			if strings.Contains(out, warning) {
+				t.Errorf("the warning is in the output, where it would mix with the results:\n%s", out)
+			}
+		})
+	}
+	// Without the file, or with a policy that keeps spec hard, nothing.
+	if _, _, stderr := runCLI("", "explain", "12/2 awg wire"); strings.Contains(stderr, "warning") {
+		t.Errorf("the built-in policy warns: %s", stderr)
 	}
 }

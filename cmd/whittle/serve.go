@@ -55,7 +55,7 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 		return 2
 	}
 	lex, _ := loadLexicon("serve", "", stderr)
-	pol, ok := loadPolicy("serve", *policyFile, lex, stderr)
+	pol, ok := readPolicy("serve", *policyFile, lex, stderr)
 	if !ok {
 		return 2
 	}
@@ -66,6 +66,9 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	defer eng.Close()
 	log := slog.New(slog.NewJSONHandler(stderr, nil))
+	for _, w := range pol.Warnings {
+		log.Warn("policy warning", "policy", *policyFile, "warning", w)
+	}
 	srv, err := serve.New(serve.Config{Engine: eng, Policy: pol, Budget: *budget, Limits: l, Logger: log, LogQueries: *logQueries})
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle serve: %v\n", err)

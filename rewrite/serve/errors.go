@@ -28,6 +28,9 @@ const (
 	CodeUnknownCategory Code = "unknown_category"
 	// CodeUnknownProductType: the product type is not in the lexicon (400).
 	CodeUnknownProductType Code = "unknown_product_type"
+	// CodeCategoryMismatch: the product type asked for belongs to
+	// another category than the one asked for (400).
+	CodeCategoryMismatch Code = "category_mismatch"
 	// CodeBadTuning: a policy tuning is out of its range (400).
 	CodeBadTuning Code = "bad_tuning"
 	// CodeBadHits: the number of hits asked for is out of range (400).

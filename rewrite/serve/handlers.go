@@ -182,18 +182,26 @@ func (s *Server) engineError(r *http.Request, err error) *Error {
 }
 
 // handlePolicy answers the effective policy for ?category= and
-// ?product_type= (either may be absent).
+// ?product_type= (either may be absent); a product type brings its
+// category, and a category that contradicts it is refused.
 func (s *Server) handlePolicy(w http.ResponseWriter, r *http.Request) {
 	c, t := r.URL.Query().Get("category"), r.URL.Query().Get("product_type")
 	if e := checkCategory(c); e != nil {
 		writeError(w, r, e)
 		return
 	}
-	if _, ok := s.lex.Lookup(lexicon.ProductType, t); t != "" && !ok {
+	eff, err := s.policy.Settle(c, t, s.lex)
+	var se *rewrite.ScopeError
+	switch {
+	case errors.As(err, &se) && se.Problem == rewrite.ScopeUnknownProductType:
 		writeError(w, r, errorf(CodeUnknownProductType, fmt.Sprintf("unknown product type %q", t)))
-		return
+	case errors.As(err, &se) && se.Problem == rewrite.ScopeCategoryMismatch:
+		writeError(w, r, errorf(CodeCategoryMismatch, se.Msg))
+	case err != nil:
+		writeError(w, r, errorf(CodeUnknownCategory, err.Error()))
+	default:
+		writeJSON(w, http.StatusOK, eff)
 	}
-	writeJSON(w, http.StatusOK, s.policy.For(c, t, s.lex))
 }
 
 // handleHealth says the process is up.

@@ -143,6 +143,8 @@ func TestErrors(t *testing.T) {
 		{"unknown category", "POST", "parse", `{"query": "rug", "category": "garden"}`, CodeUnknownCategory, 400, nil, "not a lexicon category"},
 		{"unknown category of policy", "GET", "policy?category=garden", "", CodeUnknownCategory, 400, nil, "not a lexicon category"},
 		{"unknown product type", "GET", "policy?product_type=zorblax", "", CodeUnknownProductType, 400, nil, "not in the lexicon"},
+		{"category contradicts product type", "GET", "policy?category=paint&product_type=rain%20jacket", "", CodeCategoryMismatch, 400, nil,
+			"a rain jacket is apparel (lexicon/data/product_types.wlx), not paint"},
 		{"bad tuning", "POST", "rescue", `{"query": "rug", "tuning": {"min_results": 0}}`, CodeBadTuning, 400, nil, "min_results runs from 1"},
 		{"bad hits", "POST", "rescue", `{"query": "rug", "hits": 101}`, CodeBadHits, 400, nil, "100 at most by default"},
 		{"method not allowed", "GET", "rescue", "", CodeMethodNotAllowed, 405, nil, "rescue takes POST"},
@@ -263,6 +265,7 @@ func TestPolicy(t *testing.T) {
 		{"category=paint", "hard", 2, "hard", "paint colour is hard at ΔE00 2 (README, the built-in policy)"},
 		{"category=apparel&product_type=sweater", "firm", 4, "hard", "apparel's tolerance is 4; colour keeps its firm default"},
 		{"", "firm", 5, "hard", "the defaults: [defaults] colour_tolerance = 5.0 (README)"},
+		{"product_type=rain%20jacket", "firm", 4, "hard", "a rain jacket brings its category, apparel (lexicon/data/product_types.wlx), and apparel's 4"},
 	} {
 		t.Run(tc.query, func(t *testing.T) {
 			w := do(s.Handler(), http.MethodGet, Prefix+"policy?"+tc.query, "")
