@@ -480,3 +480,14 @@ func ExampleReportProblem() {
 	fmt.Println(rep.ExactCount, rep.Problems)
 	// Output: 2 [{0 3 1/0 divides by zero}]
 }
+
+// Refusal says, counting nothing, whether a rescue would refuse a query.
+func ExampleRewriter_Refusal() {
+	rw := rewrite.New(shopEngine{{"rain jacket", "ember"}}, nil)
+	for _, q := range []string{"nice", "nice rain jacket"} {
+		fmt.Printf("%q: %v\n", q, rw.Refusal(rw.Parse(q)))
+	}
+	// Output:
+	// "nice": query not searched: only filler words ("nice"), nothing to search for
+	// "nice rain jacket": <nil>
+}

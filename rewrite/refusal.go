@@ -73,6 +73,15 @@ func (e *RefusedError) Render() string {
 	return strings.Join(parts, "\n\n")
 }
 
+// Refusal returns the *RefusedError RescueParsed would return for r, or
+// nil when r has something to search for, counting nothing: a caller
+// that answers a refusal apart from other problems of the query checks
+// it first. Like RescueParsed, it applies the rewriter's policy to r.
+func (rw *Rewriter) Refusal(r *parser.Result) error {
+	rw.policy.Apply(r, rw.lex)
+	return refusal(r, rw.exactItems(r), rw.maxBytes())
+}
+
 // refusal is the error for a query with nothing to search for, or nil.
 // items are the constraints the rescue would plan with: a query has
 // something to search for when one is left, asked for or excluded, once

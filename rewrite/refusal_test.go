@@ -57,7 +57,11 @@ func TestRefusal(t *testing.T) {
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			eng := &memEngine{products: shop}
-			o, err := New(eng, tc.policy, tc.opts...).Rescue(context.Background(), tc.query)
+			rw := New(eng, tc.policy, tc.opts...)
+			if err := rw.Refusal(rw.Parse(tc.query)); !errors.Is(err, ErrNothingToSearch) {
+				t.Errorf("%s: Refusal = %v, want the refusal Rescue gives", tc.reason, err)
+			}
+			o, err := rw.Rescue(context.Background(), tc.query)
 			if o != nil {
 				t.Fatalf("%s: got an outcome counting %d, want a refusal", tc.reason, o.Count)
 			}
@@ -106,7 +110,11 @@ func TestRefusalSearches(t *testing.T) {
 			count: 1},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			o, err := New(&memEngine{products: shop}, nil).Rescue(context.Background(), tc.query)
+			rw := New(&memEngine{products: shop}, nil)
+			if err := rw.Refusal(rw.Parse(tc.query)); err != nil {
+				t.Errorf("%s: Refusal = %v, want nil", tc.reason, err)
+			}
+			o, err := rw.Rescue(context.Background(), tc.query)
 			if err != nil {
 				t.Fatalf("%s: %v", tc.reason, err)
 			}
