@@ -452,3 +452,57 @@ func ExamplePolicy_Settle() {
 	// apparel 4 <nil>
 	// product type "rain jacket" is in category apparel, not paint
 }
+
+func ExampleRefusedError() {
+	rw := rewrite.New(shopEngine{{"rain jacket", "ember"}}, nil)
+	for _, q := range []string{"!!!", "nice", "1/0", "   "} {
+		_, err := rw.Rescue(context.Background(), q)
+		var re *rewrite.RefusedError
+		var pe *parser.Error
+		if errors.Is(err, rewrite.ErrNothingToSearch) && errors.As(err, &re) && errors.As(err, &pe) {
+			fmt.Printf("%q: %s at %d-%d: %v\n", q, re.Reason, pe.Start, pe.End, err)
+		}
+	}
+	// Output:
+	// "!!!": query_unreadable at 0-3: query not searched: no word or number to search for
+	// "nice": query_unreadable at 0-4: query not searched: only filler words ("nice"), nothing to search for
+	// "1/0": query_unreadable at 0-3: query not searched: 1/0 divides by zero
+	// "   ": query_empty at 0-3: query not searched: query is empty
+}
+
+func ExampleRefusedError_Render() {
+	_, err := rewrite.New(shopEngine{{"rain jacket", "ember"}}, nil).Rescue(context.Background(), "the 1/0")
+	var re *rewrite.RefusedError
+	if errors.As(err, &re) {
+		fmt.Println(re.Render())
+	}
+	// Output:
+	// the 1/0
+	//     ^^^
+	// 1/0 divides by zero
+}
+
+// A query with a badly formed part beside what was read is searched for
+// what was read; the report lists the part as a ReportProblem.
+func ExampleReportProblem() {
+	eng := shopEngine{{"rain jacket", "ember"}, {"rain jacket", "morning fog"}}
+	out, err := rewrite.New(eng, nil).Rescue(context.Background(), "1/0 rain jacket")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	rep := rewrite.NewReport(out, nil)
+	fmt.Println(rep.ExactCount, rep.Problems)
+	// Output: 2 [{0 3 1/0 divides by zero}]
+}
+
+// Refusal says, counting nothing, whether a rescue would refuse a query.
+func ExampleRewriter_Refusal() {
+	rw := rewrite.New(shopEngine{{"rain jacket", "ember"}}, nil)
+	for _, q := range []string{"nice", "nice rain jacket"} {
+		fmt.Printf("%q: %v\n", q, rw.Refusal(rw.Parse(q)))
+	}
+	// Output:
+	// "nice": query not searched: only filler words ("nice"), nothing to search for
+	// "nice rain jacket": <nil>
+}

@@ -16,10 +16,22 @@ type Report struct {
 	HardUnmet  []Missing    `json:"hard_unmet"`
 	Note       string       `json:"note,omitempty"`
 	Hits       []ReportHit  `json:"hits"`
+	// Problems are the badly formed parts of the query, which were not
+	// searched for; the rest of the query was ("1/0 jacket" searches
+	// for jackets). The service refuses such a query instead.
+	Problems []ReportProblem `json:"problems,omitempty"`
 	// Explored is set when one of Hits was put there to explore: a
 	// product from a plan one step looser than Chosen, which Chosen's
 	// own plan did not show.
 	Explored *ReportExplored `json:"explored,omitempty"`
+}
+
+// ReportProblem is a badly formed part of the query, query[Start:End],
+// as the service's error lists its problems.
+type ReportProblem struct {
+	Start   int    `json:"start"`
+	End     int    `json:"end"`
+	Message string `json:"message"`
 }
 
 // ReportExplored says which hit was shown to explore and how its plan
@@ -67,6 +79,11 @@ func NewReport(o *Outcome, hits []ReportHit) Report {
 	}
 	if rep.Hits == nil {
 		rep.Hits = []ReportHit{}
+	}
+	if o.Parsed != nil {
+		for _, e := range o.Parsed.Errors {
+			rep.Problems = append(rep.Problems, ReportProblem{Start: e.Start, End: e.End, Message: e.Msg})
+		}
 	}
 	for i, s := range o.Steps {
 		if i == 0 {

@@ -259,9 +259,18 @@ type Outcome struct {
 
 // Rescue parses query, applies the policy, and relaxes it until the
 // engine finds at least the policy's minimum, within the budget and the
-// context's deadline. See [Rewriter.RescueParsed].
+// context's deadline. A query with nothing to search for ("", "!!!",
+// "nice") is refused with a *RefusedError. See [Rewriter.RescueParsed].
 func (rw *Rewriter) Rescue(ctx context.Context, query string) (*Outcome, error) {
 	return rw.RescueParsed(ctx, rw.Parse(query))
+}
+
+// maxBytes is the longest query the rewriter's parse options read.
+func (rw *Rewriter) maxBytes() int {
+	if rw.parse.MaxBytes > 0 {
+		return rw.parse.MaxBytes
+	}
+	return parser.MaxQueryBytes
 }
 
 // Parse reads query with the rewriter's parse options, as Rescue does;
@@ -282,7 +291,14 @@ func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
 	return r
 }
 
-// RescueParsed rescues a parsed query. Hard constraints and exclusions
+// RescueParsed rescues a parsed query. A query with nothing to search
+// for is not searched: when, once the policy is applied, no constraint
+// is left to ask for or exclude (the query is empty or blank, over the
+// parser's length limit, only badly formed parts, punctuation or
+// symbols, or only filler words), RescueParsed counts nothing and
+// returns a *RefusedError, which matches ErrNothingToSearch. A query
+// with badly formed parts and constraints beside them ("1/0 jacket") is
+// rescued on what was read; r.Errors keep the problems. Hard constraints and exclusions
 // are never relaxed, and the head product type is widened but never
 // dropped; filler is dropped before anything is counted. The
 // planner searches relaxation sets cheapest first: cost comes from the
@@ -306,6 +322,9 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 	out := &Outcome{Query: r.Query, Parsed: r, Policy: e}
 	s := &search{rw: rw, ctx: ctx, out: out, seen: make(map[string]int), budget: rw.budget}
 	s.items = rw.exactItems(r)
+	if err := refusal(r, s.items, rw.maxBytes()); err != nil {
+		return nil, err
+	}
 
 	exact := make([]int, len(s.items))
 	n, err := s.count(exact)

@@ -64,3 +64,30 @@ func TestReplay(t *testing.T) {
 		t.Errorf("a bad line: exit %d, %q", code, stderr)
 	}
 }
+
+// A line with nothing to search for does not stop the replay: it is
+// counted apart and left out of the rates. On shop.jsonl the rain jacket
+// query finds 3 (rewrite/bleveengine's tests).
+func TestReplayNothingToSearch(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	if code, out, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", dir); code != 0 {
+		t.Fatalf("index: exit %d\n%s%s", code, out, stderr)
+	}
+	log := "rain jacket\n!!!\n{\"query\": \"nice\", \"count\": 4}\n"
+	for _, tc := range []struct {
+		name, format, want, reason string
+	}{
+		{"text", "", "1 queries, 1 searches (2 queries, 5 searches with nothing to search for, not searched)", "!!! once and nice 4 times, apart from the one search made"},
+		{"json", "--json", `"nothing_to_search": {`, "the report's tally"},
+		{"csv", "--csv", "2,!!!,1,,,,,,,", "the row of !!! has its counts blank"},
+	} {
+		args := []string{"replay", "--index", dir, "--log", "-"}
+		if tc.format != "" {
+			args = append(args, tc.format)
+		}
+		code, out, stderr := runCLI(log, args...)
+		if code != 0 || !strings.Contains(out, tc.want) {
+			t.Errorf("%s (%s): exit %d, want %q in\n%s%s", tc.name, tc.reason, code, tc.want, out, stderr)
+		}
+	}
+}

@@ -4,6 +4,7 @@ import (
 	"context"
 	crand "crypto/rand"
 	"encoding/json"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -16,6 +17,7 @@ import (
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
+	"github.com/whittle-search/whittle/rewrite/serve"
 	"github.com/whittle-search/whittle/rewrite/signals"
 )
 
@@ -66,6 +68,10 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	rw := rewrite.New(eng, pol, rewrite.WithBudget(*budget))
 	opts := bleveengine.RescueOptions{K: *k, Baseline: *baseline, Explore: *explore, Rand: exploreSource(fs, *seed)}
 	res, err := eng.Rescue(context.Background(), rw, rw.ParseIn(rest[0], *category), opts)
+	var refused *rewrite.RefusedError
+	if errors.As(err, &refused) {
+		return writeRefusal(refused, *asJSON, stdout, stderr)
+	}
 	if err != nil {
 		fmt.Fprintf(stderr, "whittle search: %v\n", err)
 		return 1
@@ -127,6 +133,26 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		tw.Flush()
 	}
 	return 0
+}
+
+// writeRefusal reports a query with nothing to search for and returns
+// the exit status, 1: as the service's error object under "error" with
+// --json, else one line on stderr and each problem drawn with carets.
+func writeRefusal(re *rewrite.RefusedError, asJSON bool, stdout, stderr io.Writer) int {
+	if asJSON {
+		b, err := json.Marshal(map[string]*serve.Error{"error": serve.RefusalError(re)})
+		if err != nil {
+			fmt.Fprintf(stderr, "whittle search: %v\n", err)
+			return 1
+		}
+		fmt.Fprintf(stdout, "%s\n", b)
+		return 1
+	}
+	fmt.Fprintf(stderr, "whittle search: %v\n", re)
+	for _, l := range strings.Split(re.Render(), "\n") {
+		fmt.Fprintln(stderr, strings.TrimRight("  "+l, " "))
+	}
+	return 1
 }
 
 // exploreSource is the source of the explore draw: seeded by --seed when

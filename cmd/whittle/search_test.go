@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"fmt"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -257,5 +258,82 @@ func TestSearchExploreFlags(t *testing.T) {
 		if !strings.Contains(help, want) {
 			t.Errorf("--help lacks %q:\n%s", want, help)
 		}
+	}
+}
+
+// A query with nothing to search for is refused, with exit 1 (README,
+// "Index a catalog and search it"), not answered with the shop's 13
+// products; the JSON is the service's error object. A query with a badly
+// formed part beside a product type is searched, exit 0, the part shown.
+func TestSearchNothingToSearch(t *testing.T) {
+	dir := filepath.Join(t.TempDir(), "idx")
+	if code, _, stderr := runCLI("", "index", "--catalog", shopCatalog, "--index", dir); code != 0 {
+		t.Fatal(stderr)
+	}
+	for _, tc := range []struct {
+		name, query, reason string
+		text                []string // lines of stderr, in order
+		code                string
+		span                *struct{ Start, End int }
+	}{
+		{name: "empty", query: "", reason: "no query at all", code: "query_empty",
+			text: []string{"whittle search: query not searched: query is empty", "", "  ^", "  query is empty"}},
+		{name: "blank", query: "   ", reason: "three spaces: the carets run under them",
+			text: []string{"whittle search: query not searched: query is empty", "", "  ^^^", "  query is empty"}, code: "query_empty"},
+		{name: "punctuation", query: "!!!", reason: "no word or number; the span is the three marks",
+			text: []string{"whittle search: query not searched: no word or number to search for", "  !!!", "  ^^^", "  no word or number to search for"},
+			code: "query_unreadable", span: &struct{ Start, End int }{0, 3}},
+		{name: "filler", query: "nice", reason: "a filler word asks for nothing",
+			text: []string{`whittle search: query not searched: only filler words ("nice"), nothing to search for`, "  nice", "  ^^^^"},
+			code: "query_unreadable", span: &struct{ Start, End int }{0, 4}},
+		{name: "badly formed", query: "1/0", reason: "the only part divides by zero, at bytes 0-3",
+			text: []string{"whittle search: query not searched: 1/0 divides by zero", "  1/0", "  ^^^", "  1/0 divides by zero"},
+			code: "query_unreadable", span: &struct{ Start, End int }{0, 3}},
+		{name: "too long", query: strings.Repeat("red ", 300), reason: "1,200 bytes over the 1,024 the parser reads (parser.MaxQueryBytes)",
+			text: []string{"whittle search: query not searched: query is 1200 bytes; the limit is 1024"},
+			code: "query_too_long", span: &struct{ Start, End int }{1024, 1200}},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			log := filepath.Join(t.TempDir(), "signals.jsonl")
+			code, out, stderr := runCLI("", "search", "--index", dir, "--signals", log, "--", tc.query)
+			if code != 1 || out != "" || !strings.HasPrefix(stderr, strings.Join(tc.text, "\n")+"\n") {
+				t.Errorf("%s: exit %d, stdout %q, stderr\n%s\nwant exit 1 and\n%s", tc.reason, code, out, stderr, strings.Join(tc.text, "\n"))
+			}
+			if _, err := os.Stat(log); !os.IsNotExist(err) {
+				t.Errorf("%s: a refused query logged a search event (%v)", tc.reason, err)
+			}
+			code, out, stderr = runCLI("", "search", "--index", dir, "--json", "--", tc.query)
+			var got struct {
+				Error struct {
+					Code     string
+					Message  string
+					Span     *struct{ Start, End int }
+					Problems []json.RawMessage
+				}
+			}
+			if err := json.Unmarshal([]byte(out), &got); err != nil || code != 1 || stderr != "" {
+				t.Fatalf("%s: --json exit %d, %v in %q, stderr %q", tc.reason, code, err, out, stderr)
+			}
+			if got.Error.Code != tc.code || got.Error.Message == "" || fmt.Sprint(got.Error.Span) != fmt.Sprint(tc.span) {
+				t.Errorf("%s: --json error %+v, want code %s, span %v", tc.reason, got.Error, tc.code, tc.span)
+			}
+		})
+	}
+	// shop.jsonl has three rain jackets, RJ-1 to RJ-3.
+	code, out, stderr := runCLI("", "search", "--index", dir, "1/0 rain jacket")
+	if code != 0 || !strings.Contains(out, "error at 0-3:\n  1/0 rain jacket\n  ^^^\n  1/0 divides by zero") || strings.Count(out, "RJ-") != 3 {
+		t.Errorf("badly formed beside a product type: exit %d\n%s%s", code, out, stderr)
+	}
+	code, out, _ = runCLI("", "search", "--index", dir, "--json", "1/0 rain jacket")
+	var rep struct {
+		Problems []struct {
+			Start, End int
+			Message    string
+		}
+		Hits []json.RawMessage
+	}
+	if err := json.Unmarshal([]byte(out), &rep); err != nil || code != 0 || len(rep.Hits) != 3 || len(rep.Problems) != 1 ||
+		rep.Problems[0].Start != 0 || rep.Problems[0].End != 3 || rep.Problems[0].Message != "1/0 divides by zero" {
+		t.Errorf("badly formed beside a product type, --json: exit %d, %v, %+v", code, err, rep)
 	}
 }

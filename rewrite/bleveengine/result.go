@@ -61,7 +61,9 @@ func (o RescueOptions) check() error {
 // come from a plan one step looser; with opts.Baseline, it runs the
 // blind partial match on the query as typed beside it. Everything
 // honours ctx; a deadline that passes while exploring leaves the hits
-// as the rescue found them.
+// as the rescue found them. A query with nothing to search for is
+// refused with the rewriter's *rewrite.RefusedError (errors.Is
+// rewrite.ErrNothingToSearch): nothing is counted or shown.
 func (e *Engine) Rescue(ctx context.Context, rw *rewrite.Rewriter, r *parser.Result, opts RescueOptions) (*Result, error) {
 	if err := opts.check(); err != nil {
 		return nil, err

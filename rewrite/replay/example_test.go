@@ -47,8 +47,12 @@ func ExampleRead() {
 
 func ExampleRun() {
 	rw := rewrite.New(kinds{"rain jacket", "scarf"}, nil)
-	log := "rain jacket\n{\"query\": \"red scarf\", \"count\": 3}\n"
+	log := "rain jacket\n{\"query\": \"red scarf\", \"count\": 3}\n{\"query\": \"!!!\", \"count\": 5}\n"
 	sum, err := replay.Run(context.Background(), rw, replay.Read(strings.NewReader(log)), replay.Options{}, func(r *replay.Result) error {
+		if r.NothingToSearch != "" {
+			fmt.Println(r.Query, "not searched:", r.NothingToSearch)
+			return nil
+		}
 		fmt.Println(r.Query, r.ExactCount, r.FinalCount)
 		return nil
 	})
@@ -57,11 +61,13 @@ func ExampleRun() {
 		return
 	}
 	r := sum.Report()
-	fmt.Println(r.ZeroBefore.Searches, "of", r.All.Searches, "searches find nothing as typed,", r.ZeroAfter.Searches, "after rescue")
+	fmt.Println(r.ZeroBefore.Searches, "of", r.All.Searches, "searches find nothing as typed,", r.ZeroAfter.Searches, "after rescue;",
+		r.NothingToSearch.Searches, "had nothing to search for")
 	// Output:
 	// rain jacket 1 1
 	// red scarf 0 1
-	// 3 of 4 searches find nothing as typed, 0 after rescue
+	// !!! not searched: no word or number to search for
+	// 3 of 4 searches find nothing as typed, 0 after rescue; 5 had nothing to search for
 }
 
 func ExampleSummary_Report() {
@@ -92,10 +98,12 @@ func ExampleNewCSV() {
 	c := replay.NewCSV(os.Stdout)
 	c.Write(&replay.Result{Entry: replay.Entry{Line: 1, Query: "red scarf", Count: 1}, ExactCount: 0, Rescued: true, FinalCount: 4,
 		Changes: []replay.Change{{Op: "widen", Kind: "colour", Text: "red"}}})
+	c.Write(&replay.Result{Entry: replay.Entry{Line: 2, Query: "!!!", Count: 3}, NothingToSearch: "no word or number to search for"})
 	c.Flush()
 	// Output:
-	// line,query,count,category,exact_count,rescued,final_count,relaxations,hard_unmet,elapsed_ms
-	// 1,red scarf,1,,0,true,4,widen colour red,,0.000
+	// line,query,count,category,exact_count,rescued,final_count,relaxations,hard_unmet,elapsed_ms,nothing_to_search
+	// 1,red scarf,1,,0,true,4,widen colour red,,0.000,
+	// 2,!!!,3,,,,,,,0.000,no word or number to search for
 }
 
 func ExampleWriteHTML() {

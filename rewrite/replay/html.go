@@ -18,7 +18,7 @@ table{border-collapse:collapse}td,th{padding:2px 10px 2px 0;text-align:left}td.n
 {{.Style}}
 </style></head><body>
 <h1>{{.Title}}</h1>
-<p>{{.R.All.Queries}} queries, {{.R.All.Searches}} searches{{if .R.SkippedLines}}; {{.R.SkippedLines}} malformed lines skipped{{end}}.</p>
+<p>{{.R.All.Queries}} queries, {{.R.All.Searches}} searches{{if .R.NothingToSearch.Queries}}; {{.R.NothingToSearch.Queries}} queries, {{.R.NothingToSearch.Searches}} searches with nothing to search for, not searched{{end}}{{if .R.SkippedLines}}; {{.R.SkippedLines}} malformed lines skipped{{end}}.</p>
 {{.ZeroChart}}
 <h2>Relaxations used</h2>
 {{if .R.Changes}}{{.ChangeChart}}{{else}}<p>None: every query found enough as typed, or nothing could be relaxed.</p>{{end}}

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"context"
 	"encoding/csv"
+	"encoding/json"
 	"encoding/xml"
 	"errors"
 	"io"
@@ -66,20 +67,12 @@ func TestRunSummary(t *testing.T) {
 		t.Fatal(err)
 	}
 	r := sum.Report()
-	for _, tc := range []struct {
-		name      string
-		got, want Tally
-		reason    string
-	}{
+	checkTallies(t, []tallyCase{
 		{"all", r.All, Tally{6, 50}, "6 lines; 1+5+40+1+2+1 searches (the blank line is skipped)"},
 		{"zero before", r.ZeroBefore, Tally{5, 49}, "all but the plain rain jacket: 5+40+1+2+1"},
 		{"zero after", r.ZeroAfter, Tally{2, 41}, "the size 13 shoes (40) and the 85 mm lens (1)"},
 		{"rescued", r.Rescued, Tally{3, 8}, "mustard twice (5+1) and striped (2)"},
-	} {
-		if tc.got != tc.want {
-			t.Errorf("%s = %+v, want %+v (%s)", tc.name, tc.got, tc.want, tc.reason)
-		}
-	}
+	})
 	// 49/50 = 0.98 of searches find nothing as typed; 41/50 = 0.82 after.
 	if r.RateBefore.Searches != 0.98 || r.RateAfter.Searches != 0.82 || r.RateAfter.Queries != 2.0/6 {
 		t.Errorf("rates %+v %+v", r.RateBefore, r.RateAfter)
@@ -112,12 +105,29 @@ func TestRunSummary(t *testing.T) {
 	}
 }
 
+// tallyCase is one tally of a report beside the figure worked out by
+// hand, and how.
+type tallyCase struct {
+	name      string
+	got, want Tally
+	reason    string
+}
+
+func checkTallies(t *testing.T, cases []tallyCase) {
+	t.Helper()
+	for _, tc := range cases {
+		if tc.got != tc.want {
+			t.Errorf("%s = %+v, want %+v (%s)", tc.name, tc.got, tc.want, tc.reason)
+		}
+	}
+}
+
 // Results come in the log's order and are the same, time taken aside,
 // for 1 worker and for 8.
 func TestRunOrderAndWorkers(t *testing.T) {
 	rw := shop(t)
 	var b strings.Builder
-	qs := []string{"rain jacket", "mustard rain jacket", "85 lens", "striped rain jacket", "50mm lens for jx-10", "2x4 12 ft", "14 awg wire", "fn-3520", "oatmeal sweater"}
+	qs := []string{"rain jacket", "mustard rain jacket", "85 lens", "striped rain jacket", "50mm lens for jx-10", "2x4 12 ft", "14 awg wire", "fn-3520", "oatmeal sweater", "!!!", "nice", "1/0"}
 	for i := range 60 {
 		b.WriteString(qs[i%len(qs)] + "\n")
 	}
@@ -145,7 +155,113 @@ func TestRunOrderAndWorkers(t *testing.T) {
 
 func sameResult(a, b *Result) bool {
 	return a.Entry == b.Entry && a.ExactCount == b.ExactCount && a.Rescued == b.Rescued && a.FinalCount == b.FinalCount &&
-		slices.Equal(a.Changes, b.Changes) && slices.Equal(a.HardUnmet, b.HardUnmet) && a.Note == b.Note
+		slices.Equal(a.Changes, b.Changes) && slices.Equal(a.HardUnmet, b.HardUnmet) && a.Note == b.Note && a.NothingToSearch == b.NothingToSearch
+}
+
+// A line with nothing to search for is not searched: it is counted in
+// NothingToSearch alone, out of All and of every rate, and each report
+// shows the count. What the searched lines find on shop.jsonl is worked
+// out by hand in rewrite/bleveengine's TestRescueOnTheIndex: "rain
+// jacket" finds 3 as typed, "85 lens" nothing, focal length being hard;
+// "1/0 rain jacket" is searched for the rain jackets. The summary is the
+// same for 1 worker and for 4.
+func TestRunNothingToSearch(t *testing.T) {
+	rw := shop(t)
+	const log = `rain jacket
+!!!
+{"query": "nice", "count": 7}
+{"query": "85 lens", "count": 2}
+1/0
+{"query": "1/0 rain jacket", "count": 3}
+{"query": "the", "count": 4, "category": "apparel"}
+`
+	run := func(workers int) (*Summary, []*Result, string) {
+		var got []*Result
+		var rows bytes.Buffer
+		c := NewCSV(&rows)
+		sum, err := Run(context.Background(), rw, Read(strings.NewReader(log)), Options{Workers: workers}, func(r *Result) error {
+			got = append(got, r)
+			return c.Write(r)
+		})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := c.Flush(); err != nil {
+			t.Fatal(err)
+		}
+		return sum, got, rows.String()
+	}
+	sum, got, rows := run(1)
+	r := sum.Report()
+	checkTallies(t, []tallyCase{
+		{"all", r.All, Tally{3, 6}, "rain jacket (1), 85 lens (2) and 1/0 rain jacket (3) are searched"},
+		{"nothing to search", r.NothingToSearch, Tally{4, 13}, "!!! (1), nice (7), 1/0 (1) and the (4): punctuation, filler, a badly formed part, filler"},
+		{"zero before", r.ZeroBefore, Tally{1, 2}, "85 lens alone; the lines not searched are no zero-result queries"},
+		{"zero after", r.ZeroAfter, Tally{1, 2}, "85 lens: focal length is hard"},
+	})
+	// 2 of the 6 searches made find nothing, as typed and after: 1/3.
+	if r.RateBefore.Searches != 2.0/6 || r.RateAfter.Queries != 1.0/3 {
+		t.Errorf("rates %+v %+v, want shares of the searched lines only", r.RateBefore, r.RateAfter)
+	}
+	if len(r.Alerts) != 1 || r.Alerts[0].Query != "85 lens" {
+		t.Errorf("alerts %+v: want 85 lens alone", r.Alerts)
+	}
+	wantWhy := []string{"", "no word or number to search for", `only filler words ("nice"), nothing to search for`, "",
+		"1/0 divides by zero", "", `only filler words ("the"), nothing to search for`}
+	if len(got) != len(wantWhy) {
+		t.Fatalf("%d results, want %d", len(got), len(wantWhy))
+	}
+	for i, res := range got {
+		if res.NothingToSearch != wantWhy[i] || res.NothingToSearch != "" && (res.ExactCount != 0 || res.FinalCount != 0) {
+			t.Errorf("line %d %q: nothing to search %q, counts %d/%d; want %q", res.Line, res.Query, res.NothingToSearch, res.ExactCount, res.FinalCount, wantWhy[i])
+		}
+	}
+	if got[5].FinalCount != 3 {
+		t.Errorf("1/0 rain jacket: final count %d, want the 3 rain jackets", got[5].FinalCount)
+	}
+	recs, err := csv.NewReader(strings.NewReader(rows)).ReadAll()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := []string{"2", "!!!", "1", "", "", "", "", "", ""}; len(recs) != 8 || !slices.Equal(recs[2][:9], want) || recs[2][10] != "no word or number to search for" || recs[1][10] != "" {
+		t.Errorf("csv rows %q: want !!! with blank counts and its reason last", recs)
+	}
+	var text, page bytes.Buffer
+	if err := WriteText(&text, r); err != nil {
+		t.Fatal(err)
+	}
+	if want := "3 queries, 6 searches (4 queries, 13 searches with nothing to search for, not searched)\n"; !strings.HasPrefix(text.String(), want) {
+		t.Errorf("text report begins %q, want %q", strings.SplitN(text.String(), "\n", 2)[0], want)
+	}
+	if err := WriteHTML(&page, "replay", r); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(page.String(), "4 queries, 13 searches with nothing to search for, not searched") {
+		t.Error("the page does not count the lines with nothing to search for")
+	}
+	if b, err := json.Marshal(r); err != nil || !strings.Contains(string(b), `"nothing_to_search":{"queries":4,"searches":13}`) {
+		t.Errorf("JSON report %s, %v: want nothing_to_search", b, err)
+	}
+	sum4, got4, rows4 := run(4)
+	r4 := sum4.Report()
+	if r4.All != r.All || r4.NothingToSearch != r.NothingToSearch || r4.ZeroBefore != r.ZeroBefore || r4.ZeroAfter != r.ZeroAfter || r4.RateBefore != r.RateBefore {
+		t.Errorf("4 workers: %+v, want as with 1: %+v", r4, r)
+	}
+	for i := range got {
+		if !sameResult(got[i], got4[i]) {
+			t.Errorf("result %d: %+v with 1 worker, %+v with 4", i, got[i], got4[i])
+		}
+	}
+	recs4, err := csv.NewReader(strings.NewReader(rows4)).ReadAll()
+	if err != nil || len(recs4) != len(recs) {
+		t.Fatalf("csv with 4 workers: %d rows, %v; want %d", len(recs4), err, len(recs))
+	}
+	for i := range recs {
+		recs[i][9], recs4[i][9] = "", "" // the time taken
+		if !slices.Equal(recs[i], recs4[i]) {
+			t.Errorf("csv row %d: %q with 4 workers, %q with 1", i, recs4[i], recs[i])
+		}
+	}
 }
 
 func TestReadErrors(t *testing.T) {

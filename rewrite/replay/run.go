@@ -33,8 +33,13 @@ type Result struct {
 	// each one that nothing matches, with its kind ("size 15 (size)").
 	HardUnmet []string `json:"hard_unmet,omitempty"`
 	// Note says why a rescue stopped early (budget or deadline).
-	Note    string        `json:"note,omitempty"`
-	Elapsed time.Duration `json:"elapsed_ns"`
+	Note string `json:"note,omitempty"`
+	// NothingToSearch, when set, says why the query was not searched:
+	// it has nothing to search for ("no word or number to search for";
+	// see rewrite.RefusedError). Its counts are then zero, and no rate
+	// of the summary counts it.
+	NothingToSearch string        `json:"nothing_to_search,omitempty"`
+	Elapsed         time.Duration `json:"elapsed_ns"`
 }
 
 // Options tune Run. The zero value is ready to use.
@@ -181,6 +186,10 @@ func rescue(ctx context.Context, rw *rewrite.Rewriter, e Entry) (*Result, error)
 	start := time.Now()
 	r := rw.ParseIn(e.Query, e.Category)
 	o, err := rw.RescueParsed(ctx, r)
+	var refused *rewrite.RefusedError
+	if errors.As(err, &refused) {
+		return &Result{Entry: e, NothingToSearch: refused.Problem.Msg, Changes: []Change{}, Elapsed: time.Since(start)}, nil
+	}
 	if err != nil {
 		return nil, err
 	}

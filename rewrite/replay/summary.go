@@ -65,16 +65,22 @@ type Bucket struct {
 	Count int           `json:"count"`
 }
 
-// Report is a summary as written out.
+// Report is a summary as written out. All counts the entries searched,
+// and the rates are shares of it; the entries with nothing to search
+// for ("!!!", "nice") are counted in NothingToSearch alone, as skipped
+// lines are in SkippedLines.
 type Report struct {
-	All        Tally         `json:"all"`
-	ZeroBefore Tally         `json:"zero_before"`
-	ZeroAfter  Tally         `json:"zero_after"`
-	Rescued    Tally         `json:"rescued"`
-	RateBefore Rate          `json:"zero_rate_before"`
-	RateAfter  Rate          `json:"zero_rate_after"`
-	Changes    []ChangeTally `json:"relaxations"`
-	Unmet      []UnmetTally  `json:"left_with_nothing"`
+	All Tally `json:"all"`
+	// NothingToSearch counts the entries not searched because they have
+	// nothing to search for (Result.NothingToSearch).
+	NothingToSearch Tally         `json:"nothing_to_search"`
+	ZeroBefore      Tally         `json:"zero_before"`
+	ZeroAfter       Tally         `json:"zero_after"`
+	Rescued         Tally         `json:"rescued"`
+	RateBefore      Rate          `json:"zero_rate_before"`
+	RateAfter       Rate          `json:"zero_rate_after"`
+	Changes         []ChangeTally `json:"relaxations"`
+	Unmet           []UnmetTally  `json:"left_with_nothing"`
 	// UnmetOther counts the entries left with nothing for a hard
 	// constraint past the distinct ones kept, or for no hard
 	// constraint at all (the rescue ran out of budget, say).
@@ -130,9 +136,14 @@ func NewSummary() *Summary {
 		latency: make([]int, len(latencyBounds))}
 }
 
-// Add counts one result.
+// Add counts one result: a result with nothing to search for in
+// NothingToSearch only.
 func (s *Summary) Add(res *Result) {
 	n := res.Count
+	if res.NothingToSearch != "" {
+		s.r.NothingToSearch.add(n)
+		return
+	}
 	s.r.All.add(n)
 	if res.ExactCount == 0 {
 		s.r.ZeroBefore.add(n)

@@ -15,8 +15,15 @@ import (
 func WriteText(w io.Writer, r Report) error {
 	p := &textout.Printer{W: w}
 	p.F("%d queries, %d searches", r.All.Queries, r.All.Searches)
+	var apart []string
+	if r.NothingToSearch.Queries > 0 {
+		apart = append(apart, fmt.Sprintf("%d queries, %d searches with nothing to search for, not searched", r.NothingToSearch.Queries, r.NothingToSearch.Searches))
+	}
 	if r.SkippedLines > 0 {
-		p.F(" (%d malformed lines skipped)", r.SkippedLines)
+		apart = append(apart, fmt.Sprintf("%d malformed lines skipped", r.SkippedLines))
+	}
+	if len(apart) > 0 {
+		p.F(" (%s)", strings.Join(apart, "; "))
 	}
 	p.F("\n\n")
 	p.F("finding nothing            queries          searches\n")
@@ -69,7 +76,8 @@ func fmtDur(d time.Duration) string {
 }
 
 // CSV writes results as rows for a spreadsheet, one a query, after a
-// header row.
+// header row. A query with nothing to search for has its reason in the
+// last column, nothing_to_search, and its counts left blank.
 type CSV struct {
 	w      *csv.Writer
 	header bool
@@ -78,7 +86,7 @@ type CSV struct {
 // NewCSV returns a CSV writer on w.
 func NewCSV(w io.Writer) *CSV { return &CSV{w: csv.NewWriter(w)} }
 
-var csvHeader = []string{"line", "query", "count", "category", "exact_count", "rescued", "final_count", "relaxations", "hard_unmet", "elapsed_ms"}
+var csvHeader = []string{"line", "query", "count", "category", "exact_count", "rescued", "final_count", "relaxations", "hard_unmet", "elapsed_ms", "nothing_to_search"}
 
 // Write writes one result's row (and the header before the first).
 func (c *CSV) Write(res *Result) error {
@@ -92,10 +100,13 @@ func (c *CSV) Write(res *Result) error {
 	for _, x := range res.Changes {
 		ch = append(ch, x.Op+" "+x.Kind+" "+x.Text)
 	}
+	exact, rescued, final := strconv.Itoa(res.ExactCount), strconv.FormatBool(res.Rescued), strconv.Itoa(res.FinalCount)
+	if res.NothingToSearch != "" {
+		exact, rescued, final = "", "", ""
+	}
 	return c.w.Write([]string{strconv.Itoa(res.Line), res.Query, strconv.Itoa(res.Count), res.Category,
-		strconv.Itoa(res.ExactCount), strconv.FormatBool(res.Rescued), strconv.Itoa(res.FinalCount),
-		strings.Join(ch, "; "), strings.Join(res.HardUnmet, "; "),
-		strconv.FormatFloat(float64(res.Elapsed)/float64(time.Millisecond), 'f', 3, 64)})
+		exact, rescued, final, strings.Join(ch, "; "), strings.Join(res.HardUnmet, "; "),
+		strconv.FormatFloat(float64(res.Elapsed)/float64(time.Millisecond), 'f', 3, 64), res.NothingToSearch})
 }
 
 // Flush writes what is buffered and reports any error so far.

@@ -22,7 +22,9 @@ const (
 	// CodeQueryEmpty: the query is missing or blank (400).
 	CodeQueryEmpty Code = "query_empty"
 	// CodeQueryUnreadable: a part of the query is badly formed, at the
-	// span given, so it is not rescued (400).
+	// span given, or the query has nothing to search for (only
+	// punctuation, symbols or filler words: rewrite.RefusedUnreadable),
+	// so it is not rescued (400).
 	CodeQueryUnreadable Code = "query_unreadable"
 	// CodeUnknownCategory: the category is not one of the lexicon's (400).
 	CodeUnknownCategory Code = "unknown_category"

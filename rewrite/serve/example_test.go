@@ -3,6 +3,7 @@ package serve_test
 import (
 	"context"
 	"encoding/json"
+	"errors"
 	"fmt"
 	"log"
 	"net"
@@ -12,6 +13,7 @@ import (
 	"path/filepath"
 	"strings"
 
+	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/serve"
 )
@@ -111,4 +113,19 @@ func ExampleServer_Handler() {
 func ExampleCode_Status() {
 	fmt.Println(serve.CodeBusy.Status(), serve.CodeQueryTooLong.Status(), serve.CodeDeadlinePassed.Status())
 	// Output: 503 400 504
+}
+
+// A query with nothing to search for is refused by the library; the
+// service answers it as query_unreadable, with the span of the problem.
+func ExampleRefusalError() {
+	eng, done := index()
+	defer done()
+	rw := rewrite.New(eng, nil)
+	_, err := eng.Rescue(context.Background(), rw, rw.Parse("!!!"), bleveengine.RescueOptions{K: 10})
+	var re *rewrite.RefusedError
+	if errors.As(err, &re) {
+		e := serve.RefusalError(re)
+		fmt.Println(e.Code, e.Code.Status(), *e.Span, e.Message)
+	}
+	// Output: query_unreadable 400 {0 3} no word or number to search for
 }

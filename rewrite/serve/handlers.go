@@ -67,14 +67,36 @@ func (s *Server) checkQuery(r *http.Request, q string) *Error {
 		in.query = q
 	}
 	if n := len(q); n > s.limits.MaxQueryBytes {
-		e := errorf(CodeQueryTooLong, fmt.Sprintf("the query is %d bytes; at most %d are read", n, s.limits.MaxQueryBytes))
-		e.Span = &Span{Start: s.limits.MaxQueryBytes, End: n}
-		return e
+		return tooLong(n, s.limits.MaxQueryBytes)
 	}
 	if strings.TrimSpace(q) == "" {
 		return errorf(CodeQueryEmpty, "the query is empty")
 	}
 	return nil
+}
+
+// tooLong is the error for a query of n bytes over a limit.
+func tooLong(n, limit int) *Error {
+	e := errorf(CodeQueryTooLong, fmt.Sprintf("the query is %d bytes; at most %d are read", n, limit))
+	e.Span = &Span{Start: limit, End: n}
+	return e
+}
+
+// RefusalError is the service's error for a query the library refused
+// as having nothing to search for: query_empty, query_too_long (its
+// span what lies past the limit), or query_unreadable with the span of
+// the first problem and every problem listed ("!!!" at 0-3). `whittle
+// search --json` writes it too, under "error".
+func RefusalError(re *rewrite.RefusedError) *Error {
+	switch re.Reason {
+	case rewrite.RefusedEmpty:
+		return errorf(CodeQueryEmpty, "the query is empty")
+	case rewrite.RefusedTooLong:
+		// The parser's span of a query too long runs from the limit to
+		// its end.
+		return tooLong(re.Problem.End, re.Problem.Start)
+	}
+	return problemsError(re.Problems)
 }
 
 // checkCategory refuses a category the lexicon does not have.
@@ -124,7 +146,7 @@ func (s *Server) handleRescue(w http.ResponseWriter, r *http.Request) {
 		rw = rw.Tuned(req.Tuning)
 	}
 	parsed := rw.ParseIn(req.Query, req.Category)
-	if e := unreadable(parsed); e != nil {
+	if e := unsearchable(rw, parsed); e != nil {
 		writeError(w, r, e)
 		return
 	}
@@ -158,22 +180,44 @@ func checkTuning(t rewrite.Tuning) *Error {
 	return nil
 }
 
+// unsearchable is the error for a reading that is not rescued, or nil:
+// one the library refuses as having nothing to search for, then one
+// with badly formed parts beside what was read, which the service
+// refuses too.
+func unsearchable(rw *rewrite.Rewriter, r *parser.Result) *Error {
+	var re *rewrite.RefusedError
+	if errors.As(rw.Refusal(r), &re) {
+		return RefusalError(re)
+	}
+	return unreadable(r)
+}
+
 // unreadable is the error for a reading with badly formed parts, or nil.
 func unreadable(r *parser.Result) *Error {
 	if len(r.Errors) == 0 {
 		return nil
 	}
-	first := r.Errors[0]
+	return problemsError(r.Errors)
+}
+
+// problemsError is query_unreadable for problems, at least one: the
+// first one's message and span, and every one listed.
+func problemsError(ps parser.ErrorList) *Error {
+	first := ps[0]
 	e := &Error{Code: CodeQueryUnreadable, Message: first.Msg, Span: &Span{Start: first.Start, End: first.End}}
-	for _, pe := range r.Errors {
+	for _, pe := range ps {
 		e.Problems = append(e.Problems, Problem{Span: Span{Start: pe.Start, End: pe.End}, Message: pe.Msg})
 	}
 	return e
 }
 
-// engineError is the answer to a failed rescue: the deadline, or an
-// internal failure, logged.
+// engineError is the answer to a failed rescue: a query with nothing to
+// search for, the deadline, or an internal failure, logged.
 func (s *Server) engineError(r *http.Request, err error) *Error {
+	var re *rewrite.RefusedError
+	if errors.As(err, &re) {
+		return RefusalError(re)
+	}
 	if errors.Is(err, context.DeadlineExceeded) || errors.Is(r.Context().Err(), context.DeadlineExceeded) {
 		return errorf(CodeDeadlinePassed, fmt.Sprintf("the deadline of %s passed before the index answered", s.limits.Deadline))
 	}

@@ -83,7 +83,7 @@ func (s *Server) workbenchAnswer(r *http.Request, p *workbenchPage) {
 	}
 	parsed := rw.ParseIn(p.Query, p.Category)
 	p.Read, p.Segments = parsed, segments(parsed)
-	if e := unreadable(parsed); e != nil {
+	if e := unsearchable(rw, parsed); e != nil {
 		p.Problem = e.Message
 		return
 	}

@@ -37,6 +37,8 @@ func TestWorkbench(t *testing.T) {
 			"the sliders apply only when the box is ticked"},
 		{"a query too long", url.Values{"q": {strings.Repeat("x", 2000)}}, []string{`id="problem"`, "at most 1024"}, []string{`id="steps"`},
 			"the query limit holds on the page too"},
+		{"nothing to search for", url.Values{"q": {"!!!"}}, []string{`id="problem"`, "no word or number to search for"}, []string{`id="steps"`, "<td>RJ-1</td>"},
+			"punctuation alone is refused, not answered with the whole shop"},
 		{"an unknown category", url.Values{"q": {"lens"}, "category": {"kameras"}}, []string{`id="problem"`}, []string{`id="steps"`},
 			"an unknown category is named, not used"},
 		{"markup in the query", url.Values{"q": {"<b>lamp</b>"}}, []string{"&lt;b&gt;"}, []string{"<b>lamp"}, "the query is escaped"},
