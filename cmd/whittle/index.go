@@ -87,6 +87,9 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 	for _, le := range st.Skipped {
 		fmt.Fprintf(stderr, "skipped %s: %v\n", *file, le)
 	}
+	for _, u := range st.Unknown {
+		fmt.Fprintf(stderr, "note: %s:%d: %v\n", *file, u.Line, u)
+	}
 	fmt.Fprintf(stdout, "indexed %d products (%d colour names, %d lines skipped) into %s in %.1fs\n",
 		st.Products, st.Colours, len(st.Skipped), *dir, time.Since(start).Seconds())
 	return 0

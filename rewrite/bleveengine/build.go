@@ -48,6 +48,9 @@ type Stats struct {
 	// Skipped are the malformed lines passed over with SkipBad.
 	Skipped []*catalog.LineError `json:"skipped,omitempty"`
 	Colours int                  `json:"colours"`
+	// Unknown are the values whittle does not know, the most common
+	// first in each field; the products are indexed all the same.
+	Unknown []Unknown `json:"unknown,omitempty"`
 }
 
 type vocabulary struct {
@@ -299,6 +302,9 @@ type docBatch struct {
 func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon, st *buildStats,
 	out chan<- docBatch, stop <-chan struct{}) error {
 	rd := catalog.NewReader(r, lex)
+	dims, unknown := dimensionSet(lex), newTally(lex)
+	note := func(field, value string) { unknown.note(field, value, rd.Line()) }
+	defer func() { st.Unknown = unknown.list(knownValues(lex)) }()
 	batch := idx.NewBatch()
 	products := 0
 	send := func() bool {
@@ -329,7 +335,7 @@ func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 		if err != nil {
 			return err
 		}
-		doc, lab, err := document(p, rd, lex)
+		doc, lab, err := document(p, rd, lex, dims, note)
 		if err != nil {
 			le := &catalog.LineError{Line: rd.Line(), Msg: err.Error()}
 			if opts.SkipBad {

@@ -494,3 +494,30 @@ func ExampleIsIndex() {
 	// false
 	// true false
 }
+
+// A build notes the values whittle does not know: here an invented
+// catalog whose second product has a product type the lexicon lacks and
+// a category misspelt; its first, typed "Rain Jackets", is a rain jacket.
+func ExampleUnknown() {
+	dir, cleanup, err := exampleIndexDir()
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	defer cleanup()
+	ps := []catalog.Product{
+		{ID: "a", Title: "Tarn shell", ProductType: "Rain Jackets", Category: "apparel"},
+		{ID: "b", Title: "Scree wrap", ProductType: "rainwear", Category: "aparel"},
+	}
+	st, err := bleveengine.BuildProducts(context.Background(), ps, dir, bleveengine.BuildOptions{})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, u := range st.Unknown {
+		fmt.Printf("line %d: %v\n", u.Line, u)
+	}
+	// Output:
+	// line 2: category "aparel" (1 product) is no category whittle knows; did you mean "apparel"?
+	// line 2: product type "rainwear" (1 product) is none whittle knows, so it is found by its words only
+}

@@ -3,7 +3,7 @@ package bleveengine
 import (
 	"encoding/json"
 	"fmt"
-	"sort"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -13,6 +13,7 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
@@ -130,20 +131,18 @@ func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
 	return im
 }
 
-// dimensions lists every measure dimension the lexicon's slots name.
-func dimensions(lex *lexicon.Lexicon) []string {
-	seen := map[string]bool{}
-	var out []string
-	for _, e := range lex.Entries(lexicon.ProductType) {
-		for _, sl := range e.Slots {
-			if !seen[sl.Dimension] {
-				seen[sl.Dimension] = true
-				out = append(out, sl.Dimension)
-			}
-		}
+// dimensions lists every measure dimension a query read with lex may
+// name: the lexicon's slots, and the parser's own names (a quantity's,
+// "pack_size"...), so that each has a field to match.
+func dimensions(lex *lexicon.Lexicon) []string { return parser.Dimensions(lex) }
+
+// dimensionSet is dimensions as a set.
+func dimensionSet(lex *lexicon.Lexicon) map[string]bool {
+	set := map[string]bool{}
+	for _, d := range dimensions(lex) {
+		set[d] = true
 	}
-	sort.Strings(out)
-	return out
+	return set
 }
 
 // Palette entries. The index holds, beside the products, one entry per
@@ -166,15 +165,49 @@ func norm(s string) string { return strings.Join(strings.Fields(lexicon.Normalis
 
 // document turns a product into what the index stores, with its Lab
 // value (from the line, else the lexicon) when it has a colour.
-func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[string]any, *colour.Lab, error) {
+// note, when not nil, is told of each value of p that whittle does not
+// know (see Unknown): its field and the value; dims holds the measure
+// dimensions it knows.
+func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims map[string]bool, note func(field, value string)) (map[string]any, *colour.Lab, error) {
+	if note == nil {
+		note = func(string, string) {}
+	}
 	// Only fields with a value go in: every field costs the indexer a
 	// visit, empty or not.
 	d := map[string]any{fID: p.ID}
-	for f, v := range map[string]string{fType: p.ProductType, fCategory: p.Category, fBrand: p.Brand, fColour: p.Colour,
-		fPattern: p.Pattern, fSilhouette: p.Silhouette, fMaterial: p.Material, fAudience: p.Audience, fPart: p.PartNumber} {
+	for f, v := range map[string]string{fBrand: p.Brand, fColour: p.Colour, fPart: p.PartNumber} {
 		if v := norm(v); v != "" {
 			d[f] = v
 		}
+	}
+	// The fields the lexicon names are stored by the lexicon's name for
+	// the value, so that a catalog's "rain jackets" or "jumper" is found
+	// as a query's rain jacket or sweater.
+	named := map[string]string{}
+	for _, a := range []struct {
+		field string
+		kind  lexicon.Kind
+		value string
+	}{
+		{fType, lexicon.ProductType, p.ProductType}, {fPattern, lexicon.Pattern, p.Pattern},
+		{fSilhouette, lexicon.Silhouette, p.Silhouette}, {fMaterial, lexicon.Material, p.Material},
+		{fAudience, lexicon.Audience, p.Audience},
+	} {
+		v := norm(a.value)
+		if v == "" {
+			continue
+		}
+		name, ok := canonical(lex, a.kind, v)
+		if !ok {
+			note(a.field, a.value)
+		}
+		d[a.field], named[a.field] = name, name
+	}
+	if v := norm(p.Category); v != "" {
+		if !slices.Contains(lexicon.Categories, v) {
+			note(fCategory, p.Category)
+		}
+		d[fCategory] = v
 	}
 	in := p.InStock == nil || *p.InStock
 	d[fInStock] = strconv.FormatBool(in)
@@ -194,6 +227,9 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 	}
 	ms, mvs := map[string]any{}, map[string]any{}
 	for dim, text := range p.Measures {
+		if !dims[dim] {
+			note("measures."+dim, dim)
+		}
 		m, err := r.Measure(text)
 		if err != nil {
 			return nil, nil, fmt.Errorf("measure %s: %w", dim, err)
@@ -242,7 +278,7 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon) (map[
 		words = append(words, m)
 	}
 	d[fWords] = strings.Join(words, " ")
-	facts := rewrite.Facts{ProductType: norm(p.ProductType), Compat: compat, InStock: in, Measures: map[string]float64{},
+	facts := rewrite.Facts{ProductType: named[fType], Compat: compat, InStock: in, Measures: map[string]float64{},
 		Category: norm(p.Category), Colour: norm(p.Colour), Brand: norm(p.Brand)}
 	for dim, v := range ms {
 		switch x := v.(type) {
