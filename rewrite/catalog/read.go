@@ -88,9 +88,10 @@ func (r *Reader) decode(text []byte) (*Product, error) {
 	}
 	var p Product
 	// The whole line at once, when it decodes; field by field otherwise,
-	// to name the field at fault, and for the American spellings of the
-	// colour fields.
-	if bytes.Contains(text, []byte(`"color`)) || json.Unmarshal(text, &p) != nil {
+	// to name the field at fault, for the American spellings of the
+	// colour fields, and for colour_lab, whose count of numbers the whole
+	// line's decoding would not check.
+	if bytes.Contains(text, []byte(`"color`)) || bytes.Contains(text, []byte(`"colour_lab"`)) || json.Unmarshal(text, &p) != nil {
 		p = Product{}
 		var fields map[string]json.RawMessage
 		if err := json.Unmarshal(text, &fields); err != nil {
@@ -168,7 +169,7 @@ func decodeField(p *Product, name string, raw json.RawMessage) error {
 	case "colour_hex", "color_hex":
 		dst = &p.ColourHex
 	case "colour_lab", "color_lab":
-		dst = &p.ColourLab
+		return decodeLab(p, name, raw)
 	case "pattern":
 		dst = &p.Pattern
 	case "silhouette":
@@ -201,6 +202,28 @@ func decodeField(p *Product, name string, raw json.RawMessage) error {
 		}
 		return err
 	}
+	return nil
+}
+
+// decodeLab decodes colour_lab, which must hold exactly three numbers:
+// decoded straight into an array of three, two numbers would get a third
+// of 0 and four would lose the last, without a word.
+func decodeLab(p *Product, name string, raw json.RawMessage) error {
+	var xs []float64
+	if err := json.Unmarshal(raw, &xs); err != nil {
+		var te *json.UnmarshalTypeError
+		if errors.As(err, &te) {
+			return wrongType(name, te, reflect.TypeOf(&xs))
+		}
+		return err
+	}
+	if xs == nil {
+		return nil // null
+	}
+	if len(xs) != 3 {
+		return fmt.Errorf("want %s, not %d numbers", fieldShapes["colour_lab"].want, len(xs))
+	}
+	p.ColourLab = &[3]float64{xs[0], xs[1], xs[2]}
 	return nil
 }
 

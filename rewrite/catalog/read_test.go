@@ -23,6 +23,9 @@ func TestReadErrorsSayWhatToWrite(t *testing.T) {
 		{`{"id": "a", "title": "x", "sizes": ["m", 10]}`, "sizes", `want an array of strings, like ["S", "M", "10"], not an array holding a number`},
 		{`{"id": "a", "title": "x", "measures": {"width": 74}}`, "measures", `want an object of measures written with their units, like {"width": "74 cm"}, not an object holding a number`},
 		{`{"id": "a", "title": "x", "colour_lab": "53 80 67"}`, "colour_lab", "want an array of three numbers [L, a, b], like [53.2, 80.1, 67.2], not a string"},
+		{`{"id": "a", "title": "x", "colour_lab": [53, 80]}`, "colour_lab", "want an array of three numbers [L, a, b], like [53.2, 80.1, 67.2], not 2 numbers"},
+		{`{"id": "a", "title": "x", "colour_lab": [53, 80, 67, 1]}`, "colour_lab", "want an array of three numbers [L, a, b], like [53.2, 80.1, 67.2], not 4 numbers"},
+		{`{"id": "a", "title": "x", "colour_lab": [53, "80", 67]}`, "colour_lab", "want an array of three numbers [L, a, b], like [53.2, 80.1, 67.2], not an array holding a string"},
 		{`{"id": "a", "title": "x", "in_stock": "yes"}`, "in_stock", "want true or false, not a string"},
 	} {
 		_, err := NewReader(strings.NewReader(tc.line), nil).Next()
