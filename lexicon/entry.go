@@ -2,6 +2,7 @@ package lexicon
 
 import (
 	"fmt"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -54,6 +55,20 @@ var Categories = []string{
 	"apparel", "footwear", "accessories", "home", "furniture", "lumber",
 	"hardware", "electrical", "camera", "tyres", "office", "batteries",
 	"electronics", "paint", "kitchen",
+}
+
+// CheckCategory returns nil for "" and for a category of Categories, and
+// otherwise an error that names the category, the nearest known one
+// when one is near, and the known ones.
+func CheckCategory(c string) error {
+	if c == "" || slices.Contains(Categories, c) {
+		return nil
+	}
+	near := ""
+	if s := Closest(c, Categories); s != "" {
+		near = fmt.Sprintf("; did you mean %q?", s)
+	}
+	return fmt.Errorf("unknown category %q%s (known: %s)", c, near, strings.Join(Categories, ", "))
 }
 
 // Entry is one word or phrase of the lexicon, with everything its kind

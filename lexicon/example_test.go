@@ -170,3 +170,11 @@ func ExampleNearWords_AllNearest() {
 	fmt.Println(all, d)
 	// Output: [0 2] 1
 }
+
+func ExampleCheckCategory() {
+	fmt.Println(lexicon.CheckCategory("apparel"))
+	fmt.Println(lexicon.CheckCategory("aparel"))
+	// Output:
+	// <nil>
+	// unknown category "aparel"; did you mean "apparel"? (known: apparel, footwear, accessories, home, furniture, lumber, hardware, electrical, camera, tyres, office, batteries, electronics, paint, kitchen)
+}

@@ -9,7 +9,6 @@ import (
 	"io"
 	"os"
 	"os/signal"
-	"slices"
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -32,11 +31,11 @@ func loadLexicon(cmd, dir string, stderr io.Writer) (*lexicon.Lexicon, bool) {
 
 // checkCategory reports an unknown --category value for command cmd.
 func checkCategory(cmd, category string, stderr io.Writer) bool {
-	if category == "" || slices.Contains(lexicon.Categories, category) {
-		return true
+	if err := lexicon.CheckCategory(category); err != nil {
+		fmt.Fprintf(stderr, "whittle %s: %v\n", cmd, err)
+		return false
 	}
-	fmt.Fprintf(stderr, "whittle %s: unknown category %q (known: %s)\n", cmd, category, strings.Join(lexicon.Categories, ", "))
-	return false
+	return true
 }
 
 // loadPolicy returns the built-in policy, with the file a --policy flag

@@ -1,6 +1,8 @@
 package replay
 
 import (
+	"github.com/whittle-search/whittle/lexicon"
+
 	"bufio"
 	"bytes"
 	"encoding/json"
@@ -97,6 +99,9 @@ func parseLine(line int, b []byte) (Entry, error) {
 		return Entry{}, &catalog.LineError{Line: line, Field: "query", Msg: "empty"}
 	case l.Count != nil && *l.Count < 1:
 		return Entry{}, &catalog.LineError{Line: line, Field: "count", Msg: fmt.Sprintf("%d; a query is searched at least once", *l.Count)}
+	}
+	if err := lexicon.CheckCategory(l.Category); err != nil {
+		return Entry{}, &catalog.LineError{Line: line, Field: "category", Msg: err.Error()}
 	}
 	e := Entry{Line: line, Query: *l.Query, Count: 1, Category: l.Category}
 	if l.Count != nil {

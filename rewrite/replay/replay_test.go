@@ -276,6 +276,7 @@ func TestReadErrors(t *testing.T) {
 		{"count below one", `{"query": "x", "count": 0}`, "count", "at least once"},
 		{"unknown field", `{"query": "x", "shopper": "a"}`, "", "unknown field"},
 		{"two values", `{"query": "x"} {"query": "y"}`, "", "more than one"},
+		{"unknown category", `{"query": "x", "category": "aparel"}`, "category", `unknown category "aparel"; did you mean "apparel"?`},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			var errs []error

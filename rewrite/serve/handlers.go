@@ -6,7 +6,6 @@ import (
 	"errors"
 	"fmt"
 	"net/http"
-	"slices"
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -101,10 +100,10 @@ func RefusalError(re *rewrite.RefusedError) *Error {
 
 // checkCategory refuses a category the lexicon does not have.
 func checkCategory(c string) *Error {
-	if c == "" || slices.Contains(lexicon.Categories, c) {
-		return nil
+	if err := lexicon.CheckCategory(c); err != nil {
+		return errorf(CodeUnknownCategory, err.Error())
 	}
-	return errorf(CodeUnknownCategory, fmt.Sprintf("unknown category %q; known: %s", c, strings.Join(lexicon.Categories, ", ")))
+	return nil
 }
 
 // handleParse answers the reading of a query, the contract of `whittle

@@ -1,6 +1,8 @@
 package signals
 
 import (
+	"github.com/whittle-search/whittle/lexicon"
+
 	"bufio"
 	"bytes"
 	"errors"
@@ -198,6 +200,9 @@ func (d *decoder) decode(b []byte) (Event, *fieldError) {
 	} else {
 		if w.given[fProduct] {
 			return Event{}, productOnSearch()
+		}
+		if err := lexicon.CheckCategory(w.Category); err != nil {
+			return Event{}, fieldErr("category", "%v", err)
 		}
 		e.Query, e.Category, e.Shuffled, e.Explored = w.Query, w.Category, w.Shuffled, w.Explored
 		// Empty lists read as none, as the writer leaves them out.

@@ -119,6 +119,8 @@ func TestReadBadLines(t *testing.T) {
 		{"time a number", `{"type":"click","session":"s1","time":1741942810,"product":"SC-2"}`, "time", "want a string, not a JSON number", "a time is an RFC 3339 string, not seconds"},
 		{"search without query", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","shown":["SC-1"]}`, "query", "missing", "a search has a query"},
 		{"blank query", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":" "}`, "query", "blank", "a blank query is no search"},
+		{"unknown category", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","category":"shoes"}`, "category",
+			`unknown category "shoes"`, "a category is one of the lexicon's, as everywhere else"},
 		{"search with product", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","product":"SC-1"}`, "product",
 			"belongs to interactions", "a search lists its products in shown"},
 		{"unknown op", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","relaxations":[{"op":"widen","kind":"colour"},{"op":"loosen","kind":"colour"}]}`,
