@@ -35,16 +35,11 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			"Flags come before the queries; put a query that starts with a dash after --:\n  whittle explain --json -- \"-leather boots\"\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	if err := fs.Parse(args); err != nil {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		return 2
+	if _, code, ok := parseWith(fs, func() ([]string, error) { return nil, fs.Parse(args) }); !ok {
+		return code
 	}
 	if fs.NArg() == 0 {
-		fmt.Fprintln(stderr, "whittle explain: give a query, or - to read queries from standard input")
-		fs.Usage()
-		return 2
+		return usageError(fs, "give a query, or - to read queries from standard input")
 	}
 	code, err := parser.DollarCurrency(*cur)
 	if err != nil {
@@ -77,8 +72,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			style.Colour = true
 		}
 	default:
-		fmt.Fprintf(stderr, "whittle explain: -colour must be auto, always or never, not %q\n", *colour)
-		return 2
+		return usageError(fs, "--colour must be auto, always or never, not %q", *colour)
 	}
 
 	out := bufio.NewWriter(stdout)

@@ -38,8 +38,10 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if *logFile == "" || *workers < 1 || *budget < 1 || *asJSON && *asCSV {
-		fs.Usage()
+	if *logFile == "" {
+		return usageError(fs, "--log FILE is required (- reads the log from standard input)")
+	}
+	if !checkNeeds(fs, atLeast("workers", *workers, 1), atLeast("budget", *budget, 1)) || !apart(fs, "json", "csv") {
 		return 2
 	}
 	lex, _ := loadLexicon("replay", "", stderr)

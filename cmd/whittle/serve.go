@@ -46,12 +46,7 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if *budget < 1 {
-		fmt.Fprintln(stderr, "whittle serve: --budget must be more than 0")
-		return 2
-	}
-	if bad := badLimit(l); bad != "" {
-		fmt.Fprintf(stderr, "whittle serve: --%s\n", bad)
+	if !checkNeeds(fs, append([]need{atLeast("budget", *budget, 1)}, limitNeeds(l)...)...) {
 		return 2
 	}
 	lex, _ := loadLexicon("serve", "", stderr)
@@ -89,24 +84,13 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	return 0
 }
 
-// badLimit says which limit flag is out of range and what it needs, for
-// the first one that is, or returns "". A write timeout of 0 has a
-// meaning of its own; every other limit must be more than 0.
-func badLimit(l serve.Limits) string {
-	for _, f := range []struct {
-		name string
-		ok   bool
-	}{
-		{"max-body", l.MaxBodyBytes > 0}, {"max-query", l.MaxQueryBytes > 0}, {"max-hits", l.MaxHits > 0},
-		{"deadline", l.Deadline > 0}, {"max-in-flight", l.MaxInFlight > 0}, {"retry-after", l.RetryAfter > 0},
-		{"read-timeout", l.ReadTimeout > 0}, {"write-timeout", l.WriteTimeout >= 0}, {"shutdown-grace", l.ShutdownGrace > 0},
-	} {
-		if !f.ok && f.name == "write-timeout" {
-			return f.name + " must not be negative"
-		}
-		if !f.ok {
-			return f.name + " must be more than 0"
-		}
+// limitNeeds are what the limit flags must be. A write timeout of 0 has
+// a meaning of its own; every other limit must be more than 0.
+func limitNeeds(l serve.Limits) []need {
+	more := func(name string, ok bool) need { return need{name, ok, "more than 0"} }
+	return []need{
+		more("max-body", l.MaxBodyBytes > 0), more("max-query", l.MaxQueryBytes > 0), more("max-hits", l.MaxHits > 0),
+		more("deadline", l.Deadline > 0), more("max-in-flight", l.MaxInFlight > 0), more("retry-after", l.RetryAfter > 0),
+		more("read-timeout", l.ReadTimeout > 0), need{"write-timeout", l.WriteTimeout >= 0, "0 or more"}, more("shutdown-grace", l.ShutdownGrace > 0),
 	}
-	return ""
 }

@@ -55,8 +55,10 @@ func tuneCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if len(files) == 0 || *minAlias < 1 {
-		fs.Usage()
+	if len(files) == 0 {
+		return usageError(fs, "--signals FILE is required")
+	}
+	if !checkNeeds(fs, atLeast("min-alias", *minAlias, 1)) {
 		return 2
 	}
 	lex, _ := loadLexicon("tune", "", stderr)
