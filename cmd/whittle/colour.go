@@ -18,10 +18,12 @@ import (
 )
 
 const colourUsage = `usage:
-  whittle colour [flags] COLOUR             describe a colour and its nearest named colours
-  whittle colour [flags] COLOUR COLOUR      the distance between two colours (ΔE00 and ΔE76)
-  whittle colour --catalog FILE [flags] COLOUR
-                                            the catalog's colours near COLOUR, nearest first
+  whittle colour [--json] [--nearest N] [--lexicon DIR] COLOUR
+                                  describe a colour and its nearest named colours
+  whittle colour [--json] [--lexicon DIR] COLOUR COLOUR
+                                  the distance between two colours (ΔE00 and ΔE76)
+  whittle colour --catalog FILE [--within D] [--category C] [--policy FILE] [--json] [--lexicon DIR] COLOUR
+                                  the catalog's colours near COLOUR, nearest first
 
 COLOUR is a name ("dusty rose", "light sage"), a hex value (#c0a0a0),
 rgb(192, 160, 160) or L,a,b ("65.1,14.2,5.3"). Quote names of several words.

@@ -31,7 +31,9 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	policyFile := fs.String("policy", "", "policy file laid over the built-in strictness policy")
 	colour := fs.String("colour", "auto", "colour the table: auto (on a terminal), always or never")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle explain [flags] QUERY...\n       whittle explain [flags] -   (one query a line from standard input)\n\n"+
+		fmt.Fprint(stderr, "usage: whittle explain [--json] [--category C] [--currency CODE] [--imperial] [--lexicon DIR]\n"+
+			"                       [--policy FILE] [--colour auto|always|never] QUERY...\n"+
+			"       whittle explain [flags] -   (one query a line from standard input)\n\n"+
 			"Flags come before the queries; put a query that starts with a dash after --:\n  whittle explain --json -- \"-leather boots\"\n\nflags:\n")
 		fs.PrintDefaults()
 	}

@@ -4,6 +4,10 @@ import (
 	"bufio"
 	"bytes"
 	"encoding/json"
+	"os"
+	"path/filepath"
+	"regexp"
+	"slices"
 	"strings"
 	"testing"
 )
@@ -155,5 +159,82 @@ func TestFlagsReachTheParser(t *testing.T) {
 	_, out, _ = runCLI("", "explain", "--json", "--category", "apparel", "85 lens")
 	if !strings.Contains(out, `"category":"apparel"`) {
 		t.Errorf("--category not applied: %s", out)
+	}
+}
+
+// commands are the commands with flags, as their -h is asked for.
+var commands = [][]string{
+	{"explain"}, {"colour"}, {"policy", "show"}, {"policy", "check"}, {"index"}, {"search"},
+	{"replay"}, {"tune"}, {"serve"}, {"bench"}, {"eval"}, {"demo"},
+}
+
+// synopsis is the usage of args -h up to its first blank line, one
+// line a line with the spaces collapsed, and the names of the flags it
+// lists below.
+func synopsis(t *testing.T, args []string) (lines, flags []string) {
+	t.Helper()
+	code, out, stderr := runCLI("", append(args, "-h")...)
+	if code != 0 {
+		t.Fatalf("%s -h: exit %d", strings.Join(args, " "), code)
+	}
+	help := out + stderr
+	head, _, _ := strings.Cut(help, "\n\n")
+	for _, l := range strings.Split(strings.TrimPrefix(head, "usage:"), "\n") {
+		if l = strings.Join(strings.Fields(l), " "); l != "" {
+			lines = append(lines, l)
+		}
+	}
+	for _, m := range regexp.MustCompile(`(?m)^  -(\S+)`).FindAllStringSubmatch(help, -1) {
+		flags = append(flags, m[1])
+	}
+	return lines, flags
+}
+
+// Each command's usage lines name every flag it has, so that a flag
+// added below is not left out of the line above.
+func TestUsageNamesEveryFlag(t *testing.T) {
+	for _, args := range commands {
+		lines, flags := synopsis(t, args)
+		text := strings.Join(lines, "\n")
+		for _, f := range flags {
+			if !regexp.MustCompile(`(^|[ \[])--?` + regexp.QuoteMeta(f) + `([ \]=]|$)`).MatchString(text) {
+				t.Errorf("%s -h: the usage lines do not name -%s:\n%s", strings.Join(args, " "), f, text)
+			}
+		}
+	}
+}
+
+// README's synopsis of a command is its -h's usage lines, spaces aside.
+func TestReadmeSynopses(t *testing.T) {
+	b, err := os.ReadFile(filepath.Join("..", "..", "README.md"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var fenced []string
+	in := false
+	for _, l := range strings.Split(string(b), "\n") {
+		if strings.HasPrefix(l, "```") {
+			in = !in
+			continue
+		}
+		if in {
+			fenced = append(fenced, strings.Join(strings.Fields(l), " "))
+		}
+	}
+	for _, args := range commands {
+		if args[0] == "demo" || args[0] == "bench" || slices.Equal(args, []string{"policy", "check"}) {
+			continue // README gives them no synopsis; policy's is that of policy show -h, of both subcommands
+		}
+		lines, _ := synopsis(t, args)
+		found := false
+		for i := range fenced {
+			if len(fenced)-i >= len(lines) && slices.Equal(fenced[i:i+len(lines)], lines) {
+				found = true
+				break
+			}
+		}
+		if !found {
+			t.Errorf("README has no synopsis of %s that is its -h's:\n%s", strings.Join(args, " "), strings.Join(lines, "\n"))
+		}
 	}
 }

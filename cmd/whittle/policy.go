@@ -17,8 +17,9 @@ import (
 )
 
 const policyUsage = `usage:
-  whittle policy show [flags]     print the policy in force (built in, or with --policy laid over it)
-  whittle policy check FILE       check a policy file: every problem with its line and column
+  whittle policy show [--category C] [--product-type T] [--policy FILE] [--json] [--lexicon DIR]
+                               print the policy in force (built in, or with --policy laid over it)
+  whittle policy check FILE    check a policy file: every problem with its line and column
 `
 
 // showOptions are the flags of policy show.

@@ -36,7 +36,8 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	session := fs.String("session", "", "session `ID` of the search event (default: a new random id each run)")
 	category := fs.String("category", "", "the shop's category the search is made in, used when the query names none")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k N] [--policy FILE] [--budget N] [--baseline]\n"+
+			"                      [--category NAME] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
 	}
 	rest, code, ok := parseFlags(fs, args, -1)

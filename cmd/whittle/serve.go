@@ -36,7 +36,9 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	fs.DurationVar(&l.ShutdownGrace, "shutdown-grace", 30*time.Second, "how long shutting down waits for requests in flight")
 	logQueries := fs.Bool("log-queries", false, "put query text in the request log (queries can carry personal data)")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle serve [--index DIR] [--addr 127.0.0.1:7391] [flags]\n\n"+
+		fmt.Fprint(stderr, "usage: whittle serve [--index DIR] [--addr ADDR] [--policy FILE] [--budget N] [--max-body N] [--max-query N]\n"+
+			"                     [--max-hits N] [--deadline D] [--max-in-flight N] [--retry-after D] [--read-timeout D]\n"+
+			"                     [--write-timeout D] [--shutdown-grace D] [--log-queries]\n\n"+
 			"Answers parse, rescue, policy, health, ready and metrics as JSON under "+serve.Prefix+",\n"+
 			"and serves the workbench page at "+serve.Prefix+"workbench,\n"+
 			"until interrupted (SIGINT or SIGTERM), then lets requests in flight finish.\n"+
