@@ -18,10 +18,12 @@ import (
 )
 
 const colourUsage = `usage:
-  whittle colour [flags] COLOUR             describe a colour and its nearest named colours
-  whittle colour [flags] COLOUR COLOUR      the distance between two colours (ΔE00 and ΔE76)
-  whittle colour --catalog FILE [flags] COLOUR
-                                            the catalog's colours near COLOUR, nearest first
+  whittle colour [--json] [--nearest N] [--lexicon DIR] COLOUR
+                                  describe a colour and its nearest named colours
+  whittle colour [--json] [--lexicon DIR] COLOUR COLOUR
+                                  the distance between two colours (ΔE00 and ΔE76)
+  whittle colour --catalog FILE [--within D] [--category C] [--policy FILE] [--json] [--lexicon DIR] COLOUR
+                                  the catalog's colours near COLOUR, nearest first
 
 COLOUR is a name ("dusty rose", "light sage"), a hex value (#c0a0a0),
 rgb(192, 160, 160) or L,a,b ("65.1,14.2,5.3"). Quote names of several words.
@@ -62,31 +64,24 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, colourUsage)
 		fs.PrintDefaults()
 	}
-	colours, err := parseInterspersed(fs, args)
-	if err != nil {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		return 2
+	colours, code, ok := parseFlags(fs, args, -1)
+	if !ok {
+		return code
 	}
-	if len(colours) < 1 || len(colours) > 2 || (*catalogFile != "" && len(colours) != 1) {
-		fs.Usage()
-		return 2
+	switch {
+	case len(colours) == 0:
+		return usageError(fs, "give a COLOUR to describe, or two to compare")
+	case len(colours) > 2:
+		return usageError(fs, "takes one colour or two, not %d; quote a name of several words: whittle colour \"dusty rose\"", len(colours))
+	case *catalogFile != "" && len(colours) != 1:
+		return usageError(fs, "--catalog takes one colour, not %d", len(colours))
 	}
-	if *catalogFile == "" {
-		var set []string
-		fs.Visit(func(f *flag.Flag) {
-			if f.Name == "within" || f.Name == "category" || f.Name == "policy" {
-				set = append(set, "--"+f.Name)
-			}
-		})
-		if len(set) > 0 {
-			fmt.Fprintf(stderr, "whittle colour: %s only applies with --catalog\n", strings.Join(set, " and "))
+	for _, f := range []string{"within", "category", "policy"} {
+		if !onlyWith(fs, f, "catalog") {
 			return 2
 		}
 	}
-	if *within < 0 || math.IsNaN(*within) || *nearest < 0 {
-		fmt.Fprintln(stderr, "whittle colour: --within and --nearest must not be negative")
+	if !apart(fs, "nearest", "catalog") || !checkNeeds(fs, need{"within", *within >= 0, "0 or more"}, need{"nearest", *nearest >= 0, "0 or more"}) {
 		return 2
 	}
 	if !checkCategory("colour", *category, stderr) {

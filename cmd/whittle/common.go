@@ -100,19 +100,112 @@ func interrupted(ctx context.Context, err error) bool {
 // parseFlags parses a command's flags (anywhere among its arguments) and
 // returns the other arguments. When the command should stop, ok is false
 // and code is its exit status: 0 after -h, 2 for bad usage (want says how
-// many other arguments the command takes, or -1 for any number).
+// many other arguments the command takes, or -1 for any number, for a
+// command that checks them itself to say what they are).
 func parseFlags(fs *flag.FlagSet, args []string, want int) (rest []string, code int, ok bool) {
-	rest, err := parseInterspersed(fs, args)
-	if err == flag.ErrHelp {
-		return nil, 0, false
+	rest, code, ok = parseWith(fs, func() ([]string, error) { return parseInterspersed(fs, args) })
+	if !ok || want < 0 || len(rest) == want {
+		return rest, code, ok
 	}
-	if err != nil || want >= 0 && len(rest) != want {
-		if err == nil {
-			fs.Usage()
-		}
-		return nil, 2, false
+	if want == 0 {
+		return nil, usageError(fs, "takes no arguments, only flags; %q is not one", rest[0]), false
+	}
+	return nil, usageError(fs, "takes %d arguments, not %d", want, len(rest)), false
+}
+
+// parseWith runs parse, which parses fs's flags and returns the other
+// arguments. On -h it writes the usage, the one time the whole of it is
+// shown, and code is 0; on a bad flag it reports the flag package's
+// error on one line with a hint, instead of the usage, and code is 2.
+func parseWith(fs *flag.FlagSet, parse func() ([]string, error)) (rest []string, code int, ok bool) {
+	usage, out := fs.Usage, fs.Output()
+	fs.Usage = func() {}
+	fs.SetOutput(io.Discard)
+	rest, err := parse()
+	fs.Usage = usage
+	fs.SetOutput(out)
+	switch {
+	case err == flag.ErrHelp:
+		fs.Usage()
+		return nil, 0, false
+	case err != nil:
+		return nil, usageError(fs, "%v (run \"whittle %s -h\" for the flags)", err, fs.Name()), false
 	}
 	return rest, 0, true
+}
+
+// usageError reports bad usage of fs's command on one line of its
+// output, and returns the exit status of bad usage, 2.
+func usageError(fs *flag.FlagSet, format string, a ...any) int {
+	fmt.Fprintf(fs.Output(), "whittle %s: %s\n", fs.Name(), fmt.Sprintf(format, a...))
+	return 2
+}
+
+// need is what a flag's value must be: ok says whether it is, want what
+// it must be ("at least 1").
+type need struct {
+	flag string
+	ok   bool
+	want string
+}
+
+// checkNeeds reports the first flag of fs whose value is not what it
+// must be, naming the flag, what it must be and the value given, and
+// returns false; it returns true when every value is as it must be.
+func checkNeeds(fs *flag.FlagSet, needs ...need) bool {
+	for _, n := range needs {
+		if !n.ok {
+			usageError(fs, "%s must be %s, not %s", flagName(n.flag), n.want, fs.Lookup(n.flag).Value)
+			return false
+		}
+	}
+	return true
+}
+
+// atLeast is the need of an integer flag's value v to be at least min.
+func atLeast(flag string, v, min int) need {
+	return need{flag, v >= min, fmt.Sprintf("at least %d", min)}
+}
+
+// flagName is how a flag is written: -k, --budget.
+func flagName(name string) string {
+	if len(name) == 1 {
+		return "-" + name
+	}
+	return "--" + name
+}
+
+// given reports whether a flag of fs was given on the command line, and,
+// for a switch, given true.
+func given(fs *flag.FlagSet, name string) bool {
+	set := false
+	fs.Visit(func(f *flag.Flag) {
+		if f.Name == name {
+			b, isBool := f.Value.(interface{ IsBoolFlag() bool })
+			set = !isBool || !b.IsBoolFlag() || f.Value.String() == "true"
+		}
+	})
+	return set
+}
+
+// apart reports, and returns false, when both flags a and b of fs are
+// given, which the command cannot do at once.
+func apart(fs *flag.FlagSet, a, b string) bool {
+	if given(fs, a) && given(fs, b) {
+		usageError(fs, "%s and %s cannot be used together", flagName(a), flagName(b))
+		return false
+	}
+	return true
+}
+
+// onlyWith reports, and returns false, when flag name is given without
+// the flag with, the one it only applies with.
+func onlyWith(fs *flag.FlagSet, name, with string) bool {
+	if given(fs, name) && !given(fs, with) {
+		usageError(fs, "%s only applies with %s", flagName(name), flagName(with))
+		return false
+	}
+	return true
 }
 
 // writeFile creates file and writes it with write, buffered; a failed

@@ -24,7 +24,7 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !productsOK(fs.Name(), *n, stderr) {
+	if !checkNeeds(fs, products(*n)) {
 		return 2
 	}
 	ctx, stop := interruptible()
@@ -54,15 +54,11 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !productsOK(fs.Name(), *n, stderr) {
+	if !checkNeeds(fs, products(*n), atLeast("replay", *replayN, 1), atLeast("signals", *signalsN, 1)) {
 		return 2
 	}
 	ctx, stop := interruptible()
 	defer stop()
-	if *replayN < 1 || *signalsN < 1 {
-		fs.Usage()
-		return 2
-	}
 	r, err := demo.Bench(ctx, stderr, demo.BenchOptions{Dir: *dir, Products: *n, Replay: *replayN, Signals: *signalsN})
 	if interrupted(ctx, err) {
 		fmt.Fprintln(stderr, "whittle bench: interrupted")
@@ -87,14 +83,8 @@ func benchCmd(args []string, stdout, stderr io.Writer) int {
 	return 0
 }
 
-// productsOK says whether n is a catalog size the demo generator
-// accepts, and tells the user when it is not.
-func productsOK(cmd string, n int, stderr io.Writer) bool {
-	if n < demo.MinProducts {
-		fmt.Fprintf(stderr, "whittle %s: --products must be at least %d\n", cmd, demo.MinProducts)
-		return false
-	}
-	return true
-}
+// products is the need of --products n to be a catalog size the demo
+// generator accepts.
+func products(n int) need { return atLeast("products", n, demo.MinProducts) }
 
 func ms(d time.Duration) float64 { return float64(d.Microseconds()) / 1000 }

@@ -56,17 +56,8 @@ flags:
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if !productsOK(fs.Name(), *n, stderr) {
+	if !checkNeeds(fs, products(*n), atLeast("queries", *queries, 1), atLeast("hits", *hits, 1)) || !apart(fs, "json", "cases") {
 		return 2
-	}
-	for _, f := range []struct {
-		name string
-		v    int
-	}{{"queries", *queries}, {"hits", *hits}} {
-		if f.v < 1 {
-			fmt.Fprintf(stderr, "whittle eval: --%s must be at least 1\n", f.name)
-			return 2
-		}
 	}
 	styles, ok := evalStyles(*style, stderr)
 	if !ok {

@@ -29,8 +29,12 @@ func TestEvalUsage(t *testing.T) {
 		{"bad policy", []string{"eval", "--policy", bad}, 2, "did you mean", "a policy with an unknown key is refused, with the nearest key"},
 		{"bad style", []string{"eval", "--style", "medium"}, 2, "--style is short, long or both", "there are two styles, and both"},
 		{"help names the styles", []string{"eval", "-h"}, 0, "--style short|long|both", "the usage line lists the style flag"},
-		{"stray argument", []string{"eval", "lens"}, 2, "usage: whittle eval", "eval takes no query"},
-		{"unknown flag", []string{"eval", "--nope"}, 2, "flag provided but not defined", "unknown flags are refused"},
+		{"stray argument", []string{"eval", "lens"}, 2, `whittle eval: takes no arguments, only flags; "lens" is not one`, "eval takes no query"},
+		{"json and cases", []string{"eval", "--json", "--cases"}, 2, "whittle eval: --json and --cases cannot be used together",
+			"the usage shows them apart: --cases evaluates nothing, so there is no report to write as JSON"},
+		{"cases alone", []string{"eval", "--cases", "--json=false", "--products", "300", "--queries", "1", "--style", "short"}, 0, "",
+			"--json=false is not --json, so --cases stands alone"},
+		{"unknown flag", []string{"eval", "--nope"}, 2, `flag provided but not defined: -nope (run "whittle eval -h" for the flags)`, "unknown flags are refused, with a hint, not the usage"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			code, _, stderr := runCLI("", tc.args...)

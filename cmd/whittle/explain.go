@@ -31,20 +31,17 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	policyFile := fs.String("policy", "", "policy file laid over the built-in strictness policy")
 	colour := fs.String("colour", "auto", "colour the table: auto (on a terminal), always or never")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle explain [flags] QUERY...\n       whittle explain [flags] -   (one query a line from standard input)\n\n"+
+		fmt.Fprint(stderr, "usage: whittle explain [--json] [--category C] [--currency CODE] [--imperial] [--lexicon DIR]\n"+
+			"                       [--policy FILE] [--colour auto|always|never] QUERY...\n"+
+			"       whittle explain [flags] -   (one query a line from standard input)\n\n"+
 			"Flags come before the queries; put a query that starts with a dash after --:\n  whittle explain --json -- \"-leather boots\"\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	if err := fs.Parse(args); err != nil {
-		if err == flag.ErrHelp {
-			return 0
-		}
-		return 2
+	if _, code, ok := parseWith(fs, func() ([]string, error) { return nil, fs.Parse(args) }); !ok {
+		return code
 	}
 	if fs.NArg() == 0 {
-		fmt.Fprintln(stderr, "whittle explain: give a query, or - to read queries from standard input")
-		fs.Usage()
-		return 2
+		return usageError(fs, "give a query, or - to read queries from standard input")
 	}
 	code, err := parser.DollarCurrency(*cur)
 	if err != nil {
@@ -77,8 +74,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			style.Colour = true
 		}
 	default:
-		fmt.Fprintf(stderr, "whittle explain: -colour must be auto, always or never, not %q\n", *colour)
-		return 2
+		return usageError(fs, "--colour must be auto, always or never, not %q", *colour)
 	}
 
 	out := bufio.NewWriter(stdout)

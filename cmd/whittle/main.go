@@ -9,19 +9,19 @@ import (
 const usage = `whittle reads long shopping queries into typed constraints.
 
 usage:
-  whittle demo                       tour what whittle does, on an invented store's catalog
-  whittle explain [flags] QUERY...   show how each query is read
-  whittle explain [flags] -          read one query a line from standard input
-  whittle colour [flags] COLOUR...   describe a colour, compare two, or search a catalog's colours
-  whittle policy show|check ...      print the strictness policy in force, or check a policy file
-  whittle index --catalog FILE       build the search index of a catalog (JSON Lines)
-  whittle search [flags] QUERY       search the index, rescuing a query that finds too little
-  whittle replay --log FILE          run a query log through whittle and sum up what would change
-  whittle tune --signals FILE        learn strictness and tolerances from shoppers' signals
-  whittle serve [--index DIR]        answer parse and rescue as a JSON service on 127.0.0.1
-  whittle bench [--products N]       time index building and rescues on a generated catalog
-  whittle eval [flags]               measure rescue quality against the blind partial match
-  whittle help                       show this text
+  whittle demo [flags]                   tour what whittle does, on an invented store's catalog
+  whittle explain [flags] QUERY...       show how each query is read
+  whittle explain [flags] -              read one query a line from standard input
+  whittle colour [flags] COLOUR...       describe a colour, compare two, or search a catalog's colours
+  whittle policy show|check ...          print the strictness policy in force, or check a policy file
+  whittle index --catalog FILE [flags]   build the search index of a catalog (JSON Lines)
+  whittle search [flags] QUERY           search the index, rescuing a query that finds too little
+  whittle replay --log FILE [flags]      run a query log through whittle and sum up what would change
+  whittle tune --signals FILE [flags]    learn strictness and tolerances from shoppers' signals
+  whittle serve [flags]                  answer parse and rescue as a JSON service on 127.0.0.1
+  whittle bench [flags]                  time index building and rescues on a generated catalog
+  whittle eval [flags]                   measure rescue quality against the blind partial match
+  whittle help                           show this text
 
 Run "whittle COMMAND -h" or "whittle help COMMAND" for a command's flags.
 

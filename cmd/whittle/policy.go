@@ -17,8 +17,9 @@ import (
 )
 
 const policyUsage = `usage:
-  whittle policy show [flags]     print the policy in force (built in, or with --policy laid over it)
-  whittle policy check FILE       check a policy file: every problem with its line and column
+  whittle policy show [--category C] [--product-type T] [--policy FILE] [--json] [--lexicon DIR]
+                               print the policy in force (built in, or with --policy laid over it)
+  whittle policy check FILE    check a policy file: every problem with its line and column
 `
 
 // showOptions are the flags of policy show.
@@ -141,9 +142,12 @@ func policyCheck(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprint(stderr, "usage: whittle policy check FILE\n\nChecks a policy file as it would be laid over the built-in policy,\n"+
 			"and prints every problem with its line and column, or its warnings and ok.\n")
 	}
-	rest, code, ok := parseFlags(fs, args, 1)
+	rest, code, ok := parseFlags(fs, args, -1)
 	if !ok {
 		return code
+	}
+	if len(rest) != 1 {
+		return usageError(fs, "takes one policy FILE, not %d arguments", len(rest))
 	}
 	file := rest[0]
 	if _, err := os.Stat(file); err != nil {

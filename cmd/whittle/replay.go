@@ -29,7 +29,8 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	budget := fs.Int("budget", rewrite.DefaultBudget, "most engine counts one rescue may spend")
 	skipBad := fs.Bool("skip-bad", false, "skip malformed lines and report them, instead of stopping at the first")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle replay --log FILE [--index DIR] [--json | --csv] [--html FILE] [--workers N]\n\n"+
+		fmt.Fprint(stderr, "usage: whittle replay --log FILE [--index DIR] [--json | --csv] [--html FILE] [--workers N]\n"+
+			"                      [--policy FILE] [--budget N] [--skip-bad]\n\n"+
 			"Runs every query of a log through whittle on the index and sums up what would change:\n"+
 			"searches finding nothing before and after rescue, the relaxations used, what is left\n"+
 			"with nothing and why, and frequent queries that find nothing as typed.\n\nflags:\n")
@@ -38,8 +39,10 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if *logFile == "" || *workers < 1 || *budget < 1 || *asJSON && *asCSV {
-		fs.Usage()
+	if *logFile == "" {
+		return usageError(fs, "--log FILE is required (- reads the log from standard input)")
+	}
+	if !checkNeeds(fs, atLeast("workers", *workers, 1), atLeast("budget", *budget, 1)) || !apart(fs, "json", "csv") {
 		return 2
 	}
 	lex, _ := loadLexicon("replay", "", stderr)

@@ -44,20 +44,22 @@ func TestReplay(t *testing.T) {
 		t.Errorf("html report: %v", err)
 	}
 	for _, tc := range []struct {
-		name string
-		args []string
-		code int
-		want string
+		name   string
+		args   []string
+		code   int
+		want   string
+		reason string
 	}{
-		{"no log", []string{"replay", "--index", dir}, 2, "usage"},
-		{"json and csv", []string{"replay", "--index", dir, "--log", logFile, "--json", "--csv"}, 2, "usage"},
-		{"no workers", []string{"replay", "--index", dir, "--log", logFile, "--workers", "0"}, 2, "usage"},
-		{"missing log", []string{"replay", "--index", dir, "--log", filepath.Join(dir, "none")}, 1, "no such file"},
-		{"missing index", []string{"replay", "--index", filepath.Join(dir, "none"), "--log", logFile}, 1, "no index"},
+		{"no log", []string{"replay", "--index", dir}, 2, "whittle replay: --log FILE is required", "there is nothing to replay"},
+		{"json and csv", []string{"replay", "--index", dir, "--log", logFile, "--json", "--csv"}, 2, "whittle replay: --json and --csv cannot be used together", "one format on standard output at a time"},
+		{"no workers", []string{"replay", "--index", dir, "--log", logFile, "--workers", "0"}, 2, "whittle replay: --workers must be at least 1, not 0", "no worker replays nothing"},
+		{"csv alone", []string{"replay", "--index", dir, "--log", logFile, "--json=false", "--csv"}, 0, "", "--json=false is not --json, so --csv stands alone"},
+		{"missing log", []string{"replay", "--index", dir, "--log", filepath.Join(dir, "none")}, 1, "no such file", "the log must exist"},
+		{"missing index", []string{"replay", "--index", filepath.Join(dir, "none"), "--log", logFile}, 1, "no index", "the index must exist"},
 	} {
 		code, _, stderr := runCLI("", tc.args...)
-		if code != tc.code || !strings.Contains(stderr, tc.want) {
-			t.Errorf("%s: exit %d, stderr %q; want %d and %q", tc.name, code, stderr, tc.code, tc.want)
+		if code != tc.code || !strings.Contains(stderr, tc.want) || code == 2 && strings.Count(stderr, "\n") != 1 {
+			t.Errorf("%s (%s): exit %d, stderr %q; want %d and %q, on one line when 2", tc.name, tc.reason, code, stderr, tc.code, tc.want)
 		}
 	}
 	if code, _, stderr := runCLI("{\"query\": 5}\n", "replay", "--index", dir, "--log", "-"); code != 1 || !strings.Contains(stderr, "line 1: query") {

@@ -36,19 +36,23 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	session := fs.String("session", "", "session `ID` of the search event (default: a new random id each run)")
 	category := fs.String("category", "", "the shop's category the search is made in, used when the query names none")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k 10] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
+		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k N] [--policy FILE] [--budget N] [--baseline]\n"+
+			"                      [--category NAME] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
 	}
-	rest, code, ok := parseFlags(fs, args, 1)
+	rest, code, ok := parseFlags(fs, args, -1)
 	if !ok {
 		return code
 	}
-	if !(*explore >= 0 && *explore <= 1) {
-		fmt.Fprintf(stderr, "whittle search: --explore %g: want a chance from 0 to 1\n", *explore)
-		return 2
+	switch {
+	case len(rest) == 0:
+		return usageError(fs, "give the QUERY to search for")
+	case len(rest) > 1:
+		return usageError(fs, "takes one query; quote a query of several words: whittle search %q", strings.Join(rest, " "))
 	}
-	if *k < 0 || *budget < 1 {
-		fs.Usage()
+	if !checkNeeds(fs, need{"k", *k >= 0, "0 or more"}, atLeast("budget", *budget, 1),
+		need{"explore", *explore >= 0 && *explore <= 1, "a chance from 0 to 1"}) ||
+		!onlyWith(fs, "seed", "explore") || !onlyWith(fs, "session", "signals") {
 		return 2
 	}
 	if !checkCategory("search", *category, stderr) {

@@ -84,12 +84,12 @@ func TestIndexAndSearchErrors(t *testing.T) {
 		{"duplicate id", []string{"index", "--catalog", bad, "--index", filepath.Join(dir, "i")}, 1, "line 2: id", "a duplicate id stops the run"},
 		{"skip bad", []string{"index", "--catalog", bad, "--index", filepath.Join(dir, "i"), "--skip-bad"}, 0, "skipped", "--skip-bad reports and goes on"},
 		{"no index", []string{"search", "--index", filepath.Join(dir, "missing"), "rug"}, 1, "no index", "search needs an index"},
-		{"no query", []string{"search", "--index", dir}, 2, "usage", "a query is needed"},
-		{"explore below 0", []string{"search", "--index", dir, "--explore", "-0.5", "rug"}, 2, "--explore -0.5: want a chance from 0 to 1", "a chance is at least 0"},
-		{"explore above 1", []string{"search", "--index", dir, "--explore", "1.5", "rug"}, 2, "--explore 1.5: want a chance from 0 to 1", "a chance is at most 1"},
-		{"explore not a number", []string{"search", "--index", dir, "--explore", "NaN", "rug"}, 2, "want a chance from 0 to 1", "NaN is no chance"},
-		{"explore not a float", []string{"search", "--index", dir, "--explore", "often", "rug"}, 2, "invalid value", "the flag package refuses it"},
-		{"bad seed", []string{"search", "--index", dir, "--seed", "-1", "rug"}, 2, "invalid value", "a seed is a whole number from 0"},
+		{"no query", []string{"search", "--index", dir}, 2, "whittle search: give the QUERY to search for", "a query is needed"},
+		{"explore below 0", []string{"search", "--index", dir, "--explore", "-0.5", "rug"}, 2, "--explore must be a chance from 0 to 1, not -0.5", "a chance is at least 0"},
+		{"explore above 1", []string{"search", "--index", dir, "--explore", "1.5", "rug"}, 2, "--explore must be a chance from 0 to 1, not 1.5", "a chance is at most 1"},
+		{"explore not a number", []string{"search", "--index", dir, "--explore", "NaN", "rug"}, 2, "--explore must be a chance from 0 to 1, not NaN", "NaN is no chance"},
+		{"explore not a float", []string{"search", "--index", dir, "--explore", "often", "rug"}, 2, `invalid value "often" for flag -explore`, "the flag package refuses it"},
+		{"bad seed", []string{"search", "--index", dir, "--seed", "-1", "rug"}, 2, `invalid value "-1" for flag -seed`, "a seed is a whole number from 0"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			code, _, stderr := runCLI("", tc.args...)

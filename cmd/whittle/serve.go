@@ -36,7 +36,9 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	fs.DurationVar(&l.ShutdownGrace, "shutdown-grace", 30*time.Second, "how long shutting down waits for requests in flight")
 	logQueries := fs.Bool("log-queries", false, "put query text in the request log (queries can carry personal data)")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle serve [--index DIR] [--addr 127.0.0.1:7391] [flags]\n\n"+
+		fmt.Fprint(stderr, "usage: whittle serve [--index DIR] [--addr ADDR] [--policy FILE] [--budget N] [--max-body N] [--max-query N]\n"+
+			"                     [--max-hits N] [--deadline D] [--max-in-flight N] [--retry-after D] [--read-timeout D]\n"+
+			"                     [--write-timeout D] [--shutdown-grace D] [--log-queries]\n\n"+
 			"Answers parse, rescue, policy, health, ready and metrics as JSON under "+serve.Prefix+",\n"+
 			"and serves the workbench page at "+serve.Prefix+"workbench,\n"+
 			"until interrupted (SIGINT or SIGTERM), then lets requests in flight finish.\n"+
@@ -46,12 +48,7 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if *budget < 1 {
-		fmt.Fprintln(stderr, "whittle serve: --budget must be more than 0")
-		return 2
-	}
-	if bad := badLimit(l); bad != "" {
-		fmt.Fprintf(stderr, "whittle serve: --%s\n", bad)
+	if !checkNeeds(fs, append([]need{atLeast("budget", *budget, 1)}, limitNeeds(l)...)...) {
 		return 2
 	}
 	lex, _ := loadLexicon("serve", "", stderr)
@@ -89,24 +86,13 @@ func serveCmd(args []string, stdout, stderr io.Writer) int {
 	return 0
 }
 
-// badLimit says which limit flag is out of range and what it needs, for
-// the first one that is, or returns "". A write timeout of 0 has a
-// meaning of its own; every other limit must be more than 0.
-func badLimit(l serve.Limits) string {
-	for _, f := range []struct {
-		name string
-		ok   bool
-	}{
-		{"max-body", l.MaxBodyBytes > 0}, {"max-query", l.MaxQueryBytes > 0}, {"max-hits", l.MaxHits > 0},
-		{"deadline", l.Deadline > 0}, {"max-in-flight", l.MaxInFlight > 0}, {"retry-after", l.RetryAfter > 0},
-		{"read-timeout", l.ReadTimeout > 0}, {"write-timeout", l.WriteTimeout >= 0}, {"shutdown-grace", l.ShutdownGrace > 0},
-	} {
-		if !f.ok && f.name == "write-timeout" {
-			return f.name + " must not be negative"
-		}
-		if !f.ok {
-			return f.name + " must be more than 0"
-		}
+// limitNeeds are what the limit flags must be. A write timeout of 0 has
+// a meaning of its own; every other limit must be more than 0.
+func limitNeeds(l serve.Limits) []need {
+	more := func(name string, ok bool) need { return need{name, ok, "more than 0"} }
+	return []need{
+		more("max-body", l.MaxBodyBytes > 0), more("max-query", l.MaxQueryBytes > 0), more("max-hits", l.MaxHits > 0),
+		more("deadline", l.Deadline > 0), more("max-in-flight", l.MaxInFlight > 0), more("retry-after", l.RetryAfter > 0),
+		more("read-timeout", l.ReadTimeout > 0), need{"write-timeout", l.WriteTimeout >= 0, "0 or more"}, more("shutdown-grace", l.ShutdownGrace > 0),
 	}
-	return ""
 }

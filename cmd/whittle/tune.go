@@ -45,7 +45,8 @@ func tuneCmd(args []string, stdout, stderr io.Writer) int {
 	skipBad := fs.Bool("skip-bad", false, "skip malformed lines and count them, instead of stopping at the first")
 	minAlias := fs.Int("min-alias", 2, "fewest sessions behind an alias candidate")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle tune --signals FILE[,FILE...] [--index DIR] [--policy FILE] [--json] [--html FILE] [--propose FILE]\n\n"+
+		fmt.Fprint(stderr, "usage: whittle tune --signals FILE[,FILE...] [--index DIR] [--policy FILE] [--json] [--html FILE]\n"+
+			"                    [--propose FILE] [--skip-bad] [--min-alias N]\n\n"+
 			"Learns strictness and tolerances per category from shoppers' signals: joins interactions\n"+
 			"to the searches that showed the products, weighs them for position bias, compares\n"+
 			"relaxed searches with exact matches, and recommends changes to the policy as a diff.\n"+
@@ -55,8 +56,10 @@ func tuneCmd(args []string, stdout, stderr io.Writer) int {
 	if _, code, ok := parseFlags(fs, args, 0); !ok {
 		return code
 	}
-	if len(files) == 0 || *minAlias < 1 {
-		fs.Usage()
+	if len(files) == 0 {
+		return usageError(fs, "--signals FILE is required")
+	}
+	if !checkNeeds(fs, atLeast("min-alias", *minAlias, 1)) {
 		return 2
 	}
 	lex, _ := loadLexicon("tune", "", stderr)

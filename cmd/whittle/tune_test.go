@@ -108,7 +108,7 @@ func TestTuneErrors(t *testing.T) {
 		want   string
 		reason string
 	}{
-		{"no signals", []string{"tune", "--index", idx}, 2, "usage: whittle tune", "--signals is required"},
+		{"no signals", []string{"tune", "--index", idx}, 2, "whittle tune: --signals FILE is required", "--signals is required"},
 		{"missing file", []string{"tune", "--signals", "no-such.jsonl", "--index", idx}, 1, "no-such.jsonl", "the file is named"},
 		{"bad line", []string{"tune", "--signals", bad, "--index", idx}, 1, "line 91", "a malformed line stops the run with its line number"},
 		{"skip bad", []string{"tune", "--signals", bad, "--index", idx, "--skip-bad"}, 0, "2 malformed lines were skipped", "--skip-bad skips and counts them"},
