@@ -506,3 +506,11 @@ func ExampleRewriter_Refusal() {
 	// "nice": query not searched: only filler words ("nice"), nothing to search for
 	// "nice rain jacket": <nil>
 }
+
+func ExampleExactMessage() {
+	fmt.Println(rewrite.ExactMessage(1))
+	fmt.Println(rewrite.ExactMessage(63))
+	// Output:
+	// 1 exact match.
+	// 63 exact matches.
+}

@@ -7,6 +7,15 @@ import (
 	"github.com/whittle-search/whittle/parser"
 )
 
+// ExactMessage is what a shopper reads when the query matched n products
+// as typed.
+func ExactMessage(n int) string {
+	if n == 1 {
+		return "1 exact match."
+	}
+	return fmt.Sprintf("%d exact matches.", n)
+}
+
 // message writes what a shopper reads: what was not found, and what is
 // shown instead, in plain words.
 func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {

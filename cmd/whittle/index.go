@@ -51,8 +51,7 @@ func indexCmd(args []string, stdout, stderr io.Writer) int {
 		return code
 	}
 	if *file == "" {
-		fs.Usage()
-		return 2
+		return usageError(fs, "--catalog FILE is required")
 	}
 	f, err := os.Open(*file)
 	if err != nil {

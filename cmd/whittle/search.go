@@ -110,7 +110,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	msg := o.Message
 	if o.Exact {
-		msg = fmt.Sprintf("%d exact matches.", o.Count)
+		msg = rewrite.ExactMessage(o.Count)
 	}
 	fmt.Fprintf(stdout, "\n%s\n", msg)
 	if o.Note != "" {

@@ -79,7 +79,7 @@ func TestIndexAndSearchErrors(t *testing.T) {
 		err    string
 		reason string
 	}{
-		{"no catalog flag", []string{"index"}, 2, "usage", "the catalog is required"},
+		{"no catalog flag", []string{"index"}, 2, "--catalog FILE is required", "the catalog is required, and the one line says so"},
 		{"missing catalog", []string{"index", "--catalog", filepath.Join(dir, "none.jsonl"), "--index", filepath.Join(dir, "i")}, 1, "no such file", "the file must exist"},
 		{"duplicate id", []string{"index", "--catalog", bad, "--index", filepath.Join(dir, "i")}, 1, "line 2: id", "a duplicate id stops the run"},
 		{"skip bad", []string{"index", "--catalog", bad, "--index", filepath.Join(dir, "i"), "--skip-bad"}, 0, "skipped", "--skip-bad reports and goes on"},

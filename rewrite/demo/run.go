@@ -120,7 +120,7 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 	fmt.Fprintf(w, "   read as: %s\n", strings.Join(read, " · "))
 	msg := o.Message
 	if msg == "" {
-		msg = fmt.Sprintf("%d exact matches.", o.Count)
+		msg = rewrite.ExactMessage(o.Count)
 	}
 	fmt.Fprintf(w, "   whittle: %s\n", msg)
 	if o.Count > 0 {
