@@ -73,7 +73,9 @@ func ParseWith(query string, opts Options) *Result {
 			Msg: fmt.Sprintf("query is %d bytes; the limit is %d", len(query), opts.maxBytes())})
 		return r
 	}
-	if strings.TrimFunc(query, isBlank) == "" {
+	// Bytes that are not UTF-8 read as spaces, but a query of nothing
+	// else is not empty: its error says where they are.
+	if utf8.ValidString(query) && strings.TrimFunc(query, isBlank) == "" {
 		r.Errors = append(r.Errors, &Error{Start: 0, End: len(query), Query: query, Msg: "query is empty"})
 		return r
 	}

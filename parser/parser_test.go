@@ -431,6 +431,8 @@ type wantErr struct {
 var errorCases = []errorCase{
 	{name: "empty", query: "", reason: "nothing to parse", errs: []wantErr{{0, 0, "empty"}}},
 	{name: "all space", query: "   \t ", reason: "nothing to parse", errs: []wantErr{{0, 5, "empty"}}},
+	{name: "only bytes that are not UTF-8", query: " \xff\xfe ", reason: "not empty: the error says where the bad bytes are (RFC 3629)",
+		errs: []wantErr{{1, 3, "invalid UTF-8 at byte 1"}}},
 	{name: "too long", query: strings.Repeat("a", 1025), reason: "over the limit, named in the message", errs: []wantErr{{1024, 1025, "1024"}}},
 	{name: "invalid utf-8", query: "red \xff\xfe dress", reason: "the error gives the byte offset, the rest is read",
 		errs: []wantErr{{4, 6, "byte 4"}},
