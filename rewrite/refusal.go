@@ -96,7 +96,9 @@ func refusal(r *parser.Result, items []*item, maxBytes int) error {
 	switch {
 	case len(q) > maxBytes:
 		e.Reason = RefusedTooLong
-	case strings.TrimFunc(q, blank) == "":
+	case utf8.ValidString(q) && strings.TrimFunc(q, blank) == "":
+		// Bytes that are not UTF-8 make a query unreadable, not empty,
+		// as the parser says.
 		e.Reason = RefusedEmpty
 	}
 	if len(e.Problems) == 0 {

@@ -35,6 +35,8 @@ func TestRefusal(t *testing.T) {
 			want: RefusedEmpty, start: 0, end: 3, msg: "query is empty", problems: 1},
 		{name: "wide blanks", query: "\t\u3000\u200b", reason: "a tab (1 byte), an ideographic space (3) and a zero-width space (3): 7 bytes of nothing",
 			want: RefusedEmpty, start: 0, end: 7, msg: "query is empty", problems: 1},
+		{name: "bytes that are not UTF-8", query: " \xff\xfe", reason: "unreadable, not empty: the parser's error is at the two bad bytes, 1-3 (RFC 3629 leaves 0xFF and 0xFE unused)",
+			want: RefusedUnreadable, start: 1, end: 3, msg: "invalid UTF-8 at byte 1", problems: 1},
 		{name: "punctuation", query: "!!!", reason: "the parser reads no constraint and no error; the span is the three marks",
 			want: RefusedUnreadable, start: 0, end: 3, msg: "no word or number to search for", problems: 1},
 		{name: "punctuation among blanks", query: "  ?! ", reason: "the span leaves the outer blanks out: bytes 2-4",
