@@ -49,21 +49,24 @@ func newTally(lex *lexicon.Lexicon) *tally {
 }
 
 // note records that the product on line has value in field, unknown.
+// The cap counts every measures.DIMENSION field as one, "measures", so
+// that a catalog of made-up dimension names is bounded too.
 func (t *tally) note(field, value string, line int) {
 	key := [2]string{field, value}
 	if u := t.byKey[key]; u != nil {
 		u.Products++
 		return
 	}
-	if t.fields[field] >= unknownCap {
-		key[1] = "…"
+	family, _, _ := strings.Cut(field, ".")
+	if t.fields[family] >= unknownCap {
+		key = [2]string{family, "…"}
 		if u := t.byKey[key]; u != nil {
 			u.Products++
 			return
 		}
 	}
-	t.fields[field]++
-	t.byKey[key] = &Unknown{Field: field, Value: key[1], Products: 1, Line: line}
+	t.fields[family]++
+	t.byKey[key] = &Unknown{Field: key[0], Value: key[1], Products: 1, Line: line}
 }
 
 // list returns the unknown values, by field, the most common first,

@@ -2,7 +2,9 @@ package bleveengine
 
 import (
 	"context"
+	"fmt"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"github.com/google/go-cmp/cmp"
@@ -70,5 +72,32 @@ func TestDemoCatalogIsKnown(t *testing.T) {
 	}
 	if len(st.Unknown) > 0 {
 		t.Errorf("the demo catalog has values whittle does not know: %+v", st.Unknown)
+	}
+}
+
+// However many unknown values a catalog has, a build keeps at most
+// unknownCap of a field, and of all measure dimensions together, then
+// counts the rest in one entry.
+func TestUnknownValuesAreBounded(t *testing.T) {
+	tl := newTally(nil)
+	for i := range 3 * unknownCap {
+		tl.note("product_type", fmt.Sprintf("made-up type %d", i), i+1)
+		tl.note(fmt.Sprintf("measures.dim%d", i), fmt.Sprintf("dim%d", i), i+1)
+	}
+	byField := map[string]int{}
+	rest := map[string]int{}
+	for _, u := range tl.byKey {
+		f, _, _ := strings.Cut(u.Field, ".")
+		byField[f]++
+		if u.Value == "…" {
+			rest[u.Field] = u.Products
+		}
+	}
+	// unknownCap values kept a family, and one entry for the rest.
+	if want := map[string]int{"product_type": unknownCap + 1, "measures": unknownCap + 1}; !cmp.Equal(byField, want) {
+		t.Errorf("entries by field = %v, want %v", byField, want)
+	}
+	if want := map[string]int{"product_type": 2 * unknownCap, "measures": 2 * unknownCap}; !cmp.Equal(rest, want) {
+		t.Errorf("products in the rest = %v, want %v", rest, want)
 	}
 }
