@@ -64,7 +64,9 @@ func Parse(query string) *Result {
 //   - The target of "for", "fits", "compatible with", "works with" or
 //     "replacement for" runs to the next tagged span or the end.
 //   - "-", "not", "no", "without", "except" and "excluding" exclude the
-//     next span.
+//     next span; a minus stuck to a word, a number or a currency sign
+//     excludes what it starts ("-cr2032", "-12awg", "-$50"), but before
+//     a bare number it is neither a sign nor an exclusion ("-20").
 //   - A quoted phrase is hard, whatever its kind.
 func ParseWith(query string, opts Options) *Result {
 	r := &Result{Query: query}

@@ -106,6 +106,21 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindSpec, "-a4", "not A4 (paper)").excluded(), tg(KindProductType, "paper", "paper")},
 	},
 	{
+		name: "minus before a wire gauge", query: "-12awg wire", category: "electrical",
+		reason: "a minus before a number excludes the designation it starts (ASTM B258 12 AWG), as before a word",
+		want:   []tagged{tg(KindSpec, "-12awg", "not 12 AWG (awg)").excluded(), tg(KindProductType, "wire", "electrical wire")},
+	},
+	{
+		name: "minus before a price", query: "-$50 shoe", category: "footwear",
+		reason: "the same for a price, a ceiling read as a bare price is",
+		want:   []tagged{tg(KindPrice, "-$50", "not ≤ 50.00 USD").excluded(), tg(KindProductType, "shoe", "shoe")},
+	},
+	{
+		name: "minus before a bare number", query: "-20 sleeping bag", category: "accessories",
+		reason: "a minus right before a bare number may be its sign; whittle reads no negative amount, so it excludes nothing and the number stays",
+		want:   []tagged{tg(KindMeasure, "20", "20"), tg(KindKeyword, "sleeping", "sleeping"), tg(KindProductType, "bag", "bag")},
+	},
+	{
 		name: "minus before a thread", query: "-m8 bolt", category: "hardware",
 		reason: "the same for ISO 261 M8",
 		want:   []tagged{tg(KindSpec, "-m8", "not M8x1.25 (metric_thread)").excluded(), tg(KindProductType, "bolt", "bolt")},

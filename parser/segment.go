@@ -70,11 +70,11 @@ func (p *tagger) segment() []unit {
 			i++
 			continue
 		}
-		if t.Type == grammar.Type(grammar.TDash) && space && i+1 < len(toks) && isWordType(toks[i+1].Type) {
-			// A minus stuck to a word excludes what the word starts:
-			// the word ("-leather"), or the code or size it runs into
-			// ("-cr2032", "-m8", "-a4"), read from the word on as if
-			// no mark were there.
+		if t.Type == grammar.Type(grammar.TDash) && space && i+1 < len(toks) && marksExclusion(toks[i+1].Type) {
+			// A minus stuck to a word or a number excludes what it
+			// starts: the word ("-leather"), the code or size it runs
+			// into ("-cr2032", "-m8", "-12awg", "-2x4"), a price
+			// ("-$50"), read from there on as if no mark were there.
 			flush()
 			out = append(out, unit{kind: uNeg, start: t.Pos.Offset, end: t.Pos.Offset + 1, spaceBefore: space})
 			space = false
@@ -112,6 +112,14 @@ func (p *tagger) segment() []unit {
 	}
 	flush()
 	return out
+}
+
+// marksExclusion reports whether a minus before a token of type t is an
+// exclusion mark: before a word, a number, a vulgar fraction or a
+// currency sign. (Before a bare number the tagger takes it back: see
+// add.)
+func marksExclusion(t lexer.TokenType) bool {
+	return isWordType(t) || t == grammar.Type(grammar.TNumber) || t == grammar.Type(grammar.TVulgar) || t == grammar.Type(grammar.TCur)
 }
 
 func isWordType(t lexer.TokenType) bool {

@@ -248,6 +248,14 @@ func (p *tagger) add(c Constraint) {
 		c.Strictness = DefaultStrictness(c.Kind)
 	}
 	c.Text = p.q[c.Start:c.End]
+	if p.neg >= 0 && p.negText == "-" && c.Kind == KindMeasure && c.Measure != nil && c.Measure.Dimension == "number" && p.negEnd == c.Start {
+		// "-20 sleeping bag": a minus right before a bare number may be
+		// its sign, and no amount whittle reads is negative; the number
+		// is neither excluded nor made negative, and the mark is filler.
+		p.negFiller()
+		p.res.Constraints[p.negIdx].Evidence = "minus before a bare number: not read as a sign or as an exclusion"
+		p.neg = -1
+	}
 	if p.neg >= 0 && c.Kind != KindFiller {
 		c.Excluded = true
 		c.Evidence = join(c.Evidence, "excluded by "+fmt.Sprintf("%q", p.negText))
