@@ -19,7 +19,8 @@ import (
 const policyUsage = `usage:
   whittle policy show [--category C] [--product-type T] [--policy FILE] [--json] [--lexicon DIR]
                                print the policy in force (built in, or with --policy laid over it)
-  whittle policy check FILE    check a policy file: every problem with its line and column
+  whittle policy check [--lexicon DIR] FILE
+                               check a policy file: every problem with its line and column
 `
 
 // showOptions are the flags of policy show.
@@ -138,9 +139,11 @@ func writePolicy(w io.Writer, e rewrite.Effective) {
 func policyCheck(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("policy check", flag.ContinueOnError)
 	fs.SetOutput(stderr)
+	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones: the product types and dimensions the file may name")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle policy check FILE\n\nChecks a policy file as it would be laid over the built-in policy,\n"+
-			"and prints every problem with its line and column, or its warnings and ok.\n")
+		fmt.Fprint(stderr, "usage: whittle policy check [--lexicon DIR] FILE\n\nChecks a policy file as it would be laid over the built-in policy,\n"+
+			"and prints every problem with its line and column, or its warnings and ok.\n\nflags:\n")
+		fs.PrintDefaults()
 	}
 	rest, code, ok := parseFlags(fs, args, -1)
 	if !ok {
@@ -156,7 +159,11 @@ func policyCheck(args []string, stdout, stderr io.Writer) int {
 	}
 	// Read as it is used, laid over the built-in policy, so that a
 	// warning about the settled values (the weights' order) shows too.
-	pol, err := rewrite.LoadPolicy(file, lexicon.Default())
+	lex, ok := loadLexicon("policy", *lexDir, stderr)
+	if !ok {
+		return 2
+	}
+	pol, err := rewrite.LoadPolicy(file, lex)
 	if err != nil {
 		fmt.Fprintf(stderr, "%s\n", renderPolicyError(err))
 		return 1

@@ -16,6 +16,14 @@ func TestPolicyCommands(t *testing.T) {
 	os.WriteFile(good, []byte("[category.apparel]\ncolour_tolerance = 3\n"), 0o644)
 	os.WriteFile(bad, []byte("[category.aparel]\ncolour_tolerence = 3\n"), 0o644)
 	os.WriteFile(risky, []byte("[category.electrical.strictness]\nspec = \"soft\"\n"), 0o644)
+	// A shop's own lexicon with a product type and a dimension the
+	// built-in one lacks (invented), and a policy that names both.
+	lexDir := filepath.Join(dir, "lex")
+	os.Mkdir(lexDir, 0o755)
+	builtIn, _ := os.ReadFile(filepath.Join("..", "..", "lexicon", "data", "product_types.wlx"))
+	os.WriteFile(filepath.Join(lexDir, "product_types.wlx"), append(builtIn, []byte("\ngrubbing hoe | category=hardware | slot=blade_length:length:in:4..12\n")...), 0o644)
+	own := filepath.Join(dir, "own.toml")
+	os.WriteFile(own, []byte("[product_type.\"grubbing hoe\".dimensions]\nblade_length = \"hard\"\n"), 0o644)
 	cheap := filepath.Join(dir, "cheap.toml")
 	os.WriteFile(cheap, []byte("[signals.weights]\npurchase = 0.5\n"), 0o644)
 	for _, tc := range []struct {
@@ -37,9 +45,12 @@ func TestPolicyCommands(t *testing.T) {
 		{"product type's tolerance", []string{"policy", "show", "--product-type", "rain jacket"}, 0, "colour_tolerance   4", "", "apparel's 4, not the defaults' 5"},
 		{"category contradicts product type", []string{"policy", "show", "--category", "paint", "--product-type", "rain jacket"}, 2, "",
 			`product type "rain jacket" is in category apparel, not paint`, "a usage error: no query reads a rain jacket in paint"},
+		{"check with the shop's lexicon", []string{"policy", "check", "--lexicon", lexDir, own}, 0, "own.toml: ok", "",
+			"the product type and dimension are the shop's lexicon's, which the other commands read the file with"},
+		{"check without it", []string{"policy", "check", own}, 1, "", `unknown product type "grubbing hoe"`, "the built-in lexicon has no grubbing hoe"},
 		{"help lists show's flags", []string{"policy", "-h"}, 0, "-product-type", "", "the usage ends with the flags of show, not an empty list"},
 		{"show help", []string{"policy", "show", "-h"}, 0, "", "-product-type", "help is not an error"},
-		{"check help", []string{"policy", "check", "-h"}, 0, "", "usage: whittle policy check FILE", "help is not an error, as for every other -h"},
+		{"check help", []string{"policy", "check", "-h"}, 0, "", "usage: whittle policy check [--lexicon DIR] FILE", "help is not an error, as for every other -h"},
 		{"check two files", []string{"policy", "check", good, bad}, 2, "", "whittle policy check: takes one policy FILE, not 2 arguments", "one file at a time"},
 		{"check good", []string{"policy", "check", good}, 0, "ok", "", "a valid file"},
 		{"check bad", []string{"policy", "check", bad}, 1, "", "bad.toml:1:1", "positions are given"},
