@@ -71,27 +71,31 @@ func (p *tagger) freeSlot(c *Constraint, given map[string]string) (lexicon.Slot,
 	if !ok {
 		return lexicon.Slot{}, false
 	}
-	v := 0.0
-	switch {
-	case m.Amount != nil:
-		v = *m.Amount
-	case m.Min != nil:
-		v = *m.Min
-	case m.Max != nil:
-		v = *m.Max
+	var amounts []float64 // the point, or each bound
+	for _, v := range []*float64{m.Amount, m.Min, m.Max} {
+		if v != nil {
+			amounts = append(amounts, *v)
+		}
+	}
+	holds := func(s lexicon.Slot) bool {
+		for _, v := range amounts {
+			if !c.Inferred {
+				var err error
+				if v, err = units.Convert(v, u, s.Unit); err != nil {
+					return false
+				}
+			}
+			if !s.Holds(v) {
+				return false
+			}
+		}
+		return len(amounts) > 0
 	}
 	for _, s := range p.lex.SlotsOf(p.head) {
 		if _, ok := given[s.Dimension]; ok || s.Quantity != u.Quantity {
 			continue
 		}
-		amount := v
-		if !c.Inferred {
-			var err error
-			if amount, err = units.Convert(v, u, s.Unit); err != nil {
-				continue
-			}
-		}
-		if s.Holds(amount) {
+		if holds(s) {
 			return s, true
 		}
 	}
@@ -104,10 +108,22 @@ func (p *tagger) moveTo(c *Constraint, s lexicon.Slot, by string) {
 	m := c.Measure
 	was := m.Dimension
 	m.Dimension = s.Dimension
-	if c.Inferred && m.Amount != nil {
+	if c.Inferred {
+		// The numbers typed are read in the new slot's unit.
 		m.Unit = s.Unit.String()
-		m.BaseAmount = ptr(tidy(*m.Amount * s.Unit.ToBase))
-		c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", s.Unit, p.head.Name, s.Dimension, rangeText(s))
+		for _, x := range []struct{ typed, base **float64 }{{&m.Amount, &m.BaseAmount}, {&m.Min, &m.BaseMin}, {&m.Max, &m.BaseMax}} {
+			if *x.typed != nil {
+				*x.base = ptr(tidy(**x.typed * s.Unit.ToBase))
+			}
+		}
+		// The evidence named the slot it came from ("(diameter
+		// 0.125..1.5)"): it names the new one.
+		for _, old := range p.lex.SlotsOf(p.head) {
+			if old.Dimension == was {
+				c.Evidence = strings.Replace(c.Evidence, fmt.Sprintf("(%s %s)", was, rangeText(old)), fmt.Sprintf("(%s %s)", s.Dimension, rangeText(s)), 1)
+				break
+			}
+		}
 	}
 	c.Evidence = join(c.Evidence, fmt.Sprintf("not the %s, which %s gives", was, by))
 }

@@ -539,6 +539,8 @@ func TestMeasureDimensions(t *testing.T) {
 		{"m8 bolt 30 mm", "30 mm lies in the bolt's diameter range too, but M8 gives the diameter", []string{"length"}},
 		{"30 mm m8 bolt", "the same, with the thread typed after the measure", []string{"length"}},
 		{"m8 bolt 1", "a bare 1 would be a 1 in diameter; with M8 it is a length, in the length slot's inches", []string{"length"}},
+		{"m8 bolt 1/4-1/2", "a range of bare numbers, inch by the slots, is the length too", []string{"length"}},
+		{"m8 bolt under 1", "and so is a bound", []string{"length"}},
 		{"bolt 8 mm 30 mm", "the first amount is the diameter, so the second is the length", []string{"diameter", "length"}},
 		{"-m8 bolt 30 mm", "a thread excluded gives no diameter, so 30 mm stays the diameter its range says", []string{"diameter"}},
 		{"m8 bolt 5 mm", "5 mm is below the length slot's range, so it stays the diameter its range says", []string{"diameter"}},

@@ -525,6 +525,7 @@ func (p *tagger) bound(start, end int, s single, op string) {
 			c := p.measure(start, end, q, sl.Dimension, lo, hi, sl.Unit)
 			c.Inferred = true
 			c.Evidence = join(ev, fmt.Sprintf("unit %s from product type %s", sl.Unit, p.head.Name))
+			p.markByRange(end)
 			p.add(c)
 			return
 		}
@@ -604,6 +605,7 @@ func (p *tagger) rangeOf(start, end int, a, b single, how string) {
 			c := p.measure(start, end, qb, sl.Dimension, &lo, &hi, sl.Unit)
 			c.Inferred = true
 			c.Evidence = fmt.Sprintf("%s; unit %s from product type %s", how, sl.Unit, p.head.Name)
+			p.markByRange(end)
 			p.add(c)
 			return
 		}
