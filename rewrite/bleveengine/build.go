@@ -83,10 +83,12 @@ type TargetError struct {
 	Reason string
 }
 
+// Error says what is at the path and that nothing there was touched.
 func (e *TargetError) Error() string {
 	return fmt.Sprintf("refusing to write an index at %s: %s; nothing there was touched (give a new or empty directory, or an index whittle built)", e.Dir, e.Reason)
 }
 
+// Unwrap returns ErrNotIndex, for errors.Is.
 func (e *TargetError) Unwrap() error { return ErrNotIndex }
 
 // IsIndex reports whether dir holds an index Build wrote, which a build

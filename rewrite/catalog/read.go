@@ -242,7 +242,7 @@ var fieldShapes = map[string]fieldShape{
 	"color_hex":       {`a string like "#1f3a5f"`, ""},
 	"sizes":           {`an array of strings, like ["S", "M", "10"]`, "array"},
 	"spec":            {`an array of strings, like ["2x4", "14 awg"]`, "array"},
-	"compatible_with": {`an array of strings, like ["iPhone 15"]`, "array"},
+	"compatible_with": {`an array of strings, like ["JX-10"]`, "array"},
 	"measures":        {`an object of measures written with their units, like {"width": "74 cm"}`, "object"},
 	"price":           {`an object like {"amount": "59.00", "currency": "USD"}`, "object"},
 	"in_stock":        {"true or false", ""},
