@@ -3,7 +3,6 @@ package bleveengine
 import (
 	"encoding/json"
 	"fmt"
-	"slices"
 	"strconv"
 	"strings"
 
@@ -180,35 +179,7 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 			d[f] = v
 		}
 	}
-	// The fields the lexicon names are stored by the lexicon's name for
-	// the value, so that a catalog's "rain jackets" or "jumper" is found
-	// as a query's rain jacket or sweater.
-	named := map[string]string{}
-	for _, a := range []struct {
-		field string
-		kind  lexicon.Kind
-		value string
-	}{
-		{fType, lexicon.ProductType, p.ProductType}, {fPattern, lexicon.Pattern, p.Pattern},
-		{fSilhouette, lexicon.Silhouette, p.Silhouette}, {fMaterial, lexicon.Material, p.Material},
-		{fAudience, lexicon.Audience, p.Audience},
-	} {
-		v := norm(a.value)
-		if v == "" {
-			continue
-		}
-		name, ok := canonical(lex, a.kind, v)
-		if !ok {
-			note(a.field, a.value)
-		}
-		d[a.field], named[a.field] = name, name
-	}
-	if v := norm(p.Category); v != "" {
-		if !slices.Contains(lexicon.Categories, v) {
-			note(fCategory, p.Category)
-		}
-		d[fCategory] = v
-	}
+	named := addNamed(d, p, lex, note)
 	in := p.InStock == nil || *p.InStock
 	d[fInStock] = strconv.FormatBool(in)
 	var sizes []string
@@ -225,26 +196,9 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 	if len(compat) > 0 {
 		d[fCompat] = compat
 	}
-	ms, mvs := map[string]any{}, map[string]any{}
-	for dim, text := range p.Measures {
-		if !dims[dim] {
-			note("measures."+dim, dim)
-		}
-		m, err := r.Measure(text)
-		if err != nil {
-			return nil, nil, fmt.Errorf("measure %s: %w", dim, err)
-		}
-		if m.BaseAmount != nil {
-			ms[dim] = *m.BaseAmount
-			mvs[dim] = strconv.FormatFloat(*m.BaseAmount, 'g', -1, 64)
-			continue
-		}
-		// A range (a zoom lens's 18-55 mm) is indexed at both ends.
-		ms[dim] = []float64{*m.BaseMin, *m.BaseMax}
-		mvs[dim] = []string{strconv.FormatFloat(*m.BaseMin, 'g', -1, 64), strconv.FormatFloat(*m.BaseMax, 'g', -1, 64)}
-	}
-	if len(ms) > 0 {
-		d["m"], d["mv"] = ms, mvs
+	ms, err := addMeasures(d, p, r, dims, note)
+	if err != nil {
+		return nil, nil, err
 	}
 	specs := map[string]any{}
 	for _, s := range p.Spec {
@@ -297,4 +251,67 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 	}
 	d[fFacts] = string(fb)
 	return d, lab, nil
+}
+
+// addNamed stores the fields the lexicon names by the lexicon's name for
+// the value, so that a catalog's "rain jackets" or "jumper" is found as a
+// query's rain jacket or sweater, and the category as written; it notes
+// the values the lexicon does not know, and returns the names it stored
+// by field.
+func addNamed(d map[string]any, p *catalog.Product, lex *lexicon.Lexicon, note func(field, value string)) map[string]string {
+	named := map[string]string{}
+	for _, a := range []struct {
+		field string
+		kind  lexicon.Kind
+		value string
+	}{
+		{fType, lexicon.ProductType, p.ProductType}, {fPattern, lexicon.Pattern, p.Pattern},
+		{fSilhouette, lexicon.Silhouette, p.Silhouette}, {fMaterial, lexicon.Material, p.Material},
+		{fAudience, lexicon.Audience, p.Audience},
+	} {
+		v := norm(a.value)
+		if v == "" {
+			continue
+		}
+		name, ok := canonical(lex, a.kind, v)
+		if !ok {
+			note(a.field, a.value)
+		}
+		d[a.field], named[a.field] = name, name
+	}
+	if v := norm(p.Category); v != "" {
+		if lexicon.CheckCategory(v) != nil {
+			note(fCategory, p.Category)
+		}
+		d[fCategory] = v
+	}
+	return named
+}
+
+// addMeasures stores p's measures in base units, by dimension, and
+// returns them; it notes a dimension no query names (dims holds those
+// that one may), which no field of the index holds.
+func addMeasures(d map[string]any, p *catalog.Product, r *catalog.Reader, dims map[string]bool, note func(field, value string)) (map[string]any, error) {
+	ms, mvs := map[string]any{}, map[string]any{}
+	for dim, text := range p.Measures {
+		if !dims[dim] {
+			note("measures."+dim, dim)
+		}
+		m, err := r.Measure(text)
+		if err != nil {
+			return nil, fmt.Errorf("measure %s: %w", dim, err)
+		}
+		if m.BaseAmount != nil {
+			ms[dim] = *m.BaseAmount
+			mvs[dim] = strconv.FormatFloat(*m.BaseAmount, 'g', -1, 64)
+			continue
+		}
+		// A range (a zoom lens's 18-55 mm) is indexed at both ends.
+		ms[dim] = []float64{*m.BaseMin, *m.BaseMax}
+		mvs[dim] = []string{strconv.FormatFloat(*m.BaseMin, 'g', -1, 64), strconv.FormatFloat(*m.BaseMax, 'g', -1, 64)}
+	}
+	if len(ms) > 0 {
+		d["m"], d["mv"] = ms, mvs
+	}
+	return ms, nil
 }
