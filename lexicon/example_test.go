@@ -178,3 +178,10 @@ func ExampleCheckCategory() {
 	// <nil>
 	// unknown category "aparel"; did you mean "apparel"? (known: apparel, footwear, accessories, home, furniture, lumber, hardware, electrical, camera, tyres, office, batteries, electronics, paint, kitchen)
 }
+
+// Names lists a kind's canonical names in the order of its file,
+// lexicon/data/audiences.wlx here.
+func ExampleLexicon_Names() {
+	fmt.Println(lexicon.Default().Names(lexicon.Audience))
+	// Output: [women men kids girls boys baby unisex]
+}

@@ -305,6 +305,16 @@ func (l *Lexicon) MaxPhraseWords() int { return l.maxLen }
 // do not modify it.
 func (l *Lexicon) Entries(k Kind) []*Entry { return l.byKind[k] }
 
+// Names returns the canonical names of the entries of kind k, in the
+// order of its file.
+func (l *Lexicon) Names(k Kind) []string {
+	names := make([]string, len(l.byKind[k]))
+	for i, e := range l.byKind[k] {
+		names[i] = e.Name
+	}
+	return names
+}
+
 // Lookup returns the entry of kind k whose canonical name is name.
 func (l *Lexicon) Lookup(k Kind, name string) (*Entry, bool) {
 	e, ok := l.byName[k][name]

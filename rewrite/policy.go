@@ -215,10 +215,7 @@ func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	}
 	r := &policyReader{md: md, at: at, dims: parser.Dimensions(lex)}
 	pol := &Policy{Categories: make(map[string]Settings), ProductTypes: make(map[string]Settings)}
-	var types []string
-	for _, e := range lex.Entries(lexicon.ProductType) {
-		types = append(types, e.Name)
-	}
+	types := lex.Names(lexicon.ProductType)
 	for _, k := range sortedKeys(top) {
 		key := []string{k}
 		switch k {

@@ -2,8 +2,6 @@ package rewrite
 
 import (
 	"fmt"
-	"slices"
-	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
 )
@@ -38,17 +36,13 @@ func (e *ScopeError) Error() string { return e.Msg }
 // is the product type's own, and a category that contradicts it is an
 // error. Every error is a *ScopeError.
 func (p *Policy) Settle(category, productType string, lex *lexicon.Lexicon) (Effective, error) {
-	if category != "" && !slices.Contains(lexicon.Categories, category) {
-		return Effective{}, &ScopeError{ScopeUnknownCategory, fmt.Sprintf("unknown category %q%s (known: %s)",
-			category, didYouMean(category, lexicon.Categories), strings.Join(lexicon.Categories, ", "))}
+	if err := lexicon.CheckCategory(category); err != nil {
+		return Effective{}, &ScopeError{ScopeUnknownCategory, err.Error()}
 	}
 	if productType != "" {
 		e, ok := lex.Lookup(lexicon.ProductType, productType)
 		if !ok {
-			var names []string
-			for _, e := range lex.Entries(lexicon.ProductType) {
-				names = append(names, e.Name)
-			}
+			names := lex.Names(lexicon.ProductType)
 			return Effective{}, &ScopeError{ScopeUnknownProductType, fmt.Sprintf("unknown product type %q%s", productType, didYouMean(productType, names))}
 		}
 		own := typeCategory(lex, e)

@@ -115,11 +115,7 @@ func knownValues(lex *lexicon.Lexicon) func(field string) []string {
 		fSilhouette: lexicon.Silhouette, fMaterial: lexicon.Material, fAudience: lexicon.Audience}
 	return func(field string) []string {
 		if k, ok := kinds[field]; ok {
-			var names []string
-			for _, e := range lex.Entries(k) {
-				names = append(names, e.Name)
-			}
-			return names
+			return lex.Names(k)
 		}
 		if field == fCategory {
 			return lexicon.Categories
