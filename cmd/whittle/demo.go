@@ -14,7 +14,7 @@ func demoCmd(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("demo", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	dir := fs.String("dir", "", "where the demo index lives (default: the user's cache directory)")
-	n := fs.Int("products", 20000, "size of the generated demo catalog, at least 100 (below 1000 the last stop, tune, is skipped)")
+	n := fs.Int("products", 20000, fmt.Sprintf("size of the generated demo catalog, at least %d (below %d the last stop, tune, is skipped)", demo.MinProducts, demo.SignalsMinProducts))
 	rebuild := fs.Bool("rebuild", false, "build the demo index again even if one is there")
 	signalsFile := fs.String("signals", "", "also write the invented signals log the last stop learns from to `FILE`, to try whittle tune on")
 	fs.Usage = func() {

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"io"
 	"os"
+
+	"github.com/whittle-search/whittle/lexicon"
 )
 
 const usage = `whittle reads long shopping queries into typed constraints.
@@ -31,6 +33,18 @@ in it), 2 bad usage.
 
 func main() {
 	os.Exit(run(os.Args[1:], os.Stdin, os.Stdout, os.Stderr))
+}
+
+// commandNames are the commands run knows, for suggesting one.
+var commandNames = []string{"explain", "colour", "policy", "index", "demo", "bench", "eval", "search", "replay", "tune", "serve", "help"}
+
+// suggest is "; did you mean X?" for the option nearest word by
+// spelling, or "".
+func suggest(word string, options []string) string {
+	if s := lexicon.Closest(word, options); s != "" {
+		return fmt.Sprintf("; did you mean %q?", s)
+	}
+	return ""
 }
 
 // helpWords ask for the usage text.
@@ -74,6 +88,6 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		fmt.Fprint(stdout, usage)
 		return 0
 	}
-	fmt.Fprintf(stderr, "whittle: unknown command %q\n\n%s", args[0], usage)
+	fmt.Fprintf(stderr, "whittle: unknown command %q%s (run \"whittle help\" for the commands)\n", args[0], suggest(args[0], commandNames))
 	return 2
 }

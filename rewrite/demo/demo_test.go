@@ -71,8 +71,21 @@ func TestRun(t *testing.T) {
 	}
 }
 
+// SignalsMinProducts is where the demo catalog first has a product type
+// with ten products in a colour (Demo(m) is the first m of Demo(n)).
+func TestSignalsMinProducts(t *testing.T) {
+	for _, tc := range []struct {
+		n    int
+		want bool
+	}{{SignalsMinProducts - 1, false}, {SignalsMinProducts, true}} {
+		if got := newSignalGen(catalog.Demo(tc.n, 1), 1).searchable(); got != tc.want {
+			t.Errorf("%d products: a signals log can be made: %v, want %v", tc.n, got, tc.want)
+		}
+	}
+}
+
 // The smallest demo catalog is too small for the signals log (no type
-// has ten products in a colour below about 600): the tour still runs,
+// has ten products in a colour below SignalsMinProducts): the tour still runs,
 // and its last stop says it is skipped and why, instead of failing the
 // demo after every other stop was shown.
 func TestRunSmallestCatalog(t *testing.T) {

@@ -43,6 +43,12 @@ type Options struct {
 // benchmark are run on.
 const MinProducts = 100
 
+// SignalsMinProducts is the smallest demo catalog the last stop of the
+// tour, whittle tune on an invented signals log, runs on: below it no
+// product type has ten products with a colour to show a search, and the
+// stop is skipped.
+const SignalsMinProducts = 578
+
 // generation names the generator's output; an index built by another
 // generation is rebuilt.
 const generation = "1"
@@ -157,7 +163,7 @@ func learn(ctx context.Context, w io.Writer, n int, ps []catalog.Product, eng *b
 	if !newSignalGen(ps, 1).searchable() {
 		fmt.Fprintf(w, "%d. learning strictness from shoppers (whittle tune): skipped\n", n)
 		fmt.Fprintf(w, "   %d products are too few for an invented signals log: no product type has ten products\n", len(ps))
-		fmt.Fprintf(w, "   with a colour to show a search; the demo at --products 1000 or more has one\n\n")
+		fmt.Fprintf(w, "   with a colour to show a search; the demo at --products %d or more has one\n\n", SignalsMinProducts)
 		return nil
 	}
 	t := tune.New(tune.Options{Policy: rewrite.DefaultPolicy().Overlay(user), Products: eng})
