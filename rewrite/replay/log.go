@@ -1,8 +1,6 @@
 package replay
 
 import (
-	"github.com/whittle-search/whittle/lexicon"
-
 	"bufio"
 	"bytes"
 	"encoding/json"
@@ -12,6 +10,7 @@ import (
 	"iter"
 	"strings"
 
+	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 

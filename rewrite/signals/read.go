@@ -1,8 +1,6 @@
 package signals
 
 import (
-	"github.com/whittle-search/whittle/lexicon"
-
 	"bufio"
 	"bytes"
 	"errors"
@@ -13,6 +11,7 @@ import (
 
 	"github.com/go-json-experiment/json/jsontext"
 
+	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
