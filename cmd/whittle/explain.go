@@ -43,10 +43,12 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	if fs.NArg() == 0 {
 		return usageError(fs, "give a query, or - to read queries from standard input")
 	}
+	if fs.NArg() > 1 && slices.Contains(fs.Args(), "-") {
+		return usageError(fs, `"-" reads the queries from standard input and must be the only argument, after any flags`)
+	}
 	code, err := parser.DollarCurrency(*cur)
 	if err != nil {
-		fmt.Fprintf(stderr, "whittle explain: %v\n", err)
-		return 2
+		return usageError(fs, "%v", err)
 	}
 	opts := parser.Options{Category: *category, Currency: code}
 	if *imperial {
@@ -100,10 +102,6 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			out.WriteString("\n")
 		}
 		r.WriteText(out, style)
-	}
-	if fs.NArg() > 1 && slices.Contains(fs.Args(), "-") {
-		fmt.Fprintln(stderr, `whittle explain: "-" reads the queries from standard input and must be the only argument, after any flags`)
-		return 2
 	}
 	if fs.NArg() == 1 && fs.Arg(0) == "-" {
 		sc := bufio.NewScanner(stdin)
