@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
 // Unknown is a catalog value of a field the lexicon names (a product
@@ -111,17 +112,34 @@ func canonical(lex *lexicon.Lexicon, k lexicon.Kind, v string) (string, bool) {
 // knownValues returns, for a field of Unknown, the values whittle knows
 // there, to suggest the nearest from.
 func knownValues(lex *lexicon.Lexicon) func(field string) []string {
-	kinds := map[string]lexicon.Kind{fType: lexicon.ProductType, fPattern: lexicon.Pattern,
-		fSilhouette: lexicon.Silhouette, fMaterial: lexicon.Material, fAudience: lexicon.Audience}
-	return func(field string) []string {
-		if k, ok := kinds[field]; ok {
-			return lex.Names(k)
-		}
-		if field == fCategory {
-			return lexicon.Categories
-		}
-		return dimensions(lex)
+	known := map[string][]string{fCategory: lexicon.Categories}
+	for _, n := range namedFields {
+		known[n.field] = lex.Names(n.kind)
 	}
+	var dims []string
+	return func(field string) []string {
+		if names, ok := known[field]; ok {
+			return names
+		}
+		if dims == nil {
+			dims = dimensions(lex)
+		}
+		return dims
+	}
+}
+
+// namedFields are the catalog fields whose values the lexicon names,
+// with the kind that names each.
+var namedFields = []struct {
+	field string
+	kind  lexicon.Kind
+	value func(*catalog.Product) string
+}{
+	{fType, lexicon.ProductType, func(p *catalog.Product) string { return p.ProductType }},
+	{fPattern, lexicon.Pattern, func(p *catalog.Product) string { return p.Pattern }},
+	{fSilhouette, lexicon.Silhouette, func(p *catalog.Product) string { return p.Silhouette }},
+	{fMaterial, lexicon.Material, func(p *catalog.Product) string { return p.Material }},
+	{fAudience, lexicon.Audience, func(p *catalog.Product) string { return p.Audience }},
 }
 
 // String says what u is and what it means for search, in a line.

@@ -260,24 +260,17 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 // by field.
 func addNamed(d map[string]any, p *catalog.Product, lex *lexicon.Lexicon, note func(field, value string)) map[string]string {
 	named := map[string]string{}
-	for _, a := range []struct {
-		field string
-		kind  lexicon.Kind
-		value string
-	}{
-		{fType, lexicon.ProductType, p.ProductType}, {fPattern, lexicon.Pattern, p.Pattern},
-		{fSilhouette, lexicon.Silhouette, p.Silhouette}, {fMaterial, lexicon.Material, p.Material},
-		{fAudience, lexicon.Audience, p.Audience},
-	} {
-		v := norm(a.value)
+	for _, n := range namedFields {
+		raw := n.value(p)
+		v := norm(raw)
 		if v == "" {
 			continue
 		}
-		name, ok := canonical(lex, a.kind, v)
+		name, ok := canonical(lex, n.kind, v)
 		if !ok {
-			note(a.field, a.value)
+			note(n.field, raw)
 		}
-		d[a.field], named[a.field] = name, name
+		d[n.field], named[n.field] = name, name
 	}
 	if v := norm(p.Category); v != "" {
 		if lexicon.CheckCategory(v) != nil {
