@@ -304,7 +304,7 @@ type docBatch struct {
 func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, lex *lexicon.Lexicon, st *buildStats,
 	out chan<- docBatch, stop <-chan struct{}) error {
 	rd := catalog.NewReader(r, lex)
-	dims, unknown := dimensionSet(lex), newTally(lex)
+	dims, unknown := dimensionSet(lex), newTally()
 	note := func(field, value string) { unknown.note(field, value, rd.Line()) }
 	defer func() { st.Unknown = unknown.list(knownValues(lex)) }()
 	batch := idx.NewBatch()

@@ -40,13 +40,12 @@ const unknownCap = 1000
 
 // tally gathers the unknown values of a build.
 type tally struct {
-	lex    *lexicon.Lexicon
 	byKey  map[[2]string]*Unknown
 	fields map[string]int
 }
 
-func newTally(lex *lexicon.Lexicon) *tally {
-	return &tally{lex: lex, byKey: make(map[[2]string]*Unknown), fields: make(map[string]int)}
+func newTally() *tally {
+	return &tally{byKey: make(map[[2]string]*Unknown), fields: make(map[string]int)}
 }
 
 // note records that the product on line has value in field, unknown.

@@ -79,7 +79,7 @@ func TestDemoCatalogIsKnown(t *testing.T) {
 // unknownCap of a field, and of all measure dimensions together, then
 // counts the rest in one entry.
 func TestUnknownValuesAreBounded(t *testing.T) {
-	tl := newTally(nil)
+	tl := newTally()
 	for i := range 3 * unknownCap {
 		tl.note("product_type", fmt.Sprintf("made-up type %d", i), i+1)
 		tl.note(fmt.Sprintf("measures.dim%d", i), fmt.Sprintf("dim%d", i), i+1)
