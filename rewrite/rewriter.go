@@ -298,9 +298,9 @@ func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
 // symbols, or only filler words), RescueParsed counts nothing and
 // returns a *RefusedError, which matches ErrNothingToSearch. A query
 // with badly formed parts and constraints beside them ("1/0 jacket") is
-// rescued on what was read; r.Errors keep the problems. Hard constraints and exclusions
-// are never relaxed, and the head product type is widened but never
-// dropped; filler is dropped before anything is counted. The
+// rescued on what was read; r.Errors keep the problems. Hard
+// constraints and exclusions are never relaxed, and the head product
+// type is widened but never dropped; filler is dropped before anything is counted. The
 // planner searches relaxation sets cheapest first: cost comes from the
 // strictness of what is relaxed, from the operator (widening and typo
 // fixes cost less than dropping), and from the counts of each constraint
