@@ -2,6 +2,7 @@ package bleveengine
 
 import (
 	"context"
+	"fmt"
 	"strings"
 
 	"github.com/RoaringBitmap/roaring/v2"
@@ -9,8 +10,73 @@ import (
 	"github.com/blevesearch/bleve/v2/search/query"
 )
 
+// Fallback is a blind partial match: the way a plain engine, knowing
+// nothing of what a query's words mean, gives some of them up when all
+// of them together match nothing. Both kinds look for the words anywhere
+// in a product's text and rank what they find by bleve's score, ties by
+// id. The zero value is MostWords.
+type Fallback int
+
+const (
+	// MostWords requires all of the query's words, then any all but
+	// one, then any all but two, and so on, until something matches: it
+	// keeps the most words some product has, whichever they are.
+	MostWords Fallback = iota
+	// DropTrailing requires all of the query's words, then all but the
+	// last, then all but the last two, and so on, until the words left
+	// match something: it gives up words from the end of the query, as
+	// typed.
+	DropTrailing
+)
+
+// fallbackNames are the names of the fallbacks, in the order of their
+// values.
+var fallbackNames = [...]string{MostWords: "most-words", DropTrailing: "drop-trailing"}
+
+// String returns the fallback's name: "most-words" or "drop-trailing".
+func (f Fallback) String() string {
+	if f >= 0 && int(f) < len(fallbackNames) {
+		return fallbackNames[f]
+	}
+	return fmt.Sprintf("Fallback(%d)", int(f))
+}
+
+// Fallbacks returns every fallback, in order.
+func Fallbacks() []Fallback { return []Fallback{MostWords, DropTrailing} }
+
+// ParseFallback returns the fallback named s, one of the names String
+// gives.
+func ParseFallback(s string) (Fallback, error) {
+	for f, name := range fallbackNames {
+		if s == name {
+			return Fallback(f), nil
+		}
+	}
+	return 0, fmt.Errorf("unknown fallback %q: want %s", s, strings.Join(fallbackNames[:], " or "))
+}
+
+// MarshalText writes the fallback's name.
+func (f Fallback) MarshalText() ([]byte, error) {
+	if f < 0 || int(f) >= len(fallbackNames) {
+		return nil, fmt.Errorf("bleveengine: no fallback %d", int(f))
+	}
+	return []byte(f.String()), nil
+}
+
+// UnmarshalText reads a fallback's name.
+func (f *Fallback) UnmarshalText(b []byte) error {
+	v, err := ParseFallback(string(b))
+	if err != nil {
+		return err
+	}
+	*f = v
+	return nil
+}
+
 // Baseline is what a plain engine's blind partial match finds.
 type Baseline struct {
+	// Fallback is the blind partial match that ran.
+	Fallback Fallback `json:"fallback"`
 	// Kept is how many of the query's words had to match; Words is how
 	// many it has.
 	Kept  int     `json:"kept"`
@@ -19,24 +85,22 @@ type Baseline struct {
 	Hits  []Shown `json:"hits"`
 }
 
-// Baseline runs the blind partial match a plain engine falls back to: a
-// match over the query's words in the product's text, requiring all of
-// them, then one fewer, and so on, until something matches. It knows
-// nothing of what the words mean.
-func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, error) {
+// Baseline runs the blind partial match f, the way a plain engine falls
+// back when a query matches nothing as typed: a match of the query's
+// words in the product's text, requiring all of them, then one fewer,
+// and so on, until something matches. It knows nothing of what the
+// words mean. Which words it gives up first is what f says.
+func (e *Engine) Baseline(ctx context.Context, f Fallback, q string, k int) (*Baseline, error) {
+	if _, err := f.MarshalText(); err != nil {
+		return nil, err
+	}
 	words := baselineWords(q)
-	b := &Baseline{Words: len(words)}
+	b := &Baseline{Fallback: f, Words: len(words)}
 	for n := len(words); n >= 1; n-- {
-		var qs []query.Query
-		for _, w := range words {
-			qs = append(qs, baselineWord(w))
-		}
-		dq := bleve.NewDisjunctionQuery(qs...)
-		dq.SetMin(float64(n))
 		// Ranked as Show ranks: rounded scores, ties by id; otherwise
 		// equal scores come in the order of the index's segments, which
 		// differs from build to build.
-		hits, total, err := e.ranked(ctx, dq, k)
+		hits, total, err := e.ranked(ctx, baselineQuery(f, words, n), k)
 		if err != nil {
 			return nil, err
 		}
@@ -49,12 +113,33 @@ func (e *Engine) Baseline(ctx context.Context, q string, k int) (*Baseline, erro
 	return b, nil
 }
 
+// baselineQuery is the search the fallback f runs keeping n of words.
+func baselineQuery(f Fallback, words []string, n int) query.Query {
+	if f == DropTrailing {
+		qs := make([]query.Query, 0, n)
+		for _, w := range words[:n] {
+			qs = append(qs, baselineWord(w))
+		}
+		return bleve.NewConjunctionQuery(qs...)
+	}
+	qs := make([]query.Query, 0, len(words))
+	for _, w := range words {
+		qs = append(qs, baselineWord(w))
+	}
+	dq := bleve.NewDisjunctionQuery(qs...)
+	dq.SetMin(float64(n))
+	return dq
+}
+
 // BaselineMatches returns the ids of every product the blind partial
-// match finds for q when kept of its words must match, in id order: the
-// whole result set of which Baseline, with the Kept it settled on,
+// match f finds for q when kept of its words must match, in id order:
+// the whole result set of which Baseline, with the Kept it settled on,
 // returns the best k. Kept below 1 is taken as 1, and above the number
 // of words as all of them.
-func (e *Engine) BaselineMatches(ctx context.Context, q string, kept int) ([]string, error) {
+func (e *Engine) BaselineMatches(ctx context.Context, f Fallback, q string, kept int) ([]string, error) {
+	if _, err := f.MarshalText(); err != nil {
+		return nil, err
+	}
 	words := baselineWords(q)
 	if len(words) == 0 {
 		return nil, nil
@@ -63,6 +148,10 @@ func (e *Engine) BaselineMatches(ctx context.Context, q string, kept int) ([]str
 	s := e.sets
 	if err := s.list.load(s.reader); err != nil {
 		return nil, err
+	}
+	if f == DropTrailing {
+		// The first kept words, every one of them.
+		words = words[:kept]
 	}
 	// Each word's matches, as a bitmap; a product is in the set when at
 	// least kept of the words match it, a word typed twice counting

@@ -2,6 +2,7 @@ package bleveengine
 
 import (
 	"context"
+	"encoding/json"
 	"errors"
 	"fmt"
 	"os"
@@ -176,24 +177,79 @@ func TestSkipBadAndAtomicReplace(t *testing.T) {
 	}
 }
 
-// The blind baseline drops words without knowing what they mean: for
-// "trail running shoes size 13" it keeps 4 of the 5 words and shows shoes
-// of other sizes, where whittle keeps the size.
+// The blind baseline drops words without knowing what they mean. Each
+// want is worked out by hand from shop.jsonl, where "size" is in no
+// product's text: TR-1 is a black trail running shoe in sizes 7 to 12,
+// TR-2 an ember one in 8 to 10; SW-1 is a merino crew sweater, SW-2 a
+// wool one, also crew.
 func TestBaseline(t *testing.T) {
 	e := openShop(t)
-	b, err := e.Baseline(context.Background(), "trail running shoes size 13", 10)
-	if err != nil {
-		t.Fatal(err)
+	for _, tc := range []struct {
+		name, reason, q    string
+		fallback           Fallback
+		kept, words, count int
+		hits               []string // in id order
+	}{
+		{name: "most words", q: "ember trail running shoe size 12", kept: 4, words: 6, count: 2, hits: []string{"TR-1", "TR-2"},
+			reason: "any four words: TR-1 has trail running shoe 12, TR-2 ember trail running shoe"},
+		{name: "drop trailing: the size goes", q: "ember trail running shoe size 12", fallback: DropTrailing, kept: 4, words: 6, count: 1, hits: []string{"TR-2"},
+			reason: "12 and size dropped from the end leave the ember shoe, which has no size 12"},
+		{name: "drop trailing: the size first", q: "size 12 ember trail running shoe", fallback: DropTrailing, words: 6,
+			reason: "size leads the query and no product has it, so every word goes: nothing"},
+		{name: "drop trailing: the typo stays", q: "sweaterr merino crew", fallback: DropTrailing, words: 3,
+			reason: "the misspelt word comes first and matches nothing, so nothing is found"},
+		{name: "most words: the typo goes", q: "sweaterr merino crew", kept: 2, words: 3, count: 1, hits: []string{"SW-1"},
+			reason: "merino and crew: SW-1 alone is merino"},
+		{name: "drop trailing: found as typed", q: "rain jacket", fallback: DropTrailing, kept: 2, words: 2, count: 3, hits: []string{"RJ-1", "RJ-2", "RJ-3"},
+			reason: "every word matches: nothing is dropped"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			b, err := e.Baseline(context.Background(), tc.fallback, tc.q, 10)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var ids []string
+			for _, h := range b.Hits {
+				ids = append(ids, h.ID)
+			}
+			slices.Sort(ids)
+			got := fmt.Sprintf("%s kept %d of %d, %d products %v", b.Fallback, b.Kept, b.Words, b.Count, ids)
+			want := fmt.Sprintf("%s kept %d of %d, %d products %v", tc.fallback, tc.kept, tc.words, tc.count, tc.hits)
+			if got != want {
+				t.Errorf("%s:\n got %s\nwant %s", tc.reason, got, want)
+			}
+		})
 	}
-	if b.Words != 5 || b.Kept >= 5 || b.Count == 0 {
-		t.Errorf("baseline = %+v", b)
-	}
-	for _, h := range b.Hits {
-		if !strings.HasPrefix(h.ID, "TR-") {
-			continue
+}
+
+// Fallbacks are named by String and read back by ParseFallback, and in
+// JSON by their names; anything else is refused.
+func TestFallbackNames(t *testing.T) {
+	for _, f := range Fallbacks() {
+		g, err := ParseFallback(f.String())
+		if err != nil || g != f {
+			t.Errorf("ParseFallback(%q) = %v, %v", f, g, err)
 		}
-		// TR-1 and TR-2 come in 7..12 and 8..10 (shop.jsonl): not 13.
-		t.Logf("the baseline shows %s, which has no size 13", h.ID)
+		b, err := json.Marshal(Baseline{Fallback: f})
+		if err != nil || !strings.Contains(string(b), `"fallback":"`+f.String()+`"`) {
+			t.Errorf("JSON of %s: %s, %v", f, b, err)
+		}
+	}
+	if MostWords.String() != "most-words" || DropTrailing.String() != "drop-trailing" {
+		t.Errorf("names: %s, %s", MostWords, DropTrailing)
+	}
+	if _, err := ParseFallback("trailing"); err == nil || !strings.Contains(err.Error(), "most-words or drop-trailing") {
+		t.Errorf("ParseFallback(trailing) = %v, want an error naming the two", err)
+	}
+	if _, err := json.Marshal(Baseline{Fallback: 7}); err == nil {
+		t.Error("a fallback out of range marshalled")
+	}
+	e := openShop(t)
+	if _, err := e.Baseline(context.Background(), Fallback(-1), "rain jacket", 3); err == nil {
+		t.Error("Baseline ran an unknown fallback")
+	}
+	if _, err := e.BaselineMatches(context.Background(), Fallback(2), "rain jacket", 1); err == nil {
+		t.Error("BaselineMatches ran an unknown fallback")
 	}
 }
 
@@ -448,7 +504,7 @@ func TestBaselineTiesByID(t *testing.T) {
 		t.Fatal(err)
 	}
 	defer e.Close()
-	b, err := e.Baseline(context.Background(), "scree beanie", 10)
+	b, err := e.Baseline(context.Background(), MostWords, "scree beanie", 10)
 	if err != nil {
 		t.Fatal(err)
 	}

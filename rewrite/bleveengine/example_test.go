@@ -76,12 +76,12 @@ func ExampleEngine_BaselineMatches() {
 	defer done()
 	ctx := context.Background()
 	q := "nylon rain jacket size xl"
-	b, err := e.Baseline(ctx, q, 1)
+	b, err := e.Baseline(ctx, bleveengine.MostWords, q, 1)
 	if err != nil {
 		fmt.Println(err)
 		return
 	}
-	ids, err := e.BaselineMatches(ctx, q, b.Kept)
+	ids, err := e.BaselineMatches(ctx, bleveengine.MostWords, q, b.Kept)
 	fmt.Println(b.Kept, "of", b.Words, "words:", ids, err)
 	// Output: 3 of 5 words: [RJ-1 RJ-2 RJ-3] <nil>
 }
@@ -330,10 +330,11 @@ func ExampleEngine_Show() {
 
 // Baseline is the blind partial match a plain engine falls back to. No
 // product has all six words of "ember trail running shoe size 12"
-// ("size" is in no product's text), and the most any has is four:
+// ("size" is in no product's text). Keeping the most words, any four:
 // TR-1, the black shoe that comes in 12, and TR-2, the ember one, which
-// does not. Rescued, the size stays, being hard for footwear: TR-1
-// alone.
+// does not. Dropping words from the end, "12" and "size" go first: TR-2
+// alone, the wrong size. Rescued, the size stays, being hard for
+// footwear: TR-1 alone.
 func ExampleEngine_Baseline() {
 	e, done, err := openExampleShop()
 	if err != nil {
@@ -343,27 +344,42 @@ func ExampleEngine_Baseline() {
 	defer done()
 	ctx := context.Background()
 	q := "ember trail running shoe size 12"
-	b, err := e.Baseline(ctx, q, 10)
-	if err != nil {
-		fmt.Println(err)
-		return
+	for _, f := range bleveengine.Fallbacks() {
+		b, err := e.Baseline(ctx, f, q, 10)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		var ids []string
+		for _, h := range b.Hits {
+			ids = append(ids, h.ID)
+		}
+		slices.Sort(ids) // the hits come by score; in id order here
+		fmt.Printf("%s: kept %d of %d words, found %v\n", b.Fallback, b.Kept, b.Words, ids)
 	}
-	var ids []string
-	for _, h := range b.Hits {
-		ids = append(ids, h.ID)
-	}
-	slices.Sort(ids) // the hits come by score; in id order here
-	fmt.Println("baseline:", b.Kept, "of", b.Words, "words,", b.Count, "products", ids)
 	out, err := rewrite.New(e, nil).Rescue(ctx, q)
 	if err != nil {
 		fmt.Println(err)
 		return
 	}
-	ids, err = e.Matches(ctx, out.Plan)
+	ids, err := e.Matches(ctx, out.Plan)
 	fmt.Println("rescued:", ids, err)
 	// Output:
-	// baseline: 4 of 6 words, 2 products [TR-1 TR-2]
+	// most-words: kept 4 of 6 words, found [TR-1 TR-2]
+	// drop-trailing: kept 4 of 6 words, found [TR-2]
 	// rescued: [TR-1] <nil>
+}
+
+// ParseFallback reads a blind partial match by the name a command-line
+// flag or a request gives.
+func ExampleParseFallback() {
+	f, err := bleveengine.ParseFallback("drop-trailing")
+	fmt.Println(f, err)
+	_, err = bleveengine.ParseFallback("last")
+	fmt.Println(err)
+	// Output:
+	// drop-trailing <nil>
+	// unknown fallback "last": want most-words or drop-trailing
 }
 
 // Colours lists the colours the catalog carries, by name, with how many

@@ -75,14 +75,15 @@ func TestMatches(t *testing.T) {
 // cmpEmpty takes a nil and an empty list of ids as the same.
 var cmpEmpty = cmp.Comparer(func(a, b []string) bool { return slices.Equal(a, b) })
 
-// BaselineMatches is the whole set of Baseline's disjunction for each
-// number of words kept; it must hold what bleve finds for that
-// disjunction, and what shop.jsonl gives by hand.
+// BaselineMatches is the whole set of Baseline's search for each
+// fallback and number of words kept; it must hold what bleve finds for
+// that search, and what shop.jsonl gives by hand.
 func TestBaselineMatches(t *testing.T) {
 	e := openShop(t)
 	ctx := context.Background()
 	for _, tc := range []struct {
 		name, reason, q string
+		fallback        Fallback
 		kept            int
 		want            []string // nil: bleve alone is the reference
 	}{
@@ -99,21 +100,27 @@ func TestBaselineMatches(t *testing.T) {
 		{name: "longer", q: "merino wool crew sweater size m", kept: 3, reason: "bleve is the reference"},
 		{name: "longer, one word", q: "merino wool crew sweater size m", kept: 1, reason: "bleve is the reference"},
 		{name: "no words", q: "  ", kept: 1, want: []string{}, reason: "nothing to match"},
+		{name: "trailing: the first words", q: "jacket rain nylon", fallback: DropTrailing, kept: 2,
+			want: []string{"RJ-1", "RJ-2", "RJ-3"}, reason: "jacket and rain, which all three have; nylon, dropped, is not asked"},
+		{name: "trailing: not any two", q: "nylon polyester rain", fallback: DropTrailing, kept: 2, want: []string{},
+			reason: "nylon and polyester, both, which no jacket is; most-words would take any two"},
+		{name: "most words: any two", q: "nylon polyester rain", kept: 2, want: []string{"RJ-1", "RJ-2", "RJ-3"},
+			reason: "nylon and rain (RJ-1, RJ-2) or polyester and rain (RJ-3)"},
+		{name: "trailing: one word", q: "ember nylon", fallback: DropTrailing, kept: 1,
+			want: []string{"RJ-3", "TR-2"}, reason: "the ember rain jacket and the ember trail shoe"},
+		{name: "trailing: kept past the words", q: "rain jacket", fallback: DropTrailing, kept: 5,
+			want: []string{"RJ-1", "RJ-2", "RJ-3"}, reason: "taken as both"},
+		{name: "trailing, longer", q: "merino crew sweater size l", fallback: DropTrailing, kept: 3, reason: "bleve is the reference"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			got, err := e.BaselineMatches(ctx, tc.q, tc.kept)
+			got, err := e.BaselineMatches(ctx, tc.fallback, tc.q, tc.kept)
 			if err != nil {
 				t.Fatal(err)
 			}
 			if words := baselineWords(tc.q); len(words) > 0 {
-				var qs []query.Query
-				for _, w := range words {
-					qs = append(qs, baselineWord(w))
-				}
-				dq := bleve.NewDisjunctionQuery(qs...)
-				dq.SetMin(float64(min(tc.kept, len(words))))
-				if diff := cmp.Diff(bleveIDs(t, e, dq), got, cmpEmpty); diff != "" {
-					t.Errorf("%s: against bleve's disjunction (-bleve +got):\n%s", tc.reason, diff)
+				q := baselineQuery(tc.fallback, words, min(tc.kept, len(words)))
+				if diff := cmp.Diff(bleveIDs(t, e, q), got, cmpEmpty); diff != "" {
+					t.Errorf("%s: against bleve's search (-bleve +got):\n%s", tc.reason, diff)
 				}
 			}
 			if tc.want != nil {
@@ -130,21 +137,26 @@ func TestBaselineMatches(t *testing.T) {
 func TestBaselineMatchesHoldTheHits(t *testing.T) {
 	e := openShop(t)
 	ctx := context.Background()
-	for _, q := range []string{"trail running shoes size 13", "charcoal merino crew sweater size l under $90", "wool rug 5 ft"} {
-		b, err := e.Baseline(ctx, q, 3)
-		if err != nil {
-			t.Fatal(err)
-		}
-		got, err := e.BaselineMatches(ctx, q, b.Kept)
-		if err != nil {
-			t.Fatal(err)
-		}
-		if len(got) != b.Count {
-			t.Errorf("%q: %d matched, Baseline counted %d", q, len(got), b.Count)
-		}
-		for _, h := range b.Hits {
-			if !slices.Contains(got, h.ID) {
-				t.Errorf("%q: hit %s is not in the set %v", q, h.ID, got)
+	for _, f := range Fallbacks() {
+		for _, q := range []string{"trail running shoes size 13", "charcoal merino crew sweater size l under $90", "wool rug 5 ft"} {
+			b, err := e.Baseline(ctx, f, q, 3)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if b.Fallback != f {
+				t.Errorf("%s %q: Baseline says it ran %s", f, q, b.Fallback)
+			}
+			got, err := e.BaselineMatches(ctx, f, q, b.Kept)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if len(got) != b.Count {
+				t.Errorf("%s %q: %d matched, Baseline counted %d", f, q, len(got), b.Count)
+			}
+			for _, h := range b.Hits {
+				if !slices.Contains(got, h.ID) {
+					t.Errorf("%s %q: hit %s is not in the set %v", f, q, h.ID, got)
+				}
 			}
 		}
 	}

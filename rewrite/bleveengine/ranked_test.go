@@ -35,7 +35,7 @@ func TestRankedTiesGoByID(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	b, err := e.Baseline(ctx, "plain stoneware mug", 3)
+	b, err := e.Baseline(ctx, MostWords, "plain stoneware mug", 3)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -67,11 +67,11 @@ func TestRankedSameWhateverTheSegments(t *testing.T) {
 		engs = append(engs, e)
 	}
 	for _, q := range []string{"trail running shoes size 13", "charcoal merino crew sweater size l under $90", "wool rug 5 ft", "black lens", "rain jacket"} {
-		a, err := engs[0].Baseline(ctx, q, 5)
+		a, err := engs[0].Baseline(ctx, MostWords, q, 5)
 		if err != nil {
 			t.Fatal(err)
 		}
-		b, err := engs[1].Baseline(ctx, q, 5)
+		b, err := engs[1].Baseline(ctx, MostWords, q, 5)
 		if err != nil {
 			t.Fatal(err)
 		}

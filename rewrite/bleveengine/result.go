@@ -28,6 +28,9 @@ type RescueOptions struct {
 	// Baseline runs the blind partial match on the query as typed beside
 	// the rescue.
 	Baseline bool
+	// Fallback is the blind partial match Baseline runs; the zero value
+	// is MostWords.
+	Fallback Fallback
 	// Explore is the chance, from 0 to 1, that one of the hits shown
 	// comes from the plan one step looser than the rescue's
 	// (rewrite.Rewriter.Loosen): its best product that the rescue's own
@@ -53,13 +56,16 @@ func (o RescueOptions) check() error {
 	case o.K < 0:
 		return fmt.Errorf("bleveengine: %d hits: want 0 or more", o.K)
 	}
+	if _, err := o.Fallback.MarshalText(); err != nil {
+		return err
+	}
 	return nil
 }
 
 // Rescue rescues a parsed query with rw against e and shows the top
 // opts.K of the plan it settles on; with opts.Explore, one of them may
 // come from a plan one step looser; with opts.Baseline, it runs the
-// blind partial match on the query as typed beside it. Everything
+// blind partial match opts.Fallback on the query as typed beside it. Everything
 // honours ctx; a deadline that passes while exploring leaves the hits
 // as the rescue found them. A query with nothing to search for is
 // refused with the rewriter's *rewrite.RefusedError (errors.Is
@@ -83,7 +89,7 @@ func (e *Engine) Rescue(ctx context.Context, rw *rewrite.Rewriter, r *parser.Res
 		return nil, err
 	}
 	if opts.Baseline {
-		if res.Baseline, err = e.Baseline(ctx, o.Query, opts.K); err != nil {
+		if res.Baseline, err = e.Baseline(ctx, opts.Fallback, o.Query, opts.K); err != nil {
 			return nil, err
 		}
 	}

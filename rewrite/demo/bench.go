@@ -148,7 +148,7 @@ func Bench(ctx context.Context, w io.Writer, opts BenchOptions) (*BenchResult, e
 			rescued++
 		}
 		t = time.Now()
-		if _, err := eng.Baseline(ctx, q, 10); err != nil {
+		if _, err := eng.Baseline(ctx, bleveengine.MostWords, q, 10); err != nil {
 			return nil, err
 		}
 		base = append(base, time.Since(t))

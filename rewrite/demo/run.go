@@ -138,7 +138,7 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 			printHit(w, h)
 		}
 	}
-	b, err := eng.Baseline(ctx, s.Query, k)
+	b, err := eng.Baseline(ctx, bleveengine.MostWords, s.Query, k)
 	if err != nil {
 		return err
 	}

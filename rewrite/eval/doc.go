@@ -12,7 +12,9 @@
 // attributes (brand, silhouette and a price ceiling too).
 //
 // [Evaluate] runs every case through whittle and through the baseline on
-// the same engine, and [Score] checks each hit against the real
+// the same engine: one of the blind partial matches of
+// [bleveengine.Fallback], keeping the most words any product has or
+// dropping words from the end of the query. [Score] checks each hit against the real
 // attributes of the product it names: the top k each search returns,
 // and every product it matched, which its count, its facets and a sort
 // by anything but relevance see ([SetScore]). [Run] does it all on the demo

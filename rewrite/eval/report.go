@@ -8,6 +8,7 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
@@ -35,12 +36,14 @@ type Report struct {
 	Products int    `json:"products"`
 	Seed     uint64 `json:"seed"`
 	// K is how many hits each query asked for.
-	K         int          `json:"k"`
-	Whittle   Figures      `json:"whittle"`
-	Baseline  Figures      `json:"baseline"`
-	ByFailure []FailureRow `json:"by_failure"`
-	Goals     []Goal       `json:"goals"`
-	Losses    []Loss       `json:"losses"`
+	K int `json:"k"`
+	// Fallback is the blind partial match that is the baseline.
+	Fallback  bleveengine.Fallback `json:"fallback"`
+	Whittle   Figures              `json:"whittle"`
+	Baseline  Figures              `json:"baseline"`
+	ByFailure []FailureRow         `json:"by_failure"`
+	Goals     []Goal               `json:"goals"`
+	Losses    []Loss               `json:"losses"`
 }
 
 // FailureRow holds the figures of the cases of one failure, and how many
@@ -160,7 +163,8 @@ func (r Report) Met() bool {
 // baseline, the goals, the figures by failure, and examples of losses.
 func (r Report) WriteText(w io.Writer) error {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "%d %squeries on %d products (seed %d), top %d hits each\n\n", r.Whittle.Queries, styleWord(r.Style), r.Products, r.Seed, r.K)
+	fmt.Fprintf(tw, "%d %squeries on %d products (seed %d), top %d hits each\n", r.Whittle.Queries, styleWord(r.Style), r.Products, r.Seed, r.K)
+	fmt.Fprintf(tw, "baseline: %s, a blind partial match %s\n\n", r.Fallback, fallbackText(r.Fallback))
 	fmt.Fprintln(tw, "measure\twhittle\tbaseline")
 	for _, row := range figureRows(r.Whittle, r.Baseline, r.K) {
 		fmt.Fprintf(tw, "%s\t%s\t%s\n", row[0], row[1], row[2])
@@ -213,6 +217,14 @@ func WriteGoals(w io.Writer, reps []Report) error {
 		}
 	}
 	return tw.Flush()
+}
+
+// fallbackText says in a few words what a blind partial match gives up.
+func fallbackText(f bleveengine.Fallback) string {
+	if f == bleveengine.DropTrailing {
+		return "dropping words from the end of the query until the rest match"
+	}
+	return "keeping the most of the query's words any product has, whichever they are"
 }
 
 // styleName is a report's style as a column heading.

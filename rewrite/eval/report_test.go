@@ -9,6 +9,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden report in testdata/eval")
@@ -120,15 +122,18 @@ func TestWriteTextGolden(t *testing.T) {
 	}
 }
 
-// A rate of no hits is null in JSON, not a failure to encode.
+// A rate of no hits is null in JSON, not a failure to encode; the
+// baseline is named.
 func TestReportJSON(t *testing.T) {
 	rep := NewReport([]Case{{Query: "q", Product: "RG-1", ProductType: "rug", Failure: FailTypo}}, []Result{{}}, []Result{{}}, tiny(t), 10)
+	rep.Fallback = bleveengine.DropTrailing
 	b, err := json.Marshal(rep)
 	if err != nil {
 		t.Fatal(err)
 	}
 	var back struct {
-		Whittle struct {
+		Fallback string `json:"fallback"`
+		Whittle  struct {
 			RescueRate       *float64 `json:"rescue_rate"`
 			HardPreservation *float64 `json:"hard_preservation"`
 		} `json:"whittle"`
@@ -139,6 +144,9 @@ func TestReportJSON(t *testing.T) {
 	}
 	if err := json.Unmarshal(b, &back); err != nil {
 		t.Fatal(err)
+	}
+	if back.Fallback != "drop-trailing" {
+		t.Errorf("fallback %q, want drop-trailing", back.Fallback)
 	}
 	if back.Whittle.RescueRate == nil || *back.Whittle.RescueRate != 0 {
 		t.Errorf("rescue rate %v, want 0 (no query had hits)", back.Whittle.RescueRate)

@@ -19,21 +19,21 @@ import (
 // *bleveengine.Engine is one.
 type Engine interface {
 	rewrite.Engine
-	Baseline(ctx context.Context, q string, k int) (*bleveengine.Baseline, error)
+	Baseline(ctx context.Context, f bleveengine.Fallback, q string, k int) (*bleveengine.Baseline, error)
 	// Matches and BaselineMatches list every product a plan, or the
-	// blind partial match keeping kept of the query's words, matches.
+	// blind partial match f keeping kept of the query's words, matches.
 	Matches(ctx context.Context, p rewrite.Plan) ([]string, error)
-	BaselineMatches(ctx context.Context, q string, kept int) ([]string, error)
+	BaselineMatches(ctx context.Context, f bleveengine.Fallback, q string, kept int) ([]string, error)
 }
 
 // DefaultK is how many hits a query asks for.
 const DefaultK = 10
 
 // Evaluate runs every case through whittle (rw's rescue, then the top k
-// of its plan) and through the baseline on eng, and reports how each did
-// against the products' real attributes, in its top k and in its whole
-// result set.
-func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, cases []Case, products []catalog.Product, k int) (Report, error) {
+// of its plan) and through the baseline, the blind partial match f, on
+// eng, and reports how each did against the products' real attributes,
+// in its top k and in its whole result set.
+func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, f bleveengine.Fallback, cases []Case, products []catalog.Product, k int) (Report, error) {
 	if k <= 0 {
 		k = DefaultK
 	}
@@ -45,19 +45,21 @@ func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, cases []Cas
 		if err != nil {
 			return Report{}, fmt.Errorf("%q: %w", c.Query, err)
 		}
-		b, err := blind(ctx, eng, c, k, byID)
+		b, err := blind(ctx, eng, f, c, k, byID)
 		if err != nil {
 			return Report{}, fmt.Errorf("%q: the baseline: %w", c.Query, err)
 		}
 		whittle, baseline = append(whittle, w), append(baseline, b)
 	}
-	return NewReport(cases, whittle, baseline, products, k), nil
+	rep := NewReport(cases, whittle, baseline, products, k)
+	rep.Fallback = f
+	return rep, nil
 }
 
-// blind is the baseline's result for one case: its top k, and its whole
-// result set scored.
-func blind(ctx context.Context, eng Engine, c Case, k int, byID map[string]*catalog.Product) (Result, error) {
-	b, err := eng.Baseline(ctx, c.Query, k)
+// blind is the baseline's result for one case: the top k of the blind
+// partial match f, and its whole result set scored.
+func blind(ctx context.Context, eng Engine, f bleveengine.Fallback, c Case, k int, byID map[string]*catalog.Product) (Result, error) {
+	b, err := eng.Baseline(ctx, f, c.Query, k)
 	if err != nil {
 		return Result{}, err
 	}
@@ -68,7 +70,7 @@ func blind(ctx context.Context, eng Engine, c Case, k int, byID map[string]*cata
 	if b.Count == 0 {
 		return res, nil
 	}
-	all, err := eng.BaselineMatches(ctx, c.Query, b.Kept)
+	all, err := eng.BaselineMatches(ctx, f, c.Query, b.Kept)
 	if err != nil {
 		return Result{}, err
 	}
@@ -127,6 +129,9 @@ type RunOptions struct {
 	CatalogSeed int64
 	// Generate tunes the labelled set.
 	Generate Options
+	// Fallback is the blind partial match whittle is measured against;
+	// the zero value is bleveengine.MostWords.
+	Fallback bleveengine.Fallback
 	// K is how many hits each query asks for (default DefaultK).
 	K int
 	// Dir is where the temporary index is built ("" means the system's
@@ -208,7 +213,7 @@ func RunStyles(ctx context.Context, opts RunOptions, styles []Style) ([]Report, 
 		gen.Style = style
 		cases := Generate(products, gen)
 		logf("evaluating %d %s queries...\n", len(cases), style)
-		rep, err := Evaluate(ctx, eng, rw, cases, products, opts.K)
+		rep, err := Evaluate(ctx, eng, rw, opts.Fallback, cases, products, opts.K)
 		if err != nil {
 			return nil, err
 		}

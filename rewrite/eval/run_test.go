@@ -12,8 +12,9 @@ import (
 	"github.com/whittle-search/whittle/rewrite/catalog"
 )
 
-// Three hand-written cases on the tiny catalog, through whittle and the
+// Three hand-written cases on the tiny catalog, through whittle and each
 // baseline on a real index; every figure is worked out by hand below.
+// No product has "striped", "size" or "5.3" (no description).
 func TestEvaluateTiny(t *testing.T) {
 	ps := tiny(t)
 	ctx := context.Background()
@@ -23,28 +24,44 @@ func TestEvaluateTiny(t *testing.T) {
 	cases := []Case{
 		// whittle: no skirt is striped; the size alone finds SK-2; the
 		// pattern, soft and matching nothing, is dropped: [SK-2], 2 of 3
-		// constraints kept. Baseline: no product has "striped" or "size"
-		// (no description), so 2 of the 4 words, skirt and xl: [SK-2].
+		// constraints kept. most-words: 2 of the 4 words, skirt and xl:
+		// [SK-2]. drop-trailing: dropping xl, size and skirt leaves
+		// striped, which matches nothing: no hits, 0 of 4.
 		{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: FailPattern, Hard: size("xl")},
 		// whittle: no rug is 5.3 ft wide; widened by 10% (4.77..5.83 ft)
-		// it holds RG-1's 5 ft: [RG-1], 3 of 3 kept. Baseline: "5.3" is no
-		// word of any product; wool, rug and ft are RG-1's: [RG-1], 3 of 4.
+		// it holds RG-1's 5 ft: [RG-1], 3 of 3 kept. most-words: wool,
+		// rug and ft are RG-1's: [RG-1], 3 of 4. drop-trailing: dropping
+		// ft and 5.3 leaves wool rug: [RG-1], 2 of 4.
 		{Query: "wool rug 5.3 ft", Product: "RG-1", ProductType: "rug", Failure: FailMeasure},
 		// whittle: no skirt is cable knit; size m holds SK-1 and SW-1; the
-		// pattern is dropped: [SK-1], 2 of 3 kept. Baseline: SW-1 has
+		// pattern is dropped: [SK-1], 2 of 3 kept. most-words: SW-1 has
 		// cable, knit and m, SK-1 only skirt and m: 3 of 5 words, [SW-1],
-		// in size m but a sweater.
+		// in size m but a sweater. drop-trailing: no product has cable,
+		// knit and skirt; dropping m, size and skirt leaves cable knit:
+		// [SW-1] again, 2 of 5.
 		{Query: "cable knit skirt size m", Product: "SK-1", ProductType: "skirt", Failure: FailPattern, Hard: size("m")},
 	}
-	// Each set is no larger than the top 10, so it is the hits: in case
-	// 1 the baseline's 2 words hold only SK-2 (SK-1 has skirt, not xl),
-	// in case 2 its 3 only RG-1 (SW-1 has wool alone), in case 3 its 3
-	// only SW-1 (SK-1 has skirt and m).
-	checkFigures(t, ctx, eng, cases, ps,
-		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 7, Of: 9,
-			Matched: 3, MatchedOnTarget: 3, SetQueries: 3, SetShares: 3},
-		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 2, Found: 2, ReciprocalRank: 2, Kept: 8, Of: 13,
-			Matched: 3, MatchedOnTarget: 2, SetQueries: 3, SetShares: 2})
+	whittle := Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 7, Of: 9,
+		Matched: 3, MatchedOnTarget: 3, SetQueries: 3, SetShares: 3}
+	for _, tc := range []struct {
+		fallback bleveengine.Fallback
+		baseline Figures
+	}{
+		// Each set is no larger than the top 10, so it is the hits: in
+		// case 1 the 2 words hold only SK-2 (SK-1 has skirt, not xl), in
+		// case 2 the 3 only RG-1 (SW-1 has wool alone), in case 3 the 3
+		// only SW-1 (SK-1 has skirt and m).
+		{bleveengine.MostWords, Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 2, Found: 2, ReciprocalRank: 2, Kept: 8, Of: 13,
+			Matched: 3, MatchedOnTarget: 2, SetQueries: 3, SetShares: 2}},
+		// Two queries rescued, one hit each; SW-1 keeps the hard size but
+		// is no skirt. Each set is its hits: shares 1 + 0.
+		{bleveengine.DropTrailing, Figures{Queries: 3, Rescued: 2, Hits: 2, HardKept: 2, OnTarget: 1, Found: 1, ReciprocalRank: 1, Kept: 4, Of: 13,
+			Matched: 2, MatchedOnTarget: 1, SetQueries: 2, SetShares: 1}},
+	} {
+		t.Run(tc.fallback.String(), func(t *testing.T) {
+			checkFigures(t, ctx, eng, tc.fallback, cases, ps, whittle, tc.baseline)
+		})
+	}
 }
 
 // With one hit a query, the whole result sets hold more than the hits;
@@ -72,7 +89,7 @@ func TestEvaluateSetsTiny(t *testing.T) {
 		// without the hard xl.
 		{Query: "black skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: FailColour, Hard: xl},
 	}
-	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), cases, ps, 1)
+	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), bleveengine.MostWords, cases, ps, 1)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -141,7 +158,7 @@ func TestEvaluateLongTiny(t *testing.T) {
 		{Query: "tarrow black 50mm prime lens for zk-3 under $250 handy", Style: StyleLong, Product: "LN-1", ProductType: "prime lens",
 			Failure: FailKeyword, Hard: []Attr{{Kind: parser.KindMeasure, Dimension: "focal_length", Value: "50 mm"}, {Kind: parser.KindCompatibility, Value: "zk-3"}}},
 	}
-	checkFigures(t, ctx, eng, cases, ps,
+	checkFigures(t, ctx, eng, bleveengine.MostWords, cases, ps,
 		// One hit a case, each the product meant, at rank 1; 18 of 20.
 		// Each set is its hits.
 		Figures{Queries: 3, Rescued: 3, Hits: 3, HardKept: 3, OnTarget: 3, Found: 3, ReciprocalRank: 3, Kept: 18, Of: 20,
@@ -168,11 +185,14 @@ func tinyIndex(t *testing.T, ctx context.Context, ps []catalog.Product) *bleveen
 
 // checkFigures evaluates cases on eng and compares whittle's and the
 // baseline's figures with those worked out by hand.
-func checkFigures(t *testing.T, ctx context.Context, eng *bleveengine.Engine, cases []Case, ps []catalog.Product, whittle, baseline Figures) {
+func checkFigures(t *testing.T, ctx context.Context, eng *bleveengine.Engine, f bleveengine.Fallback, cases []Case, ps []catalog.Product, whittle, baseline Figures) {
 	t.Helper()
-	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), cases, ps, 10)
+	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), f, cases, ps, 10)
 	if err != nil {
 		t.Fatal(err)
+	}
+	if rep.Fallback != f {
+		t.Errorf("the report says its baseline is %s, want %s", rep.Fallback, f)
 	}
 	for _, tc := range []struct {
 		name      string
