@@ -8,6 +8,7 @@ import (
 	"os"
 
 	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/eval"
 )
 
@@ -23,15 +24,18 @@ func evalCmd(args []string, stdout, stderr io.Writer) int {
 	asJSON := fs.Bool("json", false, "write each style's report as one JSON object, one a line")
 	cases := fs.Bool("cases", false, "write the labelled set of each style, one JSON object a line, and evaluate nothing")
 	style := fs.String("style", "both", "how the queries are written: short (about 3 constraints), long (4 to 7) or both, one set each")
+	var fallback bleveengine.Fallback
+	fs.TextVar(&fallback, "fallback", bleveengine.MostWords, "the blind partial match whittle is measured against: most-words or drop-trailing")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, `usage: whittle eval [--products N] [--queries N] [--seed S] [--style short|long|both] [--hits K] [--policy FILE] [--dir DIR] [--json | --cases]
+		fmt.Fprint(stderr, `usage: whittle eval [--products N] [--queries N] [--seed S] [--style short|long|both] [--hits K] [--policy FILE]
+                   [--fallback most-words|drop-trailing] [--dir DIR] [--json | --cases]
 
 Generates the demo catalog, writes from it a labelled set of queries that
 each miss their exact match in one known way (a colour the shop does not
 name, a pattern the type lacks, a misspelt type, an extra word, a measure
 slightly off), indexes the catalog in a temporary directory, and runs
-every query through whittle and through the blind partial match. It
-prints, for both, the rescue rate, the share of hits that keep every hard
+every query through whittle and through a blind partial match, the
+baseline. It prints, for both, the rescue rate, the share of hits that keep every hard
 constraint, the share also of the type meant (in the top K, and in all
 the products the search matched, which its count, its facets and a sort
 by price see), where the product meant ranks and how much of each query
@@ -45,6 +49,12 @@ price ceiling it meets). --style both, the default, writes a set of
 --queries queries in each style, reports on each in turn and ends with
 the goals of both side by side; --json then writes one object a style,
 one a line, and --cases both sets.
+
+The baseline is the way a plain engine falls back when all of a query's
+words together match nothing, knowing nothing of what they mean.
+--fallback most-words, the default, keeps the most of the words any
+product has, whichever they are; --fallback drop-trailing drops words
+from the end of the query, as typed, until the rest match.
 
 exit status: 0 evaluated (whether or not the goals are met), 1 the run
 failed, 2 bad usage.
@@ -67,7 +77,7 @@ flags:
 	if !ok {
 		return 2
 	}
-	opts := eval.RunOptions{Products: *n, Generate: eval.Options{Queries: *queries, Seed: *seed, Policy: pol}, K: *hits, Dir: *dir, Log: stderr}
+	opts := eval.RunOptions{Products: *n, Generate: eval.Options{Queries: *queries, Seed: *seed, Policy: pol}, Fallback: fallback, K: *hits, Dir: *dir, Log: stderr}
 	if *cases {
 		var all []eval.Case
 		for _, s := range styles {

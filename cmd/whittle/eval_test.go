@@ -34,6 +34,8 @@ func TestEvalUsage(t *testing.T) {
 			"the usage shows them apart: --cases evaluates nothing, so there is no report to write as JSON"},
 		{"cases alone", []string{"eval", "--cases", "--json=false", "--products", "300", "--queries", "1", "--style", "short"}, 0, "",
 			"--json=false is not --json, so --cases stands alone"},
+		{"bad fallback", []string{"eval", "--fallback", "trailing"}, 2, `unknown fallback "trailing": want most-words or drop-trailing`, "there are two fallbacks, named in full"},
+		{"help names the fallbacks", []string{"eval", "-h"}, 0, "--fallback most-words|drop-trailing", "the usage line lists the fallback flag"},
 		{"unknown flag", []string{"eval", "--nope"}, 2, `flag provided but not defined: -nope (run "whittle eval -h" for the flags)`, "unknown flags are refused, with a hint, not the usage"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
@@ -60,6 +62,13 @@ func TestEvalText(t *testing.T) {
 	}
 	if !strings.Contains(out, " met") {
 		t.Errorf("no goal says met or not met:\n%s", out)
+	}
+	if !strings.Contains(out, "baseline: most-words, a blind partial match keeping the most") {
+		t.Errorf("the report does not name its baseline:\n%s", out)
+	}
+	code, out, stderr = runCLI("", "eval", "--products", "300", "--queries", "20", "--style", "short", "--fallback", "drop-trailing", "--dir", t.TempDir())
+	if code != 0 || !strings.Contains(out, "baseline: drop-trailing, a blind partial match dropping words from the end") {
+		t.Errorf("--fallback drop-trailing: exit %d, %s\n%s", code, stderr, out)
 	}
 }
 

@@ -30,13 +30,15 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	policyFile := fs.String("policy", "", "policy file laid over the built-in policy")
 	budget := fs.Int("budget", rewrite.DefaultBudget, "most engine counts one rescue may spend")
 	baseline := fs.Bool("baseline", false, "also run the blind partial match a plain engine would, and show both")
+	var fallback bleveengine.Fallback
+	fs.TextVar(&fallback, "fallback", bleveengine.MostWords, "the blind partial match --baseline runs: most-words (keep the most of the words any product has) or drop-trailing (drop words from the end until the rest match)")
 	explore := fs.Float64("explore", 0, "chance `P`, from 0 to 1, that one hit shown is the best new product of the plan one step looser than the rescue's, marked as explored")
 	seed := fs.Uint64("seed", 0, "seed `N` of the explore draw (default: from the clock, so each run draws anew)")
 	signalsFile := fs.String("signals", "", "append the search event, one JSON line, to `FILE`")
 	session := fs.String("session", "", "session `ID` of the search event (default: a new random id each run)")
 	category := fs.String("category", "", "the shop's category the search is made in, used when the query names none")
 	fs.Usage = func() {
-		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k N] [--policy FILE] [--budget N] [--baseline]\n"+
+		fmt.Fprint(stderr, "usage: whittle search [--index DIR] [--json] [-k N] [--policy FILE] [--budget N] [--baseline [--fallback NAME]]\n"+
 			"                      [--category NAME] [--explore P [--seed N]] [--signals FILE [--session ID]] QUERY\n\nflags:\n")
 		fs.PrintDefaults()
 	}
@@ -52,7 +54,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	if !checkNeeds(fs, need{"k", *k >= 0, "0 or more"}, atLeast("budget", *budget, 1),
 		need{"explore", *explore >= 0 && *explore <= 1, "a chance from 0 to 1"}) ||
-		!onlyWith(fs, "seed", "explore") || !onlyWith(fs, "session", "signals") {
+		!onlyWith(fs, "seed", "explore") || !onlyWith(fs, "session", "signals") || !onlyWith(fs, "fallback", "baseline") {
 		return 2
 	}
 	if !checkCategory("search", *category, stderr) {
@@ -70,7 +72,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	}
 	defer eng.Close()
 	rw := rewrite.New(eng, pol, rewrite.WithBudget(*budget))
-	opts := bleveengine.RescueOptions{K: *k, Baseline: *baseline, Explore: *explore, Rand: exploreSource(fs, *seed)}
+	opts := bleveengine.RescueOptions{K: *k, Baseline: *baseline, Fallback: fallback, Explore: *explore, Rand: exploreSource(fs, *seed)}
 	res, err := eng.Rescue(context.Background(), rw, rw.ParseIn(rest[0], *category), opts)
 	var refused *rewrite.RefusedError
 	if errors.As(err, &refused) {
@@ -129,7 +131,11 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 		tw.Flush()
 	}
 	if base != nil {
-		fmt.Fprintf(stdout, "\nblind partial match: %d of %d words kept, %d results\n", base.Kept, base.Words, base.Count)
+		results := "results"
+		if base.Count == 1 {
+			results = "result"
+		}
+		fmt.Fprintf(stdout, "\nblind partial match (%s): %d of %d words kept, %d %s\n", base.Fallback, base.Kept, base.Words, base.Count, results)
 		tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', 0)
 		for _, h := range base.Hits {
 			fmt.Fprintf(tw, "%s\t%s\t%s\t%s\n", h.ID, h.Title, h.Colour, h.Price)

@@ -120,6 +120,31 @@ func TestSearchBaseline(t *testing.T) {
 	if len(rep.Hits) != 0 || rep.Baseline.Count != 2 || rep.Baseline.Kept >= rep.Baseline.Words {
 		t.Errorf("report %+v", rep)
 	}
+	// Dropping words from the end of "ember trail running shoe size 12"
+	// loses 12 and size ("size" is in no product's text) and shows TR-2,
+	// the ember shoe, which comes in 8 to 10 (shop.jsonl); whittle keeps
+	// the size and shows TR-1, the black one in 7 to 12.
+	code, out, stderr := runCLI("", "search", "--index", dir, "--baseline", "--fallback", "drop-trailing", "ember trail running shoe size 12")
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, stderr)
+	}
+	for _, want := range []string{"blind partial match (drop-trailing): 4 of 6 words kept, 1 result\n", "TR-2  Scree trail running shoe", "TR-1  Scree trail running shoe"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	for _, tc := range []struct {
+		args           []string
+		stderr, reason string
+	}{
+		{[]string{"--fallback", "drop-trailing", "rain jacket"}, "--fallback only applies with --baseline", "a fallback runs only beside the rescue"},
+		{[]string{"--baseline", "--fallback", "last", "rain jacket"}, `unknown fallback "last": want most-words or drop-trailing`, "the two names are given"},
+	} {
+		code, _, stderr := runCLI("", append([]string{"search", "--index", dir}, tc.args...)...)
+		if code != 2 || !strings.Contains(stderr, tc.stderr) {
+			t.Errorf("%s: exit %d, stderr %q, want 2 and %q", tc.reason, code, stderr, tc.stderr)
+		}
+	}
 }
 
 // exploredReport is what the explore tests read of a --json report.
