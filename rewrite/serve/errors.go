@@ -37,6 +37,9 @@ const (
 	CodeBadTuning Code = "bad_tuning"
 	// CodeBadHits: the number of hits asked for is out of range (400).
 	CodeBadHits Code = "bad_hits"
+	// CodeBadFallback: the blind partial match asked for has no such
+	// name, or was asked for without the baseline (400).
+	CodeBadFallback Code = "bad_fallback"
 	// CodeMethodNotAllowed: the endpoint takes another method (405).
 	CodeMethodNotAllowed Code = "method_not_allowed"
 	// CodeNoEndpoint: no endpoint has that path (404).

@@ -33,6 +33,9 @@ type RescueRequest struct {
 	Hits *int `json:"hits,omitempty"`
 	// Baseline also runs the blind partial match, for comparison.
 	Baseline bool `json:"baseline,omitempty"`
+	// Fallback names the blind partial match Baseline runs, one of
+	// bleveengine.Fallback's names ("most-words" when absent).
+	Fallback string `json:"fallback,omitempty"`
 	// Tuning changes the policy's numbers for this request only; it can
 	// set no strictness.
 	Tuning rewrite.Tuning `json:"tuning"`
@@ -140,6 +143,11 @@ func (s *Server) handleRescue(w http.ResponseWriter, r *http.Request) {
 		writeError(w, r, e)
 		return
 	}
+	fallback, e := checkFallback(req)
+	if e != nil {
+		writeError(w, r, e)
+		return
+	}
 	rw := s.rw
 	if req.Tuning != (rewrite.Tuning{}) {
 		rw = rw.Tuned(req.Tuning)
@@ -153,13 +161,29 @@ func (s *Server) handleRescue(w http.ResponseWriter, r *http.Request) {
 	if req.Hits != nil {
 		k = *req.Hits
 	}
-	res, err := s.engine.Rescue(r.Context(), rw, parsed, bleveengine.RescueOptions{K: k, Baseline: req.Baseline})
+	res, err := s.engine.Rescue(r.Context(), rw, parsed, bleveengine.RescueOptions{K: k, Baseline: req.Baseline, Fallback: fallback})
 	if err != nil {
 		writeError(w, r, s.engineError(r, err))
 		return
 	}
 	s.metrics.rescued(res.Outcome)
 	writeJSON(w, http.StatusOK, res)
+}
+
+// checkFallback reads the fallback a rescue asks for, refusing a name
+// there is none of, and one asked for without the baseline.
+func checkFallback(req RescueRequest) (bleveengine.Fallback, *Error) {
+	if req.Fallback == "" {
+		return bleveengine.MostWords, nil
+	}
+	f, err := bleveengine.ParseFallback(req.Fallback)
+	switch {
+	case err != nil:
+		return 0, errorf(CodeBadFallback, err.Error())
+	case !req.Baseline:
+		return 0, errorf(CodeBadFallback, fmt.Sprintf("fallback %q runs only with \"baseline\": true", req.Fallback))
+	}
+	return f, nil
 }
 
 // checkHits refuses a number of hits out of range.

@@ -112,8 +112,17 @@ func TestRescueBaseline(t *testing.T) {
 	decodeBody(t, w, &got)
 	// Sizes 7 to 12 only and size is hard: whittle finds nothing, while
 	// the blind match drops words of the five until something matches.
-	if got.Chosen.Count != 0 || got.Baseline == nil || got.Baseline.Words != 5 || got.Baseline.Count == 0 {
-		t.Errorf("count %d, baseline %+v; want 0 beside a baseline of 5 words that finds something", got.Chosen.Count, got.Baseline)
+	if got.Chosen.Count != 0 || got.Baseline == nil || got.Baseline.Words != 5 || got.Baseline.Count == 0 || got.Baseline.Fallback != bleveengine.MostWords {
+		t.Errorf("count %d, baseline %+v; want 0 beside a most-words baseline of 5 words that finds something", got.Chosen.Count, got.Baseline)
+	}
+	// Dropping words from the end of "ember trail running shoe size 12"
+	// loses 12 and size (no product's text has "size") and finds TR-2,
+	// the ember shoe in 8 to 10 (shop.jsonl).
+	w = do(s.Handler(), http.MethodPost, Prefix+"rescue", `{"query": "ember trail running shoe size 12", "baseline": true, "fallback": "drop-trailing"}`)
+	got = rescued{}
+	decodeBody(t, w, &got)
+	if b := got.Baseline; b == nil || b.Fallback != bleveengine.DropTrailing || b.Kept != 4 || b.Count != 1 || len(b.Hits) != 1 || b.Hits[0].ID != "TR-2" {
+		t.Errorf("drop-trailing baseline %+v, want 4 of 6 words kept and TR-2 alone", b)
 	}
 }
 
@@ -150,6 +159,8 @@ func TestErrors(t *testing.T) {
 			"a rain jacket is apparel (lexicon/data/product_types.wlx), not paint"},
 		{"bad tuning", "POST", "rescue", `{"query": "rug", "tuning": {"min_results": 0}}`, CodeBadTuning, 400, nil, "min_results runs from 1"},
 		{"bad hits", "POST", "rescue", `{"query": "rug", "hits": 101}`, CodeBadHits, 400, nil, "100 at most by default"},
+		{"unknown fallback", "POST", "rescue", `{"query": "rug", "baseline": true, "fallback": "last"}`, CodeBadFallback, 400, nil, "most-words and drop-trailing are the names"},
+		{"fallback without baseline", "POST", "rescue", `{"query": "rug", "fallback": "drop-trailing"}`, CodeBadFallback, 400, nil, "a fallback runs only beside the rescue"},
 		{"method not allowed", "GET", "rescue", "", CodeMethodNotAllowed, 405, nil, "rescue takes POST"},
 		{"method not allowed on policy", "DELETE", "policy", "", CodeMethodNotAllowed, 405, nil, "the policy is read-only"},
 		{"not found", "GET", "explain", "", CodeNoEndpoint, 404, nil, "no such endpoint"},
