@@ -142,7 +142,11 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 	if err != nil {
 		return err
 	}
-	fmt.Fprintf(w, "   blind partial match: %d of %d words kept, %d results\n", b.Kept, b.Words, b.Count)
+	results := "results"
+	if b.Count == 1 {
+		results = "result"
+	}
+	fmt.Fprintf(w, "   blind partial match: %d of %d words kept, %d %s\n", b.Kept, b.Words, b.Count, results)
 	for _, h := range b.Hits {
 		printHit(w, h)
 	}
