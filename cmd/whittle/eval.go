@@ -138,7 +138,7 @@ func writeReports(w io.Writer, reps []eval.Report, asJSON bool) error {
 	if len(reps) < 2 {
 		return nil
 	}
-	fmt.Fprintln(w, "\ngoals by style:")
+	fmt.Fprintf(w, "\ngoals by style, against %s:\n", reps[0].Fallback)
 	return eval.WriteGoals(w, reps)
 }
 

@@ -55,7 +55,7 @@ func TestEvalText(t *testing.T) {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
 	for _, want := range []string{"20 short queries on 300 products (seed 1)", "20 long queries on 300 products (seed 1)",
-		"rescue rate (some hits)", "attribute precision vs baseline", "failure", "goals by style:", "short (20 queries)  long (20 queries)"} {
+		"rescue rate (some hits)", "attribute precision vs baseline", "failure", "goals by style, against most-words:", "short (20 queries)  long (20 queries)"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("output lacks %q:\n%s", want, out)
 		}
