@@ -12,10 +12,12 @@ type Report struct {
 	ExactCount int          `json:"exact_count"`
 	Steps      []ReportStep `json:"steps"`
 	Chosen     ReportStep   `json:"chosen"`
-	Message    string       `json:"message"`
-	HardUnmet  []Missing    `json:"hard_unmet"`
-	Note       string       `json:"note,omitempty"`
-	Hits       []ReportHit  `json:"hits"`
+	// Message is the Outcome's: for the shopper, "" when the query as
+	// typed found enough.
+	Message   string      `json:"message"`
+	HardUnmet []Missing   `json:"hard_unmet"`
+	Note      string      `json:"note,omitempty"`
+	Hits      []ReportHit `json:"hits"`
 	// Problems are the badly formed parts of the query, which were not
 	// searched for; the rest of the query was ("1/0 jacket" searches
 	// for jackets). The service refuses such a query instead.

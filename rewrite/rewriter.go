@@ -235,8 +235,12 @@ type Outcome struct {
 	Steps []Step `json:"steps"`
 	// Missing is set when the hard constraints alone match nothing.
 	Missing []Missing `json:"missing,omitempty"`
-	// Message is for the shopper; Explanation for developers.
-	Message     string `json:"message"`
+	// Message is for the shopper: what was not found and what is shown
+	// instead. It is "" when the query as typed found enough (Exact),
+	// since then there is nothing to tell; ExactMessage words the count
+	// for a caller that shows a line anyway.
+	Message string `json:"message"`
+	// Explanation is for developers: what was counted and why.
 	Explanation string `json:"explanation"`
 	// Note says why the search stopped early (the budget, the deadline, or
 	// the most relaxation sets one rescue looks at), or "".
