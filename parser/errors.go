@@ -16,7 +16,8 @@ type Error struct {
 	Query string
 }
 
-// Error returns "offset start-end: message".
+// Error returns "start-end: message", the byte offsets of the problem
+// in the query: "5-8: 1/0 divides by zero".
 func (e *Error) Error() string {
 	return fmt.Sprintf("%d-%d: %s", e.Start, e.End, e.Msg)
 }
@@ -25,7 +26,7 @@ func (e *Error) Error() string {
 //
 //	lens 1/0 mm
 //	     ^^^
-//	division by zero in "1/0"
+//	1/0 divides by zero
 //
 // Invalid UTF-8 and control characters in the query are shown as U+FFFD so
 // that the carets line up; a long query is cut to a window around the

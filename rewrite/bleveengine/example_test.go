@@ -370,6 +370,17 @@ func ExampleEngine_Baseline() {
 	// rescued: [TR-1] <nil>
 }
 
+// Fallbacks lists the blind partial matches, each by the name String
+// gives it, which ParseFallback, a flag and JSON read back.
+func ExampleFallbacks() {
+	for _, f := range bleveengine.Fallbacks() {
+		fmt.Println(int(f), f)
+	}
+	// Output:
+	// 0 most-words
+	// 1 drop-trailing
+}
+
 // ParseFallback reads a blind partial match by the name a command-line
 // flag or a request gives.
 func ExampleParseFallback() {

@@ -19,6 +19,8 @@ import (
 // *bleveengine.Engine is one.
 type Engine interface {
 	rewrite.Engine
+	// Baseline runs the blind partial match f on the query as typed and
+	// returns its top k.
 	Baseline(ctx context.Context, f bleveengine.Fallback, q string, k int) (*bleveengine.Baseline, error)
 	// Matches and BaselineMatches list every product a plan, or the
 	// blind partial match f keeping kept of the query's words, matches.
