@@ -157,13 +157,22 @@ func (e *PolicyError) Error() string {
 }
 
 // Render shows the line at fault with a caret under the column, then the
-// message.
+// message. The column counts bytes; the caret is placed under that byte,
+// past a tab by a tab and past any other character by one space.
 func (e *PolicyError) Render() string {
 	if e.Source == "" {
 		return e.Error()
 	}
-	col := max(e.Column, 1)
-	return fmt.Sprintf("%s:%d:%d:\n%s\n%s^\n%s", e.File, e.Line, e.Column, e.Source, strings.Repeat(" ", col-1), e.Msg)
+	var pad strings.Builder
+	before := e.Source[:min(max(e.Column, 1)-1, len(e.Source))]
+	for _, r := range before {
+		if r == '\t' {
+			pad.WriteByte('\t')
+		} else {
+			pad.WriteByte(' ')
+		}
+	}
+	return fmt.Sprintf("%s:%d:%d:\n%s\n%s^\n%s", e.File, e.Line, e.Column, e.Source, pad.String(), e.Msg)
 }
 
 // DefaultPolicy returns the policy embedded in whittle.
@@ -207,7 +216,14 @@ func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	pos := keyPositions(lines)
 	var errs []error
 	at := func(key []string, format string, args ...any) {
+		// A key the file does not write out (one the decoder made
+		// up, or one in a line keyPositions cannot read) stands where
+		// the nearest key around it does.
 		p := pos[strings.Join(key, "\x00")]
+		for k := key; p.line == 0 && len(k) > 1; {
+			k = k[:len(k)-1]
+			p = pos[strings.Join(k, "\x00")]
+		}
 		if p.line == 0 {
 			p = position{1, 1}
 		}

@@ -2,6 +2,7 @@ package rewrite
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 	"unicode/utf8"
 
@@ -36,9 +37,58 @@ func keyPositions(lines []string) map[string]position {
 			}
 			full := append(append([]string(nil), table...), splitKey(k)...)
 			out[strings.Join(full, "\x00")] = position{i + 1, col}
+			inlineKeys(out, full, line, i+1)
 		}
 	}
 	return out
+}
+
+// inlineKeys records where the keys of an inline table stand when line,
+// the number n, sets the key full to one: "strictness = { colour =
+// "hard", size = "firm" }" puts strictness.colour and strictness.size
+// at their own columns. Nested inline tables, and tables in arrays, are
+// looked into too; a quoted string is skipped whole, so an "=" or "{" in
+// one is no key.
+func inlineKeys(out map[string]position, full []string, line string, n int) {
+	_, v, _ := strings.Cut(line, "=")
+	// open holds the inline tables and arrays the value is in, innermost
+	// last: a table by its key, an array as nil.
+	var open [][]string
+	inTable := func() bool { return len(open) > 0 && open[len(open)-1] != nil }
+	last := full // the key whose value is being read
+	inKey, keyAt := false, -1
+	for i := len(line) - len(v); i < len(line); i++ {
+		switch c := line[i]; {
+		case c == '"' || c == '\'':
+			if inKey && keyAt < 0 {
+				keyAt = i
+			}
+			if j := strings.IndexByte(line[i+1:], c); j >= 0 {
+				i += j + 1
+			}
+		case inKey && c == '=' && keyAt >= 0:
+			last = append(slices.Clone(open[len(open)-1]), splitKey(line[keyAt:i])...)
+			out[strings.Join(last, "\x00")] = position{n, keyAt + 1}
+			inKey, keyAt = false, -1
+		case inKey && c == '}':
+			// An empty table, or a comma before the brace.
+			open, inKey, keyAt = open[:len(open)-1], false, -1
+		case inKey:
+			if keyAt < 0 && c != ' ' && c != '\t' {
+				keyAt = i
+			}
+		case c == '{':
+			open, inKey = append(open, slices.Clone(last)), true
+		case c == '[':
+			open = append(open, nil)
+		case (c == '}' || c == ']') && len(open) > 0:
+			open = open[:len(open)-1]
+		case c == ',' && inTable():
+			inKey = true
+		case c == '#':
+			return
+		}
+	}
 }
 
 // splitKey splits a dotted TOML key, honouring quotes.

@@ -261,6 +261,18 @@ func TestParsePolicyReportsEveryProblem(t *testing.T) {
 			[]at{{2, 1, "estimate_position_bias: want true or false, not a string"}, {3, 1, "min_searches: want a whole number, not a decimal number"},
 				{6, 1, "click: want a number, not a string"}},
 			"the [signals] table is read value by value as well"},
+		{"inline table", "[defaults]\nstrictness = { colour = \"hardd\", size = \"firm\" }\n",
+			[]at{{2, 16, `unknown strictness "hardd"`}},
+			"a key inside an inline table is shown where it is written, not at the top of the file"},
+		{"inline table, second key", "[category.apparel]\nstrictness = { size = \"firm\", colr = \"soft\" }\n",
+			[]at{{2, 31, `unknown constraint kind "colr"`}},
+			"the comma starts the next key"},
+		{"inline tables nested", "[category]\napparel = { strictness = { colour = \"x\" }, min_results = 0 }\n",
+			[]at{{2, 28, `unknown strictness "x"`}, {2, 44, "min_results"}},
+			"the key after a nested table's closing brace belongs to the outer table"},
+		{"arrays in an inline table", "[category.lumber]\nstandard_sizes = { length = [\"8 ft\", \"ten\"], widht = [\"x,y\"] }\n",
+			[]at{{2, 20, `"ten"`}, {2, 46, `unknown dimension "widht"`}},
+			"a comma in an array, or in a string, starts no key"},
 		{"syntax stops", "[defaults]\nmin_results = \"one\"\n[defaults.strictness\n",
 			[]at{{3, 21, ""}},
 			"an unterminated table header is a syntax error; the wrong type before it is not reported, as the decoder stops at the syntax"},
@@ -290,6 +302,21 @@ func TestParsePolicyReportsEveryProblem(t *testing.T) {
 				}
 			}
 		})
+	}
+}
+
+// A caret goes under its column past tabs as well as spaces: a tab in
+// the line is a tab in the padding, so the caret lines up however wide a
+// terminal draws tabs.
+func TestPolicyErrorRenderTabs(t *testing.T) {
+	_, err := ParsePolicy("shop.toml", "[defaults]\n\tmin_results = 0\n", lexicon.Default())
+	var pe *PolicyError
+	if !errors.As(err, &pe) {
+		t.Fatalf("got %v, want a *PolicyError", err)
+	}
+	want := "shop.toml:2:2:\n\tmin_results = 0\n\t^\nmin_results 0: want 1 to 10000"
+	if got := pe.Render(); got != want {
+		t.Errorf("render:\n%q\nwant:\n%q", got, want)
 	}
 }
 
