@@ -24,8 +24,12 @@ const (
 	Filler      Kind = "filler"
 )
 
-// Kinds lists every kind in the order its file is loaded.
-var Kinds = []Kind{ProductType, Colour, Pattern, Silhouette, Material, Audience, Brand, Filler}
+// kinds are the kinds in the order their files are loaded.
+var kinds = []Kind{ProductType, Colour, Pattern, Silhouette, Material, Audience, Brand, Filler}
+
+// Kinds returns every kind in the order its file is loaded, in a slice
+// of the caller's own.
+func Kinds() []Kind { return slices.Clone(kinds) }
 
 // File returns the name of the file that holds entries of kind k.
 func (k Kind) File() string {
@@ -50,25 +54,29 @@ func (k Kind) File() string {
 	return string(k) + ".wlx"
 }
 
-// Categories lists the product categories a product type may belong to.
-var Categories = []string{
+// categories are the product categories a product type may belong to.
+var categories = []string{
 	"apparel", "footwear", "accessories", "home", "furniture", "lumber",
 	"hardware", "electrical", "camera", "tyres", "office", "batteries",
 	"electronics", "paint", "kitchen",
 }
 
+// Categories returns the product categories a product type may belong
+// to, in a slice of the caller's own.
+func Categories() []string { return slices.Clone(categories) }
+
 // CheckCategory returns nil for "" and for a category of Categories, and
 // otherwise an error that names the category, the nearest known one
 // when one is near, and the known ones.
 func CheckCategory(c string) error {
-	if c == "" || slices.Contains(Categories, c) {
+	if c == "" || slices.Contains(categories, c) {
 		return nil
 	}
 	near := ""
-	if s := Closest(c, Categories); s != "" {
+	if s := Closest(c, categories); s != "" {
 		near = fmt.Sprintf("; did you mean %q?", s)
 	}
-	return fmt.Errorf("unknown category %q%s (known: %s)", c, near, strings.Join(Categories, ", "))
+	return fmt.Errorf("unknown category %q%s (known: %s)", c, near, strings.Join(categories, ", "))
 }
 
 // Entry is one word or phrase of the lexicon, with everything its kind

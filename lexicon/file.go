@@ -103,8 +103,8 @@ func ParseFile(name string, k Kind, r io.Reader) ([]*Entry, error) {
 					}
 				}
 			case "category":
-				if !slices.Contains(Categories, val) {
-					return nil, errAt(fcol, "unknown category %q (known: %s)", val, strings.Join(Categories, ", "))
+				if !slices.Contains(categories, val) {
+					return nil, errAt(fcol, "unknown category %q (known: %s)", val, strings.Join(categories, ", "))
 				}
 				e.Category = val
 			case "parent":

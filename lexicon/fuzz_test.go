@@ -23,7 +23,7 @@ func FuzzParseFile(f *testing.F) {
 	f.Add("navy | hex=#000080 | also=dark blue", uint8(1))
 	f.Add("drill bit | category=hardware | slot=diameter:length:in:0.25..1", uint8(0))
 	f.Fuzz(func(t *testing.T, text string, kind uint8) {
-		k := Kinds[int(kind)%len(Kinds)]
+		k := kinds[int(kind)%len(kinds)]
 		entries, err := ParseFile("f.txt", k, strings.NewReader(text))
 		lines := strings.Count(text, "\n") + 1
 		if err != nil {

@@ -125,7 +125,7 @@ func Load(fsys fs.FS) (*Lexicon, error) {
 		keys:   make(map[string]string),
 	}
 	var errs []error
-	for _, k := range Kinds {
+	for _, k := range kinds {
 		f, err := fsys.Open(k.File())
 		if err != nil {
 			errs = append(errs, fmt.Errorf("lexicon: %w", err))

@@ -34,7 +34,7 @@ func TestDefaultCoverage(t *testing.T) {
 	for _, e := range l.Entries(ProductType) {
 		perCat[e.Category]++
 	}
-	for _, c := range Categories {
+	for _, c := range Categories() {
 		if perCat[c] < 10 {
 			t.Errorf("category %s has %d product types, want at least 10", c, perCat[c])
 		}
@@ -311,5 +311,20 @@ func TestColourPalette(t *testing.T) {
 	lab, _ := e.ColourLab()
 	if m := p.Nearest(lab, 1); len(m) != 1 || m[0].Name != "navy" || m[0].DeltaE != 0 {
 		t.Errorf("nearest to navy: %+v", m)
+	}
+}
+
+// The lists a caller gets are its own: changing one changes nothing the
+// lexicon checks against.
+func TestListsAreTheCallers(t *testing.T) {
+	c := Categories()
+	c[0] = "zzz"
+	if err := CheckCategory("apparel"); err != nil || Categories()[0] != "apparel" {
+		t.Errorf("after changing a returned list: CheckCategory(apparel) = %v, Categories()[0] = %q", err, Categories()[0])
+	}
+	k := Kinds()
+	k[0] = "zzz"
+	if Kinds()[0] != ProductType {
+		t.Errorf("Kinds()[0] = %q after changing a returned list", Kinds()[0])
 	}
 }

@@ -18,7 +18,7 @@ func Dimensions(lex *lexicon.Lexicon) []string {
 		lex = lexicon.Default()
 	}
 	seen := map[string]bool{"number": true, "dimension": true, "thread_count": true}
-	for _, q := range units.Quantities {
+	for _, q := range units.Quantities() {
 		seen[string(q)] = true
 	}
 	for _, d := range labels {

@@ -27,7 +27,7 @@ func checkInvariants(t *testing.T, q string, r *Result) {
 	}
 	prevEnd := 0
 	known := make(map[Kind]bool)
-	for _, k := range AllKinds {
+	for _, k := range AllKinds() {
 		known[k] = true
 	}
 	for i, c := range r.Constraints {

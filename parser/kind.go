@@ -1,5 +1,7 @@
 package parser
 
+import "slices"
+
 // Kind says what a constraint constrains.
 type Kind string
 
@@ -22,12 +24,16 @@ const (
 	KindFiller        Kind = "filler"
 )
 
-// AllKinds lists every kind, in the order the JSON contract documents them.
-var AllKinds = []Kind{
+// allKinds are the kinds in the order the JSON contract documents them.
+var allKinds = []Kind{
 	KindProductType, KindColour, KindPattern, KindSilhouette, KindMaterial,
 	KindSize, KindAudience, KindMeasure, KindSpec, KindPrice,
 	KindCompatibility, KindBrand, KindPartNumber, KindKeyword, KindFiller,
 }
+
+// AllKinds returns every kind, in the order the JSON contract documents
+// them, in a slice of the caller's own.
+func AllKinds() []Kind { return slices.Clone(allKinds) }
 
 // DefaultStrictness returns the strictness a kind gets when no policy says
 // otherwise. A quoted phrase is always Hard, whatever its kind.

@@ -45,7 +45,7 @@ var kindOf = map[lexicon.Kind]Kind{
 // lexiconEvidence is the evidence of a plain lexicon match, by kind.
 var lexiconEvidence = func() map[lexicon.Kind]string {
 	m := make(map[lexicon.Kind]string)
-	for _, k := range lexicon.Kinds {
+	for _, k := range lexicon.Kinds() {
 		m[k] = string(k) + " lexicon"
 	}
 	return m

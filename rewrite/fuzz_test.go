@@ -43,7 +43,7 @@ func FuzzParsePolicy(f *testing.F) {
 			}
 			return
 		}
-		for _, c := range append([]string{""}, lexicon.Categories...) {
+		for _, c := range append([]string{""}, lexicon.Categories()...) {
 			e := p.For(c, "", lex)
 			if e.MinResults < 1 || e.ColourTolerance < 0 || e.MeasureTolerance < 0 || e.MeasureTolerance > 1 || e.PriceStretch < 0 {
 				t.Fatalf("%q: category %q gives %+v", text, c, e)

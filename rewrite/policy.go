@@ -251,8 +251,8 @@ func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 			for _, n := range sortedKeys(levels) {
 				key := []string{k, n}
 				switch {
-				case k == "category" && !slices.Contains(lexicon.Categories, n):
-					at(key, "unknown category %q%s", n, didYouMean(n, lexicon.Categories))
+				case k == "category" && !slices.Contains(lexicon.Categories(), n):
+					at(key, "unknown category %q%s", n, didYouMean(n, lexicon.Categories()))
 				case k == "product_type" && !isProductType(lex, n):
 					at(key, "unknown product type %q%s", n, didYouMean(n, types))
 				default:
@@ -299,7 +299,7 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 	if len(s.Strictness) > 0 {
 		out.Strictness = make(map[parser.Kind]parser.Strictness, len(s.Strictness))
 		var kinds []string
-		for _, k := range parser.AllKinds {
+		for _, k := range parser.AllKinds() {
 			kinds = append(kinds, string(k))
 		}
 		for _, k := range sortedKeys(s.Strictness) {
@@ -427,7 +427,7 @@ func (p *Policy) For(category, productType string, lex *lexicon.Lexicon) Effecti
 	s = merge(s, p.tuning)
 	e := Effective{Category: category, ProductType: productType, MinResults: 1, Strictness: make(map[parser.Kind]parser.Strictness),
 		Dimensions: s.Dimensions, StandardSizes: s.StandardSizes}
-	for _, k := range parser.AllKinds {
+	for _, k := range parser.AllKinds() {
 		e.Strictness[k] = parser.DefaultStrictness(k)
 	}
 	for k, v := range s.Strictness {

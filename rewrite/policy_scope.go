@@ -11,7 +11,7 @@ import (
 type ScopeProblem int
 
 const (
-	// ScopeUnknownCategory: the category is not one of lexicon.Categories.
+	// ScopeUnknownCategory: the category is not one of lexicon.Categories().
 	ScopeUnknownCategory ScopeProblem = iota + 1
 	// ScopeUnknownProductType: the product type is not in the lexicon.
 	ScopeUnknownProductType

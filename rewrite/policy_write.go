@@ -75,7 +75,7 @@ func (pw *policyWriter) level(name string, s Settings) {
 	}
 	if len(s.Strictness) > 0 {
 		pw.table(name + ".strictness")
-		for _, k := range parser.AllKinds {
+		for _, k := range parser.AllKinds() {
 			if v, ok := s.Strictness[k]; ok {
 				pw.printf("%s = %q\n", k, v)
 			}
@@ -120,7 +120,7 @@ func (pw *policyWriter) signals(s SignalSettings) {
 	}
 	if len(s.Weights) > 0 {
 		pw.table("signals.weights")
-		for _, k := range SignalWeightNames {
+		for _, k := range signalWeightNames {
 			if v, ok := s.Weights[k]; ok {
 				pw.printf("%s = %s\n", k, number(v))
 			}

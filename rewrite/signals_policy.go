@@ -50,9 +50,9 @@ func (s Signals) MarshalJSON() ([]byte, error) {
 	}{plain(s), s.JoinWindow.String()})
 }
 
-// SignalWeightNames are the interaction types a weight may be set for,
+// signalWeightNames are the interaction types a weight may be set for,
 // cheapest first.
-var SignalWeightNames = []string{"impression", "click", "add_to_cart", "purchase"}
+var signalWeightNames = []string{"impression", "click", "add_to_cart", "purchase"}
 
 // Signals returns the [signals] settings in force.
 func (p *Policy) Signals() Signals {
@@ -103,8 +103,8 @@ func (pol *Policy) signalSettings(s signalsTOML, at func([]string, string, ...an
 	for _, k := range sortedKeys(s.Weights) {
 		v := s.Weights[k]
 		switch {
-		case !slices.Contains(SignalWeightNames, k):
-			at(key("weights", k), "unknown interaction %q%s", k, didYouMean(k, SignalWeightNames))
+		case !slices.Contains(signalWeightNames, k):
+			at(key("weights", k), "unknown interaction %q%s", k, didYouMean(k, signalWeightNames))
 		case math.IsNaN(v) || v < 0 || v > 1000:
 			at(key("weights", k), "weight of %s %g: want 0 to 1000", k, v)
 		default:
@@ -138,8 +138,8 @@ func (pol *Policy) signalSettings(s signalsTOML, at func([]string, string, ...an
 // impression to purchase: a purchase should count for more than a click.
 func (p *Policy) checkWeightOrder() {
 	w := p.Signals().Weights
-	for i := 1; i < len(SignalWeightNames); i++ {
-		a, b := SignalWeightNames[i-1], SignalWeightNames[i]
+	for i := 1; i < len(signalWeightNames); i++ {
+		a, b := signalWeightNames[i-1], signalWeightNames[i]
 		if w[b] < w[a] {
 			p.Warnings = append(p.Warnings, fmt.Sprintf("signals.weights: %s (%g) is worth less than %s (%g); tune then prizes the cheaper signal", b, w[b], a, w[a]))
 		}

@@ -56,7 +56,7 @@ func colourCmd(args []string, stdout, stderr io.Writer) int {
 	asJSON := fs.Bool("json", false, "write JSON instead of text")
 	catalogFile := fs.String("catalog", "", "catalog file (JSON Lines) whose colours to search")
 	within := fs.Float64("within", 0, "ΔE00 tolerance for --catalog (default: the policy's for --category)")
-	category := fs.String("category", "", "category whose policy tolerance --catalog uses: "+strings.Join(lexicon.Categories, ", "))
+	category := fs.String("category", "", "category whose policy tolerance --catalog uses: "+strings.Join(lexicon.Categories(), ", "))
 	nearest := fs.Int("nearest", 5, "how many nearest named colours to show")
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones")
 	policyFile := fs.String("policy", "", "policy file laid over the built-in policy (for the category's tolerance)")

@@ -107,7 +107,7 @@ flags:
 func evalStyles(s string, stderr io.Writer) ([]eval.Style, bool) {
 	switch s {
 	case "both":
-		return eval.Styles, true
+		return eval.Styles(), true
 	case string(eval.StyleShort), string(eval.StyleLong):
 		return []eval.Style{eval.Style(s)}, true
 	}

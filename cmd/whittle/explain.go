@@ -24,7 +24,7 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("explain", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	asJSON := fs.Bool("json", false, "write the JSON contract (one object a line) instead of the table")
-	category := fs.String("category", "", "read every query as being in this category: "+strings.Join(lexicon.Categories, ", "))
+	category := fs.String("category", "", "read every query as being in this category: "+strings.Join(lexicon.Categories(), ", "))
 	cur := fs.String("currency", "USD", `ISO 4217 code a bare "$" or "dollars" means: `+strings.Join(parser.DollarCurrencies(), ", ")+" (either case)")
 	imperial := fs.Bool("imperial", false, "read gallons, quarts, pints, cups and fluid ounces as imperial")
 	lexDir := fs.String("lexicon", "", "directory of .wlx files replacing the built-in ones (missing files fall back)")

@@ -34,7 +34,7 @@ func showFlags(stderr io.Writer) (*flag.FlagSet, showOptions) {
 	fs := flag.NewFlagSet("policy show", flag.ContinueOnError)
 	fs.SetOutput(stderr)
 	o := showOptions{
-		category:    fs.String("category", "", "category: "+strings.Join(lexicon.Categories, ", ")+" (default: the product type's)"),
+		category:    fs.String("category", "", "category: "+strings.Join(lexicon.Categories(), ", ")+" (default: the product type's)"),
 		productType: fs.String("product-type", "", "product type, by its lexicon name (\"rain jacket\"); it brings its category"),
 		file:        fs.String("policy", "", "policy file laid over the built-in policy"),
 		asJSON:      fs.Bool("json", false, "write JSON"),
@@ -117,7 +117,7 @@ func writePolicy(w io.Writer, e rewrite.Effective) {
 	fmt.Fprintf(tw, "measure_tolerance\t%g (±%g%%)\n", e.MeasureTolerance, e.MeasureTolerance*100)
 	fmt.Fprintf(tw, "price_stretch\t%g (+%g%%)\n", e.PriceStretch, e.PriceStretch*100)
 	fmt.Fprintf(tw, "\nstrictness\t\n")
-	for _, k := range parser.AllKinds {
+	for _, k := range parser.AllKinds() {
 		fmt.Fprintf(tw, "  %s\t%s\n", k, e.Strictness[k])
 	}
 	if len(e.Dimensions) > 0 {

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math/big"
+	"slices"
 	"strings"
 	"sync"
 )
@@ -24,8 +25,12 @@ const (
 	Time    Quantity = "time"
 )
 
-// Quantities lists every quantity in a fixed order.
-var Quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time}
+// quantities are the quantities in a fixed order.
+var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time}
+
+// Quantities returns every quantity in a fixed order, in a slice of the
+// caller's own.
+func Quantities() []Quantity { return slices.Clone(quantities) }
 
 // Unit is one unit of measure.
 type Unit struct {

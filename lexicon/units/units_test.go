@@ -208,7 +208,7 @@ func TestUnitSetIsCheckedAndComplete(t *testing.T) {
 func TestUnitsOrderedAndFresh(t *testing.T) {
 	us := Units()
 	qi := map[Quantity]int{}
-	for i, q := range Quantities {
+	for i, q := range Quantities() {
 		qi[q] = i
 	}
 	for i := 1; i < len(us); i++ {

@@ -111,7 +111,7 @@ func canonical(lex *lexicon.Lexicon, k lexicon.Kind, v string) (string, bool) {
 // knownValues returns, for a field of Unknown, the values whittle knows
 // there, to suggest the nearest from.
 func knownValues(lex *lexicon.Lexicon) func(field string) []string {
-	known := map[string][]string{fCategory: lexicon.Categories}
+	known := map[string][]string{fCategory: lexicon.Categories()}
 	for _, n := range namedFields {
 		known[n.field] = lex.Names(n.kind)
 	}

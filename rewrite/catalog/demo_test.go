@@ -76,7 +76,7 @@ func TestDemoProductTypes(t *testing.T) {
 		}
 		cats[p.Category]++
 	}
-	for _, c := range lexicon.Categories {
+	for _, c := range lexicon.Categories() {
 		if cats[c] == 0 {
 			t.Errorf("no product in category %q among 5000", c)
 		}

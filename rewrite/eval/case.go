@@ -31,9 +31,13 @@ const (
 	FailMeasure Failure = "measure"
 )
 
-// Failures lists every failure, in the order Generate takes turns with
+// failures are the failures in the order Generate takes turns with
 // them.
-var Failures = []Failure{FailColour, FailPattern, FailTypo, FailKeyword, FailMeasure}
+var failures = []Failure{FailColour, FailPattern, FailTypo, FailKeyword, FailMeasure}
+
+// Failures returns every failure, in the order Generate takes turns with
+// them, in a slice of the caller's own.
+func Failures() []Failure { return slices.Clone(failures) }
 
 // Style names how the queries of a set are written.
 type Style string
@@ -48,8 +52,9 @@ const (
 	StyleLong Style = "long"
 )
 
-// Styles lists every style, in the order reports give them.
-var Styles = []Style{StyleShort, StyleLong}
+// Styles returns every style, in the order reports give them, in a
+// slice of the caller's own.
+func Styles() []Style { return []Style{StyleShort, StyleLong} }
 
 // Attr is one attribute a query asks for, as the generator wrote it.
 type Attr struct {

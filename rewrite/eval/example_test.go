@@ -144,7 +144,7 @@ func ExampleGenerate_long() {
 
 // RunStyles evaluates a set of each style on one index.
 func ExampleRunStyles() {
-	reps, err := eval.RunStyles(context.Background(), eval.RunOptions{Products: 1000, Generate: eval.Options{Queries: 100, Seed: 1}}, eval.Styles)
+	reps, err := eval.RunStyles(context.Background(), eval.RunOptions{Products: 1000, Generate: eval.Options{Queries: 100, Seed: 1}}, eval.Styles())
 	if err != nil {
 		fmt.Println(err)
 		return

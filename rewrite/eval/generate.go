@@ -107,7 +107,7 @@ func Generate(products []catalog.Product, opts Options) []Case {
 	r := rand.New(rand.NewPCG(opts.Seed, stream))
 	var out []Case
 	for i := 0; len(out) < n && i < 2*n; i++ {
-		fail := Failures[i%len(Failures)]
+		fail := failures[i%len(failures)]
 		for range tries {
 			p := &products[r.IntN(len(products))]
 			if c, ok := g.write(r, p, fail); ok {
@@ -168,7 +168,7 @@ func newGenerator(ps []catalog.Product, opts Options) *generator {
 	for _, pats := range g.catPatterns {
 		slices.Sort(pats)
 	}
-	for _, k := range lexicon.Kinds {
+	for _, k := range lexicon.Kinds() {
 		for _, e := range g.lex.Entries(k) {
 			for _, phrase := range append([]string{e.Name}, e.Aliases...) {
 				for _, w := range lexicon.Words(phrase) {

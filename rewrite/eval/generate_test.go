@@ -99,7 +99,7 @@ func TestGenerateTiny(t *testing.T) {
 			}},
 	}
 	for i, c := range cases {
-		if want := Failures[i%len(Failures)]; c.Failure != want {
+		if want := failures[i%len(failures)]; c.Failure != want {
 			t.Errorf("case %d is %s, want %s: the failures take turns", i, c.Failure, want)
 		}
 		chk := checks[c.Failure]
@@ -146,7 +146,7 @@ func TestGenerateSeeded(t *testing.T) {
 // In the long style a query also has 4 to 7 constraints.
 func TestGenerateDemoTruth(t *testing.T) {
 	ps := catalog.Demo(2000, 1)
-	for _, style := range Styles {
+	for _, style := range Styles() {
 		t.Run(string(style), func(t *testing.T) { demoTruth(t, ps, style) })
 	}
 }
@@ -185,7 +185,7 @@ func demoTruth(t *testing.T, ps []catalog.Product, style Style) {
 			}
 		}
 	}
-	for _, f := range Failures {
+	for _, f := range Failures() {
 		if kinds[f] != 50 {
 			t.Errorf("%d cases of %s, want 50: the failures take turns", kinds[f], f)
 		}

@@ -89,7 +89,7 @@ func TestGenerateLongTiny(t *testing.T) {
 	// The failures are those of the short style, and so are their checks
 	// (TestGenerateTiny): the products and their attributes are the same.
 	for i, c := range cases {
-		if want := Failures[i%len(Failures)]; c.Failure != want {
+		if want := failures[i%len(failures)]; c.Failure != want {
 			t.Errorf("case %d is %s, want %s: the failures take turns", i, c.Failure, want)
 		}
 		if c.Product == "LN-2" {

@@ -233,8 +233,8 @@ const (
 
 // failureOrder sorts failures as Failures lists them, others after.
 func failureOrder(f Failure) int {
-	if i := slices.Index(Failures, f); i >= 0 {
+	if i := slices.Index(failures, f); i >= 0 {
 		return i
 	}
-	return len(Failures)
+	return len(failures)
 }

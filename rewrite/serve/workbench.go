@@ -44,7 +44,7 @@ type workbenchPage struct {
 // hits beside the blind match's. It is plain HTML, and works without
 // JavaScript: the form is sent as a GET and the answer drawn here.
 func (s *Server) handleWorkbench(w http.ResponseWriter, r *http.Request) {
-	p := workbenchPage{Query: r.FormValue("q"), Category: r.FormValue("category"), Categories: lexicon.Categories,
+	p := workbenchPage{Query: r.FormValue("q"), Category: r.FormValue("category"), Categories: lexicon.Categories(),
 		Tuned: r.FormValue("tune") != ""}
 	eff := s.policy.For(p.Category, "", s.lex)
 	p.Tolerance, p.MinResults = eff.ColourTolerance, eff.MinResults

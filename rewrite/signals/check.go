@@ -13,7 +13,7 @@ import (
 const types = "search, impression, click, add_to_cart or purchase"
 
 func isType(t Type) bool {
-	return t == Search || slices.Contains(Interactions, t)
+	return t == Search || slices.Contains(interactions, t)
 }
 
 // check says what is wrong with an event, field by field; both the
@@ -72,7 +72,7 @@ func checkRelaxed(field string, rs []Relaxed) *fieldError {
 		default:
 			return fieldErr(field, "relaxation %d: op %q is not widen, replace or drop", i+1, r.Op)
 		}
-		if !slices.Contains(parser.AllKinds, r.Kind) {
+		if !slices.Contains(parser.AllKinds(), r.Kind) {
 			return fieldErr(field, "relaxation %d: kind %q is not a kind whittle reads (%s)", i+1, r.Kind, kinds())
 		}
 	}
@@ -81,7 +81,7 @@ func checkRelaxed(field string, rs []Relaxed) *fieldError {
 
 func kinds() string {
 	var b strings.Builder
-	for i, k := range parser.AllKinds {
+	for i, k := range parser.AllKinds() {
 		if i > 0 {
 			b.WriteString(", ")
 		}

@@ -23,7 +23,7 @@
 //
 // A search has a non-blank query and may have a category, relaxations
 // (a list of objects with op, one of widen, replace or drop, kind, one
-// of parser.AllKinds, and text), shown (the product ids shown, best
+// of parser.AllKinds(), and text), shown (the product ids shown, best
 // first, none twice), explored (rank, the place from 1 in shown of the
 // one relaxed alternative shown, and the relaxations it came from) and
 // shuffled (true when the order shown was randomised). An interaction

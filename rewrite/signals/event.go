@@ -1,6 +1,7 @@
 package signals
 
 import (
+	"slices"
 	"time"
 
 	"github.com/whittle-search/whittle/parser"
@@ -19,8 +20,12 @@ const (
 	Purchase   Type = "purchase"
 )
 
-// Interactions lists the interaction types, cheapest first.
-var Interactions = []Type{Impression, Click, AddToCart, Purchase}
+// interactions are the interaction types, cheapest first.
+var interactions = []Type{Impression, Click, AddToCart, Purchase}
+
+// Interactions returns the interaction types, cheapest first, in a slice
+// of the caller's own.
+func Interactions() []Type { return slices.Clone(interactions) }
 
 // Relaxed is one relaxation whittle applied to a search, named as in the
 // JSON contract of `whittle search` (its chosen.relaxations).

@@ -111,7 +111,7 @@ func (simulated) visit(r *rand.Rand, id string, t time.Time, evs *[]Event, engag
 		for range r.IntN(3) {
 			t = t.Add(time.Duration(1+r.IntN(20)) * time.Second)
 			rank := 1 + r.IntN(len(shown))
-			typ := Interactions[r.IntN(len(Interactions))]
+			typ := interactions[r.IntN(len(interactions))]
 			*engaged = append(*engaged, simEngagement{mine[len(mine)-1], Engagement{Type: typ, Time: t, Rank: rank}})
 			*evs = append(*evs, Event{Type: typ, Session: id, Time: t, Product: shown[rank-1], Line: len(*evs)})
 		}

@@ -126,7 +126,7 @@ func TestReadBadLines(t *testing.T) {
 		{"unknown op", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","relaxations":[{"op":"widen","kind":"colour"},{"op":"loosen","kind":"colour"}]}`,
 			"relaxations", `relaxation 2: op "loosen" is not widen, replace or drop`, "whittle's three operators only"},
 		{"unknown kind", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","relaxations":[{"op":"drop","kind":"hue"}]}`,
-			"relaxations", `relaxation 1: kind "hue" is not a kind whittle reads`, "the kinds of parser.AllKinds only"},
+			"relaxations", `relaxation 1: kind "hue" is not a kind whittle reads`, "the kinds of parser.AllKinds() only"},
 		{"unknown relaxation field", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","relaxations":[{"op":"drop","kind":"colour","cost":2}]}`,
 			"relaxations", `relaxation 1: unknown field "cost"; a relaxation has op, kind and text`, "strict in nested objects too"},
 		{"relaxation op not a string", `{"type":"search","session":"s1","time":"2025-03-14T09:00:00Z","query":"q","relaxations":[{"op":1,"kind":"colour"}]}`,

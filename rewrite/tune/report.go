@@ -168,7 +168,7 @@ func (t *Tuner) category(name string, inv *[maxRank]float64) (Category, []Change
 			kinds[k.kind] = true
 		}
 	}
-	for _, k := range parser.AllKinds {
+	for _, k := range parser.AllKinds() {
 		if !kinds[k] || k == parser.KindFiller {
 			continue
 		}

@@ -127,7 +127,7 @@ func New(opts Options) *Tuner {
 	t := &Tuner{opts: opts, lex: opts.Lexicon, pol: opts.Policy, sig: opts.Policy.Signals(),
 		weights: map[signals.Type]float64{}, groups: map[groupKey]*tally{}, aliases: map[alias]int{},
 		parsed: map[string]*reading{}, facts: map[string]*rewrite.Facts{}}
-	for _, ty := range signals.Interactions {
+	for _, ty := range signals.Interactions() {
 		t.weights[ty] = t.sig.Weights[string(ty)]
 	}
 	return t
