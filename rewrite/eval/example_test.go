@@ -74,12 +74,20 @@ func ExampleNewReport() {
 	// attribute precision vs baseline, all matches true
 }
 
+// WriteText prints a report as tables. This example has no Output: the
+// layout is pinned by the golden file testdata/eval/report.txt, read by
+// a person, which TestWriteTextGolden checks.
 func ExampleReport_WriteText() {
 	cases := []eval.Case{{Query: "striped skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: eval.FailPattern}}
 	rep := eval.NewReport(cases, []eval.Result{{Hits: []string{"SK-2"}}}, []eval.Result{{Hits: []string{"SK-2"}}}, examples, 10)
 	rep.WriteText(os.Stdout)
 }
 
+// Evaluate runs labelled cases through whittle and a baseline on one
+// index. This example, and those of Run and RunStyles, have no Output:
+// their figures come from whole runs, too many to work out by hand; the
+// tests check Evaluate on cases whose every figure is worked out by hand
+// (run_test.go), and README gives the figures of full runs.
 func ExampleEvaluate() {
 	ctx := context.Background()
 	dir, _ := os.MkdirTemp("", "whittle-example-")
@@ -103,6 +111,8 @@ func ExampleEvaluate() {
 	rep.WriteText(os.Stdout)
 }
 
+// Run builds the demo catalog's index, writes a labelled set and
+// evaluates it; Met says whether every goal was met.
 func ExampleRun() {
 	rep, err := eval.Run(context.Background(), eval.RunOptions{Products: 1000, Generate: eval.Options{Queries: 100, Seed: 1}})
 	if err != nil {
