@@ -199,13 +199,21 @@ func apart(fs *flag.FlagSet, a, b string) bool {
 }
 
 // onlyWith reports, and returns false, when flag name is given without
-// the flag with, the one it only applies with.
+// the flag with, the one it only applies with, or with it set to false.
 func onlyWith(fs *flag.FlagSet, name, with string) bool {
-	if given(fs, name) && !given(fs, with) {
+	if given(fs, name) && (!given(fs, with) || isFalse(fs, with)) {
 		usageError(fs, "%s only applies with %s", flagName(name), flagName(with))
 		return false
 	}
 	return true
+}
+
+// isFalse reports whether name is a boolean flag set to false, as
+// --baseline=false is: given, but asking for nothing.
+func isFalse(fs *flag.FlagSet, name string) bool {
+	f := fs.Lookup(name)
+	b, ok := f.Value.(interface{ IsBoolFlag() bool })
+	return ok && b.IsBoolFlag() && f.Value.String() == "false"
 }
 
 // writeFile creates file and writes it with write, buffered; a failed

@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"strings"
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
@@ -25,7 +26,7 @@ func evalCmd(args []string, stdout, stderr io.Writer) int {
 	cases := fs.Bool("cases", false, "write the labelled set of each style, one JSON object a line, and evaluate nothing")
 	style := fs.String("style", "both", "how the queries are written: short (about 3 constraints), long (4 to 7) or both, one set each")
 	var fallback bleveengine.Fallback
-	fs.TextVar(&fallback, "fallback", bleveengine.MostWords, "the blind partial match whittle is measured against: most-words or drop-trailing")
+	fs.TextVar(&fallback, "fallback", bleveengine.MostWords, "the blind partial match `NAME` whittle is measured against: "+fallbackChoices())
 	fs.Usage = func() {
 		fmt.Fprint(stderr, `usage: whittle eval [--products N] [--queries N] [--seed S] [--style short|long|both] [--hits K] [--policy FILE]
                    [--fallback most-words|drop-trailing] [--dir DIR] [--json | --cases]
@@ -35,12 +36,12 @@ each miss their exact match in one known way (a colour the shop does not
 name, a pattern the type lacks, a misspelt type, an extra word, a measure
 slightly off), indexes the catalog in a temporary directory, and runs
 every query through whittle and through a blind partial match, the
-baseline. It prints, for both, the rescue rate, the share of hits that keep every hard
-constraint, the share also of the type meant (in the top K, and in all
-the products the search matched, which its count, its facets and a sort
-by price see), where the product meant ranks and how much of each query
-was kept; the goals beside them; the
-figures by kind of failure; and examples of where whittle does worse.
+baseline. It prints, for both, the rescue rate, the share of hits that
+keep every hard constraint, the share also of the type meant (in the top
+K, and in all the products the search matched, which its count, its
+facets and a sort by price see), where the product meant ranks and how
+much of each query was kept; the goals beside them; the figures by kind
+of failure; and examples of where whittle does worse.
 
 The queries come in two styles: short (the product type and a few of its
 attributes, about three constraints) and long (four to seven constraints
@@ -51,10 +52,8 @@ the goals of both side by side; --json then writes one object a style,
 one a line, and --cases both sets.
 
 The baseline is the way a plain engine falls back when all of a query's
-words together match nothing, knowing nothing of what they mean.
---fallback most-words, the default, keeps the most of the words any
-product has, whichever they are; --fallback drop-trailing drops words
-from the end of the query, as typed, until the rest match.
+words together match nothing, knowing nothing of what they mean:
+--fallback most-words, the default, or --fallback drop-trailing (below).
 
 exit status: 0 evaluated (whether or not the goals are met), 1 the run
 failed, 2 bad usage.
@@ -101,6 +100,15 @@ flags:
 		return 1
 	}
 	return 0
+}
+
+// fallbackChoices names and describes every fallback, for a flag's help.
+func fallbackChoices() string {
+	var out []string
+	for _, f := range bleveengine.Fallbacks() {
+		out = append(out, fmt.Sprintf("%s (%s)", f, f.Describe()))
+	}
+	return strings.Join(out, " or ")
 }
 
 // evalStyles reads --style.

@@ -63,11 +63,11 @@ func TestEvalText(t *testing.T) {
 	if !strings.Contains(out, " met") {
 		t.Errorf("no goal says met or not met:\n%s", out)
 	}
-	if !strings.Contains(out, "baseline: most-words, a blind partial match keeping the most") {
+	if !strings.Contains(out, "baseline: most-words, a blind partial match that keeps the most") {
 		t.Errorf("the report does not name its baseline:\n%s", out)
 	}
 	code, out, stderr = runCLI("", "eval", "--products", "300", "--queries", "20", "--style", "short", "--fallback", "drop-trailing", "--dir", t.TempDir())
-	if code != 0 || !strings.Contains(out, "baseline: drop-trailing, a blind partial match dropping words from the end") {
+	if code != 0 || !strings.Contains(out, "baseline: drop-trailing, a blind partial match that drops words from the end") {
 		t.Errorf("--fallback drop-trailing: exit %d, %s\n%s", code, stderr, out)
 	}
 }

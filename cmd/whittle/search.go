@@ -31,7 +31,7 @@ func searchCmd(args []string, stdout, stderr io.Writer) int {
 	budget := fs.Int("budget", rewrite.DefaultBudget, "most engine counts one rescue may spend")
 	baseline := fs.Bool("baseline", false, "also run the blind partial match a plain engine would, and show both")
 	var fallback bleveengine.Fallback
-	fs.TextVar(&fallback, "fallback", bleveengine.MostWords, "the blind partial match --baseline runs: most-words (keep the most of the words any product has) or drop-trailing (drop words from the end until the rest match)")
+	fs.TextVar(&fallback, "fallback", bleveengine.MostWords, "the blind partial match `NAME` --baseline runs: "+fallbackChoices())
 	explore := fs.Float64("explore", 0, "chance `P`, from 0 to 1, that one hit shown is the best new product of the plan one step looser than the rescue's, marked as explored")
 	seed := fs.Uint64("seed", 0, "seed `N` of the explore draw (default: from the clock, so each run draws anew)")
 	signalsFile := fs.String("signals", "", "append the search event, one JSON line, to `FILE`")

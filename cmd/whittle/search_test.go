@@ -138,6 +138,7 @@ func TestSearchBaseline(t *testing.T) {
 		stderr, reason string
 	}{
 		{[]string{"--fallback", "drop-trailing", "rain jacket"}, "--fallback only applies with --baseline", "a fallback runs only beside the rescue"},
+		{[]string{"--baseline=false", "--fallback", "drop-trailing", "rain jacket"}, "--fallback only applies with --baseline", "--baseline=false asks for no baseline, as the service's \"baseline\": false does"},
 		{[]string{"--baseline", "--fallback", "last", "rain jacket"}, `unknown fallback "last": want most-words or drop-trailing`, "the two names are given"},
 	} {
 		code, _, stderr := runCLI("", append([]string{"search", "--index", dir}, tc.args...)...)

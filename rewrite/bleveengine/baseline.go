@@ -35,14 +35,42 @@ var fallbackNames = [...]string{MostWords: "most-words", DropTrailing: "drop-tra
 
 // String returns the fallback's name: "most-words" or "drop-trailing".
 func (f Fallback) String() string {
-	if f >= 0 && int(f) < len(fallbackNames) {
+	if f.Valid() {
 		return fallbackNames[f]
 	}
 	return fmt.Sprintf("Fallback(%d)", int(f))
 }
 
 // Fallbacks returns every fallback, in order.
-func Fallbacks() []Fallback { return []Fallback{MostWords, DropTrailing} }
+func Fallbacks() []Fallback {
+	out := make([]Fallback, len(fallbackNames))
+	for i := range out {
+		out[i] = Fallback(i)
+	}
+	return out
+}
+
+// Valid reports whether f is one of Fallbacks.
+func (f Fallback) Valid() bool { return f >= 0 && int(f) < len(fallbackNames) }
+
+// check refuses a value that is none of Fallbacks.
+func (f Fallback) check() error {
+	if !f.Valid() {
+		return fmt.Errorf("bleveengine: no fallback %d", int(f))
+	}
+	return nil
+}
+
+// Describe says in a few words which words the fallback gives up.
+func (f Fallback) Describe() string {
+	switch f {
+	case MostWords:
+		return "keeps the most of the query's words any product has, whichever they are"
+	case DropTrailing:
+		return "drops words from the end of the query, as typed, until the rest match"
+	}
+	return f.String()
+}
 
 // ParseFallback returns the fallback named s, one of the names String
 // gives.
@@ -57,8 +85,8 @@ func ParseFallback(s string) (Fallback, error) {
 
 // MarshalText writes the fallback's name.
 func (f Fallback) MarshalText() ([]byte, error) {
-	if f < 0 || int(f) >= len(fallbackNames) {
-		return nil, fmt.Errorf("bleveengine: no fallback %d", int(f))
+	if err := f.check(); err != nil {
+		return nil, err
 	}
 	return []byte(f.String()), nil
 }
@@ -77,8 +105,9 @@ func (f *Fallback) UnmarshalText(b []byte) error {
 type Baseline struct {
 	// Fallback is the blind partial match that ran.
 	Fallback Fallback `json:"fallback"`
-	// Kept is how many of the query's words had to match; Words is how
-	// many it has.
+	// Kept is how many of the query's words had to match (for
+	// DropTrailing, the first Kept of them); Words is how many it has,
+	// leaving out those no product's text can hold (see Baseline).
 	Kept  int     `json:"kept"`
 	Words int     `json:"words"`
 	Count int     `json:"count"`
@@ -89,12 +118,15 @@ type Baseline struct {
 // back when a query matches nothing as typed: a match of the query's
 // words in the product's text, requiring all of them, then one fewer,
 // and so on, until something matches. It knows nothing of what the
-// words mean. Which words it gives up first is what f says.
+// words mean. Which words it gives up first is what f says. A word the
+// text's analyzer takes nothing from, an English stop word such as
+// "for", "the" or "under", is left out, as a plain engine leaves it out
+// of its match: no product's text holds it.
 func (e *Engine) Baseline(ctx context.Context, f Fallback, q string, k int) (*Baseline, error) {
-	if _, err := f.MarshalText(); err != nil {
+	if err := f.check(); err != nil {
 		return nil, err
 	}
-	words := baselineWords(q)
+	words := e.baselineWords(q)
 	b := &Baseline{Fallback: f, Words: len(words)}
 	for n := len(words); n >= 1; n-- {
 		// Ranked as Show ranks: rounded scores, ties by id; otherwise
@@ -134,13 +166,14 @@ func baselineQuery(f Fallback, words []string, n int) query.Query {
 // BaselineMatches returns the ids of every product the blind partial
 // match f finds for q when kept of its words must match, in id order:
 // the whole result set of which Baseline, with the Kept it settled on,
-// returns the best k. Kept below 1 is taken as 1, and above the number
-// of words as all of them.
+// returns the best k: for DropTrailing, the products that have every one
+// of the first kept words. Kept below 1 is taken as 1, and above the
+// number of words as all of them.
 func (e *Engine) BaselineMatches(ctx context.Context, f Fallback, q string, kept int) ([]string, error) {
-	if _, err := f.MarshalText(); err != nil {
+	if err := f.check(); err != nil {
 		return nil, err
 	}
-	words := baselineWords(q)
+	words := e.baselineWords(q)
 	if len(words) == 0 {
 		return nil, nil
 	}
@@ -185,8 +218,20 @@ func (e *Engine) BaselineMatches(ctx context.Context, f Fallback, q string, kept
 	return s.list.all(in), nil
 }
 
-// baselineWords are the words the blind partial match looks for.
-func baselineWords(q string) []string { return strings.Fields(strings.ToLower(q)) }
+// baselineWords are the words the blind partial match looks for: the
+// query's, lower-cased, but for those the analyzer of the products'
+// words takes nothing from.
+func (e *Engine) baselineWords(q string) []string {
+	m := e.idx.Mapping()
+	a := m.AnalyzerNamed(m.AnalyzerNameForPath(fWords))
+	var out []string
+	for _, w := range strings.Fields(strings.ToLower(q)) {
+		if a == nil || len(a.Analyze([]byte(w))) > 0 {
+			out = append(out, w)
+		}
+	}
+	return out
+}
 
 // baselineWord is the match for one word anywhere in a product's text.
 func baselineWord(w string) query.Query {

@@ -202,6 +202,10 @@ func TestBaseline(t *testing.T) {
 			reason: "merino and crew: SW-1 alone is merino"},
 		{name: "drop trailing: found as typed", q: "rain jacket", fallback: DropTrailing, kept: 2, words: 2, count: 3, hits: []string{"RJ-1", "RJ-2", "RJ-3"},
 			reason: "every word matches: nothing is dropped"},
+		{name: "drop trailing: a stop word is no word", q: "rain jacket for women", fallback: DropTrailing, kept: 3, words: 3, count: 2, hits: []string{"RJ-1", "RJ-2"},
+			reason: "for is an English stop word, which the text analyzer drops: a plain engine ignores it rather than dropping women after it"},
+		{name: "most words: a stop word is no word", q: "the rain jacket", kept: 2, words: 2, count: 3, hits: []string{"RJ-1", "RJ-2", "RJ-3"},
+			reason: "the is left out, so rain jacket is the whole query, found as typed"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			b, err := e.Baseline(context.Background(), tc.fallback, tc.q, 10)

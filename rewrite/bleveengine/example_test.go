@@ -371,14 +371,15 @@ func ExampleEngine_Baseline() {
 }
 
 // Fallbacks lists the blind partial matches, each by the name String
-// gives it, which ParseFallback, a flag and JSON read back.
+// gives it, which ParseFallback, a flag and JSON read back, and what it
+// gives up.
 func ExampleFallbacks() {
 	for _, f := range bleveengine.Fallbacks() {
-		fmt.Println(int(f), f)
+		fmt.Printf("%s: %s\n", f, f.Describe())
 	}
 	// Output:
-	// 0 most-words
-	// 1 drop-trailing
+	// most-words: keeps the most of the query's words any product has, whichever they are
+	// drop-trailing: drops words from the end of the query, as typed, until the rest match
 }
 
 // ParseFallback reads a blind partial match by the name a command-line

@@ -117,7 +117,7 @@ func TestBaselineMatches(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			if words := baselineWords(tc.q); len(words) > 0 {
+			if words := e.baselineWords(tc.q); len(words) > 0 {
 				q := baselineQuery(tc.fallback, words, min(tc.kept, len(words)))
 				if diff := cmp.Diff(bleveIDs(t, e, q), got, cmpEmpty); diff != "" {
 					t.Errorf("%s: against bleve's search (-bleve +got):\n%s", tc.reason, diff)

@@ -56,17 +56,14 @@ func (o RescueOptions) check() error {
 	case o.K < 0:
 		return fmt.Errorf("bleveengine: %d hits: want 0 or more", o.K)
 	}
-	if _, err := o.Fallback.MarshalText(); err != nil {
-		return err
-	}
-	return nil
+	return o.Fallback.check()
 }
 
 // Rescue rescues a parsed query with rw against e and shows the top
 // opts.K of the plan it settles on; with opts.Explore, one of them may
 // come from a plan one step looser; with opts.Baseline, it runs the
-// blind partial match opts.Fallback on the query as typed beside it. Everything
-// honours ctx; a deadline that passes while exploring leaves the hits
+// blind partial match opts.Fallback on the query as typed beside it.
+// Everything honours ctx; a deadline that passes while exploring leaves the hits
 // as the rescue found them. A query with nothing to search for is
 // refused with the rewriter's *rewrite.RefusedError (errors.Is
 // rewrite.ErrNothingToSearch): nothing is counted or shown.

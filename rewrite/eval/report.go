@@ -164,7 +164,7 @@ func (r Report) Met() bool {
 func (r Report) WriteText(w io.Writer) error {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "%d %squeries on %d products (seed %d), top %d hits each\n", r.Whittle.Queries, styleWord(r.Style), r.Products, r.Seed, r.K)
-	fmt.Fprintf(tw, "baseline: %s, a blind partial match %s\n\n", r.Fallback, fallbackText(r.Fallback))
+	fmt.Fprintf(tw, "baseline: %s, a blind partial match that %s\n\n", r.Fallback, r.Fallback.Describe())
 	fmt.Fprintln(tw, "measure\twhittle\tbaseline")
 	for _, row := range figureRows(r.Whittle, r.Baseline, r.K) {
 		fmt.Fprintf(tw, "%s\t%s\t%s\n", row[0], row[1], row[2])
@@ -217,14 +217,6 @@ func WriteGoals(w io.Writer, reps []Report) error {
 		}
 	}
 	return tw.Flush()
-}
-
-// fallbackText says in a few words what a blind partial match gives up.
-func fallbackText(f bleveengine.Fallback) string {
-	if f == bleveengine.DropTrailing {
-		return "dropping words from the end of the query until the rest match"
-	}
-	return "keeping the most of the query's words any product has, whichever they are"
 }
 
 // styleName is a report's style as a column heading.

@@ -180,6 +180,9 @@ func Run(ctx context.Context, opts RunOptions) (Report, error) {
 // same seed.
 func RunStyles(ctx context.Context, opts RunOptions, styles []Style) ([]Report, error) {
 	opts.defaults()
+	if !opts.Fallback.Valid() {
+		return nil, fmt.Errorf("eval: no fallback %d", int(opts.Fallback))
+	}
 	logf := func(format string, args ...any) {
 		if opts.Log != nil {
 			fmt.Fprintf(opts.Log, format, args...)
