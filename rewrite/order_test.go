@@ -49,6 +49,14 @@ func TestPlural(t *testing.T) {
 		{"bench", "benches"}, {"brush", "brushes"}, {"tray", "trays"}, {"headphones", "headphones"},
 		{"jeans", "jeans"}, {"lumber", "lumber"}, {"dress shoes", "dress shoes"}, {"shoe", "shoes"},
 		{"glass", "glasses"}, {"bus", "buses"}, {"vase", "vases"},
+		// Plural in form: the lexicon's product types that end in an s.
+		{"socks", "socks"}, {"swim trunks", "swim trunks"}, {"boxer briefs", "boxer briefs"}, {"stud earrings", "stud earrings"},
+		{"measuring spoons", "measuring spoons"}, {"mittens", "mittens"}, {"cleats", "cleats"}, {"scissors", "scissors"},
+		{"prime lens", "prime lenses"}, {"french press", "french presses"},
+		// -fe, -lf and -rf take -ves; an irregular plural; mass nouns.
+		{"chef's knife", "chef's knives"}, {"floating shelf", "floating shelves"}, {"scarf", "scarves"},
+		{"mouse", "mice"}, {"thermal underwear", "thermal underwear"}, {"jewelry", "jewelry"}, {"cutlery", "cutlery"},
+		{"wall art", "wall art"}, {"hex key", "hex keys"}, {"derby", "derbies"},
 	} {
 		if got := plural(tc.in); got != tc.want {
 			t.Errorf("plural(%q) = %q, want %q", tc.in, got, tc.want)

@@ -382,29 +382,61 @@ func kindOfEntry(e *lexicon.Entry) parser.Kind {
 }
 
 // plural is the plural of a product type, for messages: "rain jackets",
-// "lenses", "batteries". A type already plural in form ("headphones",
-// "jeans") or a mass noun ("lumber") stays as it is.
+// "lenses", "batteries", "knives". A type already plural in form
+// ("headphones", "socks", "swim trunks") or a mass noun ("lumber",
+// "underwear") stays as it is. The rules are those of English spelling
+// (common usage).
 func plural(s string) string {
-	last := s[strings.LastIndexByte(s, ' ')+1:]
+	i := strings.LastIndexByte(s, ' ') + 1
+	head, last := s[:i], s[i:]
+	if p, ok := irregularPlural[last]; ok {
+		return head + p
+	}
 	switch {
-	case unchangedPlural[last], strings.HasSuffix(s, "es") && !strings.HasSuffix(s, "ies") && len(last) > 3:
+	case unchangedPlural[last], pluralInForm(last):
 		return s
-	case strings.HasSuffix(s, "s"), strings.HasSuffix(s, "x"), strings.HasSuffix(s, "ch"), strings.HasSuffix(s, "sh"):
+	case strings.HasSuffix(s, "s"), strings.HasSuffix(s, "x"), strings.HasSuffix(s, "z"), strings.HasSuffix(s, "ch"), strings.HasSuffix(s, "sh"):
 		return s + "es"
+	case strings.HasSuffix(s, "fe"):
+		return s[:len(s)-2] + "ves"
+	case strings.HasSuffix(s, "lf"), strings.HasSuffix(s, "rf"):
+		return s[:len(s)-1] + "ves"
 	case strings.HasSuffix(s, "y") && !strings.HasSuffix(s, "ey") && !strings.HasSuffix(s, "ay") && !strings.HasSuffix(s, "oy"):
 		return s[:len(s)-1] + "ies"
 	}
 	return s + "s"
 }
 
-// unchangedPlural are nouns whose plural, as a shop writes it, is the
-// word itself: plural in form, or uncounted (common usage).
+// pluralInForm reports whether a word already reads as a plural: it ends
+// in an s that is not part of "ss", "us", "is" or "as" ("socks", "briefs",
+// "shoes", "glasses", "batteries"), and is not one of the few singular
+// nouns a shop sells that end so ("lens").
+func pluralInForm(w string) bool {
+	if !strings.HasSuffix(w, "s") || singularInS[w] {
+		return false
+	}
+	for _, end := range []string{"ss", "us", "is", "as"} {
+		if strings.HasSuffix(w, end) {
+			return false
+		}
+	}
+	return true
+}
+
+// singularInS are singular nouns ending in a single s.
+var singularInS = map[string]bool{"lens": true}
+
+// irregularPlural are plurals no spelling rule gives (common usage).
+var irregularPlural = map[string]string{"mouse": "mice"}
+
+// unchangedPlural are nouns a shop does not count, whose plural, as it
+// writes it, is the word itself (common usage). Those plural in form
+// need no entry (pluralInForm).
 var unchangedPlural = map[string]bool{
-	"jeans": true, "pants": true, "shorts": true, "trousers": true, "leggings": true, "tights": true, "chinos": true,
-	"joggers": true, "sweatpants": true, "overalls": true, "pyjamas": true, "pajamas": true, "scissors": true,
-	"pliers": true, "tongs": true, "binoculars": true, "earbuds": true, "glasses": true, "sunglasses": true,
 	"lumber": true, "luggage": true, "furniture": true, "flooring": true, "decking": true, "mulch": true,
 	"soil": true, "gravel": true, "sand": true, "cement": true, "concrete": true, "insulation": true,
+	"underwear": true, "jewelry": true, "jewellery": true, "cutlery": true, "plywood": true, "mdf": true,
+	"caulk": true, "wallpaper": true, "art": true,
 }
 
 // dropPhrase says to a shopper what dropping c means.
