@@ -1,6 +1,7 @@
 package lexicon
 
 import (
+	"fmt"
 	"strings"
 	"sync"
 	"unicode/utf8"
@@ -80,6 +81,16 @@ func Closest(word string, options []string) string {
 		}
 	}
 	return best
+}
+
+// DidYouMean is `; did you mean "x"?` for x, the option Closest finds
+// for word, or "" when none is close: the tail of an error message that
+// names what was meant.
+func DidYouMean(word string, options []string) string {
+	if s := Closest(word, options); s != "" {
+		return fmt.Sprintf("; did you mean %q?", s)
+	}
+	return ""
 }
 
 // EditDistance is the optimal string alignment distance between a and b

@@ -72,11 +72,7 @@ func CheckCategory(c string) error {
 	if c == "" || slices.Contains(categories, c) {
 		return nil
 	}
-	near := ""
-	if s := Closest(c, categories); s != "" {
-		near = fmt.Sprintf("; did you mean %q?", s)
-	}
-	return fmt.Errorf("unknown category %q%s (known: %s)", c, near, strings.Join(categories, ", "))
+	return fmt.Errorf("unknown category %q%s (known: %s)", c, DidYouMean(c, categories), strings.Join(categories, ", "))
 }
 
 // Entry is one word or phrase of the lexicon, with everything its kind

@@ -185,3 +185,13 @@ func ExampleLexicon_Names() {
 	fmt.Println(lexicon.Default().Names(lexicon.Audience))
 	// Output: [women men kids girls boys baby unisex]
 }
+
+// DidYouMean ends a message about an unknown name with the nearest
+// known one, when one is near.
+func ExampleDidYouMean() {
+	fmt.Printf("unknown command %q%s\n", "serch", lexicon.DidYouMean("serch", []string{"search", "serve"}))
+	fmt.Printf("unknown command %q%s\n", "zzz", lexicon.DidYouMean("zzz", []string{"search", "serve"}))
+	// Output:
+	// unknown command "serch"; did you mean "search"?
+	// unknown command "zzz"
+}

@@ -38,15 +38,6 @@ func main() {
 // commandNames are the commands run knows, for suggesting one.
 var commandNames = []string{"explain", "colour", "policy", "index", "demo", "bench", "eval", "search", "replay", "tune", "serve", "help"}
 
-// suggest is "; did you mean X?" for the option nearest word by
-// spelling, or "".
-func suggest(word string, options []string) string {
-	if s := lexicon.Closest(word, options); s != "" {
-		return fmt.Sprintf("; did you mean %q?", s)
-	}
-	return ""
-}
-
 // helpWords ask for the usage text.
 var helpWords = map[string]bool{"help": true, "-h": true, "-help": true, "--help": true}
 
@@ -88,6 +79,6 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		fmt.Fprint(stdout, usage)
 		return 0
 	}
-	fmt.Fprintf(stderr, "whittle: unknown command %q%s (run \"whittle help\" for the commands)\n", args[0], suggest(args[0], commandNames))
+	fmt.Fprintf(stderr, "whittle: unknown command %q%s (run \"whittle help\" for the commands)\n", args[0], lexicon.DidYouMean(args[0], commandNames))
 	return 2
 }

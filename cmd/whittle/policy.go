@@ -64,7 +64,7 @@ func policyCmd(args []string, stdout, stderr io.Writer) int {
 		writePolicyUsage(stdout)
 		return 0
 	}
-	fmt.Fprintf(stderr, "whittle policy: unknown subcommand %q%s (show or check; run \"whittle policy -h\")\n", args[0], suggest(args[0], []string{"show", "check"}))
+	fmt.Fprintf(stderr, "whittle policy: unknown subcommand %q%s (show or check; run \"whittle policy -h\")\n", args[0], lexicon.DidYouMean(args[0], []string{"show", "check"}))
 	return 2
 }
 
