@@ -84,7 +84,13 @@ const ReplayQueries = 100000
 // directory under dir and indexes it as whittle index does, measuring
 // the build's time and peak memory; then it times the rescue of queries
 // that find nothing as typed, beside the blind partial match on the same
-// queries.
+// queries; then the replay and tune throughputs.
+//
+// Bench measures the whole process, and changes it while it does: it
+// runs the garbage collector and returns memory to the system before
+// each measure, resets the system's peak memory count (Linux), and runs
+// tune with GOMAXPROCS at 1, restoring it afterwards. Run it alone in a
+// process of its own, as whittle bench does, not beside other work.
 func Bench(ctx context.Context, w io.Writer, opts BenchOptions) (*BenchResult, error) {
 	n, replayN := cmp.Or(opts.Products, 100000), cmp.Or(opts.Replay, ReplayQueries)
 	signalsN := cmp.Or(opts.Signals, SignalEvents)
