@@ -188,7 +188,7 @@ func ExamplePolicy_WriteTOML() {
 
 func ExamplePolicy_Signals() {
 	s := rewrite.DefaultPolicy().Signals()
-	fmt.Println(s.Weights["purchase"], s.JoinWindow, s.KeepShare)
+	fmt.Println(s.Weights.Purchase, s.JoinWindow, s.KeepShare)
 	// Output: 10 30m0s 0.8
 }
 

@@ -93,7 +93,7 @@ func TestSignalSettings(t *testing.T) {
 	def := DefaultPolicy().Signals()
 	// The built-in weights rise from impression to purchase (common
 	// practice: the costlier the signal to the shopper, the more it says).
-	want := Signals{Weights: map[string]float64{"impression": 0.05, "click": 1, "add_to_cart": 3, "purchase": 10},
+	want := Signals{Weights: SignalWeights{Impression: 0.05, Click: 1, AddToCart: 3, Purchase: 10},
 		PositionBias: 1, EstimateBias: true, JoinWindow: 30 * time.Minute, MinSearches: 100, KeepShare: 0.8}
 	if diff := cmp.Diff(want, def); diff != "" {
 		t.Errorf("built-in signals (-want +got):\n%s", diff)
@@ -105,7 +105,7 @@ func TestSignalSettings(t *testing.T) {
 		t.Fatal(err)
 	}
 	got := p.Signals()
-	want.JoinWindow, want.Weights["click"] = 2*time.Hour, 20
+	want.JoinWindow, want.Weights.Click = 2*time.Hour, 20
 	if diff := cmp.Diff(want, got); diff != "" {
 		t.Errorf("overlaid signals (-want +got):\n%s", diff)
 	}

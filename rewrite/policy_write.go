@@ -118,11 +118,12 @@ func (pw *policyWriter) signals(s SignalSettings) {
 			pw.printf("keep_share = %s\n", number(*s.KeepShare))
 		}
 	}
-	if len(s.Weights) > 0 {
+	fields := s.Weights.fields()
+	if slices.ContainsFunc(fields, func(f weightField) bool { return *f.v != nil }) {
 		pw.table("signals.weights")
-		for _, k := range signalWeightNames {
-			if v, ok := s.Weights[k]; ok {
-				pw.printf("%s = %s\n", k, number(v))
+		for _, f := range fields {
+			if *f.v != nil {
+				pw.printf("%s = %s\n", f.name, number(**f.v))
 			}
 		}
 	}

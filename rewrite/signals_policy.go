@@ -12,9 +12,9 @@ import (
 // weighs shoppers' signals. A nil pointer means "as the level below"
 // (the built-in policy sets every one).
 type SignalSettings struct {
-	// Weights is what each interaction type is worth, by its name in the
-	// signals log (impression, click, add_to_cart, purchase).
-	Weights map[string]float64
+	// Weights is what each interaction type is worth; a nil weight is
+	// as the level below.
+	Weights SignalWeightSettings
 	// PositionBias is η in the examination propensity (1/rank)^η.
 	PositionBias *float64
 	// EstimateBias says to estimate η from searches whose results were
@@ -31,14 +31,63 @@ type SignalSettings struct {
 	KeepShare *float64
 }
 
+// SignalWeightSettings are the [signals.weights] table: what each
+// interaction type of the signals log is worth, nil where the level below
+// decides.
+type SignalWeightSettings struct {
+	Impression, Click, AddToCart, Purchase *float64
+}
+
+// SignalWeights are the weights settled, one for each interaction type of
+// the signals log, cheapest first.
+type SignalWeights struct {
+	Impression float64 `json:"impression"`
+	Click      float64 `json:"click"`
+	AddToCart  float64 `json:"add_to_cart"`
+	Purchase   float64 `json:"purchase"`
+}
+
+// weightField is one weight of SignalWeightSettings by its name in a
+// policy file, which is its interaction type's name in the signals log.
+type weightField struct {
+	name string
+	v    **float64
+}
+
+// fields are w's weights, cheapest first.
+func (w *SignalWeightSettings) fields() []weightField {
+	return []weightField{{"impression", &w.Impression}, {"click", &w.Click}, {"add_to_cart", &w.AddToCart}, {"purchase", &w.Purchase}}
+}
+
+// signalWeightNames are the interaction types a weight may be set for,
+// cheapest first.
+var signalWeightNames = func() []string {
+	var names []string
+	for _, f := range new(SignalWeightSettings).fields() {
+		names = append(names, f.name)
+	}
+	return names
+}()
+
+// settle is w with every unset weight 0.
+func (w SignalWeightSettings) settle() SignalWeights {
+	v := func(p *float64) float64 {
+		if p == nil {
+			return 0
+		}
+		return *p
+	}
+	return SignalWeights{Impression: v(w.Impression), Click: v(w.Click), AddToCart: v(w.AddToCart), Purchase: v(w.Purchase)}
+}
+
 // Signals are the [signals] settings settled: every value set.
 type Signals struct {
-	Weights      map[string]float64 `json:"weights"`
-	PositionBias float64            `json:"position_bias"`
-	EstimateBias bool               `json:"estimate_position_bias"`
-	JoinWindow   time.Duration      `json:"join_window"`
-	MinSearches  int                `json:"min_searches"`
-	KeepShare    float64            `json:"keep_share"`
+	Weights      SignalWeights `json:"weights"`
+	PositionBias float64       `json:"position_bias"`
+	EstimateBias bool          `json:"estimate_position_bias"`
+	JoinWindow   time.Duration `json:"join_window"`
+	MinSearches  int           `json:"min_searches"`
+	KeepShare    float64       `json:"keep_share"`
 }
 
 // MarshalJSON writes the join window as a duration ("30m0s").
@@ -50,17 +99,10 @@ func (s Signals) MarshalJSON() ([]byte, error) {
 	}{plain(s), s.JoinWindow.String()})
 }
 
-// signalWeightNames are the interaction types a weight may be set for,
-// cheapest first.
-var signalWeightNames = []string{"impression", "click", "add_to_cart", "purchase"}
-
 // Signals returns the [signals] settings in force.
 func (p *Policy) Signals() Signals {
 	s := p.signals
-	out := Signals{Weights: map[string]float64{}}
-	for k, v := range s.Weights {
-		out.Weights[k] = v
-	}
+	out := Signals{Weights: s.Weights.settle()}
 	if s.PositionBias != nil {
 		out.PositionBias = *s.PositionBias
 	}
@@ -97,18 +139,17 @@ var signalKeys = []string{"weights", "position_bias", "estimate_position_bias", 
 func (pol *Policy) signalSettings(s signalsTOML, at func([]string, string, ...any)) SignalSettings {
 	key := func(k ...string) []string { return append([]string{"signals"}, k...) }
 	out := SignalSettings{PositionBias: s.PositionBias, EstimateBias: s.EstimateBias, MinSearches: s.MinSearches, KeepShare: s.KeepShare}
-	if len(s.Weights) > 0 {
-		out.Weights = make(map[string]float64, len(s.Weights))
-	}
+	fields := out.Weights.fields()
 	for _, k := range sortedKeys(s.Weights) {
 		v := s.Weights[k]
+		i := slices.IndexFunc(fields, func(f weightField) bool { return f.name == k })
 		switch {
-		case !slices.Contains(signalWeightNames, k):
+		case i < 0:
 			at(key("weights", k), "unknown interaction %q%s", k, didYouMean(k, signalWeightNames))
 		case math.IsNaN(v) || v < 0 || v > 1000:
 			at(key("weights", k), "weight of %s %g: want 0 to 1000", k, v)
 		default:
-			out.Weights[k] = v
+			*fields[i].v = &v
 		}
 	}
 	if v := s.PositionBias; v != nil && (math.IsNaN(*v) || *v < 0 || *v > 5) {
@@ -138,10 +179,11 @@ func (pol *Policy) signalSettings(s signalsTOML, at func([]string, string, ...an
 // impression to purchase: a purchase should count for more than a click.
 func (p *Policy) checkWeightOrder() {
 	w := p.Signals().Weights
-	for i := 1; i < len(signalWeightNames); i++ {
-		a, b := signalWeightNames[i-1], signalWeightNames[i]
-		if w[b] < w[a] {
-			p.Warnings = append(p.Warnings, fmt.Sprintf("signals.weights: %s (%g) is worth less than %s (%g); tune then prizes the cheaper signal", b, w[b], a, w[a]))
+	v := []float64{w.Impression, w.Click, w.AddToCart, w.Purchase}
+	for i := 1; i < len(v); i++ {
+		if v[i] < v[i-1] {
+			p.Warnings = append(p.Warnings, fmt.Sprintf("signals.weights: %s (%g) is worth less than %s (%g); tune then prizes the cheaper signal",
+				signalWeightNames[i], v[i], signalWeightNames[i-1], v[i-1]))
 		}
 	}
 }
@@ -149,7 +191,11 @@ func (p *Policy) checkWeightOrder() {
 // mergeSignals lays b over a.
 func mergeSignals(a, b SignalSettings) SignalSettings {
 	out := a
-	out.Weights = mergeMap(a.Weights, b.Weights)
+	for i, f := range out.Weights.fields() {
+		if v := *b.Weights.fields()[i].v; v != nil {
+			*f.v = v
+		}
+	}
 	if b.PositionBias != nil {
 		out.PositionBias = b.PositionBias
 	}

@@ -127,9 +127,9 @@ func New(opts Options) *Tuner {
 	t := &Tuner{opts: opts, lex: opts.Lexicon, pol: opts.Policy, sig: opts.Policy.Signals(),
 		weights: map[signals.Type]float64{}, groups: map[groupKey]*tally{}, aliases: map[alias]int{},
 		parsed: map[string]*reading{}, facts: map[string]*rewrite.Facts{}}
-	for _, ty := range signals.Interactions() {
-		t.weights[ty] = t.sig.Weights[string(ty)]
-	}
+	w := t.sig.Weights
+	t.weights[signals.Impression], t.weights[signals.Click] = w.Impression, w.Click
+	t.weights[signals.AddToCart], t.weights[signals.Purchase] = w.AddToCart, w.Purchase
 	return t
 }
 
