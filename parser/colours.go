@@ -82,10 +82,31 @@ type ColourReading struct {
 // LabValue returns the reading's CIELAB value, unrounded.
 func (c *ColourReading) LabValue() colour.Lab { return c.lab }
 
+// UnknownColourError is ReadColour's error for a name that is well
+// formed but no colour the lexicon knows, with or without a modifier.
+type UnknownColourError struct {
+	// Name is the name as given, trimmed.
+	Name string
+	// Suggest is the lexicon's colour name nearest to it in spelling, or
+	// "".
+	Suggest string
+}
+
+// Error says the name is unknown, and suggests the nearest known one.
+func (e *UnknownColourError) Error() string {
+	msg := fmt.Sprintf("%q is not a colour whittle knows", e.Name)
+	if e.Suggest != "" {
+		msg += fmt.Sprintf("; did you mean %q?", e.Suggest)
+	}
+	return msg
+}
+
 // ReadColour places s in CIELAB. s may be a colour name of the lexicon,
 // with a modifier or not; a hex value ("#rrggbb", "#rgb"); "rgb(r, g, b)";
-// or "L,a,b". A name the lexicon does not know is an error that suggests
-// the closest name it does.
+// or "L,a,b". A name the lexicon does not know is an *UnknownColourError,
+// which suggests the closest name it does; a value that is badly formed
+// (a hex of the wrong length, an rgb() or L,a,b out of range or with the
+// wrong count of numbers), or none at all, is any other error.
 func ReadColour(s string, opts Options) (*ColourReading, error) {
 	t := strings.TrimSpace(s)
 	lex := opts.lexicon()
@@ -130,11 +151,7 @@ func ReadColour(s string, opts Options) (*ColourReading, error) {
 		r := ParseWith(t, opts)
 		cs := r.Of(KindColour)
 		if len(cs) != 1 || len(r.Constraints) != 1+len(r.Of(KindFiller)) || cs[0].Excluded || cs[0].Colour.Lab == nil {
-			msg := fmt.Sprintf("%q is not a colour whittle knows", t)
-			if sug := lex.Suggest(t, lexicon.Colour); sug != "" {
-				msg += fmt.Sprintf("; did you mean %q?", sug)
-			}
-			return nil, errors.New(msg)
+			return nil, &UnknownColourError{Name: t, Suggest: lex.Suggest(t, lexicon.Colour)}
 		}
 		c := cs[0]
 		lab = colour.Lab{L: c.Colour.Lab[0], A: c.Colour.Lab[1], B: c.Colour.Lab[2]}

@@ -1,6 +1,7 @@
 package parser
 
 import (
+	"errors"
 	"strings"
 	"testing"
 )
@@ -10,6 +11,7 @@ func TestReadColour(t *testing.T) {
 		name, in, hex, reason string
 		inferred              bool
 		err                   string
+		unknown               bool // the error is an *UnknownColourError: well formed, not known
 	}{
 		// CSS values from testdata/reference/css_named_colours.tsv.
 		{name: "css name", in: "rebeccapurple", hex: "#663399", reason: "a CSS name"},
@@ -21,10 +23,10 @@ func TestReadColour(t *testing.T) {
 		{name: "rgb", in: "rgb(102, 51, 153)", hex: "#663399", reason: "rgb() with commas"},
 		{name: "modified", in: "light sage", hex: "#bdd0a8", inferred: true, reason: "see TestModifiedColourValue"},
 		{name: "with filler", in: "the navy", hex: "#000080", reason: "filler words are ignored"},
-		{name: "unknown", in: "burgandy", err: `did you mean "burgundy"`, reason: "a near miss suggests the name"},
-		{name: "not only a colour", in: "navy dress", err: "is not a colour", reason: "a query is not a colour"},
-		{name: "excluded", in: "not navy", err: "is not a colour", reason: "an exclusion is not a colour"},
-		{name: "multi", in: "multicolour", err: "is not a colour", reason: "a word for several colours has no single value"},
+		{name: "unknown", in: "burgandy", unknown: true, err: `did you mean "burgundy"`, reason: "a near miss suggests the name"},
+		{name: "not only a colour", in: "navy dress", unknown: true, err: "is not a colour", reason: "a query is not a colour"},
+		{name: "excluded", in: "not navy", unknown: true, err: "is not a colour", reason: "an exclusion is not a colour"},
+		{name: "multi", in: "multicolour", unknown: true, err: "is not a colour", reason: "a word for several colours has no single value"},
 		{name: "bad hex", in: "#12345", err: "5 digits", reason: "a malformed hex"},
 		{name: "hash before a name", in: "#navvy", err: `did you mean the colour "navy"`, reason: "a name typed after # is suggested"},
 		{name: "lab out of range", in: "50,300,0", err: "out of range", reason: "a* beyond 200"},
@@ -36,6 +38,10 @@ func TestReadColour(t *testing.T) {
 			if tc.err != "" {
 				if err == nil || !strings.Contains(err.Error(), tc.err) {
 					t.Errorf("%s: got %v, want an error containing %q", tc.reason, err, tc.err)
+				}
+				var u *UnknownColourError
+				if errors.As(err, &u) != tc.unknown {
+					t.Errorf("%s: %v is an *UnknownColourError: %v, want %v (badly formed is another error)", tc.reason, err, !tc.unknown, tc.unknown)
 				}
 				return
 			}

@@ -2,6 +2,7 @@ package parser_test
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"os"
 
@@ -143,4 +144,17 @@ func ExampleReadColour() {
 	// Output:
 	// dusty rose #c9a3a0 [red pink]
 	// "burgandy" is not a colour whittle knows; did you mean "burgundy"?
+}
+
+// A name the lexicon does not know is an *UnknownColourError, apart from
+// a value that is badly formed.
+func ExampleUnknownColourError() {
+	_, err := parser.ReadColour("burgandy", parser.Options{})
+	var u *parser.UnknownColourError
+	fmt.Println(errors.As(err, &u), u.Suggest)
+	_, err = parser.ReadColour("#12345", parser.Options{})
+	fmt.Println(errors.As(err, &u), err)
+	// Output:
+	// true burgundy
+	// false hex colour "#12345" has 5 digits; want 3 or 6
 }
