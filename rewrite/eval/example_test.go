@@ -103,7 +103,7 @@ func ExampleEvaluate() {
 	}
 	defer eng.Close()
 	cases := eval.Generate(examples, eval.Options{Queries: 10, Seed: 1})
-	rep, err := eval.Evaluate(ctx, eng, rewrite.New(eng, nil), bleveengine.MostWords, cases, examples, 10)
+	rep, err := eval.Evaluate(ctx, eng, rewrite.New(eng, nil), cases, examples, eval.EvaluateOptions{K: 10})
 	if err != nil {
 		fmt.Println(err)
 		return

@@ -31,13 +31,26 @@ type Engine interface {
 // DefaultK is how many hits a query asks for.
 const DefaultK = 10
 
+// EvaluateOptions tune Evaluate. The zero value is ready to use.
+type EvaluateOptions struct {
+	// K is how many hits each query asks for (default DefaultK).
+	K int
+	// Fallback is the blind partial match that is the baseline; the
+	// zero value is bleveengine.MostWords.
+	Fallback bleveengine.Fallback
+}
+
 // Evaluate runs every case through whittle (rw's rescue, then the top k
-// of its plan) and through the baseline, the blind partial match f, on
-// eng, and reports how each did against the products' real attributes,
-// in its top k and in its whole result set.
-func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, f bleveengine.Fallback, cases []Case, products []catalog.Product, k int) (Report, error) {
+// of its plan) and through the baseline, the blind partial match
+// opts.Fallback, on eng, and reports how each did against the products'
+// real attributes, in its top k and in its whole result set.
+func Evaluate(ctx context.Context, eng Engine, rw *rewrite.Rewriter, cases []Case, products []catalog.Product, opts EvaluateOptions) (Report, error) {
+	k, f := opts.K, opts.Fallback
 	if k <= 0 {
 		k = DefaultK
+	}
+	if !f.Valid() {
+		return Report{}, fmt.Errorf("eval: no fallback %d", int(f))
 	}
 	byID := index(products)
 	whittle := make([]Result, 0, len(cases))
@@ -218,7 +231,7 @@ func RunStyles(ctx context.Context, opts RunOptions, styles []Style) ([]Report, 
 		gen.Style = style
 		cases := Generate(products, gen)
 		logf("evaluating %d %s queries...\n", len(cases), style)
-		rep, err := Evaluate(ctx, eng, rw, opts.Fallback, cases, products, opts.K)
+		rep, err := Evaluate(ctx, eng, rw, cases, products, EvaluateOptions{K: opts.K, Fallback: opts.Fallback})
 		if err != nil {
 			return nil, err
 		}

@@ -89,7 +89,7 @@ func TestEvaluateSetsTiny(t *testing.T) {
 		// without the hard xl.
 		{Query: "black skirt size xl", Product: "SK-2", ProductType: "skirt", Failure: FailColour, Hard: xl},
 	}
-	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), bleveengine.MostWords, cases, ps, 1)
+	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), cases, ps, EvaluateOptions{K: 1})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -188,7 +188,7 @@ func tinyIndex(t *testing.T, ctx context.Context, ps []catalog.Product) *bleveen
 // baseline's figures with those worked out by hand.
 func checkFigures(t *testing.T, ctx context.Context, eng *bleveengine.Engine, f bleveengine.Fallback, cases []Case, ps []catalog.Product, whittle, baseline Figures) {
 	t.Helper()
-	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), f, cases, ps, 10)
+	rep, err := Evaluate(ctx, eng, rewrite.New(eng, nil), cases, ps, EvaluateOptions{K: 10, Fallback: f})
 	if err != nil {
 		t.Fatal(err)
 	}
