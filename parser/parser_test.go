@@ -197,6 +197,26 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindSize, "size 12", "12 (numeric)").hard(), tg(KindPrice, "max $60", "≤ 60.00 USD")},
 	},
 	{
+		name: "or less before a measure", query: "$120 or less 1.9 litre rice cooker",
+		reason:   "or less only ever follows what it bounds, so the number after it is a measure of its own (found by the long eval set, seed 1)",
+		category: "kitchen",
+		want:     []tagged{tg(KindPrice, "$120 or less", "≤ 120.00 USD"), tg(KindMeasure, "1.9 litre", "1.9 L"), tg(KindProductType, "rice cooker", "rice cooker")},
+	},
+	{
+		name: "a comparison word left over", query: "less expensive lens", category: "camera",
+		reason: "less with no value after it is a connecting word, not a keyword: as a keyword the typo reader took it for lens, one letter away",
+		want:   []tagged{tg(KindKeyword, "expensive", "expensive"), tg(KindProductType, "lens", "lens")},
+	},
+	{
+		name: "or more before a measure", query: "2 tb or more 500 gb ssd", reason: "as or less: a floor on the 2 TB, then 500 GB",
+		category: "electronics",
+		want:     []tagged{tg(KindMeasure, "2 tb or more", "≥ 2 TB"), tg(KindMeasure, "500 gb", "500 GB"), tg(KindProductType, "ssd", "ssd")},
+	},
+	{
+		name: "or under before a price", query: "size 12 or under $60", reason: "or under may come before a value, as max does: it bounds the price",
+		want: []tagged{tg(KindSize, "size 12", "12 (numeric)").hard(), tg(KindPrice, "under $60", "≤ 60.00 USD")},
+	},
+	{
 		name: "max between a measure and a price", query: "9200mah max $45", reason: "the capacity stays a capacity; max bounds the price",
 		want: []tagged{tg(KindMeasure, "9200mah", "9200 mAh"), tg(KindPrice, "max $45", "≤ 45.00 USD")},
 	},

@@ -13,10 +13,16 @@ var (
 	negators    = map[string]bool{"not": true, "no": true, "without": true, "w/o": true, "except": true, "excluding": true, "exclude": true, "minus": true, "non": true}
 	sizeMarkers = map[string]bool{"size": true, "sz": true, "sizes": true, "sized": true}
 	codeMarkers = map[string]bool{"sku": true, "part": true, "model": true, "mpn": true, "item": true, "ref": true, "pn": true, "p/n": true}
-	// structural words carry no constraint of their own when left over.
+	// structural words carry no constraint of their own when left over:
+	// the connecting words, and the comparison words of the grammar
+	// ("less", "most", "under") when no value follows them. Read as
+	// filler, they are never taken for a misspelt product type ("less"
+	// is one letter from "lens").
 	structural = map[string]bool{"with": true, "w/": true, "and": true, "or": true, "for": true, "to": true, "by": true,
 		"x": true, "at": true, "from": true, "in": true, "of": true, "on": true, "fits": true, "fit": true,
-		"compatible": true, "works": true, "replacement": true, "between": true, "than": true, "number": true, "no": true, "not": true}
+		"compatible": true, "works": true, "replacement": true, "between": true, "than": true, "number": true, "no": true, "not": true,
+		"less": true, "more": true, "fewer": true, "greater": true, "least": true, "most": true, "under": true, "below": true,
+		"over": true, "above": true, "max": true, "min": true, "maximum": true, "minimum": true, "upto": true, "within": true, "up": true}
 	letterSizes = map[string]string{
 		"xxs": "xxs", "2xs": "xxs", "xs": "xs", "s": "s", "m": "m", "l": "l", "xl": "xl",
 		"xxl": "xxl", "2xl": "xxl", "xxxl": "3xl", "3xl": "3xl", "4xl": "4xl", "5xl": "5xl",

@@ -86,15 +86,18 @@ type Tyre struct {
 
 // Value is a single value, or a range of two, with an optional trailing
 // bound word: "20-30 mm", "$20 to $30", "$90 max", "2 tb or more". A
-// bound word with a value right after it bounds that value instead:
-// in "size 12 max $60" the ceiling is on the price, not on the 12.
+// bound word that may also come before a value ("max", "or under") and
+// has a value right after it bounds that value instead: in "size 12 max
+// $60" the ceiling is on the price, not on the 12. One that only ever
+// follows ("or less", "or more", "and up") bounds the value before it
+// whatever comes next: "$120 or less 1.9 litre rice cooker".
 type Value struct {
 	Pos    lexer.Position
 	EndPos lexer.Position
 
 	From *Single `parser:"@@"`
 	To   *Single `parser:"( Space? (Dash | 'to') Space? @@ )?"`
-	Post string  `parser:"( Space? @('max' | 'min' | 'maximum' | 'minimum' | 'or' Space ('less' | 'more' | 'under' | 'over' | 'fewer' | 'lower' | 'higher' | 'below' | 'above' | 'cheaper') | 'and' Space ('under' | 'up' | 'over' | 'below' | 'above')) (?! Space? (Number | Cur | Vulgar)) | @Plus )?"`
+	Post string  `parser:"( Space? ( @('max' | 'min' | 'maximum' | 'minimum' | 'or' Space ('under' | 'over' | 'below' | 'above') | 'and' Space ('under' | 'over' | 'below' | 'above')) (?! Space? (Number | Cur | Vulgar)) | @('or' Space ('less' | 'more' | 'fewer' | 'lower' | 'higher' | 'cheaper') | 'and' Space 'up') ) | @Plus )?"`
 }
 
 // Single is a price or a quantity (possibly a dimension of several).
