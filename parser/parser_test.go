@@ -203,6 +203,25 @@ var parseCases = []parseCase{
 		want:     []tagged{tg(KindPrice, "$120 or less", "≤ 120.00 USD"), tg(KindMeasure, "1.9 litre", "1.9 L"), tg(KindProductType, "rice cooker", "rice cooker")},
 	},
 	{
+		name: "over-stemmed: ear", query: "ear plugs",
+		reason: "Porter's stemmer (the one bleve's en analyzer uses) takes earrings to ear; a shopper's ear is no earring, so only a spelling of the entry, or the stem of a word at most two letters shorter than it, reads as the entry",
+		want:   []tagged{tg(KindKeyword, "ear", "ear"), tg(KindKeyword, "plugs", "plugs")},
+	},
+	{
+		name: "over-stemmed: stock", query: "in stock", reason: "stockings stems to stock; stock is no stocking",
+		want: []tagged{tg(KindKeyword, "stock", "stock")},
+	},
+	{
+		name: "stemmed and kept: a plural", query: "leggings women", category: "apparel",
+		reason: "the shopper's word is the entry's own spelling",
+		want:   []tagged{tg(KindProductType, "leggings", "leggings"), tg(KindAudience, "women", "women")},
+	},
+	{
+		name: "stemmed and kept: one letter short", query: "sock", category: "apparel",
+		reason: "sock is one letter short of socks: the stem is the entry's",
+		want:   []tagged{tg(KindProductType, "sock", "socks")},
+	},
+	{
 		name: "a comparison word left over", query: "less expensive lens", category: "camera",
 		reason: "less with no value after it is a connecting word, not a keyword: as a keyword the typo reader took it for lens, one letter away",
 		want:   []tagged{tg(KindKeyword, "expensive", "expensive"), tg(KindProductType, "lens", "lens")},

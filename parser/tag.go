@@ -101,6 +101,13 @@ func (p *tagger) choose() {
 				es = exact
 			}
 		}
+		if len(es) > 0 && !slices.ContainsFunc(es, func(e *lexicon.Entry) bool { return spells(e, u.text) }) {
+			es = slices.DeleteFunc(slices.Clone(es), func(e *lexicon.Entry) bool { return overStemmed(e, u.text) })
+			if len(es) == 0 {
+				// Only an over-stemmed reading: the words are no entry.
+				u.entries = nil
+			}
+		}
 		if len(es) > 1 && withPT > 1 && hasKind(es, lexicon.ProductType) {
 			var rest []*lexicon.Entry
 			for _, e := range es {
@@ -114,6 +121,39 @@ func (p *tagger) choose() {
 		}
 		u.chosen = pick(es)
 	}
+}
+
+// spells reports whether text is e's name or one of its aliases.
+func spells(e *lexicon.Entry, text string) bool {
+	return e.Name == text || slices.Contains(e.Aliases, text)
+}
+
+// overStemmed reports whether text reaches e only because the stemmer cut
+// a word of e's down past recognition: every spelling of e with as many
+// words as text has one at least three letters longer than text's word
+// in its place. Porter's stemmer takes "earrings" to "ear" and "flooring"
+// to "floor"; a shopper's "ear" or "floor" is neither. A plural or an
+// "-ing" the shopper adds ("jackets", "running") makes text's word the
+// longer, and stays a match.
+func overStemmed(e *lexicon.Entry, text string) bool {
+	tw := strings.Fields(text)
+	for _, p := range append([]string{e.Name}, e.Aliases...) {
+		pw := lexicon.Words(p)
+		if len(pw) != len(tw) {
+			continue
+		}
+		ok := true
+		for i := range pw {
+			if len(pw[i])-len(tw[i]) >= 3 {
+				ok = false
+				break
+			}
+		}
+		if ok {
+			return false
+		}
+	}
+	return true
 }
 
 func hasKind(es []*lexicon.Entry, k lexicon.Kind) bool {
