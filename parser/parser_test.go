@@ -222,6 +222,16 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindProductType, "sock", "socks")},
 	},
 	{
+		name: "headphone fit", query: "over ear headphones", category: "electronics",
+		reason: "over-ear, on-ear and in-ear are how headphones are sold (common practice); over is not left as a comparison word, nor ear as an over-stemmed earring",
+		want:   []tagged{tg(KindSilhouette, "over ear", "over-ear"), tg(KindProductType, "headphones", "headphones")},
+	},
+	{
+		name: "headphone fit after a measure in inches", query: "7 in ear headphones", category: "electronics",
+		reason: "a number before in takes it as its unit first: 7 in, then ear, which is no entry",
+		want:   []tagged{tg(KindMeasure, "7 in", "7 in"), tg(KindKeyword, "ear", "ear"), tg(KindProductType, "headphones", "headphones")},
+	},
+	{
 		name: "a comparison word left over", query: "less expensive lens", category: "camera",
 		reason: "less with no value after it is a connecting word, not a keyword: as a keyword the typo reader took it for lens, one letter away",
 		want:   []tagged{tg(KindKeyword, "expensive", "expensive"), tg(KindProductType, "lens", "lens")},
