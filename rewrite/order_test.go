@@ -56,7 +56,7 @@ func TestPlural(t *testing.T) {
 		// -fe, -lf and -rf take -ves; an irregular plural; mass nouns.
 		{"chef's knife", "chef's knives"}, {"floating shelf", "floating shelves"}, {"scarf", "scarves"},
 		{"mouse", "mice"}, {"thermal underwear", "thermal underwear"}, {"jewelry", "jewelry"}, {"cutlery", "cutlery"},
-		{"wall art", "wall art"}, {"hex key", "hex keys"}, {"derby", "derbies"},
+		{"wall art", "wall art"}, {"polyurethane", "polyurethane"}, {"hex key", "hex keys"}, {"derby", "derbies"},
 	} {
 		if got := plural(tc.in); got != tc.want {
 			t.Errorf("plural(%q) = %q, want %q", tc.in, got, tc.want)

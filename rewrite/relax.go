@@ -436,7 +436,7 @@ var unchangedPlural = map[string]bool{
 	"lumber": true, "luggage": true, "furniture": true, "flooring": true, "decking": true, "mulch": true,
 	"soil": true, "gravel": true, "sand": true, "cement": true, "concrete": true, "insulation": true,
 	"underwear": true, "jewelry": true, "jewellery": true, "cutlery": true, "plywood": true, "mdf": true,
-	"caulk": true, "wallpaper": true, "art": true,
+	"caulk": true, "wallpaper": true, "art": true, "polyurethane": true,
 }
 
 // dropPhrase says to a shopper what dropping c means.
