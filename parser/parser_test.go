@@ -208,6 +208,21 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindKeyword, "ear", "ear"), tg(KindKeyword, "plugs", "plugs")},
 	},
 	{
+		name: "over-stemmed within a phrase", query: "clip on earrings", category: "accessories",
+		reason: "on earrings stems to the headphone fit on ear, but earrings is five letters past ear: the shorter match is taken, and earrings stays the product type",
+		want:   []tagged{tg(KindKeyword, "clip", "clip"), tg(KindProductType, "earrings", "earrings")},
+	},
+	{
+		name: "short form in a phrase", query: "run shoe", category: "footwear",
+		reason: "within a phrase the other words vouch for a short form: run shoe is a running shoe",
+		want:   []tagged{tg(KindProductType, "run shoe", "running shoe")},
+	},
+	{
+		name: "hyphenated plural", query: "flip-flops", category: "footwear",
+		reason: "a hyphenated word is split as the lexicon splits it, so flip-flops is flip-flop's plural (a review of the over-stemming rule)",
+		want:   []tagged{tg(KindProductType, "flip-flops", "flip-flop")},
+	},
+	{
 		name: "over-stemmed: stock", query: "in stock", reason: "stockings stems to stock; stock is no stocking",
 		want: []tagged{tg(KindKeyword, "stock", "stock")},
 	},
@@ -237,9 +252,15 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindKeyword, "expensive", "expensive"), tg(KindProductType, "lens", "lens")},
 	},
 	{
-		name: "or more before a measure", query: "2 tb or more 500 gb ssd", reason: "as or less: a floor on the 2 TB, then 500 GB",
-		category: "electronics",
-		want:     []tagged{tg(KindMeasure, "2 tb or more", "≥ 2 TB"), tg(KindMeasure, "500 gb", "500 GB"), tg(KindProductType, "ssd", "ssd")},
+		name: "or less between a size and a price", query: "size 12 or less $60", category: "",
+		reason: "a bare number's bound word with a value right after it bounds nothing: the hard size stays, and no $12 ceiling appears (a review of the or-less change)",
+		want:   []tagged{tg(KindSize, "size 12", "12 (numeric)").hard(), tg(KindPrice, "$60", "≤ 60.00 USD")},
+	},
+	{
+		name: "or higher between two numbers", query: "android 12 or higher 5g phone", category: "electronics",
+		reason: "12 is bounded by nothing, and is no price",
+		want: []tagged{tg(KindKeyword, "android", "android"), tg(KindMeasure, "12", "12"), tg(KindKeyword, "higher", "higher"),
+			tg(KindMeasure, "5g", "5 g"), tg(KindProductType, "phone", "phone")},
 	},
 	{
 		name: "or under before a price", query: "size 12 or under $60", reason: "or under may come before a value, as max does: it bounds the price",

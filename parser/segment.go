@@ -1,6 +1,7 @@
 package parser
 
 import (
+	"slices"
 	"strings"
 	"unicode/utf8"
 
@@ -153,7 +154,9 @@ func (p *tagger) addWord(words []word, i, piece int, space bool) []word {
 
 // match finds lexicon phrases in a run of words, longest first, left to
 // right. A hyphenated word none of whose parts starts a phrase stays one
-// plain word.
+// plain word. A phrase whose entries the words reach only through an
+// over-stemmed word (see overStemmed) is no match, and a shorter one is
+// tried: "on earrings" is not the headphone fit "on ear".
 func (p *tagger) match(ws []word) []unit {
 	if len(ws) == 0 {
 		return nil
@@ -165,6 +168,13 @@ func (p *tagger) match(ws []word) []unit {
 	var out []unit
 	for j := 0; j < len(ws); {
 		n, entries := p.lex.Match(keys[j:])
+		for n > 0 {
+			if kept := readable(entries, unitText(ws[j:j+n])); len(kept) > 0 {
+				entries = kept
+				break
+			}
+			n, entries = p.lex.Match(keys[j : j+n-1])
+		}
 		if n == 0 && ws[j].first {
 			// Try the hyphenated word joined up: "t-shirt" as "tshirt".
 			k := j
@@ -187,19 +197,41 @@ func (p *tagger) match(ws []word) []unit {
 			n = 1
 		}
 		last := ws[j+n-1]
-		var b strings.Builder
-		for x, w := range ws[j : j+n] {
-			if x > 0 {
-				if w.piece == ws[j+x-1].piece {
-					b.WriteByte('-')
-				} else {
-					b.WriteByte(' ')
-				}
-			}
-			b.WriteString(w.norm)
-		}
-		out = append(out, unit{kind: uWord, start: ws[j].start, end: last.end, text: b.String(), entries: entries, spaceBefore: ws[j].spaceBefore})
+		out = append(out, unit{kind: uWord, start: ws[j].start, end: last.end, text: unitText(ws[j : j+n]), entries: entries, spaceBefore: ws[j].spaceBefore})
 		j += n
+	}
+	return out
+}
+
+// unitText is the normalised text of a run of words: the parts of one
+// hyphenated word joined by "-", words by " ".
+func unitText(ws []word) string {
+	var b strings.Builder
+	for x, w := range ws {
+		if x > 0 {
+			if w.piece == ws[x-1].piece {
+				b.WriteByte('-')
+			} else {
+				b.WriteByte(' ')
+			}
+		}
+		b.WriteString(w.norm)
+	}
+	return b.String()
+}
+
+// readable returns the entries text may be read as: all of them when it
+// spells one exactly, else those it does not reach only through an
+// over-stemmed word.
+func readable(es []*lexicon.Entry, text string) []*lexicon.Entry {
+	if slices.ContainsFunc(es, func(e *lexicon.Entry) bool { return spells(e, text) }) {
+		return es
+	}
+	var out []*lexicon.Entry
+	for _, e := range es {
+		if !overStemmed(e, text) {
+			out = append(out, e)
+		}
 	}
 	return out
 }

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"slices"
 	"strings"
+	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon"
 )
@@ -93,19 +94,12 @@ func (p *tagger) choose() {
 		if len(es) > 1 {
 			var exact []*lexicon.Entry
 			for _, e := range es {
-				if e.Name == u.text || slices.Contains(e.Aliases, u.text) {
+				if spells(e, u.text) {
 					exact = append(exact, e)
 				}
 			}
 			if len(exact) > 0 {
 				es = exact
-			}
-		}
-		if len(es) > 0 && !slices.ContainsFunc(es, func(e *lexicon.Entry) bool { return spells(e, u.text) }) {
-			es = slices.DeleteFunc(slices.Clone(es), func(e *lexicon.Entry) bool { return overStemmed(e, u.text) })
-			if len(es) == 0 {
-				// Only an over-stemmed reading: the words are no entry.
-				u.entries = nil
 			}
 		}
 		if len(es) > 1 && withPT > 1 && hasKind(es, lexicon.ProductType) {
@@ -129,31 +123,43 @@ func spells(e *lexicon.Entry, text string) bool {
 }
 
 // overStemmed reports whether text reaches e only because the stemmer cut
-// a word of e's down past recognition: every spelling of e with as many
-// words as text has one at least three letters longer than text's word
-// in its place. Porter's stemmer takes "earrings" to "ear" and "flooring"
-// to "floor"; a shopper's "ear" or "floor" is neither. A plural or an
-// "-ing" the shopper adds ("jackets", "running") makes text's word the
-// longer, and stays a match.
+// a word down past recognition. Porter's stemmer takes "earrings" to
+// "ear", "leggings" to "leg" and "stockings" to "stock", so a shopper's
+// lone "ear" would read as earrings, and "clip on earrings" as the
+// headphone fit "on ear". It is so when every spelling of e with as many
+// words as text has a word cut down: the shopper's at least three letters
+// longer than e's ("earrings" for "ear"), or, where e is one word, at
+// least three shorter ("ear" for "earrings"). Within a phrase the other
+// words vouch for a short form ("run shoe", "fold chair"), and a plural
+// or an "-ing" the shopper adds or leaves off ("jackets", "sock") is
+// within the three. A spelling of other length (a phrase written as one
+// word, "vneck") is not judged.
 func overStemmed(e *lexicon.Entry, text string) bool {
-	tw := strings.Fields(text)
+	tw := lexicon.Words(text)
+	judged := false
 	for _, p := range append([]string{e.Name}, e.Aliases...) {
 		pw := lexicon.Words(p)
 		if len(pw) != len(tw) {
 			continue
 		}
-		ok := true
-		for i := range pw {
-			if len(pw[i])-len(tw[i]) >= 3 {
-				ok = false
-				break
-			}
-		}
-		if ok {
+		if !cutDown(pw, tw) {
 			return false
 		}
+		judged = true
 	}
-	return true
+	return judged
+}
+
+// cutDown reports whether a word of the shopper's, tw, stands for a word
+// of an entry's spelling, pw, only through the stemmer (see overStemmed).
+func cutDown(pw, tw []string) bool {
+	for i := range pw {
+		d := utf8.RuneCountInString(tw[i]) - utf8.RuneCountInString(pw[i])
+		if d >= 3 || d <= -3 && len(pw) == 1 {
+			return true
+		}
+	}
+	return false
 }
 
 func hasKind(es []*lexicon.Entry, k lexicon.Kind) bool {

@@ -86,12 +86,25 @@ type Tyre struct {
 
 // Value is a single value, or a range of two, with an optional trailing
 // bound word: "20-30 mm", "$20 to $30", "$90 max", "2 tb or more". A
-// bound word that may also come before a value ("max", "or under") and
-// has a value right after it bounds that value instead: in "size 12 max
-// $60" the ceiling is on the price, not on the 12. One that only ever
-// follows ("or less", "or more", "and up") bounds the value before it
-// whatever comes next: "$120 or less 1.9 litre rice cooker".
+// bound word with a value right after it bounds that value instead: in
+// "size 12 max $60" the ceiling is on the price, not on the 12, and in
+// "size 12 or less $60" the 12 is no bound at all.
 type Value struct {
+	Pos    lexer.Position
+	EndPos lexer.Position
+
+	From *Single `parser:"@@"`
+	To   *Single `parser:"( Space? (Dash | 'to') Space? @@ )?"`
+	Post string  `parser:"( Space? @('max' | 'min' | 'maximum' | 'minimum' | 'or' Space ('less' | 'more' | 'under' | 'over' | 'fewer' | 'lower' | 'higher' | 'below' | 'above' | 'cheaper') | 'and' Space ('under' | 'up' | 'over' | 'below' | 'above')) (?! Space? (Number | Cur | Vulgar)) | @Plus )?"`
+}
+
+// priceValue is a Value opened by a currency symbol, as the currency
+// parser reads it. A bound word that only ever follows what it bounds
+// ("or less", "or more", "and up") bounds the price whatever comes next:
+// "$120 or less 1.9 litre rice cooker". One that may also come before a
+// value ("max", "or under") does so only with no value right after it,
+// as in Value. The fields are Value's, so one converts to the other.
+type priceValue struct {
 	Pos    lexer.Position
 	EndPos lexer.Position
 
@@ -194,7 +207,7 @@ func build[T any]() *participle.Parser[T] {
 // match, which is most of participle's cost.
 var (
 	numericParser = build[numeric]()
-	valueParser   = build[Value]()
+	valueParser   = build[priceValue]()
 	quotedParser  = build[Quoted]()
 	excludeParser = build[Exclude]()
 	compareParser = build[Compare]()
@@ -254,7 +267,10 @@ func ParseItem(toks []lexer.Token) (*Item, int) {
 			it.Tyre, it.Value = n.Tyre, n.Value
 		}
 	case t.Type == tyCur:
-		it.Value, end, ok = run(valueParser, toks)
+		var v *priceValue
+		if v, end, ok = run(valueParser, toks); ok {
+			it.Value = (*Value)(v)
+		}
 	case t.Type == tyQuote:
 		it.Quoted, end, ok = run(quotedParser, toks)
 	case t.Type == tyDash:
