@@ -53,10 +53,12 @@ func TestPlural(t *testing.T) {
 		{"socks", "socks"}, {"swim trunks", "swim trunks"}, {"boxer briefs", "boxer briefs"}, {"stud earrings", "stud earrings"},
 		{"measuring spoons", "measuring spoons"}, {"mittens", "mittens"}, {"cleats", "cleats"}, {"scissors", "scissors"},
 		{"prime lens", "prime lenses"}, {"french press", "french presses"},
-		// -fe, -lf and -rf take -ves; an irregular plural; mass nouns.
+		// -ife, -elf, -alf and -arf take -ves (but safe is safes); an irregular plural; mass nouns.
 		{"chef's knife", "chef's knives"}, {"floating shelf", "floating shelves"}, {"scarf", "scarves"},
 		{"mouse", "mice"}, {"thermal underwear", "thermal underwear"}, {"jewelry", "jewelry"}, {"cutlery", "cutlery"},
 		{"wall art", "wall art"}, {"polyurethane", "polyurethane"}, {"hex key", "hex keys"}, {"derby", "derbies"},
+		{"pajamas", "pajamas"}, {"printer paper", "printer paper"}, {"duct tape", "duct tape"}, {"wood glue", "wood glue"},
+		{"safe", "safes"}, {"golf bag", "golf bags"}, {"peak current", "peak current"}, {"memory", "memory"}, {"storage", "storage"}, {"diagonal", "diagonals"},
 	} {
 		if got := plural(tc.in); got != tc.want {
 			t.Errorf("plural(%q) = %q, want %q", tc.in, got, tc.want)

@@ -382,7 +382,7 @@ func kindOfEntry(e *lexicon.Entry) parser.Kind {
 }
 
 // plural is the plural of a product type, for messages: "rain jackets",
-// "lenses", "batteries", "knives". A type already plural in form
+// "lenses", "batteries", "knives", "shelves". A type already plural in form
 // ("headphones", "socks", "swim trunks") or a mass noun ("lumber",
 // "underwear") stays as it is. The rules are those of English spelling
 // (common usage).
@@ -397,9 +397,9 @@ func plural(s string) string {
 		return s
 	case strings.HasSuffix(s, "s"), strings.HasSuffix(s, "x"), strings.HasSuffix(s, "z"), strings.HasSuffix(s, "ch"), strings.HasSuffix(s, "sh"):
 		return s + "es"
-	case strings.HasSuffix(s, "fe"):
+	case strings.HasSuffix(s, "ife"):
 		return s[:len(s)-2] + "ves"
-	case strings.HasSuffix(s, "lf"), strings.HasSuffix(s, "rf"):
+	case strings.HasSuffix(s, "elf"), strings.HasSuffix(s, "alf"), strings.HasSuffix(s, "arf"):
 		return s[:len(s)-1] + "ves"
 	case strings.HasSuffix(s, "y") && !strings.HasSuffix(s, "ey") && !strings.HasSuffix(s, "ay") && !strings.HasSuffix(s, "oy"):
 		return s[:len(s)-1] + "ies"
@@ -436,7 +436,12 @@ var unchangedPlural = map[string]bool{
 	"lumber": true, "luggage": true, "furniture": true, "flooring": true, "decking": true, "mulch": true,
 	"soil": true, "gravel": true, "sand": true, "cement": true, "concrete": true, "insulation": true,
 	"underwear": true, "jewelry": true, "jewellery": true, "cutlery": true, "plywood": true, "mdf": true,
-	"caulk": true, "wallpaper": true, "art": true, "polyurethane": true,
+	"caulk": true, "wallpaper": true, "art": true, "polyurethane": true, "paper": true, "cardstock": true,
+	"film": true, "glue": true, "tape": true, "ram": true, "wifi": true, "lvl": true, "osb": true, "glulam": true,
+	"shiplap": true, "hardboard": true, "trim": true, "compound": true, "paste": true, "lacquer": true,
+	"varnish": true, "pajamas": true, "pyjamas": true,
+	// Measures named in "... carried" lists.
+	"current": true, "data": true, "memory": true, "storage": true, "power": true, "charge": true, "time": true,
 }
 
 // dropPhrase says to a shopper what dropping c means.
