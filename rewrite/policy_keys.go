@@ -19,6 +19,10 @@ func keyPositions(lines []string) map[string]position {
 	out := make(map[string]position)
 	var table []string
 	for i, line := range lines {
+		if i == 0 {
+			// A byte order mark is no part of the first line's key.
+			line = strings.TrimPrefix(line, "\ufeff")
+		}
 		t := strings.TrimSpace(line)
 		col := strings.Index(line, t) + 1
 		switch {
@@ -31,11 +35,11 @@ func keyPositions(lines []string) map[string]position {
 			table = splitKey(inner)
 			out[strings.Join(table, "\x00")] = position{i + 1, col}
 		default:
-			k, _, ok := strings.Cut(t, "=")
-			if !ok {
+			eq := unquoted(t, '=')
+			if eq < 0 {
 				continue
 			}
-			full := append(append([]string(nil), table...), splitKey(k)...)
+			full := append(append([]string(nil), table...), splitKey(t[:eq])...)
 			out[strings.Join(full, "\x00")] = position{i + 1, col}
 			inlineKeys(out, full, line, i+1)
 		}
@@ -50,7 +54,7 @@ func keyPositions(lines []string) map[string]position {
 // looked into too; a quoted string is skipped whole, so an "=" or "{" in
 // one is no key.
 func inlineKeys(out map[string]position, full []string, line string, n int) {
-	_, v, _ := strings.Cut(line, "=")
+	v := line[unquoted(line, '=')+1:]
 	// open holds the inline tables and arrays the value is in, innermost
 	// last: a table by its key, an array as nil.
 	var open [][]string
@@ -63,9 +67,7 @@ func inlineKeys(out map[string]position, full []string, line string, n int) {
 			if inKey && keyAt < 0 {
 				keyAt = i
 			}
-			if j := strings.IndexByte(line[i+1:], c); j >= 0 {
-				i += j + 1
-			}
+			i = stringEnd(line, i)
 		case inKey && c == '=' && keyAt >= 0:
 			last = append(slices.Clone(open[len(open)-1]), splitKey(line[keyAt:i])...)
 			out[strings.Join(last, "\x00")] = position{n, keyAt + 1}
@@ -89,6 +91,36 @@ func inlineKeys(out map[string]position, full []string, line string, n int) {
 			return
 		}
 	}
+}
+
+// stringEnd returns the index of the quote that closes the TOML string
+// opening at line[i], or the line's last index when none does. A basic
+// string ("...") takes backslash escapes; a literal one ('...') none.
+func stringEnd(line string, i int) int {
+	q := line[i]
+	for j := i + 1; j < len(line); j++ {
+		switch {
+		case q == '"' && line[j] == '\\':
+			j++
+		case line[j] == q:
+			return j
+		}
+	}
+	return len(line) - 1
+}
+
+// unquoted returns the index of the first c in line outside quoted
+// strings, or -1.
+func unquoted(line string, c byte) int {
+	for i := 0; i < len(line); i++ {
+		switch line[i] {
+		case '"', '\'':
+			i = stringEnd(line, i)
+		case c:
+			return i
+		}
+	}
+	return -1
 }
 
 // splitKey splits a dotted TOML key, honouring quotes.
