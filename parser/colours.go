@@ -82,8 +82,10 @@ type ColourReading struct {
 // LabValue returns the reading's CIELAB value, unrounded.
 func (c *ColourReading) LabValue() colour.Lab { return c.lab }
 
-// UnknownColourError is ReadColour's error for a name that is well
-// formed but no colour the lexicon knows, with or without a modifier.
+// UnknownColourError is ReadColour's error for words that are well
+// formed but read as no single colour of the lexicon, with or without a
+// modifier: an unknown name ("burgandy"), or words that say more than a
+// colour ("navy dress", "not navy").
 type UnknownColourError struct {
 	// Name is the name as given, trimmed.
 	Name string
