@@ -80,6 +80,12 @@ func (w SignalWeightSettings) settle() SignalWeights {
 	return SignalWeights{Impression: v(w.Impression), Click: v(w.Click), AddToCart: v(w.AddToCart), Purchase: v(w.Purchase)}
 }
 
+// inOrder returns the weights cheapest first, as signalWeightNames
+// names them.
+func (w SignalWeights) inOrder() []float64 {
+	return []float64{w.Impression, w.Click, w.AddToCart, w.Purchase}
+}
+
 // Signals are the [signals] settings settled: every value set.
 type Signals struct {
 	Weights      SignalWeights `json:"weights"`
@@ -178,8 +184,7 @@ func (pol *Policy) signalSettings(s signalsTOML, at func([]string, string, ...an
 // checkWeightOrder warns when the settled weights do not rise from
 // impression to purchase: a purchase should count for more than a click.
 func (p *Policy) checkWeightOrder() {
-	w := p.Signals().Weights
-	v := []float64{w.Impression, w.Click, w.AddToCart, w.Purchase}
+	v := p.Signals().Weights.inOrder()
 	for i := 1; i < len(v); i++ {
 		if v[i] < v[i-1] {
 			p.Warnings = append(p.Warnings, fmt.Sprintf("signals.weights: %s (%g) is worth less than %s (%g); tune then prizes the cheaper signal",
