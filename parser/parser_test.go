@@ -218,6 +218,16 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindProductType, "run shoe", "running shoe")},
 	},
 	{
+		name: "an ending the shopper adds", query: "showing uv filters", category: "camera",
+		reason: "showing is three letters past the filler show, an -ing: still the filler; relaxations, four past relaxed, is no silhouette",
+		want:   []tagged{tg(KindProductType, "uv filters", "uv filter")},
+	},
+	{
+		name: "four letters past an entry", query: "relaxations",
+		reason: "relaxations stems to relax, as the silhouette relaxed does, but is no relaxed fit",
+		want:   []tagged{tg(KindKeyword, "relaxations", "relaxations")},
+	},
+	{
 		name: "hyphenated plural", query: "flip-flops", category: "footwear",
 		reason: "a hyphenated word is split as the lexicon splits it, so flip-flops is flip-flop's plural (a review of the over-stemming rule)",
 		want:   []tagged{tg(KindProductType, "flip-flops", "flip-flop")},

@@ -126,20 +126,21 @@ func spells(e *lexicon.Entry, text string) bool {
 // a word down past recognition. Porter's stemmer takes "earrings" to
 // "ear", "leggings" to "leg" and "stockings" to "stock", so a shopper's
 // lone "ear" would read as earrings, and "clip on earrings" as the
-// headphone fit "on ear". It is so when every spelling of e with as many
-// words as text has a word cut down: the shopper's at least three letters
-// longer than e's ("earrings" for "ear"), or, where e is one word, at
-// least three shorter ("ear" for "earrings"). Within a phrase the other
-// words vouch for a short form ("run shoe", "fold chair"), and a plural
-// or an "-ing" the shopper adds or leaves off ("jackets", "sock") is
-// within the three. A spelling of other length (a phrase written as one
-// word, "vneck") is not judged.
+// headphone fit "on ear". It is so when every spelling of e that text's
+// words reach, stem for stem, has a word cut down: the shopper's at
+// least four letters longer than e's ("earrings" for "ear",
+// "relaxations" for "relaxed"), or, where e is one word, at least three
+// shorter ("ear" for "earrings"). Within a phrase the other words vouch
+// for a short form ("run shoe", "fold chair"), and an ending the shopper
+// adds or leaves off ("jackets", "sock", "showing" for "show") is within
+// those. A reading through a phrase written as one word ("vneck") is not
+// judged.
 func overStemmed(e *lexicon.Entry, text string) bool {
 	tw := lexicon.Words(text)
 	judged := false
 	for _, p := range append([]string{e.Name}, e.Aliases...) {
 		pw := lexicon.Words(p)
-		if len(pw) != len(tw) {
+		if len(pw) != len(tw) || !sameKeys(pw, tw) {
 			continue
 		}
 		if !cutDown(pw, tw) {
@@ -150,12 +151,23 @@ func overStemmed(e *lexicon.Entry, text string) bool {
 	return judged
 }
 
+// sameKeys reports whether two runs of words stem alike, word for word:
+// whether the spelling pw is one text's words reach.
+func sameKeys(pw, tw []string) bool {
+	for i := range pw {
+		if lexicon.Key(pw[i]) != lexicon.Key(tw[i]) {
+			return false
+		}
+	}
+	return true
+}
+
 // cutDown reports whether a word of the shopper's, tw, stands for a word
 // of an entry's spelling, pw, only through the stemmer (see overStemmed).
 func cutDown(pw, tw []string) bool {
 	for i := range pw {
 		d := utf8.RuneCountInString(tw[i]) - utf8.RuneCountInString(pw[i])
-		if d >= 3 || d <= -3 && len(pw) == 1 {
+		if d >= 4 || d <= -3 && len(pw) == 1 {
 			return true
 		}
 	}
