@@ -168,8 +168,10 @@ func (p *tagger) match(ws []word) []unit {
 	var out []unit
 	for j := 0; j < len(ws); {
 		n, entries := p.lex.Match(keys[j:])
+		text, textN := "", 0 // the text of the first textN words
 		for n > 0 {
-			if kept := readable(entries, unitText(ws[j:j+n])); len(kept) > 0 {
+			text, textN = unitText(ws[j:j+n]), n
+			if kept := readable(entries, text); len(kept) > 0 {
 				entries = kept
 				break
 			}
@@ -196,8 +198,11 @@ func (p *tagger) match(ws []word) []unit {
 		if n == 0 {
 			n = 1
 		}
+		if textN != n {
+			text = unitText(ws[j : j+n])
+		}
 		last := ws[j+n-1]
-		out = append(out, unit{kind: uWord, start: ws[j].start, end: last.end, text: unitText(ws[j : j+n]), entries: entries, spaceBefore: ws[j].spaceBefore})
+		out = append(out, unit{kind: uWord, start: ws[j].start, end: last.end, text: text, entries: entries, spaceBefore: ws[j].spaceBefore})
 		j += n
 	}
 	return out
