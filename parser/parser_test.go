@@ -247,6 +247,11 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindProductType, "sock", "socks")},
 	},
 	{
+		name: "step-up ring", query: "step up ring 49-52mm", category: "camera",
+		reason: "a step-up ring adapts a lens's filter thread to a larger filter, and is sold by the two threads (common practice); it is no ring to wear",
+		want:   []tagged{tg(KindProductType, "step up ring", "step-up ring"), tg(KindMeasure, "49-52mm", "49..52 mm")},
+	},
+	{
 		name: "headphone fit", query: "over ear headphones", category: "electronics",
 		reason: "over-ear, on-ear and in-ear are how headphones are sold (common practice); over is not left as a comparison word, nor ear as an over-stemmed earring",
 		want:   []tagged{tg(KindSilhouette, "over ear", "over-ear"), tg(KindProductType, "headphones", "headphones")},
