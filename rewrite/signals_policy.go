@@ -196,8 +196,9 @@ func (p *Policy) checkWeightOrder() {
 // mergeSignals lays b over a.
 func mergeSignals(a, b SignalSettings) SignalSettings {
 	out := a
+	over := b.Weights.fields()
 	for i, f := range out.Weights.fields() {
-		if v := *b.Weights.fields()[i].v; v != nil {
+		if v := *over[i].v; v != nil {
 			*f.v = v
 		}
 	}
