@@ -222,11 +222,9 @@ func (e *Engine) BaselineMatches(ctx context.Context, f Fallback, q string, kept
 // query's, lower-cased, but for those the analyzer of the products'
 // words takes nothing from.
 func (e *Engine) baselineWords(q string) []string {
-	m := e.idx.Mapping()
-	a := m.AnalyzerNamed(m.AnalyzerNameForPath(fWords))
 	var out []string
 	for _, w := range strings.Fields(strings.ToLower(q)) {
-		if a == nil || len(a.Analyze([]byte(w))) > 0 {
+		if e.words == nil || len(e.words.Analyze([]byte(w))) > 0 {
 			out = append(out, w)
 		}
 	}

@@ -10,6 +10,7 @@ import (
 	"sync"
 
 	"github.com/blevesearch/bleve/v2"
+	"github.com/blevesearch/bleve/v2/analysis"
 	"github.com/blevesearch/bleve/v2/search/query"
 	index "github.com/blevesearch/bleve_index_api"
 
@@ -22,6 +23,9 @@ type Engine struct {
 	idx   bleve.Index
 	vocab vocabulary
 	sets  *sets
+	// words is the analyzer of the products' words, which the blind
+	// partial match reads its query's words with.
+	words analysis.Analyzer
 
 	// counts remembers recent counts by plan: the index does not change
 	// while it is open, and the planner asks the same parts of queries
@@ -71,7 +75,9 @@ func Open(dir string) (*Engine, error) {
 		idx.Close()
 		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
 	}
-	return &Engine{idx: idx, vocab: v, sets: newSets(r, idx.Mapping()), counts: make(map[string]int)}, nil
+	m := idx.Mapping()
+	return &Engine{idx: idx, vocab: v, sets: newSets(r, m), words: m.AnalyzerNamed(m.AnalyzerNameForPath(fWords)),
+		counts: make(map[string]int)}, nil
 }
 
 // Close closes the index.
