@@ -308,12 +308,17 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 				continue
 			}
 			out.Strictness[parser.Kind(k)] = s.Strictness[k]
-			if parser.Kind(k) == parser.KindSpec && s.Strictness[k] < parser.Hard {
-				pol.Warnings = append(pol.Warnings, fmt.Sprintf("%s: spec is %s: wire gauges, tyre sizes and threads may then be substituted; defer to local codes and the maker's specification", strings.Join(key, "."), s.Strictness[k]))
+			if parser.Kind(k) == parser.KindSpec {
+				pol.checkSafety(sub("strictness", k), "spec", "wire gauges, tyre sizes and threads", s.Strictness[k], at)
 			}
 		}
 	}
 	out.Dimensions = knownDimensions(sub("dimensions"), s.Dimensions, dims, at)
+	for _, d := range sortedKeys(out.Dimensions) {
+		if slices.Contains(safetyDimensions, d) {
+			pol.checkSafety(sub("dimensions", d), d, "ratings", out.Dimensions[d], at)
+		}
+	}
 	out.StandardSizes = knownDimensions(sub("standard_sizes"), s.StandardSizes, dims, at)
 	for dim, sizes := range out.StandardSizes {
 		for _, sz := range sizes {
@@ -324,6 +329,24 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 		}
 	}
 	return out
+}
+
+// safetyDimensions are the measure dimensions that are ratings: a
+// breaker's or a fuse's current, a battery's or a tool's voltage, what a
+// ladder or a strap is rated to carry. A substitute could hurt someone.
+var safetyDimensions = []string{"current", "load_rating", "peak_current", "voltage"}
+
+// checkSafety reports a policy that relaxes what a substitute for could
+// hurt someone (name, at key; what says what it covers): filler, which
+// would drop it unseen, is an error; anything else below hard is a
+// warning.
+func (pol *Policy) checkSafety(key []string, name, what string, s parser.Strictness, at func([]string, string, ...any)) {
+	switch {
+	case s == parser.Filler:
+		at(key, "%s may not be filler: it would be dropped without the shopper being told; make it soft at the least", name)
+	case s < parser.Hard:
+		pol.Warnings = append(pol.Warnings, fmt.Sprintf("%s: %s is %s: %s may then be substituted; defer to local codes and the maker's specification", strings.Join(key[:len(key)-2], "."), name, s, what))
+	}
 }
 
 // knownDimensions is m without the dimensions no query is read with

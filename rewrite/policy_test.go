@@ -70,6 +70,8 @@ func TestParsePolicyErrors(t *testing.T) {
 		{"window too short", "[signals]\njoin_window = \"10ms\"\n", 2, 1, "want 1s to 168h"},
 		{"share out of range", "[signals]\nkeep_share = 1.5\n", 2, 1, "up to 1"},
 		{"bias out of range", "[signals]\nposition_bias = 9\n", 2, 1, "want 0 to 5"},
+		{"spec as filler", "[category.tyres.strictness]\nspec = \"filler\"\n", 2, 1, "spec may not be filler"},
+		{"a rating as filler", "[defaults.dimensions]\ncurrent = \"filler\"\n", 2, 1, "current may not be filler"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			_, err := ParsePolicy("test.toml", tc.text, lexicon.Default())
@@ -138,13 +140,31 @@ func TestLoadPolicyOverlays(t *testing.T) {
 	}
 }
 
-func TestRelaxingASpecWarns(t *testing.T) {
-	p, err := ParsePolicy("shop.toml", "[category.electrical.strictness]\nspec = \"soft\"\n", lexicon.Default())
-	if err != nil {
-		t.Fatal(err)
-	}
-	if len(p.Warnings) != 1 || !strings.Contains(p.Warnings[0], "maker's specification") {
-		t.Errorf("warnings = %q", p.Warnings)
+// A policy that relaxes what a substitute for could hurt someone loads,
+// with a warning that names the level and what may now be substituted.
+func TestRelaxingASafetyConstraintWarns(t *testing.T) {
+	for _, tc := range []struct{ name, text, want string }{
+		{"spec", "[category.electrical.strictness]\nspec = \"soft\"\n", "category.electrical: spec is soft: wire gauges"},
+		{"current", "[defaults.dimensions]\ncurrent = \"firm\"\n", "defaults: current is firm: ratings may then be substituted"},
+		{"load rating", "[product_type.ladder.dimensions]\nload_rating = \"soft\"\n", "product_type.ladder: load_rating is soft"},
+		{"hard stays quiet", "[defaults.dimensions]\nvoltage = \"hard\"\n", ""},
+		{"other dimensions stay quiet", "[defaults.dimensions]\nlength = \"soft\"\n", ""},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			p, err := ParsePolicy("shop.toml", tc.text, lexicon.Default())
+			if err != nil {
+				t.Fatal(err)
+			}
+			if tc.want == "" {
+				if len(p.Warnings) != 0 {
+					t.Errorf("warnings = %q, want none", p.Warnings)
+				}
+				return
+			}
+			if len(p.Warnings) != 1 || !strings.Contains(p.Warnings[0], tc.want) || !strings.Contains(p.Warnings[0], "maker's specification") {
+				t.Errorf("warnings = %q, want one containing %q", p.Warnings, tc.want)
+			}
+		})
 	}
 }
 
@@ -158,6 +178,12 @@ func TestApply(t *testing.T) {
 		{"sage paint", "colour is hard in paint", []parser.Strictness{parser.Hard, parser.Firm}},
 		{`"sage" rug`, "a quoted phrase stays hard whatever the policy", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"sage rug", "colour is firm in home", []parser.Strictness{parser.Firm, parser.Firm}},
+		{"20 amp breaker", "a current rating is hard everywhere", []parser.Strictness{parser.Hard, parser.Firm}},
+		{"12v drill", "so is a voltage", []parser.Strictness{parser.Hard, parser.Firm}},
+		{"extension ladder 300 lb", "and a load rating", []parser.Strictness{parser.Firm, parser.Hard}},
+		{"5/16 carriage bolt 2 in", "a bolt's diameter is hard, inherited from bolt; its length firm", []parser.Strictness{parser.Hard, parser.Firm, parser.Firm}},
+		{"10 inch skillet", "a pan's diameter stays firm", []parser.Strictness{parser.Firm, parser.Firm}},
+		{"60w halogen bulb", "a bulb's wattage is hard: a fixture is rated for so many watts (common practice)", []parser.Strictness{parser.Hard, parser.Firm}},
 	} {
 		r := parser.Parse(tc.query)
 		DefaultPolicy().Apply(r, lex)

@@ -497,3 +497,53 @@ func TestWidenedMeasureKeepsTheAmount(t *testing.T) {
 		}
 	}
 }
+
+// A rating is never widened: a 15 A breaker is no answer to "20 amp
+// breaker", a 10 A fuse none to "2 amp fuse" (a fuse rated above the
+// circuit's current fails to protect it; common practice, and the
+// reason electrical codes name the rating). The shop below carries only
+// the neighbours of what each query asks for, so every rescue must keep
+// the measure exactly as asked and find nothing.
+func TestRatingsAreNeverWidened(t *testing.T) {
+	lbToKg := 0.45359237 // the international pound, by definition (1959 agreement)
+	ratings := []product{
+		{ID: "CB-15", Type: "circuit breaker", Measures: map[string]float64{"current": 15}},
+		{ID: "CB-30", Type: "circuit breaker", Measures: map[string]float64{"current": 30}},
+		{ID: "FU-10", Type: "fuse", Measures: map[string]float64{"current": 10}},
+		{ID: "BT-6", Type: "battery", Measures: map[string]float64{"voltage": 6}},
+		{ID: "BT-24", Type: "battery", Measures: map[string]float64{"voltage": 24}},
+		{ID: "LD-225", Type: "step ladder", Measures: map[string]float64{"load_rating": 225 * lbToKg * 1000, "height": 1828.8}},
+		{ID: "RS-500", Type: "ratchet strap", Measures: map[string]float64{"load_rating": 500 * lbToKg * 1000}},
+		{ID: "HB-5", Type: "hex bolt", Measures: map[string]float64{"diameter": 7.9375}},
+		{ID: "LC-55", Type: "lens cap", Measures: map[string]float64{"diameter": 55}},
+		{ID: "TY-17", Type: "tyre", Measures: map[string]float64{"rim_diameter": 431.8}},
+		{ID: "BU-100", Type: "led bulb", Measures: map[string]float64{"power": 100}},
+	}
+	for _, tc := range []struct{ query, dimension string }{
+		{"20 amp breaker", "current"},
+		{"2 amp fuse", "current"},
+		{"12v battery", "voltage"},
+		{"step ladder 300 lb", "load_rating"},
+		{"ratchet strap 1000 lb", "load_rating"},
+		{"8mm hex bolt", "diameter"},
+		{"52mm lens cap", "diameter"},
+		{"16 inch tyre", "rim_diameter"},
+		{"60w led bulb", "power"},
+	} {
+		t.Run(tc.query, func(t *testing.T) {
+			o := mustRescue(t, ratings, tc.query)
+			ms := o.Parsed.Of(parser.KindMeasure)
+			if len(ms) != 1 || ms[0].Measure.Dimension != tc.dimension {
+				t.Fatalf("read as %+v, want one %s measure", o.Parsed.Constraints, tc.dimension)
+			}
+			for _, r := range o.Relaxations {
+				if r.Kind == parser.KindMeasure {
+					t.Errorf("the rating was relaxed: %+v", r)
+				}
+			}
+			if o.Count != 0 || len(o.Missing) == 0 {
+				t.Errorf("found %d with missing %+v; want nothing, the rating named as missing\n%s", o.Count, o.Missing, o.Explanation)
+			}
+		})
+	}
+}
