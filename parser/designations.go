@@ -154,12 +154,18 @@ func (p *tagger) batteryWord(k int) (spec.Designation, bool) {
 	return spec.BatterySize(u.text)
 }
 
-// wireGauge tags "14 awg", "12 gauge" and "14/2".
+// wireGauge tags "14 awg", "12 gauge", "00 awg" and "14/2": a whole
+// number is the gauge, all zeros an aught size ("0" is 1/0, "00" 2/0 up
+// to "0000", 4/0: common practice, as ASTM B258 lists them); a fraction
+// is gauge over conductors.
 func (p *tagger) wireGauge(start, end int, q quantity, n *grammar.Num) (Constraint, bool) {
 	gauge, conductors := 0, 0
 	switch {
 	case q.num.integer:
 		gauge = int(q.num.value)
+		if raw := p.q[q.num.start:q.num.end]; q.num.value == 0 && strings.Trim(raw, "0") == "" {
+			gauge = 1 - len(raw)
+		}
 	case n.Only != nil && n.Only.Vulgar == "":
 		g, err1 := strconv.Atoi(n.Only.Num)
 		c, err2 := strconv.Atoi(n.Only.Den)
@@ -170,12 +176,118 @@ func (p *tagger) wireGauge(start, end int, q quantity, n *grammar.Num) (Constrai
 	default:
 		return Constraint{}, false
 	}
+	return p.awg(start, end, gauge, conductors)
+}
+
+// awg tags an American Wire Gauge between start and end; an impossible
+// gauge is a positioned error.
+func (p *tagger) awg(start, end, gauge, conductors int) (Constraint, bool) {
 	d, err := spec.WireGauge(gauge, conductors)
 	if err != nil {
 		p.errorf(start, end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 		return Constraint{}, false
 	}
 	return specConstraint(start, end, d, "American Wire Gauge"), true
+}
+
+// gaugeWords follow a gauge number: "awg" always names a wire gauge, the
+// others ("12 gauge", "12 ga", and the spellings "gage" and "guage") only
+// where wire is sold (wiredCategory).
+var gaugeWords = map[string]bool{"awg": true, "gauge": true, "ga": true, "gage": true, "guage": true}
+
+// wiredCategory reports whether the category's goods are sized by wire
+// gauge: electrical wire and cable, electronics' cable and speaker
+// wire, battery cable.
+func (p *tagger) wiredCategory() bool {
+	return p.category == "electrical" || p.category == "electronics" || p.category == "batteries"
+}
+
+// gaugeWordAfter returns how many units after unit k end at a gauge word
+// that belongs to it ("12 gauge", "12-gauge"), or 0.
+func (p *tagger) gaugeWordAfter(k int) int {
+	if w, _ := p.nextWord(k); w != nil && gaugeWords[w.text] {
+		return 1
+	}
+	if k+2 < len(p.units) && p.units[k+1].kind == uSym && p.q[p.units[k+1].start:p.units[k+1].end] == "-" && !p.units[k+1].spaceBefore &&
+		p.units[k+2].kind == uWord && !p.units[k+2].spaceBefore && gaugeWords[p.units[k+2].text] {
+		return 2
+	}
+	return 0
+}
+
+// gauge tags the quantity at unit k and the gauge word used units after
+// it: an American Wire Gauge after "awg" or where wire is sold, else a
+// gauge number of another trade ("16 gauge sheet metal", "22 gauge
+// needle", "20 gauge earrings"), which no standard here decodes.
+func (p *tagger) gauge(k, used int, q quantity) (Constraint, bool) {
+	u, w := &p.units[k], &p.units[k+used]
+	if w.text == "awg" || p.wiredCategory() {
+		c, ok := p.wireGauge(u.start, w.end, q, u.item.Value.From.Dims.Parts[0].Num)
+		if ok && w.text == "guage" {
+			c.Evidence = join(c.Evidence, `"guage" read as "gauge"`)
+		}
+		return c, ok
+	}
+	if !q.num.integer {
+		return Constraint{}, false
+	}
+	return Constraint{Kind: KindMeasure, Start: u.start, End: w.end,
+		Evidence: "a gauge number outside wiring: a wire gauge only for wire and cable, or with awg",
+		Measure:  &Measure{Dimension: "gauge", Quantity: "count", Unit: "gauge", BaseUnit: "gauge", Amount: ptr(q.num.value), BaseAmount: ptr(q.num.value)}}, true
+}
+
+// aught tags "2/0", "4/0 awg": N over zero, N from 1 to 4, is an aught
+// wire gauge (common practice) after a gauge word or where wire is sold;
+// anywhere else it is a fraction that divides by zero, an error. It
+// returns the extra units used.
+func (p *tagger) aught(k, n int) int {
+	u := &p.units[k]
+	used := p.gaugeWordAfter(k)
+	if used == 0 && !p.wiredCategory() {
+		p.errorf(u.start, u.end, "%d/0 divides by zero", n)
+		return 0
+	}
+	end := p.units[k+used].end
+	if c, ok := p.awg(u.start, end, 1-n, 0); ok {
+		c.Evidence = join(c.Evidence, fmt.Sprintf("%d/0 is an aught size", n))
+		p.add(c)
+	}
+	return used
+}
+
+// aughtOf returns N when v is written N/0 alone, N from 1 to 4.
+func aughtOf(v *grammar.Value) (int, bool) {
+	if v.To != nil || v.Post != "" || v.From.Money != nil || v.From.Dims == nil || len(v.From.Dims.Parts) != 1 {
+		return 0, false
+	}
+	q := v.From.Dims.Parts[0]
+	f := q.Num.Only
+	if f == nil || f.Vulgar != "" || f.Den != "0" || q.Unit != "" || q.Mark != "" || q.Currency != "" {
+		return 0, false
+	}
+	switch f.Num {
+	case "1", "2", "3", "4":
+		return int(f.Num[0] - '0'), true
+	}
+	return 0, false
+}
+
+// gaugeBefore tags "awg 12": the word awg at unit k before a whole
+// number. It returns the extra units used, or -1.
+func (p *tagger) gaugeBefore(k int) int {
+	u := &p.units[k]
+	if u.text != "awg" || k+1 >= len(p.units) || p.units[k+1].kind != uItem || !p.bareNumber(&p.units[k+1]) {
+		return -1
+	}
+	v := &p.units[k+1]
+	s, ok := p.readSingle(v.item.Value.From)
+	if !ok || !s.parts[0].num.integer {
+		return -1
+	}
+	if c, ok := p.wireGauge(u.start, v.end, s.parts[0], v.item.Value.From.Dims.Parts[0].Num); ok {
+		p.add(c)
+	}
+	return 1
 }
 
 // unifiedThread tags "1/4-20" (a fraction, a dash, a thread count, no

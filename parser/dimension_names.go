@@ -17,7 +17,7 @@ func Dimensions(lex *lexicon.Lexicon) []string {
 	if lex == nil {
 		lex = lexicon.Default()
 	}
-	seen := map[string]bool{"number": true, "dimension": true, "thread_count": true}
+	seen := map[string]bool{"number": true, "dimension": true, "thread_count": true, "gauge": true}
 	for _, q := range units.Quantities() {
 		seen[string(q)] = true
 	}

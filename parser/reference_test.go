@@ -96,14 +96,22 @@ func TestTyreSizesISO(t *testing.T) {
 }
 
 // ASTM B258 American Wire Gauge diameters:
-// testdata/reference/awg_wire_diameters.tsv, for "N awg" and "N gauge".
+// testdata/reference/awg_wire_diameters.tsv, for "N awg" and "N gauge",
+// and the aught sizes as the table writes them ("00 awg") and as they are
+// sold ("2/0 awg", "2/0 battery cable": N/0 is the N-zero size, common
+// practice).
 func TestWireGaugeASTMB258(t *testing.T) {
 	for _, row := range reference.Rows(t, "awg_wire_diameters.tsv") {
 		n, err := strconv.Atoi(row["n"])
-		if err != nil || n < 0 {
-			continue // 0000..00 are written 4/0..2/0, which read as fractions
+		if err != nil {
+			t.Fatalf("row %v: n is not a number", row)
 		}
-		for _, q := range []string{row["n"] + " awg wire", row["n"] + " gauge wire"} {
+		qs := []string{row["gauge"] + " awg wire", row["gauge"] + " gauge wire", "awg " + row["gauge"] + " wire"}
+		if n <= 0 {
+			aught := strconv.Itoa(1-n) + "/0"
+			qs = append(qs, aught+" awg", aught+" gauge wire", aught+" battery cable", aught+" wire")
+		}
+		for _, q := range qs {
 			c := only(t, Parse(q), KindSpec)
 			if got, want := c.Spec.Dimensions["diameter"], float(t, row, "d_formula_mm"); !near(got, want, 1e-4) {
 				t.Errorf("%q: diameter %.5f mm, ASTM B258 formula gives %.5f", q, got, want)

@@ -409,6 +409,10 @@ func (p *tagger) wordUnit(k int) int {
 			if n := p.codeAfter(k); n > 0 {
 				return n
 			}
+		case u.text == "awg":
+			if n := p.gaugeBefore(k); n >= 0 {
+				return n
+			}
 		}
 		if n := p.packOf(k); n > 0 {
 			return n

@@ -142,6 +142,9 @@ func (p *tagger) item(k int) int {
 func (p *tagger) value(k int) int {
 	u := &p.units[k]
 	v := u.item.Value
+	if n, ok := aughtOf(v); ok {
+		return p.aught(k, n)
+	}
 	from, ok := p.readSingle(v.From)
 	if !ok {
 		return 0
@@ -149,6 +152,11 @@ func (p *tagger) value(k int) int {
 	if v.To != nil {
 		to, ok := p.readSingle(v.To)
 		if !ok {
+			return 0
+		}
+		if c, ok := p.cableDash(u.start, u.end, from, to); ok {
+			// "12-2 wire": gauge, a dash, conductors, as NM cable is sold.
+			p.add(c)
 			return 0
 		}
 		if len(from.parts) == 1 && len(to.parts) >= 1 && !to.price {
@@ -214,11 +222,11 @@ func (p *tagger) nextWord(k int) (*unit, bool) {
 func (p *tagger) point(k int, q quantity) int {
 	u := &p.units[k]
 	w, spaced := p.nextWord(k)
-	// Wire gauge: "14 awg", "12 gauge", "14/2 awg".
-	if w != nil && (w.text == "awg" || w.text == "gauge" || w.text == "ga") && !q.hasUnit {
-		if c, ok := p.wireGauge(u.start, w.end, q, u.item.Value.From.Dims.Parts[0].Num); ok {
+	// Gauge: "14 awg", "12 gauge", "12-gauge", "14/2 awg", "16 gauge".
+	if used := p.gaugeWordAfter(k); used > 0 && !q.hasUnit {
+		if c, ok := p.gauge(k, used, q); ok {
 			p.add(c)
-			return 1
+			return used
 		}
 	}
 	// Cable: "12/2", "14/3" (gauge over conductors) where nothing says otherwise.
@@ -821,6 +829,28 @@ func (p *tagger) countAfter(k int) bool {
 func countConstraint(start, end int, n float64, dimension, evidence string) Constraint {
 	return Constraint{Kind: KindMeasure, Start: start, End: end, Evidence: evidence,
 		Measure: &Measure{Dimension: dimension, Quantity: "count", Unit: "count", BaseUnit: "count", Amount: ptr(n), BaseAmount: ptr(n)}}
+}
+
+// cableDash tags "12-2", "14-3" between start and end as cable, gauge
+// then conductors, where wire is sold: whole numbers, no unit, no space,
+// an even gauge 6 to 18 and 2 to 4 conductors, as cableFraction.
+func (p *tagger) cableDash(start, end int, from, to single) (Constraint, bool) {
+	if !p.wiredCategory() || from.price || to.price || len(from.parts) != 1 || len(to.parts) != 1 || strings.ContainsAny(p.q[start:end], " \t") {
+		return Constraint{}, false
+	}
+	a, b := from.parts[0], to.parts[0]
+	if a.hasUnit || b.hasUnit || !a.num.integer || !b.num.integer {
+		return Constraint{}, false
+	}
+	g, c := int(a.num.value), int(b.num.value)
+	if g < 6 || g > 18 || g%2 != 0 || c < 2 || c > 4 {
+		return Constraint{}, false
+	}
+	d, ok := p.awg(start, end, g, c)
+	if ok {
+		d.Evidence = join(d.Evidence, "gauge-conductors, as cable is written (common practice)")
+	}
+	return d, ok
 }
 
 // cableFraction reports whether n is written like cable, gauge over

@@ -316,7 +316,11 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 	out.Dimensions = knownDimensions(sub("dimensions"), s.Dimensions, dims, at)
 	for _, d := range sortedKeys(out.Dimensions) {
 		if slices.Contains(safetyDimensions, d) {
-			pol.checkSafety(sub("dimensions", d), d, "ratings", out.Dimensions[d], at)
+			what := "ratings"
+			if d == "gauge" {
+				what = "gauge numbers"
+			}
+			pol.checkSafety(sub("dimensions", d), d, what, out.Dimensions[d], at)
 		}
 	}
 	out.StandardSizes = knownDimensions(sub("standard_sizes"), s.StandardSizes, dims, at)
@@ -331,10 +335,11 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 	return out
 }
 
-// safetyDimensions are the measure dimensions that are ratings: a
-// breaker's or a fuse's current, a battery's or a tool's voltage, what a
-// ladder or a strap is rated to carry. A substitute could hurt someone.
-var safetyDimensions = []string{"current", "load_rating", "peak_current", "voltage"}
+// safetyDimensions are the measure dimensions a substitute for could
+// hurt someone: ratings (a breaker's or a fuse's current, a battery's or
+// a tool's voltage, what a ladder or a strap is rated to carry) and gauge
+// numbers outside wiring (a shotgun's, a needle's, sheet metal's).
+var safetyDimensions = []string{"current", "gauge", "load_rating", "peak_current", "voltage"}
 
 // checkSafety reports a policy that relaxes what a substitute for could
 // hurt someone (name, at key; what says what it covers): filler, which

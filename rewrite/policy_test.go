@@ -147,6 +147,7 @@ func TestRelaxingASafetyConstraintWarns(t *testing.T) {
 		{"spec", "[category.electrical.strictness]\nspec = \"soft\"\n", "category.electrical: spec is soft: wire gauges"},
 		{"current", "[defaults.dimensions]\ncurrent = \"firm\"\n", "defaults: current is firm: ratings may then be substituted"},
 		{"load rating", "[product_type.ladder.dimensions]\nload_rating = \"soft\"\n", "product_type.ladder: load_rating is soft"},
+		{"gauge", "[defaults.dimensions]\ngauge = \"firm\"\n", "defaults: gauge is firm: gauge numbers"},
 		{"hard stays quiet", "[defaults.dimensions]\nvoltage = \"hard\"\n", ""},
 		{"other dimensions stay quiet", "[defaults.dimensions]\nlength = \"soft\"\n", ""},
 	} {
@@ -183,6 +184,8 @@ func TestApply(t *testing.T) {
 		{"extension ladder 300 lb", "and a load rating", []parser.Strictness{parser.Firm, parser.Hard}},
 		{"5/16 carriage bolt 2 in", "a bolt's diameter is hard, inherited from bolt; its length firm", []parser.Strictness{parser.Hard, parser.Firm, parser.Firm}},
 		{"10 inch skillet", "a pan's diameter stays firm", []parser.Strictness{parser.Firm, parser.Firm}},
+		{"16 gauge sheet metal", "a gauge number outside wiring is hard too: a thinner sheet is no substitute", []parser.Strictness{parser.Hard, parser.Soft, parser.Soft}},
+		{"20 gauge earrings", "as is a gauge on jewellery", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"60w halogen bulb", "a bulb's wattage is hard: a fixture is rated for so many watts (common practice)", []parser.Strictness{parser.Hard, parser.Firm}},
 	} {
 		r := parser.Parse(tc.query)

@@ -501,7 +501,9 @@ func TestWidenedMeasureKeepsTheAmount(t *testing.T) {
 // A rating is never widened: a 15 A breaker is no answer to "20 amp
 // breaker", a 10 A fuse none to "2 amp fuse" (a fuse rated above the
 // circuit's current fails to protect it; common practice, and the
-// reason electrical codes name the rating). The shop below carries only
+// reason electrical codes name the rating), and an 18 gauge sheet none
+// to "16 gauge sheet metal" (a gauge number names a thickness that its
+// trade's table fixes). The shop below carries only
 // the neighbours of what each query asks for, so every rescue must keep
 // the measure exactly as asked and find nothing.
 func TestRatingsAreNeverWidened(t *testing.T) {
@@ -518,6 +520,8 @@ func TestRatingsAreNeverWidened(t *testing.T) {
 		{ID: "LC-55", Type: "lens cap", Measures: map[string]float64{"diameter": 55}},
 		{ID: "TY-17", Type: "tyre", Measures: map[string]float64{"rim_diameter": 431.8}},
 		{ID: "BU-100", Type: "led bulb", Measures: map[string]float64{"power": 100}},
+		{ID: "SM-18", Type: "sheet metal", Measures: map[string]float64{"gauge": 18}},
+		{ID: "ER-18", Type: "earrings", Measures: map[string]float64{"gauge": 18}},
 	}
 	for _, tc := range []struct{ query, dimension string }{
 		{"20 amp breaker", "current"},
@@ -529,6 +533,8 @@ func TestRatingsAreNeverWidened(t *testing.T) {
 		{"52mm lens cap", "diameter"},
 		{"16 inch tyre", "rim_diameter"},
 		{"60w led bulb", "power"},
+		{"16 gauge sheet metal", "gauge"},
+		{"20 gauge earrings", "gauge"},
 	} {
 		t.Run(tc.query, func(t *testing.T) {
 			o := mustRescue(t, ratings, tc.query)
