@@ -64,8 +64,13 @@ func (p *tagger) codeUnit(k int) int {
 		dia, err1 := strconv.ParseFloat(parts[1], 64)
 		pitch, err2 := strconv.ParseFloat(p.units[k+2].item.Value.From.Dims.Parts[0].Num.Whole, 64)
 		if err1 == nil && err2 == nil {
+			end := p.units[k+2].end
+			if pitch == 0 {
+				p.errorf(u.start, end, "%s", zeroPitch)
+				return 2
+			}
 			if d, err := spec.MetricThreadSize(dia, pitch); err == nil {
-				p.add(specConstraint(u.start, p.units[k+2].end, d, "ISO metric thread"))
+				p.add(specConstraint(u.start, end, d, "ISO metric thread"))
 				return 2
 			}
 		}
@@ -105,6 +110,11 @@ func (p *tagger) code(start int, u *unit) {
 		if ok && len(parts) == 4 {
 			pitch, err = strconv.ParseFloat(parts[3], 64)
 			ok = err == nil
+			if ok && pitch == 0 && p.category == "hardware" {
+				p.errorf(start, u.end, "%s", zeroPitch)
+				return
+			}
+			ok = ok && pitch != 0
 		}
 		if ok {
 			if d, err := spec.MetricThreadSize(dia, pitch); err == nil {
@@ -290,6 +300,13 @@ func (p *tagger) gaugeBefore(k int) int {
 	return 1
 }
 
+// A pitch or a thread count written as zero is badly formed: spec reads
+// a zero pitch as "none given", the coarse thread, which a shopper who
+// typed "m8x0" or "1/4-0" did not ask for.
+const zeroPitch = "a thread's pitch is above zero: write M8 for the coarse pitch, M8x1 for a fine one"
+
+var errZeroTPI = errors.New("a thread has more than 0 threads per inch: write 1/4-20, #10-24")
+
 // unifiedThread tags "1/4-20" (a fraction, a dash, a thread count, no
 // spaces) between start and end as a unified inch thread.
 func (p *tagger) unifiedThread(start, end int, from *grammar.Single, tpi quantity) (Constraint, bool) {
@@ -306,6 +323,9 @@ func (p *tagger) unifiedThread(start, end int, from *grammar.Single, tpi quantit
 		size = fr.Num + "/" + fr.Den
 	}
 	d, err := spec.UnifiedThreadSize(size, int(tpi.num.value))
+	if tpi.num.value == 0 {
+		err = errZeroTPI
+	}
 	if err != nil {
 		if p.category == "hardware" {
 			p.errorf(start, end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
@@ -341,9 +361,15 @@ func (p *tagger) numbered(start int, v *unit) int {
 			return -1
 		}
 		d, err := spec.UnifiedThreadSize("#"+a.parts[0].num.decimal, int(b.parts[0].num.value))
+		if b.parts[0].num.value == 0 {
+			err = errZeroTPI
+		}
 		if err != nil {
+			// Badly written, and read as nothing else: "#10-7" is no
+			// range of lengths. A length after it is still read.
 			p.errorf(start, end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
-			return -1
+			p.lengths(b, 1, v.end, p.lengthSlot())
+			return 0
 		}
 		p.add(specConstraint(start, end, d, "unified inch thread"))
 		p.lengths(b, 1, v.end, p.lengthSlot())

@@ -165,8 +165,15 @@ func (p *tagger) value(k int) int {
 			if len(to.parts) == 1 {
 				threadEnd = u.end
 			}
+			reported := len(p.res.Errors)
 			if c, ok := p.unifiedThread(u.start, threadEnd, v.From, to.parts[0]); ok {
 				p.add(c)
+				p.lengths(to, 1, u.end, p.lengthSlot())
+				return 0
+			}
+			if len(p.res.Errors) > reported {
+				// A thread written wrong ("1/4-7") is an error, not a
+				// range of lengths; a length after it is still read.
 				p.lengths(to, 1, u.end, p.lengthSlot())
 				return 0
 			}
