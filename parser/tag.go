@@ -511,7 +511,8 @@ var bedSizes = map[string]string{"twin": "twin", "twin xl": "twin xl", "full": "
 	"single": "single", "small double": "small double"}
 
 // bedSize reads "queen", "king", "twin xl", "california king" in home and
-// furniture (or with no product type) as a bed size.
+// furniture (or with no product type) as a bed size, with the word size
+// after it ("queen size").
 func (p *tagger) bedSize(k int) int {
 	u := &p.units[k]
 	if p.category != "home" && p.category != "furniture" && p.head != nil {
@@ -526,6 +527,11 @@ func (p *tagger) bedSize(k int) int {
 	v, ok := bedSizes[text]
 	if !ok {
 		return -1
+	}
+	// "queen size", "king size": the word size is part of the name
+	// (common practice), not the opening of another size.
+	if n := k + used + 1; n < len(p.units) && p.units[n].kind == uWord && p.units[n].text == "size" && p.units[n].spaceBefore {
+		used, end = used+1, p.units[n].end
 	}
 	p.add(Constraint{Kind: KindSize, Start: u.start, End: end, Size: &Size{System: "bed", Value: v}, Evidence: "bed size"})
 	return used
