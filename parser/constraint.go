@@ -1,5 +1,7 @@
 package parser
 
+import "strings"
+
 // Constraint is one tagged span of a query.
 type Constraint struct {
 	Kind Kind
@@ -95,6 +97,37 @@ type Spec struct {
 	Attributes map[string]string
 	// Standard names the standard the values come from ("PS 20").
 	Standard string
+}
+
+// TyreSize is the key under which [Spec.Keys] files a tyre's size alone,
+// without its service description.
+const TyreSize = "tyre_size"
+
+// Keys returns where a product that carries s is filed, key to
+// lower-cased designation: under its system, and a tyre also under
+// [TyreSize] by its size alone ("205/55r16" for "205/55R16 91V"), so that
+// a query naming only the size finds a tyre listed with its load index
+// and speed symbol.
+func (s *Spec) Keys() map[string]string {
+	keys := map[string]string{s.System: strings.ToLower(s.Designation)}
+	if s.System == "tyre" {
+		size, _, _ := strings.Cut(keys[s.System], " ")
+		keys[TyreSize] = size
+	}
+	return keys
+}
+
+// Key returns where a query's s looks, one of [Spec.Keys]: a tyre with
+// no service description looks under [TyreSize], so it finds the size
+// however the catalog lists it; a tyre with one ("205/55R16 91V") wants
+// that load index and speed symbol, and looks under its system, as every
+// other designation does.
+func (s *Spec) Key() (key, designation string) {
+	d := strings.ToLower(s.Designation)
+	if s.System == "tyre" && !strings.Contains(d, " ") {
+		return TyreSize, d
+	}
+	return s.System, d
 }
 
 // Colour places a colour constraint in CIELAB, so that a query colour can

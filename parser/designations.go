@@ -54,6 +54,66 @@ func (p *tagger) tyre(u *unit) {
 	p.add(specConstraint(u.start, u.end, d, "ISO metric tyre size"))
 }
 
+// tyres reports whether the query is about tyres: its category, or a
+// tyre size read before.
+func (p *tagger) tyres() bool {
+	if p.category == "tyres" {
+		return true
+	}
+	for _, c := range p.res.Constraints {
+		if c.Spec != nil && c.Spec.System == "tyre" {
+			return true
+		}
+	}
+	return false
+}
+
+// loadVersions are the words that mark a tyre built for a higher load
+// at the same size: XL, extra load, reinforced (common practice).
+var loadVersions = map[string]bool{"xl": true, "extra load": true, "reinforced": true}
+
+// loadVersion tags "xl", "extra load" or "reinforced" on a tyre at unit
+// k as a hard keyword, not a clothing size: a standard-load tyre is no
+// substitute, and the marking is in the product's words. -1 when it is
+// none.
+func (p *tagger) loadVersion(k int) int {
+	u := &p.units[k]
+	if !p.tyres() {
+		return -1
+	}
+	used, end := 0, u.end
+	if k+1 < len(p.units) && p.units[k+1].kind == uWord && loadVersions[u.text+" "+p.units[k+1].text] {
+		used, end = 1, p.units[k+1].end
+	} else if !loadVersions[u.text] {
+		return -1
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: u.start, End: end, Name: strings.ToLower(p.q[u.start:end]), Strictness: Hard,
+		Evidence: "a tyre's load version, not a clothing size: a standard-load tyre is no substitute"})
+	return used
+}
+
+// serviceDescription is a tyre's load index and speed symbol written
+// alone, "91v", "94w" (ISO 4000-1 speed symbols L to Y).
+var serviceDescription = regexp.MustCompile(`^(\d{2,3})([lmnpqrstuhvwy])$`)
+
+// serviceAlone tags a tyre's service description at unit k, written
+// apart from its size ("tyres 91v"), as a hard keyword, not a voltage:
+// a lower load index or speed symbol is no substitute. False when it is
+// none.
+func (p *tagger) serviceAlone(k int) bool {
+	u := &p.units[k]
+	m := serviceDescription.FindStringSubmatch(strings.ToLower(p.q[u.start:u.end]))
+	if m == nil || !p.tyres() {
+		return false
+	}
+	if li, err := strconv.Atoi(m[1]); err != nil || li < 50 || li > 150 {
+		return false
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: m[1] + m[2], Strictness: Hard,
+		Evidence: "a tyre's load index " + m[1] + " and speed symbol " + strings.ToUpper(m[2]) + " (ISO 4000-1), not a voltage"})
+	return true
+}
+
 // codeUnit tags the code at unit k; it returns the extra units used.
 func (p *tagger) codeUnit(k int) int {
 	u := &p.units[k]

@@ -158,3 +158,20 @@ func ExampleUnknownColourError() {
 	// true burgundy
 	// false hex colour "#12345" has 5 digits; want 3 or 6
 }
+
+// A tyre listed with its service description is filed under its size
+// alone too, so that a query for the size finds it; a query that names
+// a service description looks for that one.
+func ExampleSpec_Keys() {
+	listed := parser.Parse("205/55R16 91V").Of(parser.KindSpec)[0].Spec
+	keys := listed.Keys()
+	fmt.Println(keys["tyre"], "|", keys[parser.TyreSize])
+	for _, q := range []string{"205/55r16", "205/55r16 91v"} {
+		key, d := parser.Parse(q).Of(parser.KindSpec)[0].Spec.Key()
+		fmt.Printf("%s looks under %s for %s\n", q, key, d)
+	}
+	// Output:
+	// 205/55r16 91v | 205/55r16
+	// 205/55r16 looks under tyre_size for 205/55r16
+	// 205/55r16 91v looks under tyre for 205/55r16 91v
+}

@@ -471,6 +471,9 @@ func (p *tagger) wordUnit(k int) int {
 
 // letterSize tags a letter or fit size at unit k; -1 when it is none.
 func (p *tagger) letterSize(k int) int {
+	if n := p.loadVersion(k); n >= 0 {
+		return n
+	}
 	u := &p.units[k]
 	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.sized() {
 		// Two-word letter sizes: "extra large", "extra small".

@@ -145,6 +145,9 @@ func (p *tagger) value(k int) int {
 	if n, ok := aughtOf(v); ok {
 		return p.aught(k, n)
 	}
+	if p.serviceAlone(k) {
+		return 0
+	}
 	from, ok := p.readSingle(v.From)
 	if !ok {
 		return 0

@@ -4,9 +4,11 @@ import (
 	"context"
 	"fmt"
 	"slices"
+	"strings"
 	"sync"
 
 	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/parser"
 )
 
 // product is one item of the invented test shop. Its fields hold what a
@@ -96,7 +98,7 @@ func (m *memEngine) Values(ctx context.Context, field, dim string, within Plan) 
 				out[fmt.Sprintf("%g", v)]++
 			}
 		case "spec":
-			if v := pr.Specs[dim]; v != "" {
+			if v := specOf(pr, dim); v != "" {
 				out[v]++
 			}
 		default:
@@ -176,7 +178,8 @@ func clauseMatches(pr product, c Clause) bool {
 	case "price":
 		return c.Unit == "USD" && within(pr.Price)
 	case "spec":
-		return pr.Specs[c.Dimension] != "" && slices.Contains(c.Values, pr.Specs[c.Dimension])
+		v := specOf(pr, c.Dimension)
+		return v != "" && slices.Contains(c.Values, v)
 	case "compatibility":
 		return slices.Contains(pr.Compat, c.Values[0])
 	case "keyword":
@@ -204,4 +207,14 @@ var shop = []product{
 	{ID: "LB-1", Type: "stud", Specs: map[string]string{"lumber": "2x4"}, Measures: map[string]float64{"length": 2438.4}, Price: 5},
 	{ID: "LB-2", Type: "stud", Specs: map[string]string{"lumber": "2x4"}, Measures: map[string]float64{"length": 3048}, Price: 7},
 	{ID: "WR-1", Type: "electrical wire", Colour: "red", Hex: "#ff0000", Specs: map[string]string{"awg": "12 awg"}, Measures: map[string]float64{"length": 15240}, Price: 40},
+}
+
+// specOf is the designation pr is filed under at key, as the bleve
+// adapter files it (parser.Spec.Keys): a tyre also by its size alone.
+func specOf(pr product, key string) string {
+	if key == parser.TyreSize {
+		size, _, _ := strings.Cut(pr.Specs["tyre"], " ")
+		return size
+	}
+	return pr.Specs[key]
 }

@@ -187,7 +187,8 @@ func (rw *Rewriter) exactClause(i int, c parser.Constraint) Clause {
 	case c.Size != nil:
 		cl.Dimension, cl.Values = c.Size.System, []string{c.Size.Value}
 	case c.Spec != nil:
-		cl.Dimension, cl.Values = c.Spec.System, []string{strings.ToLower(c.Spec.Designation)}
+		key, d := c.Spec.Key()
+		cl.Dimension, cl.Values = key, []string{d}
 	case c.Kind == parser.KindCompatibility:
 		cl.Values = []string{c.Target}
 	case c.Kind == parser.KindPartNumber:

@@ -59,7 +59,19 @@ type vocabulary struct {
 	// palette entries), for Open to check that the index holds them all:
 	// bleve opens an index whose segment is damaged as an empty one.
 	Documents uint64 `json:"documents"`
+	// Layout is the layout of the fields the build wrote; Open refuses
+	// another, since queries would look for fields it lacks.
+	Layout int `json:"layout"`
 }
+
+// layout numbers the index's field layout: 2 files each tyre also by its
+// size alone (parser.TyreSize). An index without the number is layout 1.
+const layout = 2
+
+// ErrOldLayout is the error Open returns, wrapped, for an index written
+// by a whittle that laid its fields out otherwise: rebuild it. Test for
+// it with errors.Is.
+var ErrOldLayout = errors.New("the index was built by another version of whittle")
 
 type vocabColour struct {
 	Name  string     `json:"name"`
@@ -379,7 +391,7 @@ func read(ctx context.Context, idx bleve.Index, r io.Reader, opts BuildOptions, 
 }
 
 func writeVocabulary(path string, cs map[string]*vocabColour, docs uint64) error {
-	v := vocabulary{Documents: docs}
+	v := vocabulary{Documents: docs, Layout: layout}
 	for _, c := range cs {
 		v.Colours = append(v.Colours, *c)
 	}

@@ -54,6 +54,12 @@ func Open(dir string) (*Engine, error) {
 	if err := json.Unmarshal(b, &v); err != nil {
 		return nil, fmt.Errorf("%s: the colour vocabulary is damaged: %w", dir, err)
 	}
+	if v.Layout < 2 {
+		v.Layout = 1
+	}
+	if v.Layout != layout {
+		return nil, fmt.Errorf("%s: %w (its layout is %d, this one reads %d): rebuild it with whittle index", dir, ErrOldLayout, v.Layout, layout)
+	}
 	idx, err := bleve.Open(filepath.Join(dir, "index"))
 	if err != nil {
 		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)

@@ -109,7 +109,7 @@ func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
 		m.AddFieldMappingsAt(dim, num)
 		mv.AddFieldMappingsAt(dim, kw)
 	}
-	for _, sys := range []string{"lumber", "tyre", "awg", "metric_thread", "unified_thread", "paper", "battery"} {
+	for _, sys := range []string{"lumber", "tyre", parser.TyreSize, "awg", "metric_thread", "unified_thread", "paper", "battery"} {
 		spec.AddFieldMappingsAt(sys, kw)
 	}
 	doc.AddSubDocumentMapping("m", m)
@@ -206,7 +206,9 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 		if err != nil {
 			return nil, nil, fmt.Errorf("spec %q: %w", s, err)
 		}
-		specs[sp.System] = strings.ToLower(sp.Designation)
+		for key, d := range sp.Keys() {
+			specs[key] = d
+		}
 	}
 	if len(specs) > 0 {
 		d["spec"] = specs

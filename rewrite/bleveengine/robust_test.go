@@ -48,6 +48,16 @@ func TestDamagedIndex(t *testing.T) {
 			b = []byte(strings.Replace(string(b), `"documents":20`, `"documents":21`, 1))
 			os.WriteFile(filepath.Join(dir, vocabFile), b, 0o644)
 		}, "holds 20 documents where the build wrote 21"},
+		// An index an older whittle built lacks fields queries now look
+		// in (each tyre's size alone); it is refused, not searched.
+		{"older layout", func(t *testing.T, dir string) {
+			b, err := os.ReadFile(filepath.Join(dir, vocabFile))
+			if err != nil {
+				t.Fatal(err)
+			}
+			b = []byte(strings.Replace(string(b), `,"layout":2`, ``, 1))
+			os.WriteFile(filepath.Join(dir, vocabFile), b, 0o644)
+		}, "built by another version of whittle (its layout is 1, this one reads 2): rebuild it"},
 		{"damaged metadata", func(t *testing.T, dir string) { overwrite(t, filepath.Join(dir, "index"), "index_meta.json", garbage) }, ""},
 	} {
 		t.Run(tc.name, func(t *testing.T) {

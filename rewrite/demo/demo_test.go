@@ -3,6 +3,8 @@ package demo
 import (
 	"bytes"
 	"context"
+	"fmt"
+	"io"
 	"os"
 	"path/filepath"
 	"strings"
@@ -98,6 +100,35 @@ func TestRunSmallestCatalog(t *testing.T) {
 		if !strings.Contains(text, want) {
 			t.Errorf("the demo output lacks %q:\n%s", want, text)
 		}
+	}
+}
+
+// The demo's own index, left by a whittle that laid its fields out
+// otherwise, is built again rather than refused.
+func TestRunRebuildsAnOlderIndex(t *testing.T) {
+	dir := t.TempDir()
+	opts := Options{Dir: dir, Products: MinProducts, Events: 1000}
+	if err := Run(context.Background(), io.Discard, opts); err != nil {
+		t.Fatal(err)
+	}
+	vocab := filepath.Join(dir, fmt.Sprintf("index-%s-%d", generation, MinProducts), "whittle-vocabulary.json")
+	b, err := os.ReadFile(vocab)
+	if err != nil {
+		t.Fatal(err)
+	}
+	old := strings.Replace(string(b), `,"layout":2`, ``, 1)
+	if old == string(b) {
+		t.Fatalf("the vocabulary names no layout: %s", b)
+	}
+	if err := os.WriteFile(vocab, []byte(old), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	var out bytes.Buffer
+	if err := Run(context.Background(), &out, opts); err != nil {
+		t.Fatalf("the demo refused its older index: %v", err)
+	}
+	if !strings.Contains(out.String(), "Indexing the demo catalog") {
+		t.Errorf("the older index was not rebuilt:\n%s", out.String())
 	}
 }
 

@@ -80,14 +80,26 @@ func Run(ctx context.Context, w io.Writer, opts Options) error {
 	start := time.Now()
 	products := catalog.Demo(opts.Products, 1)
 	idxDir := filepath.Join(opts.Dir, fmt.Sprintf("index-%s-%d", generation, opts.Products))
-	if _, err := os.Stat(idxDir); err != nil || opts.Rebuild {
+	build := func() error {
 		fmt.Fprintf(w, "Indexing the demo catalog: %d products of an invented general store...\n", len(products))
 		if _, err := bleveengine.BuildProducts(ctx, products, idxDir, bleveengine.BuildOptions{BatchSize: 5000}); err != nil {
 			return err
 		}
 		fmt.Fprintf(w, "indexed in %.1fs\n\n", time.Since(start).Seconds())
+		return nil
+	}
+	if _, err := os.Stat(idxDir); err != nil || opts.Rebuild {
+		if err := build(); err != nil {
+			return err
+		}
 	}
 	eng, err := bleveengine.Open(idxDir)
+	if errors.Is(err, bleveengine.ErrOldLayout) {
+		// The demo's own index, built by an older whittle: build it again.
+		if err = build(); err == nil {
+			eng, err = bleveengine.Open(idxDir)
+		}
+	}
 	if err != nil {
 		return err
 	}
