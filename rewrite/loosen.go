@@ -53,7 +53,10 @@ func (rw *Rewriter) Loosen(ctx context.Context, o *Outcome) (*Loosening, error) 
 	}
 	items := st.items
 	if !st.laddered {
-		items = rw.laddered(ctx, items, o.Policy)
+		var err error
+		if items, err = rw.laddered(ctx, items, o.Policy); err != nil {
+			return nil, err
+		}
 		if err := ctx.Err(); err != nil {
 			return nil, err
 		}
@@ -85,13 +88,15 @@ func (rw *Rewriter) Loosen(ctx context.Context, o *Outcome) (*Loosening, error) 
 // laddered is a copy of items, each with its exact state and the states
 // the policy allows below it; items are left as they are, so that an
 // outcome may be loosened from several goroutines.
-func (rw *Rewriter) laddered(ctx context.Context, items []*item, e Effective) []*item {
+func (rw *Rewriter) laddered(ctx context.Context, items []*item, e Effective) ([]*item, error) {
 	out := make([]*item, len(items))
 	for i, it := range items {
 		c := *it
 		c.levels = slices.Clone(it.levels[:1])
 		out[i] = &c
 	}
-	rw.addRelaxations(ctx, out, e)
-	return out
+	if err := rw.addRelaxations(ctx, out, e); err != nil {
+		return nil, err
+	}
+	return out, nil
 }

@@ -53,6 +53,8 @@ func TestPlural(t *testing.T) {
 		{"socks", "socks"}, {"swim trunks", "swim trunks"}, {"boxer briefs", "boxer briefs"}, {"stud earrings", "stud earrings"},
 		{"measuring spoons", "measuring spoons"}, {"mittens", "mittens"}, {"cleats", "cleats"}, {"scissors", "scissors"},
 		{"prime lens", "prime lenses"}, {"french press", "french presses"},
+		// Measure dimensions, as "in the nearest masses carried" names them.
+		{"mass", "masses"}, {"focal length", "focal lengths"}, {"capacity", "capacities"}, {"load rating", "load ratings"},
 		// -ife, -elf, -alf and -arf take -ves (but safe is safes); an irregular plural; mass nouns.
 		{"chef's knife", "chef's knives"}, {"floating shelf", "floating shelves"}, {"scarf", "scarves"},
 		{"mouse", "mice"}, {"thermal underwear", "thermal underwear"}, {"jewelry", "jewelry"}, {"cutlery", "cutlery"},

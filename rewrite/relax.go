@@ -1,6 +1,7 @@
 package rewrite
 
 import (
+	"cmp"
 	"context"
 	"fmt"
 	"math"
@@ -80,7 +81,11 @@ func (rw *Rewriter) exactItems(r *parser.Result) []*item {
 }
 
 // addRelaxations gives each item the states below its exact one.
-func (rw *Rewriter) addRelaxations(ctx context.Context, items []*item, e Effective) {
+//
+// It returns the first error the engine gave while asking what the
+// catalog carries, unless ctx is done: without it the ladders would lack
+// the widenings the catalog allows.
+func (rw *Rewriter) addRelaxations(ctx context.Context, items []*item, e Effective) error {
 	// What the catalog carries is asked among the products of the same
 	// kind: those the product type and the hard constraints allow.
 	var within Plan
@@ -89,11 +94,16 @@ func (rw *Rewriter) addRelaxations(ctx context.Context, items []*item, e Effecti
 			within.Clauses = append(within.Clauses, *it.levels[0].clause)
 		}
 	}
+	var failed error
 	for _, it := range items {
 		if it.c.Strictness < parser.Hard && !it.c.Excluded {
-			rw.relaxations(ctx, it, e, without(within, it.index))
+			failed = cmp.Or(failed, rw.relaxations(ctx, it, e, without(within, it.index)))
 		}
 	}
+	if ctx.Err() != nil {
+		return nil
+	}
+	return failed
 }
 
 // without is p less the clause that comes from constraint i.
@@ -115,7 +125,7 @@ const (
 	costDropFirm = 4.0
 )
 
-func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, within Plan) {
+func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, within Plan) error {
 	c := it.c
 	add := func(cl *Clause, op, detail, phrase string, cost float64) {
 		it.levels = append(it.levels, level{clause: cl, cost: cost,
@@ -131,7 +141,11 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 		for _, w := range rw.widenMeasure(it, e) {
 			add(w.clause, OpWiden, w.detail, w.phrase, costWiden)
 		}
-		if w := rw.widenToCarried(ctx, it, within); w != nil {
+		w, err := rw.widenToCarried(ctx, it, within)
+		if err != nil {
+			return err
+		}
+		if w != nil {
 			add(w.clause, OpWiden, w.detail, w.phrase, costWiden*1.5)
 		}
 	case parser.KindProductType:
@@ -156,13 +170,14 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 	if c.Kind == parser.KindProductType && strings.Contains(c.Evidence, "head product type") {
 		// The head is widened, never dropped: a shopper who asked for
 		// lenses is not shown rugs.
-		return
+		return nil
 	}
 	drop := costDropSoft
 	if c.Strictness >= parser.Firm {
 		drop = costDropFirm
 	}
 	add(nil, OpDrop, "dropped", dropPhrase(c), drop)
+	return nil
 }
 
 // exactClause is constraint c as a clause.
@@ -327,8 +342,8 @@ func (rw *Rewriter) nearestWord(ctx context.Context, w string) *wordEntry {
 	if !ok {
 		return nil
 	}
-	words := rw.words(ctx)
-	j, _ := rw.near.Nearest(w, limit)
+	words, near, _ := rw.words(ctx)
+	j, _ := near.Nearest(w, limit)
 	if j < 0 {
 		return nil
 	}
@@ -342,8 +357,8 @@ func (rw *Rewriter) nearestWords(ctx context.Context, w string) []*wordEntry {
 	if !ok {
 		return nil
 	}
-	words := rw.words(ctx)
-	all, _ := rw.near.AllNearest(w, limit)
+	words, near, _ := rw.words(ctx)
+	all, _ := near.AllNearest(w, limit)
 	out := make([]*wordEntry, len(all))
 	for i, j := range all {
 		out[i] = &words[j]
@@ -470,15 +485,15 @@ func dropPhrase(c parser.Constraint) string {
 
 // widenToCarried widens a measure to the nearest amounts the catalog
 // carries below and above it, among products like the ones asked for.
-func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) *widening {
+func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) (*widening, error) {
 	cat, ok := rw.engine.(Catalog)
 	m := it.c.Measure
 	if !ok || m == nil || m.BaseUnit == "" || m.BaseAmount == nil {
-		return nil
+		return nil, nil
 	}
 	vals, err := cat.Values(ctx, string(parser.KindMeasure), m.Dimension, within)
 	if err != nil || len(vals) == 0 {
-		return nil
+		return nil, err
 	}
 	v := *m.BaseAmount
 	lo, hi := math.Inf(-1), math.Inf(1)
@@ -495,7 +510,7 @@ func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) *
 		}
 	}
 	if math.IsInf(lo, 0) && math.IsInf(hi, 0) {
-		return nil
+		return nil, nil
 	}
 	if math.IsInf(lo, 0) {
 		lo = v
@@ -506,5 +521,5 @@ func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) *
 	cl := rw.exactClause(it.index, it.c)
 	cl.Min, cl.Max, cl.Near = &lo, &hi, &v
 	return &widening{&cl, fmt.Sprintf("to the nearest amounts carried (%.4g..%.4g %s)", lo, hi, m.BaseUnit),
-		"in the nearest " + strings.ReplaceAll(m.Dimension, "_", " ") + "s carried"}
+		"in the nearest " + plural(strings.ReplaceAll(m.Dimension, "_", " ")) + " carried"}, nil
 }

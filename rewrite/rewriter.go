@@ -1,6 +1,7 @@
 package rewrite
 
 import (
+	"cmp"
 	"container/heap"
 	"context"
 	"errors"
@@ -33,14 +34,15 @@ type Rewriter struct {
 	*known
 }
 
-// known caches the catalog's colours and typo vocabulary.
+// known caches the catalog's colours and typo vocabulary, once each has
+// been read without an error.
 type known struct {
-	mu       sync.Mutex
-	palDone  bool
-	pal      *colour.Palette
-	wordOnce sync.Once
-	vocab    []wordEntry
-	near     *lexicon.NearWords // the words of vocab, for typo lookups
+	mu        sync.Mutex
+	palDone   bool
+	pal       *colour.Palette
+	wordsDone bool
+	vocab     []wordEntry
+	near      *lexicon.NearWords // the words of vocab, for typo lookups
 }
 
 // Option configures a Rewriter.
@@ -84,25 +86,47 @@ func (rw *Rewriter) Tuned(t Tuning) *Rewriter {
 
 // palette is the catalog's colours, asked of the engine until it answers.
 func (rw *Rewriter) palette(ctx context.Context) *colour.Palette {
+	pal, _ := rw.readPalette(ctx)
+	return pal
+}
+
+// readPalette is palette with the engine's error, if it failed; a failed
+// or cancelled read is tried again next time.
+func (rw *Rewriter) readPalette(ctx context.Context) (*colour.Palette, error) {
 	rw.mu.Lock()
 	defer rw.mu.Unlock()
 	if rw.palDone {
-		return rw.pal
+		return rw.pal, nil
 	}
 	cat, ok := rw.engine.(Catalog)
 	if !ok {
 		rw.palDone = true
-		return nil
+		return nil, nil
 	}
 	cs, err := cat.Colours(ctx)
 	if err != nil {
-		return nil // a failed or cancelled call is tried again next time
+		return nil, err
 	}
 	if len(cs) > 0 {
 		rw.pal = colour.NewPalette(cs)
 	}
 	rw.palDone = true
-	return rw.pal
+	return rw.pal, nil
+}
+
+// readCatalog reads what the rescue needs of the catalog as a whole,
+// its colours and its words, unless they are read already. It returns
+// the engine's error, but none when ctx is done: the search then stops
+// at its deadline as it does for a count.
+func (rw *Rewriter) readCatalog(ctx context.Context) error {
+	_, err := rw.readPalette(ctx)
+	if err == nil {
+		_, _, err = rw.words(ctx)
+	}
+	if ctx.Err() != nil {
+		return nil
+	}
+	return err
 }
 
 // wordEntry is a word a typo may be read as: a lexicon entry's name or
@@ -122,45 +146,57 @@ type wordEntry struct {
 // be read as; then the words of the product types of several words
 // ("ceiling" of "ceiling fan"), which come last so that a whole entry
 // wins a tie.
-func (rw *Rewriter) words(ctx context.Context) []wordEntry {
-	rw.wordOnce.Do(func() {
-		var phrases []string // product types of several words
-		if cat, ok := rw.engine.(Catalog); ok {
-			for _, f := range []parser.Kind{parser.KindProductType, parser.KindColour, parser.KindBrand, parser.KindMaterial, parser.KindPattern} {
-				vals, err := cat.Values(ctx, string(f), "", Plan{})
-				if err != nil {
-					continue
+func (rw *Rewriter) words(ctx context.Context) ([]wordEntry, *lexicon.NearWords, error) {
+	rw.mu.Lock()
+	defer rw.mu.Unlock()
+	if rw.wordsDone {
+		return rw.vocab, rw.near, nil
+	}
+	var vocab []wordEntry
+	var phrases []string // product types of several words
+	var failed error
+	if cat, ok := rw.engine.(Catalog); ok {
+		for _, f := range []parser.Kind{parser.KindProductType, parser.KindColour, parser.KindBrand, parser.KindMaterial, parser.KindPattern} {
+			vals, err := cat.Values(ctx, string(f), "", Plan{})
+			if err != nil {
+				failed = cmp.Or(failed, err)
+				continue
+			}
+			for _, v := range sortedKeys(vals) {
+				if f == parser.KindProductType {
+					phrases = append(phrases, v)
 				}
-				for _, v := range sortedKeys(vals) {
-					if f == parser.KindProductType {
-						phrases = append(phrases, v)
-					}
-					if !strings.ContainsAny(v, " -") && len(v) >= 4 {
-						rw.vocab = append(rw.vocab, wordEntry{word: v, kind: f, typeWord: f == parser.KindProductType})
-					}
+				if !strings.ContainsAny(v, " -") && len(v) >= 4 {
+					vocab = append(vocab, wordEntry{word: v, kind: f, typeWord: f == parser.KindProductType})
 				}
 			}
 		}
-		for _, k := range []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern, lexicon.Silhouette, lexicon.Brand} {
-			for _, e := range rw.lex.Entries(k) {
-				for _, w := range append([]string{e.Name}, e.Aliases...) {
-					if k == lexicon.ProductType {
-						phrases = append(phrases, w)
-					}
-					if !strings.ContainsAny(w, " -") && len(w) >= 4 {
-						rw.vocab = append(rw.vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e), typeWord: k == lexicon.ProductType})
-					}
+	}
+	for _, k := range []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern, lexicon.Silhouette, lexicon.Brand} {
+		for _, e := range rw.lex.Entries(k) {
+			for _, w := range append([]string{e.Name}, e.Aliases...) {
+				if k == lexicon.ProductType {
+					phrases = append(phrases, w)
+				}
+				if !strings.ContainsAny(w, " -") && len(w) >= 4 {
+					vocab = append(vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e), typeWord: k == lexicon.ProductType})
 				}
 			}
 		}
-		rw.vocab = append(rw.vocab, partWords(phrases, rw.vocab)...)
-		list := make([]string, len(rw.vocab))
-		for i, w := range rw.vocab {
-			list[i] = w.word
-		}
-		rw.near = lexicon.NewNearWords(list)
-	})
-	return rw.vocab
+	}
+	vocab = append(vocab, partWords(phrases, vocab)...)
+	list := make([]string, len(vocab))
+	for i, w := range vocab {
+		list[i] = w.word
+	}
+	near := lexicon.NewNearWords(list)
+	if failed != nil {
+		// What could be read, for this call; the catalog is asked again
+		// next time.
+		return vocab, near, failed
+	}
+	rw.vocab, rw.near, rw.wordsDone = vocab, near, true
+	return vocab, near, nil
 }
 
 // partWords are the words of four letters or more of the phrases of
@@ -311,7 +347,12 @@ func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
 // on its own (one that matches nothing alone is the first suspect; a
 // common one costs less to drop than a rare one). It never counts the
 // same plan twice. When the budget or the deadline runs out it returns
-// the best plan found so far, with a Note.
+// the best plan found so far, with a Note. When an engine call fails on
+// the way (a count, the catalog's colours or words, the values carried,
+// an unavailable product's facts), it returns that error and no outcome,
+// since one without what the call would have found would pass for an
+// answer; nothing read in the failure is kept, so a later call asks
+// again.
 //
 // When r as typed finds too little and an unknown word of it is a typo
 // of a product type, or of a word of one, that then heads the query
@@ -322,9 +363,23 @@ func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
 // A reading that would change a head r already had, or loosen a
 // constraint hard in r, is not used.
 func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcome, error) {
+	var failed error
+	out, err := rw.rescueParsed(ctx, r, &failed)
+	if err == nil && failed != nil {
+		// An engine call failed on the way: an outcome without what it
+		// would have found is no answer.
+		return nil, failed
+	}
+	return out, err
+}
+
+func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *error) (*Outcome, error) {
+	if err := rw.readCatalog(ctx); err != nil {
+		return nil, err
+	}
 	e := rw.policy.Apply(r, rw.lex)
 	out := &Outcome{Query: r.Query, Parsed: r, Policy: e}
-	s := &search{rw: rw, ctx: ctx, out: out, seen: make(map[string]int), budget: rw.budget}
+	s := &search{rw: rw, ctx: ctx, out: out, seen: make(map[string]int), budget: rw.budget, failed: failed}
 	s.items = rw.exactItems(r)
 	if err := refusal(r, s.items, rw.maxBytes()); err != nil {
 		return nil, err
@@ -348,7 +403,7 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 	// A misspelt product type: plan from the query read again with it
 	// fixed, the fix being part of every plan from here on.
 	if rd := rw.reread(ctx, r); rd != nil {
-		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: rw.exactItems(rd.parsed)}
+		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: rw.exactItems(rd.parsed), failed: failed}
 		fixedExact := make([]int, len(fixed.items))
 		if fn, err := fixed.count(fixedExact); err == nil {
 			r, e, s, exact, n = rd.parsed, rd.policy, fixed, fixedExact, fn
@@ -363,7 +418,9 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 			return rw.settle(s, exact, n), nil
 		}
 	}
-	rw.addRelaxations(ctx, s.items, e)
+	if err := rw.addRelaxations(ctx, s.items, e); err != nil {
+		return nil, err
+	}
 	s.laddered = true
 	// The hard constraints alone: if they find nothing, stop.
 	hard := s.hardOnly()
@@ -424,6 +481,18 @@ type search struct {
 	// laddered is set once the items have their states below the exact
 	// one.
 	laddered bool
+	// failed holds the first error an engine call returned, other than
+	// the deadline's, for RescueParsed to return; it is shared with the
+	// search of a query read again.
+	failed *error
+}
+
+// fail records err, an engine call's error, unless it is nil, the
+// deadline's, or not the first.
+func (s *search) fail(err error) {
+	if err != nil && s.failed != nil && *s.failed == nil && s.ctx.Err() == nil {
+		*s.failed = err
+	}
 }
 
 // plan builds the plan of a state: each item's clause at its level.
@@ -538,6 +607,7 @@ func (s *search) countPlan(p Plan, state []int, label string) (int, error) {
 			s.stopReason = "the deadline passed; showing the best plan found so far"
 			return 0, errStop
 		}
+		s.fail(err)
 		return 0, err
 	}
 	s.seen[key] = n
@@ -727,7 +797,9 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 					like.Clauses = append(slices.Clone(like.Clauses), *it.levels[0].clause)
 				}
 			}
-			if vals, err := cat.Values(ctx, cl.Field, cl.Dimension, like); err == nil {
+			vals, err := cat.Values(ctx, cl.Field, cl.Dimension, like)
+			s.fail(err)
+			if err == nil {
 				m.Carried = carried(vals)
 				if cl.Field == string(parser.KindMeasure) && cl.Unit != "" {
 					for j := range m.Carried {

@@ -30,10 +30,12 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	}
 	hits, err := rw.engine.Search(ctx, p, 1)
 	if err != nil || len(hits) == 0 {
+		s.fail(err)
 		return false
 	}
 	f, err := desc.Describe(ctx, hits[0].ID)
 	if err != nil || f.ProductType == "" {
+		s.fail(err)
 		return false
 	}
 	stock := Clause{Field: FieldInStock, Values: []string{"true"}, From: -1}
