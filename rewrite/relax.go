@@ -100,10 +100,7 @@ func (rw *Rewriter) addRelaxations(ctx context.Context, items []*item, e Effecti
 			failed = cmp.Or(failed, rw.relaxations(ctx, it, e, without(within, it.index)))
 		}
 	}
-	if ctx.Err() != nil {
-		return nil
-	}
-	return failed
+	return failure(ctx, failed)
 }
 
 // without is p less the clause that comes from constraint i.
@@ -133,7 +130,11 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 	}
 	switch c.Kind {
 	case parser.KindColour:
-		if cl, n := rw.widenColour(ctx, it, e.ColourTolerance); cl != nil {
+		cl, n, err := rw.widenColour(ctx, it, e.ColourTolerance)
+		if err != nil {
+			return err
+		}
+		if cl != nil {
 			add(cl, OpWiden, fmt.Sprintf("to %d catalog colours within ΔE00 %g of %s", n, e.ColourTolerance, c.Name),
 				"in colours close to "+c.Name, costWiden)
 		}
@@ -163,7 +164,11 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 				fmt.Sprintf("up to %.2f %s", max, c.Price.Currency), costWiden)
 		}
 	case parser.KindKeyword:
-		if cl, fixed := rw.replaceTypo(ctx, it.index, c); cl != nil {
+		cl, fixed, err := rw.replaceTypo(ctx, it.index, c)
+		if err != nil {
+			return err
+		}
+		if cl != nil {
 			add(cl, OpReplace, fmt.Sprintf("%q read as %q", c.Name, fixed), fmt.Sprintf("for “%s”", fixed), costReplace)
 		}
 	}
@@ -238,15 +243,16 @@ func (rw *Rewriter) typeValues(e *lexicon.Entry) []string {
 }
 
 // widenColour lists the catalog colours within tol of the query colour.
-func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Clause, int) {
-	pal := rw.palette(ctx)
-	if pal == nil || it.c.Colour == nil || it.c.Colour.Lab == nil || tol <= 0 {
-		return nil, 0
+// An error is the engine's, reading the catalog's colours.
+func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Clause, int, error) {
+	pal, err := rw.palette(ctx)
+	if err != nil || pal == nil || it.c.Colour == nil || it.c.Colour.Lab == nil || tol <= 0 {
+		return nil, 0, err
 	}
 	l := it.c.Colour.Lab
 	ms := pal.Within(colour.Lab{L: l[0], A: l[1], B: l[2]}, tol)
 	if len(ms) == 0 {
-		return nil, 0
+		return nil, 0, nil
 	}
 	cl := rw.exactClause(it.index, it.c)
 	cl.Values = nil
@@ -256,7 +262,7 @@ func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Cl
 	if !slices.Contains(cl.Values, it.c.Name) {
 		cl.Values = append(cl.Values, it.c.Name)
 	}
-	return &cl, len(ms)
+	return &cl, len(ms), nil
 }
 
 type widening struct {
@@ -319,10 +325,10 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 // replaceTypo reads an unknown word as the lexicon word it is one or two
 // edits from: distance 1 for words of 4 to 7 letters, 2 for longer ones;
 // never for numbers or codes.
-func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint) (*Clause, string) {
-	best := rw.nearestWord(ctx, c.Name)
+func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint) (*Clause, string, error) {
+	best, err := rw.nearestWord(ctx, c.Name)
 	if best == nil {
-		return nil, ""
+		return nil, "", err
 	}
 	name := best.word
 	if best.entry != nil {
@@ -330,40 +336,47 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 	}
 	fixed := parser.Constraint{Kind: best.kind, Name: name, Text: c.Text}
 	cl := rw.exactClause(i, fixed)
-	return &cl, name
+	return &cl, name, nil
 }
 
 // nearestWord is the vocabulary word an unknown word w is a typo of: the
 // first, in the vocabulary's order, of the least edit distance, within 1
 // for words of 4 to 7 letters and 2 for longer ones; nil for shorter
 // words, numbers and codes, or when no word is that near.
-func (rw *Rewriter) nearestWord(ctx context.Context, w string) *wordEntry {
+// An error is the engine's, reading the catalog's words.
+func (rw *Rewriter) nearestWord(ctx context.Context, w string) (*wordEntry, error) {
 	limit, ok := typoLimit(w)
 	if !ok {
-		return nil
+		return nil, nil
 	}
-	words, near, _ := rw.words(ctx)
+	words, near, err := rw.words(ctx)
+	if err != nil {
+		return nil, err
+	}
 	j, _ := near.Nearest(w, limit)
 	if j < 0 {
-		return nil
+		return nil, nil
 	}
-	return &words[j]
+	return &words[j], nil
 }
 
 // nearestWords are all the vocabulary words of the least edit distance
 // from w, in the vocabulary's order, within nearestWord's limits.
-func (rw *Rewriter) nearestWords(ctx context.Context, w string) []*wordEntry {
+func (rw *Rewriter) nearestWords(ctx context.Context, w string) ([]*wordEntry, error) {
 	limit, ok := typoLimit(w)
 	if !ok {
-		return nil
+		return nil, nil
 	}
-	words, near, _ := rw.words(ctx)
+	words, near, err := rw.words(ctx)
+	if err != nil {
+		return nil, err
+	}
 	all, _ := near.AllNearest(w, limit)
 	out := make([]*wordEntry, len(all))
 	for i, j := range all {
 		out[i] = &words[j]
 	}
-	return out
+	return out, nil
 }
 
 // typoLimit is how many edits a typo of w may be: 1 for words of 4 to 7

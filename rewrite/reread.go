@@ -34,13 +34,17 @@ type reading struct {
 // "clock" and "clog"), the reading whose head product type takes in
 // most of the query wins ("wall clok" is a wall clock), then the first
 // in the vocabulary's order.
-func (rw *Rewriter) reread(ctx context.Context, r *parser.Result) *reading {
+func (rw *Rewriter) reread(ctx context.Context, r *parser.Result) (*reading, error) {
 	for _, c := range r.Constraints {
 		if !unknownWord(r, c) {
 			continue
 		}
 		var best *reading
-		for _, w := range rw.nearestWords(ctx, c.Name) {
+		near, err := rw.nearestWords(ctx, c.Name)
+		if err != nil {
+			return nil, err
+		}
+		for _, w := range near {
 			if !w.typeWord {
 				continue
 			}
@@ -49,10 +53,10 @@ func (rw *Rewriter) reread(ctx context.Context, r *parser.Result) *reading {
 			}
 		}
 		if best != nil {
-			return best
+			return best, nil
 		}
 	}
-	return nil
+	return nil, nil
 }
 
 // headLen is how many bytes of the query the reading's head takes in.

@@ -84,15 +84,10 @@ func (rw *Rewriter) Tuned(t Tuning) *Rewriter {
 	return &c
 }
 
-// palette is the catalog's colours, asked of the engine until it answers.
-func (rw *Rewriter) palette(ctx context.Context) *colour.Palette {
-	pal, _ := rw.readPalette(ctx)
-	return pal
-}
-
-// readPalette is palette with the engine's error, if it failed; a failed
-// or cancelled read is tried again next time.
-func (rw *Rewriter) readPalette(ctx context.Context) (*colour.Palette, error) {
+// palette returns the catalog's colours as a palette, or nil when the
+// engine is no Catalog or the catalog has none, with the engine's error
+// if it failed; a failed or cancelled read is tried again next time.
+func (rw *Rewriter) palette(ctx context.Context) (*colour.Palette, error) {
 	rw.mu.Lock()
 	defer rw.mu.Unlock()
 	if rw.palDone {
@@ -114,15 +109,9 @@ func (rw *Rewriter) readPalette(ctx context.Context) (*colour.Palette, error) {
 	return rw.pal, nil
 }
 
-// readCatalog reads what the rescue needs of the catalog as a whole,
-// its colours and its words, unless they are read already. It returns
-// the engine's error, but none when ctx is done: the search then stops
-// at its deadline as it does for a count.
-func (rw *Rewriter) readCatalog(ctx context.Context) error {
-	_, err := rw.readPalette(ctx)
-	if err == nil {
-		_, _, err = rw.words(ctx)
-	}
+// failure is err, unless ctx is done: a call cut short by the deadline
+// ends the search as a count cut short does, with the best plan so far.
+func failure(ctx context.Context, err error) error {
 	if ctx.Err() != nil {
 		return nil
 	}
@@ -374,9 +363,6 @@ func (rw *Rewriter) RescueParsed(ctx context.Context, r *parser.Result) (*Outcom
 }
 
 func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *error) (*Outcome, error) {
-	if err := rw.readCatalog(ctx); err != nil {
-		return nil, err
-	}
 	e := rw.policy.Apply(r, rw.lex)
 	out := &Outcome{Query: r.Query, Parsed: r, Policy: e}
 	s := &search{rw: rw, ctx: ctx, out: out, seen: make(map[string]int), budget: rw.budget, failed: failed}
@@ -402,7 +388,11 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 	}
 	// A misspelt product type: plan from the query read again with it
 	// fixed, the fix being part of every plan from here on.
-	if rd := rw.reread(ctx, r); rd != nil {
+	rd, err := rw.reread(ctx, r)
+	if err := failure(ctx, err); err != nil {
+		return nil, err
+	}
+	if rd != nil {
 		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: rw.exactItems(rd.parsed), failed: failed}
 		fixedExact := make([]int, len(fixed.items))
 		if fn, err := fixed.count(fixedExact); err == nil {

@@ -42,7 +42,9 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	kept := keptForAlternatives(s.out.Parsed, p)
 	kind := Clause{Field: "product_type", Values: []string{f.ProductType}, From: -1}
 	var near *Clause
-	if pal := rw.palette(ctx); pal != nil && f.Lab != nil {
+	pal, err := rw.palette(ctx)
+	s.fail(err)
+	if pal != nil && f.Lab != nil {
 		var names []string
 		for _, m := range pal.Within(colour.Lab{L: f.Lab[0], A: f.Lab[1], B: f.Lab[2]}, s.out.Policy.ColourTolerance) {
 			names = append(names, m.Name)
