@@ -169,7 +169,14 @@ func ExampleRewriter_Tuned() {
 func ExampleRewriter_ParseIn() {
 	rw := rewrite.New(shopEngine{{"rain jacket", "red"}}, nil)
 	fmt.Println(rw.ParseIn("red", "apparel").Category, rw.ParseIn("red rain jacket", "home").Category)
-	// Output: apparel apparel
+	// Read in apparel, the m of "navy m" is a letter size.
+	for _, c := range rw.ParseIn("navy m", "apparel").Constraints {
+		fmt.Println(c.Kind, c.Value())
+	}
+	// Output:
+	// apparel apparel
+	// colour navy
+	// size m (letter)
 }
 
 func ExamplePolicy_WriteTOML() {

@@ -5,6 +5,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 	"time"
@@ -413,6 +414,36 @@ func TestSettle(t *testing.T) {
 				t.Fatalf("error %v; want problem %d (%s)", err, tc.problem, tc.reason)
 			case tc.problem == 0 && (e.Category != tc.wantCategory || e.ColourTolerance != tc.colour):
 				t.Errorf("category %q, tolerance %g; want %q, %g (%s)", e.Category, e.ColourTolerance, tc.wantCategory, tc.colour, tc.reason)
+			}
+		})
+	}
+}
+
+// A query searched in a category is read in it only when it gives no
+// category of its own: a page's category is a guess about the query,
+// and a product type or a standard designation in it says more.
+func TestParseIn(t *testing.T) {
+	rw := New(&memEngine{products: shop}, nil)
+	for _, tc := range []struct {
+		query, category, reason string
+		wantCategory            string
+		want                    []string // kind and value of each constraint
+	}{
+		{"navy m", "apparel", "no category of its own: read in apparel, m is a letter size (common practice)", "apparel",
+			[]string{"colour navy", "size m (letter)"}},
+		{"navy m", "", "no category given: m is no size", "", []string{"colour navy", "keyword m"}},
+		{"cr2032", "apparel", "a battery designation (IEC 60086) gives its own category", "batteries", []string{"spec CR2032 (battery)"}},
+		{"m8", "home", "so does a metric thread (ISO 261)", "hardware", []string{"spec M8x1.25 (metric_thread)"}},
+		{"85 lens", "apparel", "a product type gives its own category, and its unit", "camera", []string{"measure 85 mm", "product_type lens"}},
+	} {
+		t.Run(tc.query+" in "+tc.category, func(t *testing.T) {
+			r := rw.ParseIn(tc.query, tc.category)
+			var got []string
+			for _, c := range r.Constraints {
+				got = append(got, string(c.Kind)+" "+c.Value())
+			}
+			if r.Category != tc.wantCategory || !slices.Equal(got, tc.want) {
+				t.Errorf("%s: category %q, %q; want %q, %q", tc.reason, r.Category, got, tc.wantCategory, tc.want)
 			}
 		})
 	}

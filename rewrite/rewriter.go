@@ -310,14 +310,18 @@ func (rw *Rewriter) Parse(query string) *parser.Result {
 }
 
 // ParseIn is Parse for a query searched in a category (a log's, a page's):
-// the category stands for the query's own when the query names no
-// product type that gives one.
+// when the query gives no category of its own, by a product type or a
+// standard designation, it is read again in that category, so "navy m"
+// searched in apparel has its letter size. A query that gives one
+// ("85 lens", "cr2032") keeps its own reading.
 func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
 	r := rw.Parse(query)
-	if r.Category == "" {
-		r.Category = category
+	if r.Category != "" || category == "" || rw.parse.Category != "" {
+		return r
 	}
-	return r
+	o := rw.parse
+	o.Category = category
+	return parser.ParseWith(query, o)
 }
 
 // RescueParsed rescues a parsed query. A query with nothing to search
