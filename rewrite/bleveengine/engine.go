@@ -8,6 +8,7 @@ import (
 	"path/filepath"
 	"strings"
 	"sync"
+	"time"
 
 	"github.com/blevesearch/bleve/v2"
 	"github.com/blevesearch/bleve/v2/analysis"
@@ -37,7 +38,24 @@ type Engine struct {
 // countCache bounds the remembered counts; past it the cache starts over.
 const countCache = 1 << 14
 
-// Open opens the index Build wrote at dir.
+// lockWait is how long Open waits for the index's lock, held only by a
+// process that opened it to write (no whittle does; Build writes a new
+// directory), before it gives up with an error rather than hang.
+const lockWait = 5 * time.Second
+
+// openReadOnly opens the bleve index at path to read only: the engine
+// never writes, and a read-only open shares the index's lock, so any
+// number of processes (a server, a replay, a search) may have it open
+// at once. The settings are scorch's, which bleve takes only as a map.
+func openReadOnly(path string) (bleve.Index, error) {
+	return bleve.OpenUsing(path, map[string]any{
+		"read_only":    true,
+		"bolt_timeout": lockWait.String(),
+	})
+}
+
+// Open opens the index Build wrote at dir, to read only: several
+// processes may open one index at once.
 func Open(dir string) (*Engine, error) {
 	st, err := os.Stat(dir)
 	if err != nil {
@@ -60,7 +78,7 @@ func Open(dir string) (*Engine, error) {
 	if v.Layout != layout {
 		return nil, fmt.Errorf("%s: %w (its layout is %d, this one reads %d): rebuild it with whittle index", dir, ErrOldLayout, v.Layout, layout)
 	}
-	idx, err := bleve.Open(filepath.Join(dir, "index"))
+	idx, err := openReadOnly(filepath.Join(dir, "index"))
 	if err != nil {
 		return nil, fmt.Errorf("opening the index at %s: %w", dir, err)
 	}

@@ -224,3 +224,43 @@ func TestMixedCallsFrom64Goroutines(t *testing.T) {
 		t.Error(err)
 	}
 }
+
+// Several processes may have one index open at once (a server, a replay,
+// a search from the command line): it is opened to read only, which
+// shares its lock. Two opens in one process take the lock as two
+// processes would (flock locks an open file, not a process). The
+// watchdog only turns a hang into a failure.
+func TestOpenTwice(t *testing.T) {
+	dir := shopDir(t, 0)
+	first, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer first.Close()
+	type opened struct {
+		e   *Engine
+		err error
+	}
+	done := make(chan opened, 1)
+	go func() {
+		e, err := Open(dir)
+		done <- opened{e, err}
+	}()
+	var second *Engine
+	select {
+	case o := <-done:
+		if o.err != nil {
+			t.Fatalf("the second open failed: %v", o.err)
+		}
+		second = o.e
+	case <-time.After(time.Minute):
+		t.Fatal("the second open is still waiting for the index's lock")
+	}
+	defer second.Close()
+	for _, e := range []*Engine{first, second} {
+		n, err := e.Count(context.Background(), rewrite.Plan{Clauses: []rewrite.Clause{{Field: "product_type", Values: []string{"rain jacket"}}}})
+		if err != nil || n != 3 {
+			t.Errorf("rain jackets = %d, %v; want 3 (testdata/catalog/shop.jsonl)", n, err)
+		}
+	}
+}
