@@ -13,6 +13,7 @@ import (
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
 	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 // Operators say how a constraint was relaxed.
@@ -135,7 +136,7 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 			return err
 		}
 		if cl != nil {
-			add(cl, OpWiden, fmt.Sprintf("to %d catalog colours within ΔE00 %g of %s", n, e.ColourTolerance, c.Name),
+			add(cl, OpWiden, fmt.Sprintf("to %s within ΔE00 %g of %s", textout.Count(n, "catalog colour", "catalog colours"), e.ColourTolerance, c.Name),
 				"in colours close to "+c.Name, costWiden)
 		}
 	case parser.KindMeasure:

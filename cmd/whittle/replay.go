@@ -127,7 +127,11 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		return 1
 	}
 	if !*asJSON && !*asCSV {
-		fmt.Fprintf(stderr, "replayed %d queries in %.1fs\n", rep.All.Queries, time.Since(start).Seconds())
+		noun := "queries"
+		if rep.All.Queries == 1 {
+			noun = "query"
+		}
+		fmt.Fprintf(stderr, "replayed %d %s in %.1fs\n", rep.All.Queries, noun, time.Since(start).Seconds())
 	}
 	return 0
 }

@@ -79,7 +79,7 @@ func TestReplayNothingToSearch(t *testing.T) {
 	for _, tc := range []struct {
 		name, format, want, reason string
 	}{
-		{"text", "", "1 queries, 1 searches (2 queries, 5 searches with nothing to search for, not searched)", "!!! once and nice 4 times, apart from the one search made"},
+		{"text", "", "1 query, 1 search (2 queries, 5 searches with nothing to search for, not searched)", "!!! once and nice 4 times, apart from the one search made"},
 		{"json", "--json", `"nothing_to_search": {`, "the report's tally"},
 		{"csv", "--csv", "2,!!!,1,,,,,,,", "the row of !!! has its counts blank"},
 	} {

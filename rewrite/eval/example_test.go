@@ -179,9 +179,9 @@ func ExampleWriteGoals() {
 	short.Style, long.Style = eval.StyleShort, eval.StyleLong
 	eval.WriteGoals(os.Stdout, []eval.Report{short, long})
 	// Output:
-	// goal                                          target  short (1 queries)  long (1 queries)
-	// rescue rate                                   ≥ 95%   100.0% met         100.0% met
-	// hard-constraint preservation                  100%    100.0% met         100.0% met
-	// attribute precision vs baseline, top k        ≥ 2×    2.00× met          1.00× not met
-	// attribute precision vs baseline, all matches  ≥ 2×    2.00× met          2.00× met
+	// goal                                          target  short (1 query)  long (1 query)
+	// rescue rate                                   ≥ 95%   100.0% met       100.0% met
+	// hard-constraint preservation                  100%    100.0% met       100.0% met
+	// attribute precision vs baseline, top k        ≥ 2×    2.00× met        1.00× not met
+	// attribute precision vs baseline, all matches  ≥ 2×    2.00× met        2.00× met
 }

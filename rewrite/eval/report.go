@@ -10,6 +10,7 @@ import (
 
 	"github.com/whittle-search/whittle/rewrite/bleveengine"
 	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 // Goals whittle is held to.
@@ -202,7 +203,7 @@ func WriteGoals(w io.Writer, reps []Report) error {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprint(tw, "goal\ttarget")
 	for _, r := range reps {
-		fmt.Fprintf(tw, "\t%s (%d queries)", styleName(r.Style), r.Whittle.Queries)
+		fmt.Fprintf(tw, "\t%s (%s)", styleName(r.Style), textout.Count(r.Whittle.Queries, "query", "queries"))
 	}
 	fmt.Fprintln(tw)
 	if len(reps) > 0 {

@@ -84,7 +84,7 @@ func ExampleWriteText() {
 	s.Add(&replay.Result{Entry: replay.Entry{Query: "boots", Count: 2}, ExactCount: 9, FinalCount: 9})
 	replay.WriteText(os.Stdout, s.Report())
 	// Output:
-	// 1 queries, 2 searches
+	// 1 query, 2 searches
 	//
 	// finding nothing            queries          searches
 	//   as typed                  0    0.0%         0    0.0%

@@ -6,6 +6,7 @@ import (
 	"io"
 
 	"github.com/whittle-search/whittle/rewrite/internal/svgchart"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 var page = template.Must(template.New("replay").Parse(`<!doctype html>
@@ -50,7 +51,7 @@ func WriteHTML(w io.Writer, title string, r Report) error {
 	})
 	var ch []svgchart.Bar
 	for _, c := range r.Changes {
-		ch = append(ch, svgchart.Bar{Label: c.Op + " " + c.Kind, Value: float64(c.Searches), Text: fmt.Sprintf("%d searches", c.Searches)})
+		ch = append(ch, svgchart.Bar{Label: c.Op + " " + c.Kind, Value: float64(c.Searches), Text: textout.Count(int(c.Searches), "search", "searches")})
 	}
 	// The histogram from its first bucket with a rescue to its last.
 	var lat []svgchart.Bar

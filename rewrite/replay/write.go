@@ -14,10 +14,11 @@ import (
 // WriteText writes a report for a person at a terminal.
 func WriteText(w io.Writer, r Report) error {
 	p := &textout.Printer{W: w}
-	p.F("%d queries, %d searches", r.All.Queries, r.All.Searches)
+	p.F("%s, %s", textout.Count(int(r.All.Queries), "query", "queries"), textout.Count(int(r.All.Searches), "search", "searches"))
 	var apart []string
 	if r.NothingToSearch.Queries > 0 {
-		apart = append(apart, fmt.Sprintf("%d queries, %d searches with nothing to search for, not searched", r.NothingToSearch.Queries, r.NothingToSearch.Searches))
+		apart = append(apart, fmt.Sprintf("%s, %s with nothing to search for, not searched",
+			textout.Count(int(r.NothingToSearch.Queries), "query", "queries"), textout.Count(int(r.NothingToSearch.Searches), "search", "searches")))
 	}
 	if r.SkippedLines > 0 {
 		apart = append(apart, fmt.Sprintf("%d malformed lines skipped", r.SkippedLines))

@@ -7,6 +7,7 @@ import (
 	"math"
 
 	"github.com/whittle-search/whittle/rewrite/internal/svgchart"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 var page = template.Must(template.New("tune").Parse(`<!doctype html>
@@ -64,7 +65,7 @@ func WriteHTML(w io.Writer, title string, r *Report) error {
 					v = 0
 				}
 				bars = append(bars, svgchart.Bar{Label: fmt.Sprintf("%s %s", o.Op, k.Kind), Value: v,
-					Text: fmt.Sprintf("%s (%s), %d searches", pct(o.Ratio), band(o.Figure), o.Searches)})
+					Text: fmt.Sprintf("%s (%s), %s", pct(o.Ratio), band(o.Figure), textout.Count(int(o.Searches), "search", "searches"))})
 			}
 		}
 		hc.Kinds = svgchart.HBars("Engagement by kind relaxed, as a share of exact matches", bars)

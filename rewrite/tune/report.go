@@ -9,6 +9,7 @@ import (
 
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 	"github.com/whittle-search/whittle/rewrite/signals"
 )
 
@@ -251,7 +252,7 @@ func (t *Tuner) kind(cat string, k parser.Kind, current parser.Strictness, exact
 	}
 	dropped := ""
 	if dropFig != nil {
-		dropped = fmt.Sprintf("dropping %s kept %s of exact-match engagement (%s, %d searches)", k, pct(dropFig.Ratio), interval(*dropFig), dropFig.Searches)
+		dropped = fmt.Sprintf("dropping %s kept %s of exact-match engagement (%s, %s)", k, pct(dropFig.Ratio), interval(*dropFig), textout.Count(int(dropFig.Searches), "search", "searches"))
 	}
 	switch {
 	case drop == accepted:

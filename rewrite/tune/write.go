@@ -17,16 +17,16 @@ import (
 func WriteText(w io.Writer, r *Report) error {
 	p := &textout.Printer{W: w}
 	if j := r.Join; j.Events > 0 {
-		p.F("%d events read: %d searches, %d interactions, %d of them joined to the search that showed the product (%d with no search in the window, %d of a product not shown).\n",
-			j.Events, j.Searches, j.Interactions, j.Joined, j.NoSearch, j.NotShown)
+		p.F("%s read: %s, %s, %d of them joined to the search that showed the product (%d with no search in the window, %d of a product not shown).\n",
+			textout.Count(int(j.Events), "event", "events"), textout.Count(int(j.Searches), "search", "searches"), textout.Count(int(j.Interactions), "interaction", "interactions"), j.Joined, j.NoSearch, j.NotShown)
 		if j.Late > 0 || j.Bad > 0 || j.SearchOverflow+j.InteractionOverflow > 0 {
 			p.F("%d events came later than the join allows; %d malformed lines were skipped; %d events past a session's limits were dropped.\n",
 				j.Late, j.Bad, j.SearchOverflow+j.InteractionOverflow)
 		}
 	}
 	st := r.Stats
-	p.F("%d sessions, %d searches: %d exact, %d relaxed (%d relaxed more than one kind and are set aside), %d found nothing.\n",
-		st.Sessions, st.Searches, st.Exact, st.Relaxed, st.SetAside, st.FoundNothing)
+	p.F("%s, %s: %d exact, %d relaxed (%d relaxed more than one kind and are set aside), %d found nothing.\n",
+		textout.Count(int(st.Sessions), "session", "sessions"), textout.Count(int(st.Searches), "search", "searches"), st.Exact, st.Relaxed, st.SetAside, st.FoundNothing)
 	if st.Explored > 0 || st.Shuffled > 0 {
 		p.F("%d searches showed an explored alternative; %d were shuffled.\n", st.Explored, st.Shuffled)
 	}
@@ -101,7 +101,7 @@ func category(p *textout.Printer, c Category) {
 			if math.IsInf(bin.To, 1) {
 				to = "…"
 			}
-			p.F("    %6s–%-6s %5s  %-22s %d searches\n", t.unit(bin.From), to, pct(bin.Ratio), bar(bin.Ratio), bin.Searches)
+			p.F("    %6s–%-6s %5s  %-22s %s\n", t.unit(bin.From), to, pct(bin.Ratio), bar(bin.Ratio), textout.Count(int(bin.Searches), "search", "searches"))
 		}
 		p.F("    %s\n", t.tol.Reason)
 	}
@@ -183,8 +183,8 @@ func value(s string) string {
 // where it came from and that it is a proposal.
 func WritePolicy(w io.Writer, r *Report) error {
 	p := &textout.Printer{W: w}
-	p.F("# A policy proposed by whittle tune from %d searches in %d sessions.\n", r.Stats.Searches, r.Stats.Sessions)
-	p.F("# It is the policy in force with %d change(s); review it before use.\n", len(r.Changes))
+	p.F("# A policy proposed by whittle tune from %s in %s.\n", textout.Count(int(r.Stats.Searches), "search", "searches"), textout.Count(int(r.Stats.Sessions), "session", "sessions"))
+	p.F("# It is the policy in force with %s; review it before use.\n", textout.Count(len(r.Changes), "change", "changes"))
 	for _, c := range r.Changes {
 		p.F("#   %s: %s → %s (%s)\n", c.Key, c.From, c.To, c.Reason)
 	}

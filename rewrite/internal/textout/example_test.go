@@ -15,3 +15,8 @@ func ExamplePrinter() {
 	// 3 searches
 	// <nil>
 }
+
+func ExampleCount() {
+	fmt.Println(textout.Count(1, "search", "searches"), "and", textout.Count(0, "query", "queries"))
+	// Output: 1 search and 0 queries
+}

@@ -17,3 +17,12 @@ func (p *Printer) F(format string, args ...any) {
 		_, p.Err = fmt.Fprintf(p.W, format, args...)
 	}
 }
+
+// Count writes n and the noun for it: one for 1, many otherwise
+// ("1 search", "0 searches", "3 searches").
+func Count(n int, one, many string) string {
+	if n == 1 {
+		return "1 " + one
+	}
+	return fmt.Sprintf("%d %s", n, many)
+}

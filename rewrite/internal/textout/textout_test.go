@@ -33,3 +33,16 @@ func TestPrinter(t *testing.T) {
 		t.Errorf("err %v", p.Err)
 	}
 }
+
+// English takes the singular for one only: "1 search", "0 searches",
+// "2 searches" (common practice).
+func TestCount(t *testing.T) {
+	for _, tc := range []struct {
+		n    int
+		want string
+	}{{0, "0 searches"}, {1, "1 search"}, {2, "2 searches"}, {21, "21 searches"}} {
+		if got := Count(tc.n, "search", "searches"); got != tc.want {
+			t.Errorf("Count(%d) = %q, want %q", tc.n, got, tc.want)
+		}
+	}
+}
