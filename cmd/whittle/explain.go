@@ -108,7 +108,11 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		sc.Buffer(make([]byte, 64<<10), maxLine)
 		first := true
 		for sc.Scan() {
-			emit(strings.TrimSuffix(sc.Text(), "\r"), first)
+			line := strings.TrimSuffix(sc.Text(), "\r")
+			if first {
+				line = strings.TrimPrefix(line, "\ufeff") // a byte order mark
+			}
+			emit(line, first)
 			first = false
 		}
 		if err := sc.Err(); err != nil {

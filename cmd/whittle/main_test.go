@@ -240,3 +240,18 @@ func TestReadmeSynopses(t *testing.T) {
 		}
 	}
 }
+
+// A byte order mark before the first line of standard input (U+FEFF, as
+// some editors and spreadsheets save text) is no part of the query.
+func TestStdinByteOrderMark(t *testing.T) {
+	code, out, stderr := runCLI("\ufeff85 lens\n", "explain", "--json", "-")
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, stderr)
+	}
+	var got struct {
+		Query string `json:"query"`
+	}
+	if err := json.Unmarshal([]byte(out), &got); err != nil || got.Query != "85 lens" {
+		t.Errorf("query = %q (%v), want \"85 lens\"", got.Query, err)
+	}
+}

@@ -172,6 +172,17 @@ func TestSkipBadAndAtomicReplace(t *testing.T) {
 	if st.Products != 2 || len(st.Skipped) != 1 || st.Skipped[0].Line != 2 {
 		t.Errorf("stats = %+v", st)
 	}
+	// A line too long to read is skipped like any malformed line, and the
+	// build goes on; a byte order mark before the first line is no part
+	// of its JSON.
+	long := "{\"id\": \"c\", \"title\": \"" + strings.Repeat("x", catalog.MaxLine) + "\"}\n"
+	st, err = Build(context.Background(), strings.NewReader("\ufeff"+good+long+"{\"id\": \"b\", \"title\": \"Scree beanie\"}\n"), dir, BuildOptions{SkipBad: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if st.Products != 2 || len(st.Skipped) != 1 || st.Skipped[0].Line != 2 || !strings.Contains(st.Skipped[0].Error(), "longer than") {
+		t.Errorf("stats = %+v", st)
+	}
 	if _, err := Open(filepath.Join(t.TempDir(), "none")); err == nil {
 		t.Error("opening a missing index gave no error")
 	}

@@ -1,7 +1,6 @@
 package catalog
 
 import (
-	"bufio"
 	"encoding/json"
 	"errors"
 	"fmt"
@@ -12,6 +11,7 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/rewrite/internal/lines"
 )
 
 // MaxLine is the longest catalog line read, in bytes: 1 MiB, far past
@@ -72,12 +72,20 @@ func ReadColours(r io.Reader, lex *lexicon.Lexicon) (*Vocabulary, error) {
 	names := make(map[string]*tally)
 	ids := make(map[string]int)
 	v := &Vocabulary{Unplaced: make(map[string]int)}
-	sc := bufio.NewScanner(r)
-	sc.Buffer(make([]byte, 64<<10), MaxLine)
-	line := 0
-	for sc.Scan() {
-		line++
-		text := strings.TrimSpace(sc.Text())
+	lr := lines.NewReader(r, MaxLine)
+	for {
+		b, long, err := lr.Next()
+		if err == io.EOF {
+			break
+		}
+		if err != nil {
+			return nil, err
+		}
+		line := lr.Line()
+		if long {
+			return nil, &LineError{Line: line, Msg: fmt.Sprintf("longer than %d bytes", MaxLine)}
+		}
+		text := strings.TrimSpace(string(b))
 		if text == "" {
 			continue
 		}
@@ -123,12 +131,6 @@ func ReadColours(r io.Reader, lex *lexicon.Lexicon) (*Vocabulary, error) {
 		}
 		t.count++
 		t.values[lab]++
-	}
-	if err := sc.Err(); err != nil {
-		if errors.Is(err, bufio.ErrTooLong) {
-			return nil, &LineError{Line: line + 1, Msg: fmt.Sprintf("longer than %d bytes", MaxLine)}
-		}
-		return nil, err
 	}
 	for name, t := range names {
 		var best colour.Lab

@@ -1,7 +1,6 @@
 package catalog
 
 import (
-	"bufio"
 	"bytes"
 	"encoding/json"
 	"errors"
@@ -16,11 +15,12 @@ import (
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
 	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite/internal/lines"
 )
 
 // Reader reads a catalog product by product, checking each line.
 type Reader struct {
-	sc   *bufio.Scanner
+	lr   *lines.Reader
 	lex  *lexicon.Lexicon
 	line int
 	ids  map[string]int
@@ -45,12 +45,10 @@ const readCache = 1 << 12
 
 // NewReader reads the catalog in r.
 func NewReader(r io.Reader, lex *lexicon.Lexicon) *Reader {
-	sc := bufio.NewScanner(r)
-	sc.Buffer(make([]byte, 64<<10), MaxLine)
 	if lex == nil {
 		lex = lexicon.Default()
 	}
-	return &Reader{sc: sc, lex: lex, ids: make(map[string]int), measures: make(map[string]measureRead), specs: make(map[string]specRead)}
+	return &Reader{lr: lines.NewReader(r, MaxLine), lex: lex, ids: make(map[string]int), measures: make(map[string]measureRead), specs: make(map[string]specRead)}
 }
 
 // Line is the number of the line last read.
@@ -60,26 +58,21 @@ func (r *Reader) Line() int { return r.line }
 // returns a *LineError naming the line and field; reading may go on
 // after it with the next line.
 func (r *Reader) Next() (*Product, error) {
-	for r.sc.Scan() {
-		r.line++
-		text := bytes.TrimSpace(r.sc.Bytes())
-		if len(text) == 0 {
-			continue
-		}
-		p, err := r.decode(text)
+	for {
+		b, long, err := r.lr.Next()
 		if err != nil {
 			return nil, err
 		}
-		return p, nil
-	}
-	if err := r.sc.Err(); err != nil {
-		r.line++
-		if errors.Is(err, bufio.ErrTooLong) {
+		r.line = r.lr.Line()
+		if long {
 			return nil, &LineError{Line: r.line, Msg: fmt.Sprintf("longer than %d bytes", MaxLine)}
 		}
-		return nil, err
+		text := bytes.TrimSpace(b)
+		if len(text) == 0 {
+			continue
+		}
+		return r.decode(text)
 	}
-	return nil, io.EOF
 }
 
 func (r *Reader) decode(text []byte) (*Product, error) {

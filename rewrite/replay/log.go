@@ -1,7 +1,6 @@
 package replay
 
 import (
-	"bufio"
 	"bytes"
 	"encoding/json"
 	"errors"
@@ -12,6 +11,7 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/internal/lines"
 )
 
 // MaxLine is the longest log line read, in bytes.
@@ -43,24 +43,24 @@ type logLine struct {
 // the next line; an error of the reader itself ends the sequence.
 func Read(r io.Reader) iter.Seq2[Entry, error] {
 	return func(yield func(Entry, error) bool) {
-		sc := bufio.NewScanner(r)
-		sc.Buffer(make([]byte, 64<<10), MaxLine)
-		line := 0
-		for sc.Scan() {
-			line++
-			e, err := parseLine(line, sc.Bytes())
-			if err == errBlank {
+		lr := lines.NewReader(r, MaxLine)
+		for {
+			b, long, err := lr.Next()
+			if err != nil {
+				if err != io.EOF {
+					yield(Entry{}, err)
+				}
+				return
+			}
+			var e Entry
+			if long {
+				err = &catalog.LineError{Line: lr.Line(), Msg: fmt.Sprintf("longer than %d bytes", MaxLine)}
+			} else if e, err = parseLine(lr.Line(), b); err == errBlank {
 				continue
 			}
 			if !yield(e, err) {
 				return
 			}
-		}
-		if err := sc.Err(); err != nil {
-			if errors.Is(err, bufio.ErrTooLong) {
-				err = &catalog.LineError{Line: line + 1, Msg: fmt.Sprintf("longer than %d bytes", MaxLine)}
-			}
-			yield(Entry{}, err)
 		}
 	}
 }

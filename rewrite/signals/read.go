@@ -1,7 +1,6 @@
 package signals
 
 import (
-	"bufio"
 	"bytes"
 	"errors"
 	"fmt"
@@ -13,6 +12,7 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/rewrite/catalog"
+	"github.com/whittle-search/whittle/rewrite/internal/lines"
 )
 
 // MaxLine is the longest line read, in bytes: 1 MiB, far past any
@@ -54,10 +54,10 @@ func (e *LineError) Unwrap() error { return &e.LineError }
 // documentation for the layout).
 func Read(r io.Reader, file string) iter.Seq2[Event, error] {
 	return func(yield func(Event, error) bool) {
-		lr := lineReader{br: bufio.NewReaderSize(r, 64<<10)}
+		lr := lines.NewReader(r, MaxLine)
 		var d decoder
 		for {
-			b, long, err := lr.next()
+			b, long, err := lr.Next()
 			if err != nil {
 				if err != io.EOF {
 					yield(Event{}, err)
@@ -65,7 +65,7 @@ func Read(r io.Reader, file string) iter.Seq2[Event, error] {
 				return
 			}
 			if long {
-				if !yield(Event{}, lineError(file, lr.line, "", fmt.Sprintf("longer than %d bytes", MaxLine))) {
+				if !yield(Event{}, lineError(file, lr.Line(), "", fmt.Sprintf("longer than %d bytes", MaxLine))) {
 					return
 				}
 				continue
@@ -76,12 +76,12 @@ func Read(r io.Reader, file string) iter.Seq2[Event, error] {
 			}
 			e, ferr := d.decode(b)
 			if ferr != nil {
-				if !yield(Event{}, lineError(file, lr.line, ferr.field, ferr.msg)) {
+				if !yield(Event{}, lineError(file, lr.Line(), ferr.field, ferr.msg)) {
 					return
 				}
 				continue
 			}
-			e.File, e.Line = file, lr.line
+			e.File, e.Line = file, lr.Line()
 			if !yield(e, nil) {
 				return
 			}
@@ -91,50 +91,6 @@ func Read(r io.Reader, file string) iter.Seq2[Event, error] {
 
 func lineError(file string, line int, field, msg string) *LineError {
 	return &LineError{File: file, LineError: catalog.LineError{Line: line, Field: field, Msg: msg}}
-}
-
-// lineReader splits its reader into lines, as bufio.Scanner does, but
-// goes on past a line longer than MaxLine, which it skips.
-type lineReader struct {
-	br   *bufio.Reader
-	long []byte // a line longer than br's buffer, gathered
-	line int    // the number of the line last returned
-}
-
-// next returns the next line without its line break, or whether it was
-// longer than MaxLine; io.EOF at the end. The line is valid until the
-// next call.
-func (lr *lineReader) next() (line []byte, long bool, err error) {
-	b, err := lr.br.ReadSlice('\n')
-	if err == io.EOF && len(b) == 0 {
-		return nil, false, io.EOF
-	}
-	lr.line++
-	switch err {
-	case nil, io.EOF:
-		return trimBreak(b), len(trimBreak(b)) > MaxLine, nil
-	case bufio.ErrBufferFull:
-	default:
-		return nil, false, err
-	}
-	lr.long = append(lr.long[:0], b...)
-	for {
-		b, err = lr.br.ReadSlice('\n')
-		if len(lr.long) <= MaxLine {
-			lr.long = append(lr.long, b...)
-		}
-		switch err {
-		case nil, io.EOF:
-			return trimBreak(lr.long), len(trimBreak(lr.long)) > MaxLine, nil
-		case bufio.ErrBufferFull:
-		default:
-			return nil, false, err
-		}
-	}
-}
-
-func trimBreak(b []byte) []byte {
-	return bytes.TrimSuffix(b, []byte{'\n'})
 }
 
 // fieldError is what is wrong with a line, before it has a file and a
