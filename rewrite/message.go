@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"github.com/whittle-search/whittle/parser"
+	"github.com/whittle-search/whittle/rewrite/internal/textout"
 )
 
 // ExactMessage is what a shopper reads when the query matched n products
@@ -18,9 +19,20 @@ func ExactMessage(n int) string {
 
 // message writes what a shopper reads: what was not found, and what is
 // shown instead, in plain words.
+//
+// A query that found some products as typed, fewer than the policy's
+// min_results, is told so ("Only 2 exact matches for …"), not that it
+// found nothing.
 func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
+	q := strings.TrimSpace(out.Query)
+	lead := fmt.Sprintf("No exact match for “%s”.", q)
+	if len(out.Steps) > 0 && out.Steps[0].Count > 0 {
+		lead = fmt.Sprintf("Only %s for “%s”.", textout.Count(out.Steps[0].Count, "exact match", "exact matches"), q)
+	} else if len(out.Relaxations) == 0 {
+		return fmt.Sprintf("No results for “%s”.", q)
+	}
 	if len(out.Relaxations) == 0 {
-		return fmt.Sprintf("No results for “%s”.", strings.TrimSpace(out.Query))
+		return lead
 	}
 	noun := "results"
 	var phrases []string
@@ -41,7 +53,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 			noun = plural(it.c.Name)
 		}
 	}
-	msg := fmt.Sprintf("No exact match for “%s”. Showing %s", strings.TrimSpace(out.Query), noun)
+	msg := lead + " Showing " + noun
 	if len(phrases) > 0 {
 		msg += " " + strings.Join(phrases, ", ")
 	}

@@ -553,3 +553,42 @@ func TestRatingsAreNeverWidened(t *testing.T) {
 		})
 	}
 }
+
+// With min_results above 1, a query can find some products as typed and
+// still too few. The shopper is told how many it found, not that it
+// found nothing, and the head product type stays in the plan: the hard
+// constraints alone finding too few is no reason to show every product
+// in size xl. The counts follow from the invented shop in
+// memengine_test.go.
+func TestFewerThanMinResults(t *testing.T) {
+	three := 3
+	rw := New(&memEngine{products: shop}, nil).Tuned(Tuning{MinResults: &three})
+	for _, tc := range []struct {
+		query, reason, message string
+		count                  int
+	}{
+		{"rain jacket size xl", "RJ-3 and RJ-4 are the rain jackets in xl, and size is hard: nothing can be added",
+			"Only 2 exact matches for “rain jacket size xl”.", 2},
+		{"nylon rain jacket size m", "RJ-1 and RJ-2 are nylon in m; no other rain jacket comes in m",
+			"Only 2 exact matches for “nylon rain jacket size m”.", 2},
+	} {
+		t.Run(tc.query, func(t *testing.T) {
+			o, err := rw.Rescue(context.Background(), tc.query)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if o.Exact || o.Count != tc.count || !strings.HasPrefix(o.Message, tc.message) {
+				t.Errorf("%s: exact=%v count=%d message %q; want %d, a message beginning %q\n%s", tc.reason, o.Exact, o.Count, o.Message, tc.count, tc.message, o.Explanation)
+			}
+			hits, err := rw.engine.Search(context.Background(), o.Plan, 10)
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, h := range hits {
+				if !strings.HasPrefix(h.ID, "RJ-") {
+					t.Errorf("%s: shows %s, which is no rain jacket", tc.reason, h.ID)
+				}
+			}
+		})
+	}
+}

@@ -424,7 +424,7 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 		return rw.settle(s, exact, n), nil
 	} else if err != nil {
 		return nil, err
-	} else if hn < e.MinResults && s.stopReason == "" {
+	} else if hn == 0 && s.stopReason == "" {
 		rw.missing(ctx, s, hard)
 		out.Plan = hard
 		out.Count = hn
