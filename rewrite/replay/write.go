@@ -105,9 +105,21 @@ func (c *CSV) Write(res *Result) error {
 	if res.NothingToSearch != "" {
 		exact, rescued, final = "", "", ""
 	}
-	return c.w.Write([]string{strconv.Itoa(res.Line), res.Query, strconv.Itoa(res.Count), res.Category,
-		exact, rescued, final, strings.Join(ch, "; "), strings.Join(res.HardUnmet, "; "),
+	return c.w.Write([]string{strconv.Itoa(res.Line), cell(res.Query), strconv.Itoa(res.Count), res.Category,
+		exact, rescued, final, cell(strings.Join(ch, "; ")), cell(strings.Join(res.HardUnmet, "; ")),
 		strconv.FormatFloat(float64(res.Elapsed)/float64(time.Millisecond), 'f', 3, 64), res.NothingToSearch})
+}
+
+// cell makes text a shopper typed safe to open in a spreadsheet, which
+// runs a cell that begins with =, +, -, @, a tab or a carriage return as
+// a formula ("=HYPERLINK(...)" in a query log): such a cell gets a single
+// quote before it, which spreadsheets read as "this is text" (the OWASP
+// advice on CSV injection).
+func cell(s string) string {
+	if s != "" && strings.ContainsRune("=+-@\t\r", rune(s[0])) {
+		return "'" + s
+	}
+	return s
 }
 
 // Flush writes what is buffered and reports any error so far.
