@@ -185,7 +185,8 @@ func DefaultPolicy() *Policy {
 }
 
 // LoadPolicy reads a policy file and lays it over the default policy: a
-// setting the file leaves out keeps its default.
+// setting the file leaves out keeps its default. A nil lex means
+// lexicon.Default().
 func LoadPolicy(path string, lex *lexicon.Lexicon) (*Policy, error) {
 	b, err := os.ReadFile(path)
 	if err != nil {
@@ -205,8 +206,12 @@ func LoadPolicy(path string, lex *lexicon.Lexicon) (*Policy, error) {
 // fault. In well formed TOML every problem is reported, each a
 // *PolicyError with a line and column, joined: a value of the wrong type
 // or out of range, an unknown key, kind, dimension, category or product
-// type (with the nearest known name).
+// type (with the nearest known name). A nil lex means
+// lexicon.Default().
 func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
+	if lex == nil {
+		lex = lexicon.Default()
+	}
 	lines := strings.Split(text, "\n")
 	var top map[string]toml.Primitive
 	md, err := toml.Decode(text, &top)
@@ -438,8 +443,12 @@ type Effective struct {
 
 // For returns the policy in force for a category and a product type
 // (either may be ""): the defaults, then the category's settings, then
-// the product type's and its ancestors', broadest first.
+// the product type's and its ancestors', broadest first. A nil lex
+// means lexicon.Default().
 func (p *Policy) For(category, productType string, lex *lexicon.Lexicon) Effective {
+	if lex == nil {
+		lex = lexicon.Default()
+	}
 	s := p.Defaults
 	if c, ok := p.Categories[category]; ok {
 		s = merge(s, c)

@@ -34,8 +34,12 @@ func (e *ScopeError) Error() string { return e.Msg }
 // either of which may be "", as a query of that product type is read: a
 // product type brings its category (the lexicon's), so an empty category
 // is the product type's own, and a category that contradicts it is an
-// error. Every error is a *ScopeError.
+// error. Every error is a *ScopeError. A nil lex means
+// lexicon.Default().
 func (p *Policy) Settle(category, productType string, lex *lexicon.Lexicon) (Effective, error) {
+	if lex == nil {
+		lex = lexicon.Default()
+	}
 	if err := lexicon.CheckCategory(category); err != nil {
 		return Effective{}, &ScopeError{ScopeUnknownCategory, err.Error()}
 	}

@@ -448,3 +448,21 @@ func TestParseIn(t *testing.T) {
 		})
 	}
 }
+
+// A nil lexicon is the built-in one, as in parser.Options and
+// rewrite.New, not a panic.
+func TestPolicyWithNilLexicon(t *testing.T) {
+	p, err := ParsePolicy("shop.toml", "[category.apparel]\ncolour_tolerance = 3.0\n\n[product_type.\"rain jacket\"]\nmin_results = 2\n", nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if e := p.For("apparel", "rain jacket", nil); e.ColourTolerance != 3 || e.MinResults != 2 {
+		t.Errorf("For = %+v, want tolerance 3 and min results 2", e)
+	}
+	if e, err := p.Settle("", "rain jacket", nil); err != nil || e.Category != "apparel" {
+		t.Errorf("Settle = %+v, %v; want the rain jacket's category, apparel", e, err)
+	}
+	if _, err := ParsePolicy("shop.toml", "[product_type.zorblax]\nmin_results = 2\n", nil); err == nil {
+		t.Error("an unknown product type was accepted with a nil lexicon")
+	}
+}
