@@ -638,18 +638,23 @@ func (p *tagger) codeAfter(k int) int {
 }
 
 // compat reads a compatibility phrase of n units at k and its target.
+// After a plain "for" the target must name something a product fits: a
+// model code, a brand, or the product it goes on ("for jx-10", "filter
+// for dyno vacuum"); "paint for bathroom" and "gift for dad" name a use
+// or a person, no target, and their words are read as the query's.
 func (p *tagger) compat(k, n int) int {
 	j := k + n
 	end := -1
 	var parts []string
-	code := false // a model code is in the target
+	code := false   // a model code is in the target
+	fitted := false // a code, a brand or a product type is in it
 	for ; j < len(p.units); j++ {
 		v := &p.units[j]
 		if v.kind == uWord {
 			if v.chosen != nil {
 				e := v.chosen
 				if e.Kind == lexicon.Brand {
-					parts, end = append(parts, v.text), v.end
+					parts, end, fitted = append(parts, v.text), v.end, true
 					continue
 				}
 				if e.Kind == lexicon.Filler && len(parts) == 0 {
@@ -657,7 +662,7 @@ func (p *tagger) compat(k, n int) int {
 				}
 				if e.Kind == lexicon.ProductType && len(parts) > 0 && p.head != nil && e != p.head {
 					// "filter for dyno vacuum": the vacuum is what it fits.
-					parts, end = append(parts, v.text), v.end
+					parts, end, fitted = append(parts, v.text), v.end, true
 					j++
 				}
 				break
@@ -679,17 +684,18 @@ func (p *tagger) compat(k, n int) int {
 		if v.kind == uItem && (v.item.Code != nil || (len(parts) > 0 && p.bareNumber(v) && !p.countAfter(j))) {
 			parts, end = append(parts, strings.ToLower(p.q[v.start:v.end])), v.end
 			code = code || v.item.Code != nil
+			fitted = fitted || code
 			continue
 		}
 		// "stand for 65 inch tv": a measure and the product it measures.
 		if v.kind == uItem && len(parts) == 0 && p.head != nil && v.item.Value != nil && p.isPT(j+1) && p.units[j+1].chosen != p.head {
 			parts = append(parts, strings.ToLower(p.q[v.start:v.end]), p.units[j+1].text)
-			end = p.units[j+1].end
+			end, fitted = p.units[j+1].end, true
 			j += 2
 		}
 		break
 	}
-	if end < 0 {
+	if end < 0 || n == 1 && p.units[k].text == "for" && !fitted {
 		return 0
 	}
 	p.add(Constraint{Kind: KindCompatibility, Start: p.units[k].start, End: end, Target: strings.Join(parts, " "),
