@@ -92,6 +92,8 @@ var currencySigns = map[string]string{
 	"€": "EUR", "£": "GBP", "¥": "JPY", "₹": "INR", "₩": "KRW", "₽": "RUB", "₺": "TRY",
 	"₪": "ILS", "₫": "VND", "฿": "THB", "₱": "PHP", "₴": "UAH", "₦": "NGN", "₡": "CRC",
 	"₲": "PYG", "₵": "GHS", "₸": "KZT", "₼": "AZN", "₾": "GEL", "zł": "PLN", "¢": "",
+	// A dollar named by its country before the sign (common practice).
+	"us$": "USD", "c$": "CAD", "a$": "AUD", "nz$": "NZD", "hk$": "HKD", "s$": "SGD", "mx$": "MXN",
 }
 
 // currency returns the ISO 4217 code of a currency sign ("€", "$") or

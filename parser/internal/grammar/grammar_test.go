@@ -32,7 +32,7 @@ func TestGrammarGolden(t *testing.T) {
 }
 
 func TestTokensCoverEveryByte(t *testing.T) {
-	for _, q := range []string{"", "a", "  2x4  ", "€35,99", "3½\"", "１２ｖ", "\xff\x00a", "t-shirt's", "a–b"} {
+	for _, q := range []string{"", "a", "  2x4  ", "€35,99", "3½\"", "１２ｖ", "\xff\x00a", "t-shirt's", "a–b", "C$50", "$1.5k", "$2k - 3k"} {
 		toks := Tokens(q)
 		if len(toks) == 0 || toks[len(toks)-1].Type != lexer.EOF || toks[len(toks)-1].Pos.Offset != len(q) {
 			t.Fatalf("%q: tokens do not end with EOF at %d", q, len(q))
@@ -69,6 +69,10 @@ func TestTokenKinds(t *testing.T) {
 		{"currency", "€35", []string{TCur, TNumber}, "currency symbols"},
 		{"vulgar", "3½", []string{TNumber, TVulgar}, "vulgar fractions"},
 		{"ops", "<=5", []string{TOp, TNumber}, "two-character comparison"},
+		{"named dollar", "C$50", []string{TCur, TNumber}, "a country's letters right before $ make one sign with it"},
+		{"letters and a space", "hk $40", []string{TWord, TSpace, TCur, TNumber}, "with a space between, the word is a word"},
+		{"thousands", "$1.5k", []string{TCur, TNumber}, "k right after an amount is part of it"},
+		{"k without a sign", "1.5k", []string{TNumber, TWord}, "without a currency sign k is a word (1.5k lumens)"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			var got []string

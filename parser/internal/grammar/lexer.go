@@ -128,8 +128,9 @@ func (l *Lexer) Next() (lexer.Token, error) {
 
 // Tokens splits s into tokens. Every byte of s belongs to exactly one
 // token; a token's Pos.Offset is its byte offset in s, and its Value is
-// the normalised text (NFKC, lower case) that the grammar matches on. The
-// last token is EOF, at len(s).
+// the normalised text (NFKC, lower case) that the grammar matches on:
+// the amount of "$1.5k" is the number token "1500", and "C$" one
+// currency sign, "c$". The last token is EOF, at len(s).
 func Tokens(s string) []lexer.Token {
 	toks := make([]lexer.Token, 0, len(s)/3+2)
 	emit := func(ty lexer.TokenType, start int, val string) {
@@ -142,6 +143,7 @@ func Tokens(s string) []lexer.Token {
 		return toks[len(toks)-1].Type
 	}
 	i := 0
+	kAt := -1 // the index of the last number token that took a k
 	for i < len(s) {
 		r, n := utf8.DecodeRuneInString(s[i:])
 		start := i
@@ -157,7 +159,19 @@ func Tokens(s string) []lexer.Token {
 			emit(tySpace, start, " ")
 		case unicode.IsDigit(r):
 			i = scanNumber(s, i)
-			emit(tyNumber, start, asciiDigits(s[start:i]))
+			digits := asciiDigits(s[start:i])
+			tookK := false
+			if (afterCur(toks) || afterKDash(toks, kAt)) && i < len(s) && (s[i] == 'k' || s[i] == 'K') && (i+1 == len(s) || !isWordStart(rune(s[i+1]))) {
+				// "$1.5k", "$2k-3k": k after an amount is a thousand
+				// (common practice); the token takes the k in.
+				if v, ok := thousands(digits); ok {
+					i, digits, tookK = i+1, v, true
+				}
+			}
+			if tookK {
+				kAt = len(toks)
+			}
+			emit(tyNumber, start, digits)
 		case vulgar[r] != "":
 			i += n
 			emit(tyVulgar, start, vulgar[r])
@@ -165,6 +179,12 @@ func Tokens(s string) []lexer.Token {
 			i = scanWord(s, i)
 			w := normWord(s[start:i])
 			ty := tyWord
+			if sign, ok := dollarPrefixes[w]; ok && i < len(s) && s[i] == '$' {
+				// "C$50", "A$40": a dollar named by its country, one sign.
+				i++
+				emit(tyCur, start, sign)
+				continue
+			}
 			if (w == "w" || w == "W") && i < len(s) && s[i] == '/' {
 				// "w/" is with, "w/o" without.
 				if i+1 < len(s) && (s[i+1] == 'o' || s[i+1] == 'O') && (i+2 == len(s) || !isWordStart(rune(s[i+2]))) {
@@ -250,6 +270,62 @@ func Tokens(s string) []lexer.Token {
 	}
 	emit(lexer.EOF, len(s), "")
 	return toks
+}
+
+// dollarPrefixes are the words written right before "$" to say which
+// dollar it is (common practice), and the sign each makes with it; the
+// tagger maps the sign to its ISO 4217 code.
+var dollarPrefixes = map[string]string{
+	"us": "us$", "c": "c$", "ca": "c$", "can": "c$", "a": "a$", "au": "a$", "nz": "nz$",
+	"hk": "hk$", "s": "s$", "sg": "s$", "mx": "mx$",
+}
+
+// afterCur reports whether the token before the next is a currency
+// sign, with or without a space between.
+func afterCur(toks []lexer.Token) bool {
+	n := len(toks)
+	if n > 0 && toks[n-1].Type == tySpace {
+		n--
+	}
+	return n > 0 && toks[n-1].Type == tyCur
+}
+
+// afterKDash reports whether the next token follows a dash after the
+// number token at kAt, one that took a k: the "3" of "$2k-3k".
+func afterKDash(toks []lexer.Token, kAt int) bool {
+	n := len(toks) - 1
+	skip := func() {
+		for n >= 0 && toks[n].Type == tySpace {
+			n--
+		}
+	}
+	skip()
+	if kAt < 0 || n < 0 || toks[n].Type != tyDash {
+		return false
+	}
+	n--
+	skip()
+	return n == kAt
+}
+
+// thousands multiplies a number written with digits and at most one
+// decimal point by 1000, as text: "1.5" is "1500", "2" "2000". A number
+// with a comma is left alone (false): the comma may group thousands or
+// be a decimal comma, which the tagger decides.
+func thousands(digits string) (string, bool) {
+	if strings.Contains(digits, ",") || strings.Count(digits, ".") > 1 {
+		return "", false
+	}
+	whole, frac, _ := strings.Cut(digits, ".")
+	frac += "000"
+	out := strings.TrimLeft(whole+frac[:3], "0")
+	if rest := strings.TrimRight(frac[3:], "0"); rest != "" {
+		out += "." + rest
+	}
+	if out == "" || out[0] == '.' {
+		out = "0" + out
+	}
+	return out, true
 }
 
 // isSpace treats white space and control characters alike.
