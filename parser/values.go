@@ -368,6 +368,14 @@ func (p *tagger) unitAsSize(u *unit, q quantity) (Constraint, bool) {
 	return c, true
 }
 
+// The largest bare numbers read as sizes (common practice, from memory):
+// shoe sizes run to about 50 (EU; US and UK to 16), numeric clothing
+// sizes to about 60 (EU dress sizes to 54, waists in inches to 60).
+const (
+	maxShoeSize    = 50
+	maxApparelSize = 60
+)
+
 // bare tags a number written without a unit.
 func (p *tagger) bare(start, end int, q quantity) {
 	slots := p.lex.SlotsOf(p.head)
@@ -382,9 +390,16 @@ func (p *tagger) bare(start, end int, q quantity) {
 		}
 	}
 	if p.apparel() {
-		sys := "numeric"
+		sys, most := "numeric", float64(maxApparelSize)
 		if p.category == "footwear" {
-			sys = "shoe"
+			sys, most = "shoe", maxShoeSize
+		}
+		if q.num.value > most {
+			// "501 jeans", "pelloran 90 sneakers": a model number, read
+			// as a word of the product's, not a size no shop carries.
+			p.add(Constraint{Kind: KindKeyword, Start: start, End: end, Name: q.num.decimal,
+				Evidence: fmt.Sprintf("a bare number above %g, the largest %s size, reads as a word (a model number)", most, sys)})
+			return
 		}
 		p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: sys, Value: q.num.decimal},
 			Evidence: "a bare number in " + p.category + " reads as a size"})
