@@ -1,10 +1,13 @@
 package parser
 
 import (
+	"math"
 	"strings"
 	"testing"
 
 	"github.com/google/go-cmp/cmp"
+
+	"github.com/whittle-search/whittle/lexicon/units"
 )
 
 // tagged is the part of a constraint the table tests compare.
@@ -743,5 +746,32 @@ func TestModifiedColourValue(t *testing.T) {
 	c := only(t, Parse("light sage"), KindColour)
 	if c.Colour.Hex != "#bdd0a8" {
 		t.Errorf("light sage = %s, want #bdd0a8", c.Colour.Hex)
+	}
+}
+
+// An ounce on a product that holds a volume and has no mass is a fluid
+// ounce: "12oz mug" is 12 fl oz (common practice), which is 12 ×
+// 29.5735295625 mL, US (NIST SP 811, via
+// testdata/reference/unit_conversions.tsv), or 12 × 28.4130625 mL,
+// imperial, with Options.Volume. On a product weighed, or with no
+// product type, it stays an ounce of mass.
+func TestFluidOunces(t *testing.T) {
+	for _, tc := range []struct {
+		query           string
+		volume          units.VolumeSystem
+		dimension       string
+		baseMillilitres float64
+	}{
+		{"12oz mug", units.USCustomary, "capacity", 12 * 29.5735295625},
+		{"12oz mug", units.Imperial, "capacity", 12 * 28.4130625},
+		{"20 oz water bottle", units.USCustomary, "capacity", 20 * 29.5735295625},
+	} {
+		m := only(t, ParseWith(tc.query, Options{Volume: tc.volume}), KindMeasure).Measure
+		if m.Dimension != tc.dimension || m.Quantity != "volume" || math.Abs(*m.BaseAmount-tc.baseMillilitres) > 1e-6 {
+			t.Errorf("%q (%v): %s %s %v %s, want %s volume %v mL", tc.query, tc.volume, m.Dimension, m.Quantity, *m.BaseAmount, m.BaseUnit, tc.dimension, tc.baseMillilitres)
+		}
+	}
+	if m := only(t, Parse("12 oz"), KindMeasure).Measure; m.Quantity != "mass" {
+		t.Errorf("12 oz with no product type is %s, want mass", m.Quantity)
 	}
 }

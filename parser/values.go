@@ -18,6 +18,7 @@ type quantity struct {
 	hasUnit  bool
 	currency string // ISO code when a currency was written after the number
 	label    string // w, h, d or l after a mark or unit
+	fluid    bool   // "oz" read as fluid ounces, on a product that holds a volume
 	start    int
 	end      int
 }
@@ -62,6 +63,11 @@ func (p *tagger) readSingle(s *grammar.Single) (single, bool) {
 			qt.unit, qt.hasUnit = mustUnit("ft"), true
 		case q.Unit != "":
 			qt.unit, qt.hasUnit = units.Lookup(q.Unit, p.opts.Volume)
+			if qt.hasUnit && qt.unit.Quantity == units.Mass && qt.unit.Symbol == "oz" && p.holdsVolume() {
+				// "12oz mug": a mug's ounces are fluid ones (common practice).
+				qt.unit, _ = units.Lookup("fl oz", p.opts.Volume)
+				qt.fluid = true
+			}
 		case q.Currency != "":
 			code, ok := p.currency(q.Currency)
 			if !ok {
@@ -488,6 +494,10 @@ func (p *tagger) measure(start, end int, q quantity, dim string, min, max *float
 		p.markByRange(end)
 	}
 	m := &Measure{Dimension: dim, Quantity: string(u.Quantity), Unit: u.String(), BaseUnit: mustUnit(units.Base(u.Quantity)).String()}
+	evidence := "unit as typed"
+	if q.fluid {
+		evidence = fmt.Sprintf("oz read as fluid ounces: a %s holds a volume and has no mass to weigh", p.head.Name)
+	}
 	if min == nil && max == nil {
 		m.Amount, m.BaseAmount = ptr(q.num.value), ptr(tidy(q.num.value*u.ToBase))
 	} else {
@@ -498,7 +508,7 @@ func (p *tagger) measure(start, end int, q quantity, dim string, min, max *float
 			m.Max, m.BaseMax = ptr(*max), ptr(tidy(*max*u.ToBase))
 		}
 	}
-	return Constraint{Kind: KindMeasure, Start: start, End: end, Measure: m, Evidence: "unit as typed"}
+	return Constraint{Kind: KindMeasure, Start: start, End: end, Measure: m, Evidence: evidence}
 }
 
 // price adds a price constraint with the given bounds.
@@ -820,6 +830,21 @@ func (p *tagger) sizeValue(v *unit) (*Size, bool) {
 		val = strings.ToLower(strings.TrimSpace(p.q[q.start:q.end]))
 	}
 	return &Size{System: sys, Value: val}, true
+}
+
+// holdsVolume reports whether the head product type has a volume slot
+// and no mass slot, so that an ounce on it is a fluid ounce.
+func (p *tagger) holdsVolume() bool {
+	volume := false
+	for _, s := range p.lex.SlotsOf(p.head) {
+		switch s.Quantity {
+		case units.Mass:
+			return false
+		case units.Volume:
+			volume = true
+		}
+	}
+	return volume
 }
 
 // bareNumber reports whether a unit holds just a number with no unit.
