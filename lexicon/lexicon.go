@@ -8,6 +8,7 @@ import (
 	"os"
 	"path/filepath"
 	"slices"
+	"unicode"
 
 	"strings"
 	"sync"
@@ -223,13 +224,41 @@ func (l *Lexicon) Key(word string) string {
 // multi-word phrases, under the joined form too ("v-neck" also as "vneck").
 func (l *Lexicon) insert(p string, e *Entry) {
 	keys := phraseKeys(p)
-	for i, w := range Words(p) {
+	ws := Words(p)
+	for i, w := range ws {
 		l.keys[w] = keys[i]
 	}
+	// The Porter stemmer does not always bring a plural to its singular's
+	// stem ("ties" to "ti", "tie" stays "tie"); the plural of the last
+	// word is then looked up under the singular's key too.
+	if n := len(ws); n > 0 {
+		last := Normalise(ws[n-1])
+		if pl := pluralOf(last); pl != last && Key(pl) != keys[n-1] {
+			if _, taken := l.keys[pl]; !taken {
+				l.keys[pl] = keys[n-1]
+			}
+		}
+	}
 	l.insertKeys(keys, e)
-	if ws := Words(p); len(ws) > 1 && len(ws) <= 3 {
+	if len(ws) > 1 && len(ws) <= 3 {
 		l.joined = append(l.joined, joinedForm{Key(strings.Join(ws, "")), e})
 	}
+}
+
+// pluralOf is the regular English plural of a noun (common practice): -es
+// after s, x, z, ch and sh ("lenses"), -ies for a y after a consonant,
+// else -s. A word that does not end in a letter is its own. (A word
+// plural already, "jeans", gets a form no one types, which is harmless.)
+func pluralOf(w string) string {
+	switch {
+	case w == "" || !unicode.IsLetter(rune(w[len(w)-1])):
+		return w
+	case strings.HasSuffix(w, "s"), strings.HasSuffix(w, "x"), strings.HasSuffix(w, "z"), strings.HasSuffix(w, "ch"), strings.HasSuffix(w, "sh"):
+		return w + "es"
+	case len(w) > 1 && strings.HasSuffix(w, "y") && !strings.ContainsRune("aeiou", rune(w[len(w)-2])):
+		return w[:len(w)-1] + "ies"
+	}
+	return w + "s"
 }
 
 // joinedForm is a phrase of several words written as one ("vneck",
