@@ -402,6 +402,8 @@ var parseCases = []parseCase{
 	{name: "plural of a word in s", query: "prime lenses", category: "camera",
 		reason: "Porter stems lens to len and lenses to lens; lenses is the plural of lens",
 		want:   []tagged{tg(KindProductType, "prime lenses", "prime lens")}},
+	{name: "wine rack", query: "wine rack", category: "furniture", reason: "a product type of two words beats the colour wine in its first",
+		want: []tagged{tg(KindProductType, "wine rack", "wine rack")}},
 	{name: "british spelling", query: "grey jumper", category: "apparel", reason: "jumper is a sweater in British English",
 		want: []tagged{tg(KindColour, "grey", "grey"), tg(KindProductType, "jumper", "sweater")}},
 	{name: "american spelling", query: "gray sweater", category: "apparel", reason: "gray is grey",
