@@ -271,7 +271,7 @@ func demoElectrical() *demoDept {
 func demoCamera() *demoDept {
 	return &demoDept{
 		category: "camera", weight: 5, parts: []string{"KV", "BD", "ML"},
-		brands: []string{"Kavvilent", "Bodrinske", "Mollesk"},
+		brands: []string{"Kavvilent", "Bodrinske", "Oskeldry"},
 		blurbs: []string{
 			"Two-year warranty with the store's repair service.",
 			"Try it first at the camera counter.",
