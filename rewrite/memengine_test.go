@@ -140,7 +140,7 @@ func (m *memEngine) Describe(ctx context.Context, id string) (*Facts, error) {
 		if pr.ID != id {
 			continue
 		}
-		f := &Facts{ProductType: pr.Type, Measures: pr.Measures, Compat: pr.Compat, InStock: !pr.Gone}
+		f := &Facts{ProductType: pr.Type, Measures: pr.Measures, Compat: pr.Compat, InStock: !pr.Gone, Spec: pr.Specs}
 		if rgb, err := colour.ParseHex(pr.Hex); err == nil {
 			l := rgb.Lab()
 			f.Lab = &[3]float64{l.L, l.A, l.B}

@@ -114,7 +114,10 @@ type Facts struct {
 	Lab         *[3]float64        `json:"lab,omitempty"`
 	Measures    map[string]float64 `json:"measures,omitempty"`
 	Compat      []string           `json:"compatible_with,omitempty"`
-	InStock     bool               `json:"in_stock"`
+	// Spec holds the product's standard designations, by system, as a
+	// query's spec clause names them ("tyre": "205/55r16 91v").
+	Spec    map[string]string `json:"spec,omitempty"`
+	InStock bool              `json:"in_stock"`
 	// Category, Colour and Brand are the catalog's names for the
 	// product's category, colour and brand, or "".
 	Category string `json:"category,omitempty"`

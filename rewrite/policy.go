@@ -346,6 +346,20 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 // numbers outside wiring (a shotgun's, a needle's, sheet metal's).
 var safetyDimensions = []string{"current", "gauge", "load_rating", "peak_current", "voltage"}
 
+// fitDimensions are the measure dimensions the built-in policy makes
+// hard for some product types because a part must have them to fit or
+// run safely: a bolt's, a wall anchor's or a lens cap's diameter, a saw
+// blade's or a grinder disc's, a tyre's rim, a bulb's wattage.
+var fitDimensions = []string{"blade_diameter", "diameter", "disc_diameter", "power", "rim_diameter"}
+
+// substituteHurts reports whether a substitute for dimension dim could
+// hurt someone where e makes it hard: a rating, a gauge number or a fit
+// dimension. A dimension hard by the shop's choice alone (a lens's
+// focal length) is not one.
+func (e Effective) substituteHurts(dim string) bool {
+	return e.Dimensions[dim] == parser.Hard && (slices.Contains(safetyDimensions, dim) || slices.Contains(fitDimensions, dim))
+}
+
 // checkSafety reports a policy that relaxes what a substitute for could
 // hurt someone (name, at key; what says what it covers): filler, which
 // would drop it unseen, is an error; anything else below hard is a

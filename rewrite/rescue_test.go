@@ -419,6 +419,68 @@ func TestAlternativesKeepHardConstraints(t *testing.T) {
 	}
 }
 
+// The alternatives to an unavailable product keep what a substitute for
+// could hurt someone, exactly, even when the query named only the part:
+// its rating (a breaker's current; common practice, and the reason
+// electrical codes name the rating), its designation (a tyre's size,
+// ISO 4000-1), its fit (a bolt's diameter). A neighbour of another
+// rating or size is no alternative; a twin in stock is. The shop is
+// invented.
+func TestAlternativesKeepWhatCouldHurt(t *testing.T) {
+	gone := []product{
+		{ID: "CB-20", Type: "circuit breaker", Colour: "black", Hex: "#000000", Measures: map[string]float64{"current": 20}, Part: "cb-2020", Gone: true},
+		{ID: "TY-A", Type: "tyre", Colour: "black", Hex: "#000000", Specs: map[string]string{"tyre": "205/55r16"}, Part: "ty-5516", Gone: true},
+		{ID: "HB-8", Type: "hex bolt", Colour: "grey", Hex: "#808080", Measures: map[string]float64{"diameter": 8, "length": 40}, Part: "hb-0840", Gone: true},
+	}
+	neighbours := []product{
+		{ID: "CB-15", Type: "circuit breaker", Colour: "black", Hex: "#000000", Measures: map[string]float64{"current": 15}},
+		{ID: "CB-25", Type: "circuit breaker", Colour: "black", Hex: "#000000", Measures: map[string]float64{"current": 21}},
+		{ID: "TY-B", Type: "tyre", Colour: "black", Hex: "#000000", Specs: map[string]string{"tyre": "215/55r16"}},
+		{ID: "HB-9", Type: "hex bolt", Colour: "grey", Hex: "#808080", Measures: map[string]float64{"diameter": 8.5, "length": 40}},
+	}
+	twins := []product{
+		{ID: "CB-20B", Type: "circuit breaker", Colour: "white", Hex: "#ffffff", Measures: map[string]float64{"current": 20}},
+		{ID: "TY-C", Type: "tyre", Colour: "black", Hex: "#000000", Specs: map[string]string{"tyre": "205/55r16"}},
+		{ID: "HB-8B", Type: "hex bolt", Colour: "grey", Hex: "#808080", Measures: map[string]float64{"diameter": 8, "length": 50}},
+	}
+	for _, tc := range []struct {
+		part, reason string
+		twin         string
+	}{
+		{"cb-2020", "a 15 A or a 21 A breaker for a 20 A one could fail to protect the circuit", "CB-20B"},
+		{"ty-5516", "a 215/55R16 tyre is another size", "TY-C"},
+		{"hb-0840", "an 8.5 mm bolt does not fit an M8 hole; a longer M8 bolt does", "HB-8B"},
+	} {
+		t.Run(tc.part, func(t *testing.T) {
+			for _, shop := range []struct {
+				name     string
+				products []product
+				want     string
+			}{{"neighbours only", append(slices.Clone(gone), neighbours...), ""}, {"a twin in stock", append(append(slices.Clone(gone), neighbours...), twins...), tc.twin}} {
+				eng := &memEngine{products: shop.products}
+				o, err := New(eng, nil).Rescue(context.Background(), tc.part)
+				if err != nil {
+					t.Fatal(err)
+				}
+				hits, err := eng.Search(context.Background(), o.Plan, 10)
+				if err != nil {
+					t.Fatal(err)
+				}
+				var got []string
+				for _, h := range hits {
+					got = append(got, h.ID)
+				}
+				switch {
+				case shop.want == "" && len(o.Unavailable) > 0:
+					t.Errorf("%s, %s: shows %v as like it", shop.name, tc.reason, got)
+				case shop.want != "" && !slices.Equal(got, []string{shop.want}):
+					t.Errorf("%s: shows %v, want the twin %s\n%s", shop.name, got, shop.want, o.Explanation)
+				}
+			}
+		})
+	}
+}
+
 // The budget and the deadline hold for the heaviest queries the parser
 // lets through: 64 constraints (its limit), 1,024 bytes (its limit),
 // every constraint relaxable. However large the lattice, a rescue asks

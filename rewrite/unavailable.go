@@ -40,6 +40,14 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	}
 	stock := Clause{Field: FieldInStock, Values: []string{"true"}, From: -1}
 	kept := keptForAlternatives(s.out.Parsed, p)
+	// Its designations, and the hard measures a substitute for could
+	// hurt someone (a breaker's current, a bolt's diameter), hold for
+	// every alternative, exactly: an unavailable 20 A breaker or 205/55R16
+	// tyre is no reason to show another rating or size.
+	pol := rw.policy.For(f.Category, f.ProductType, rw.lex)
+	for _, sys := range sortedKeys(f.Spec) {
+		kept = append(kept, Clause{Field: "spec", Dimension: sys, Values: []string{f.Spec[sys]}, From: -1})
+	}
 	kind := Clause{Field: "product_type", Values: []string{f.ProductType}, From: -1}
 	var near *Clause
 	pal, err := rw.palette(ctx)
@@ -62,6 +70,11 @@ func (rw *Rewriter) alternatives(ctx context.Context, s *search, p Plan) bool {
 	tol := math.Max(s.out.Policy.MeasureTolerance, 0.10)
 	for _, dim := range sortedKeys(f.Measures) {
 		v := f.Measures[dim]
+		if pol.substituteHurts(dim) {
+			exact := v
+			kept = append(kept, Clause{Field: "measure", Dimension: dim, Min: &exact, Max: &exact, From: -1})
+			continue
+		}
 		lo, hi := v*(1-tol), v*(1+tol)
 		sized = append(sized, Clause{Field: "measure", Dimension: dim, Min: &lo, Max: &hi, From: -1})
 	}

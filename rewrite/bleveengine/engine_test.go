@@ -545,6 +545,11 @@ func TestDescribe(t *testing.T) {
 		!f.InStock || f.Lab == nil || f.Measures["length"] != 740 {
 		t.Errorf("RJ-1 facts = %+v", f)
 	}
+	// WR-1's designation, by its system, as a query's spec clause names
+	// it: an alternative to it must keep the gauge.
+	if f, err := e.Describe(context.Background(), "WR-1"); err != nil || f.Spec["awg"] != "12 awg" {
+		t.Errorf("WR-1 facts = %+v, %v; want spec awg 12 awg", f, err)
+	}
 	if _, err := e.Describe(context.Background(), "NO-SUCH"); err == nil || !strings.Contains(err.Error(), `"NO-SUCH"`) {
 		t.Errorf("unknown id: err = %v", err)
 	}

@@ -201,6 +201,7 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 		return nil, nil, err
 	}
 	specs := map[string]any{}
+	own := map[string]string{} // for the facts: each system's designation
 	for _, s := range p.Spec {
 		sp, err := r.Spec(s)
 		if err != nil {
@@ -209,6 +210,7 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 		for key, d := range sp.Keys() {
 			specs[key] = d
 		}
+		own[sp.System] = strings.ToLower(sp.Designation)
 	}
 	if len(specs) > 0 {
 		d["spec"] = specs
@@ -236,6 +238,9 @@ func document(p *catalog.Product, r *catalog.Reader, lex *lexicon.Lexicon, dims 
 	d[fWords] = strings.Join(words, " ")
 	facts := rewrite.Facts{ProductType: named[fType], Compat: compat, InStock: in, Measures: map[string]float64{},
 		Category: norm(p.Category), Colour: norm(p.Colour), Brand: norm(p.Brand)}
+	if len(own) > 0 {
+		facts.Spec = own
+	}
 	for dim, v := range ms {
 		switch x := v.(type) {
 		case float64:
