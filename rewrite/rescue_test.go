@@ -404,14 +404,7 @@ func TestAlternativesKeepHardConstraints(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			hits, err := eng.Search(context.Background(), o.Plan, 10)
-			if err != nil {
-				t.Fatal(err)
-			}
-			var got []string
-			for _, h := range hits {
-				got = append(got, h.ID)
-			}
+			got := hitIDs(t, eng, o.Plan)
 			if !slices.Equal(got, tc.want) {
 				t.Errorf("%s: hits %v, want %v\n%s", tc.reason, got, tc.want, o.Explanation)
 			}
@@ -462,14 +455,7 @@ func TestAlternativesKeepWhatCouldHurt(t *testing.T) {
 				if err != nil {
 					t.Fatal(err)
 				}
-				hits, err := eng.Search(context.Background(), o.Plan, 10)
-				if err != nil {
-					t.Fatal(err)
-				}
-				var got []string
-				for _, h := range hits {
-					got = append(got, h.ID)
-				}
+				got := hitIDs(t, eng, o.Plan)
 				switch {
 				case shop.want == "" && len(o.Unavailable) > 0:
 					t.Errorf("%s, %s: shows %v as like it", shop.name, tc.reason, got)
@@ -653,4 +639,18 @@ func TestFewerThanMinResults(t *testing.T) {
 			}
 		})
 	}
+}
+
+// hitIDs are the ids of the first ten products eng finds for p.
+func hitIDs(t *testing.T, eng Engine, p Plan) []string {
+	t.Helper()
+	hits, err := eng.Search(context.Background(), p, 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var ids []string
+	for _, h := range hits {
+		ids = append(ids, h.ID)
+	}
+	return ids
 }
