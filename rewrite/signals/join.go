@@ -39,33 +39,36 @@ type JoinOptions struct {
 type JoinStats struct {
 	// Events, Searches and Interactions count the events read, malformed
 	// lines apart.
-	Events, Searches, Interactions int
+	Events       int `json:"events"`
+	Searches     int `json:"searches"`
+	Interactions int `json:"interactions"`
 	// Joined counts the interactions joined to a search.
-	Joined int
+	Joined int `json:"joined"`
 	// NoSearch counts the interactions with no search of their session
 	// in the Window before them.
-	NoSearch int
+	NoSearch int `json:"no_search"`
 	// NotShown counts the interactions whose product none of the
 	// searches in the Window before them showed.
-	NotShown int
+	NotShown int `json:"not_shown"`
 	// Late counts events older than the latest event seen by more than
 	// Lateness. Each is still joined as well as it can be: added to its
 	// session when that is open, or else the start of a fresh session,
 	// since the one it belonged to may have been emitted already.
-	Late int
+	Late int `json:"late"`
 	// Bad counts malformed lines, when SkipBad is set; BadSample keeps the
 	// first few messages.
-	Bad       int
-	BadSample []string
+	Bad       int      `json:"bad"`
+	BadSample []string `json:"bad_sample,omitempty"`
 	// Sessions counts the sessions emitted.
-	Sessions int
+	Sessions int `json:"sessions"`
 	// SearchOverflow and InteractionOverflow count the events dropped past
 	// a session's MaxSearches and MaxInteractions.
-	SearchOverflow, InteractionOverflow int
+	SearchOverflow      int `json:"search_overflow"`
+	InteractionOverflow int `json:"interaction_overflow"`
 	// PeakOpen is the most sessions held open at once: the join's memory
 	// is bounded by it (and by what each session holds), not by the
 	// length of the log.
-	PeakOpen int
+	PeakOpen int `json:"peak_open"`
 }
 
 // badSample is how many messages of malformed lines JoinStats keeps.

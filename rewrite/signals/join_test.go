@@ -2,6 +2,7 @@ package signals
 
 import (
 	"context"
+	"encoding/json"
 	"errors"
 	"fmt"
 	"iter"
@@ -545,5 +546,23 @@ func TestJoinMemoryBound(t *testing.T) {
 	// as the next begins), however long the log.
 	if emitted != n || st.PeakOpen > 361 || st.PeakOpen < 300 {
 		t.Errorf("emitted %d of %d, PeakOpen %d; want all emitted with at most 361 open at once", emitted, n, st.PeakOpen)
+	}
+}
+
+// A join's figures are written in JSON with the snake_case names of the
+// rest of tune's report (tune --json).
+func TestJoinStatsJSON(t *testing.T) {
+	b, err := json.Marshal(JoinStats{Events: 3, NoSearch: 1, PeakOpen: 2})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var got map[string]int
+	if err := json.Unmarshal(b, &got); err != nil {
+		t.Fatal(err)
+	}
+	for key, want := range map[string]int{"events": 3, "no_search": 1, "peak_open": 2, "interaction_overflow": 0} {
+		if v, ok := got[key]; !ok || v != want {
+			t.Errorf("%s = %d (present %v), want %d, in %s", key, v, ok, want, b)
+		}
 	}
 }
