@@ -188,8 +188,6 @@ func clauseMatches(pr product, c Clause) bool {
 	return slices.Contains(c.Values, attr(pr, c.Field))
 }
 
-func ptrf(v float64) *float64 { return &v }
-
 // shop is the invented test catalog: an outdoor and home shop of our own.
 var shop = []product{
 	{ID: "RJ-1", Type: "rain jacket", Colour: "harvest gold", Hex: "#dfaa0a", Pattern: "solid", Material: "nylon", Audience: "women", Sizes: []string{"s", "m", "l"}, Price: 59, Words: []string{"ridgeline"}},

@@ -14,7 +14,6 @@ import (
 	"runtime/debug"
 	"sort"
 	"strings"
-	"syscall"
 	"time"
 
 	"github.com/whittle-search/whittle/lexicon"
@@ -335,9 +334,8 @@ func peakMB() float64 {
 			}
 		}
 	}
-	var ru syscall.Rusage
-	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &ru); err == nil && ru.Maxrss > 0 {
-		return float64(ru.Maxrss) / 1024 // kilobytes on Linux
+	if mb, ok := rusagePeakMB(); ok {
+		return mb
 	}
 	var ms runtime.MemStats
 	runtime.ReadMemStats(&ms)
