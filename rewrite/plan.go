@@ -99,9 +99,16 @@ type Catalog interface {
 	Colours(ctx context.Context) ([]colour.PaletteColour, error)
 	// Values returns the values of field (with dimension, for measures:
 	// amounts in base units, written with %g) that the products matching
-	// within carry, with how many products carry each.
+	// within carry, with how many products carry each. The planner asks
+	// it only of the fields ListedFields names.
 	Values(ctx context.Context, field, dimension string, within Plan) (map[string]int, error)
 }
+
+// ListedFields are the clause fields whose values a Catalog lists: the
+// attributes a product carries one value or a few of. Part numbers,
+// keywords and prices are not among them: a list of the part numbers
+// carried says nothing about what to search for instead.
+var ListedFields = []string{"product_type", "colour", "pattern", "silhouette", "material", "audience", "brand", "size", "compatibility", "spec", "measure"}
 
 // FieldInStock is the clause field that keeps available products
 // (Values "true") or unavailable ones ("false").

@@ -123,15 +123,18 @@ func headIndex(r *parser.Result) int {
 }
 
 // keepsHard reports whether every constraint hard in was is hard in now,
-// at the same span and with the same exclusion: reading a query again
-// never loosens what was never to be relaxed.
+// at the same span, of the same kind and value and with the same
+// exclusion: reading a query again never loosens or changes what was
+// never to be relaxed ("m8 blot" read as "m8 boot" would make the thread
+// M8 a part number; as "m8 bolt" it stays the thread).
 func keepsHard(was, now *parser.Result) bool {
 	for _, c := range was.Constraints {
 		if c.Strictness < parser.Hard {
 			continue
 		}
 		if !slices.ContainsFunc(now.Constraints, func(d parser.Constraint) bool {
-			return d.Start == c.Start && d.End == c.End && d.Excluded == c.Excluded && d.Strictness == parser.Hard
+			return d.Start == c.Start && d.End == c.End && d.Excluded == c.Excluded && d.Strictness == parser.Hard &&
+				d.Kind == c.Kind && d.Value() == c.Value()
 		}) {
 			return false
 		}

@@ -783,7 +783,7 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 			continue
 		}
 		m := Missing{Constraint: cl.From, Text: s.out.Parsed.Constraints[cl.From].Text}
-		if cat != nil {
+		if cat != nil && slices.Contains(ListedFields, cl.Field) {
 			// Among products of the kind asked for.
 			like := rest
 			for _, it := range s.items {
