@@ -234,3 +234,14 @@ func writeFile(file string, write func(io.Writer) error) error {
 	}
 	return f.Close()
 }
+
+// finish flushes out and returns status, or 1 with the error on stderr
+// when the output could not be written (a full disk, a closed pipe): a
+// command's exit status says whether its output is all there.
+func finish(out *bufio.Writer, stderr io.Writer, cmd string, status int) int {
+	if err := out.Flush(); err != nil {
+		fmt.Fprintf(stderr, "whittle %s: writing the output: %v\n", cmd, err)
+		return 1
+	}
+	return status
+}

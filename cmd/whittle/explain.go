@@ -80,7 +80,6 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	}
 
 	out := bufio.NewWriter(stdout)
-	defer out.Flush()
 	status := 0
 	emit := func(q string, first bool) {
 		r := pol.Read(q, opts)
@@ -120,10 +119,10 @@ func explain(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 			fmt.Fprintf(stderr, "whittle explain: reading standard input: %v\n", err)
 			return 1
 		}
-		return status
+		return finish(out, stderr, "explain", status)
 	}
 	for i, q := range fs.Args() {
 		emit(q, i == 0)
 	}
-	return status
+	return finish(out, stderr, "explain", status)
 }

@@ -4,6 +4,7 @@ import (
 	"bufio"
 	"bytes"
 	"encoding/json"
+	"errors"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -253,5 +254,20 @@ func TestStdinByteOrderMark(t *testing.T) {
 	}
 	if err := json.Unmarshal([]byte(out), &got); err != nil || got.Query != "85 lens" {
 		t.Errorf("query = %q (%v), want \"85 lens\"", got.Query, err)
+	}
+}
+
+// fullDisk is a standard output that takes nothing.
+type fullDisk struct{}
+
+func (fullDisk) Write([]byte) (int, error) { return 0, errors.New("no space left on device") }
+
+// A command whose output could not be written does not exit 0: its exit
+// status says whether the output is all there.
+func TestOutputThatCannotBeWritten(t *testing.T) {
+	var stderr bytes.Buffer
+	code := run([]string{"explain", "85 lens"}, strings.NewReader(""), fullDisk{}, &stderr)
+	if code != 1 || !strings.Contains(stderr.String(), "whittle explain: writing the output: no space left on device") {
+		t.Errorf("exit %d, stderr %q; want 1 and the write error", code, stderr.String())
 	}
 }

@@ -74,7 +74,7 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	defer stop()
 
 	out := bufio.NewWriter(stdout)
-	defer out.Flush()
+	defer out.Flush() // for the early returns; the end checks it
 	emit := func(*replay.Result) error { return nil }
 	var rows *replay.CSV
 	if *asCSV {
@@ -133,5 +133,5 @@ func replayCmd(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		}
 		fmt.Fprintf(stderr, "replayed %d %s in %.1fs\n", rep.All.Queries, noun, time.Since(start).Seconds())
 	}
-	return 0
+	return finish(out, stderr, "replay", 0)
 }
