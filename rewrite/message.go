@@ -2,6 +2,7 @@ package rewrite
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"github.com/whittle-search/whittle/parser"
@@ -37,8 +38,14 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	noun := "results"
 	var phrases []string
 	fix := ""
+	// A typo read as a colour ("olve" as olive) puts a colour in the
+	// plan, so a colour dropped beside it is not "in any colour".
+	typoColour := slices.ContainsFunc(out.Relaxations, func(r Relaxation) bool {
+		return r.Kind == parser.KindKeyword && r.Operator == OpReplace && strings.HasPrefix(r.Phrase, "in ")
+	})
 	for _, r := range out.Relaxations {
 		switch {
+		case typoColour && r.Kind == parser.KindColour && r.Operator == OpDrop:
 		case r.Kind == parser.KindProductType && r.Operator == OpReplace:
 			fix = ", " + r.Phrase
 		case r.Kind == parser.KindProductType && r.Operator == OpWiden:

@@ -169,7 +169,19 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 		if err != nil {
 			return err
 		}
-		if cl != nil {
+		if cl != nil && cl.Field == string(parser.KindColour) {
+			// A colour misspelt: the colour, then the catalog colours near
+			// it, as a colour typed right is widened.
+			add(cl, OpReplace, fmt.Sprintf("%q read as %q", c.Name, fixed), "in "+fixed, costReplace)
+			wide, n, err := rw.widenFixedColour(ctx, cl, fixed, e.ColourTolerance)
+			if err != nil {
+				return err
+			}
+			if wide != nil {
+				add(wide, OpReplace, fmt.Sprintf("%q read as %q, widened to %s within ΔE00 %g", c.Name, fixed,
+					textout.Count(n, "catalog colour", "catalog colours"), e.ColourTolerance), "in colours close to "+fixed, costReplace+costWiden)
+			}
+		} else if cl != nil {
 			add(cl, OpReplace, fmt.Sprintf("%q read as %q", c.Name, fixed), fmt.Sprintf("for “%s”", fixed), costReplace)
 		}
 	}
@@ -264,6 +276,33 @@ func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Cl
 		cl.Values = append(cl.Values, it.c.Name)
 	}
 	return &cl, len(ms), nil
+}
+
+// widenFixedColour is the colour clause cl, a typo read as the lexicon
+// colour name, widened to the catalog colours within tol of it; nil when
+// the lexicon gives the name no value or none is near.
+func (rw *Rewriter) widenFixedColour(ctx context.Context, cl *Clause, name string, tol float64) (*Clause, int, error) {
+	_, lab, ok := rw.lex.ColourNamed(name)
+	if !ok || tol <= 0 {
+		return nil, 0, nil
+	}
+	pal, err := rw.palette(ctx)
+	if err != nil || pal == nil {
+		return nil, 0, err
+	}
+	ms := pal.Within(lab, tol)
+	if len(ms) == 0 {
+		return nil, 0, nil
+	}
+	wide := *cl
+	wide.Values = []string{}
+	for _, m := range ms {
+		wide.Values = append(wide.Values, m.Name)
+	}
+	if !slices.Contains(wide.Values, name) {
+		wide.Values = append(wide.Values, name)
+	}
+	return &wide, len(ms), nil
 }
 
 type widening struct {

@@ -54,7 +54,7 @@ func TestRescue(t *testing.T) {
 		{name: "replace a typo", query: "sweter merino", reason: "sweter is one edit from sweater, a product type, so the query is read again as \"sweater merino\": SW-1 is the one merino sweater",
 			count: 1, ops: []string{"replace product_type"}, message: "Showing sweaters, reading “sweter” as “sweater”."},
 		{name: "replace a typo with the catalog's word", query: "glaciar rain jacket", reason: "glaciar is one edit from glacier, a colour only the catalog names",
-			count: 1, ops: []string{"replace keyword"}, message: "for “glacier”"},
+			count: 1, ops: []string{"replace keyword"}, message: "rain jackets in glacier"},
 		{name: "widen product type", query: "chelsea boots", reason: "no chelsea boot; the hiking boot is a boot",
 			count: 1, ops: []string{"widen product_type"}, message: "Showing boots."},
 		{name: "stretch price", query: "rain jacket under $50", reason: "the cheapest is 55.00; a 15% stretch reaches 57.50",
@@ -653,4 +653,24 @@ func hitIDs(t *testing.T, eng Engine, p Plan) []string {
 		ids = append(ids, h.ID)
 	}
 	return ids
+}
+
+// A colour misspelt is read as the colour and, when the catalog has
+// none of that name, widened to the catalog colours near it, as a colour
+// typed right is: "burgandy" is one edit from burgundy (#800020 in the
+// lexicon, from memory), and the shop's merlot (#82001f, invented) is
+// within ΔE00 1 of it, far inside apparel's tolerance of 4; its navy is
+// not. The shop is invented.
+func TestColourTypoIsWidened(t *testing.T) {
+	dresses := []product{
+		{ID: "DR-1", Type: "dress", Colour: "merlot", Hex: "#82001f"},
+		{ID: "DR-2", Type: "dress", Colour: "navy", Hex: "#000080"},
+	}
+	o := mustRescue(t, dresses, "burgandy dress")
+	if got := hitIDs(t, &memEngine{products: dresses}, o.Plan); !slices.Equal(got, []string{"DR-1"}) {
+		t.Errorf("hits %v, want DR-1 alone\n%s", got, o.Explanation)
+	}
+	if want := "Showing dresses in colours close to burgundy."; !strings.HasSuffix(o.Message, want) {
+		t.Errorf("message %q, want it to end %q", o.Message, want)
+	}
 }
