@@ -86,6 +86,16 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		if c.Kind == parser.KindProductType && in != "" && len(out.Missing) > 1 {
 			continue // "in lenses" already names it; the rest say what is missing
 		}
+		if c.Kind == parser.KindProductType && strings.Contains(c.Evidence, "head product type") {
+			// The type asked for is what is missing: "the shop carries no
+			// doormats", not "doormat is not carried in doormats".
+			s := fmt.Sprintf("The shop carries no %s", plural(c.Name))
+			if len(m.Carried) > 0 {
+				s += fmt.Sprintf("; %s carried: %s", plural(fieldName(c)), summarise(m.Carried))
+			}
+			parts = append(parts, s)
+			continue
+		}
 		what := m.Text
 		if c.Measure != nil && c.Inferred {
 			what = c.Value() // "85 mm", not "85"

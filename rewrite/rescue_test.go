@@ -55,6 +55,8 @@ func TestRescue(t *testing.T) {
 			count: 1, ops: []string{"replace product_type"}, message: "Showing sweaters, reading “sweter” as “sweater”."},
 		{name: "replace a typo with the catalog's word", query: "glaciar rain jacket", reason: "glaciar is one edit from glacier, a colour only the catalog names",
 			count: 1, ops: []string{"replace keyword"}, message: "rain jackets in glacier"},
+		{name: "type not carried", query: "coir doormat", reason: "the shop has no doormat, and a doormat has no broader type to widen to",
+			count: 0, message: "No results for “coir doormat”. The shop carries no doormats."},
 		{name: "widen product type", query: "chelsea boots", reason: "no chelsea boot; the hiking boot is a boot",
 			count: 1, ops: []string{"widen product_type"}, message: "Showing boots."},
 		{name: "stretch price", query: "rain jacket under $50", reason: "the cheapest is 55.00; a 15% stretch reaches 57.50",
