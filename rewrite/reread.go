@@ -31,29 +31,31 @@ type reading struct {
 // in r's reading would not stay hard at the same span.
 //
 // When the word is as near to several words of product types ("clok" to
-// "clock" and "clog"), the reading whose head product type takes in
-// most of the query wins ("wall clok" is a wall clock), then the first
-// in the vocabulary's order.
-func (rw *Rewriter) reread(ctx context.Context, r *parser.Result) (*reading, error) {
+// "clock" and "clog", "sandles" to "sandals" and "candles"), it returns
+// each reading, the one whose head product type takes in most of the
+// query first ("wall clok" is a wall clock), then in the vocabulary's
+// order; the rescue counts them and keeps the one the catalog bears out.
+func (rw *Rewriter) reread(ctx context.Context, r *parser.Result) ([]*reading, error) {
 	for _, c := range r.Constraints {
 		if !unknownWord(r, c) {
 			continue
 		}
-		var best *reading
 		near, err := rw.nearestWords(ctx, c.Name)
 		if err != nil {
 			return nil, err
 		}
+		var out []*reading
 		for _, w := range near {
 			if !w.typeWord {
 				continue
 			}
-			if rd := rw.readFixed(r, c, w.word); rd != nil && (best == nil || rd.headLen() > best.headLen()) {
-				best = rd
+			if rd := rw.readFixed(r, c, w.word); rd != nil && !slices.ContainsFunc(out, func(o *reading) bool { return o.corrected == rd.corrected }) {
+				out = append(out, rd)
 			}
 		}
-		if best != nil {
-			return best, nil
+		if len(out) > 0 {
+			slices.SortStableFunc(out, func(a, b *reading) int { return b.headLen() - a.headLen() })
+			return out, nil
 		}
 	}
 	return nil, nil

@@ -151,3 +151,26 @@ func TestRereadSteps(t *testing.T) {
 		t.Errorf("message %q, want %q", o.Message, want)
 	}
 }
+
+// A typo as near to two product types is read as the one the catalog
+// bears out. "blot" is one edit from boot and from bolt (Damerau-
+// Levenshtein), and the boot comes first in the vocabulary; a shop of
+// bolts and no boots is searched for bolts. A reading of which the shop
+// carries nothing, not even the product type with the hard constraints,
+// is not used at all: "sandles" is one edit from candles, but "womens
+// leather sandles" is no query about candles. The shops are invented.
+func TestRereadBorneOutByTheCatalog(t *testing.T) {
+	bolts := []product{{ID: "HB-1", Type: "hex bolt", Specs: map[string]string{"metric_thread": "m8x1.25"}}}
+	o := mustRescue(t, bolts, "blot")
+	if o.Corrected != "bolt" || o.Count != 1 {
+		t.Errorf("blot in a shop of bolts: corrected %q, count %d; want bolt, 1\n%s", o.Corrected, o.Count, o.Explanation)
+	}
+	shop := []product{
+		{ID: "CN-1", Type: "candle", Colour: "ivory", Hex: "#fffff0"},
+		{ID: "SN-1", Type: "sandal", Audience: "women", Material: "leather", Sizes: []string{"7"}},
+	}
+	o = mustRescue(t, shop, "womens leather sandles")
+	if o.Corrected != "" || o.Count == 0 {
+		t.Errorf("womens leather sandles: corrected %q, count %d; want no reading as candles and some results\n%s", o.Corrected, o.Count, o.Explanation)
+	}
+}

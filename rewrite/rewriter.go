@@ -169,6 +169,12 @@ func (rw *Rewriter) words(ctx context.Context) ([]wordEntry, *lexicon.NearWords,
 				}
 				if !strings.ContainsAny(w, " -") && len(w) >= 4 {
 					vocab = append(vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e), typeWord: k == lexicon.ProductType})
+					// Shoppers type product types in the plural, so a typo
+					// of one is nearest the plural: "sandles" is one edit
+					// from sandals, two from sandal.
+					if pl := plural(w); k == lexicon.ProductType && pl != w {
+						vocab = append(vocab, wordEntry{word: pl, entry: e, kind: kindOfEntry(e), typeWord: true})
+					}
 				}
 			}
 		}
@@ -392,23 +398,66 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 	}
 	// A misspelt product type: plan from the query read again with it
 	// fixed, the fix being part of every plan from here on.
-	rd, err := rw.reread(ctx, r)
+	rds, err := rw.reread(ctx, r)
 	if err := failure(ctx, err); err != nil {
 		return nil, err
 	}
-	if rd != nil {
-		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: rw.exactItems(rd.parsed), failed: failed}
+	// Each reading's query as typed is counted, in order of preference:
+	// the first that finds enough is kept, else the one that finds most.
+	// A reading that finds nothing is kept only when the catalog bears
+	// it out: it carries the product type, and products of the type
+	// carry some value of each attribute hard as typed. "leather sandles
+	// womens 7" read as candles is dropped, since no candle has an
+	// audience; "extenssion cord 12 awg" read as an extension cord is
+	// kept, since cords have a gauge, if not that one, and the answer is
+	// that it is not carried.
+	var chosen *search
+	var chosenRd *reading
+	var chosenExact []int
+	chosenN, budget := -1, s.budget
+	for _, rd := range rds {
+		out.Corrected = rd.corrected // for the step's label
+		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: budget, fix: &rd.fix, items: rw.exactItems(rd.parsed), failed: failed}
 		fixedExact := make([]int, len(fixed.items))
-		if fn, err := fixed.count(fixedExact); err == nil {
-			r, e, s, exact, n = rd.parsed, rd.policy, fixed, fixedExact, fn
-			out.Parsed, out.Policy, out.Corrected = r, e, rd.corrected
-			if n >= e.MinResults {
+		fn, err := fixed.count(fixedExact)
+		budget = fixed.budget
+		if err == errStop {
+			if chosen == nil {
+				out.Corrected = ""
+				s.stopReason = fixed.stopReason
 				return rw.settle(s, exact, n), nil
 			}
-		} else if err != errStop {
+			break
+		}
+		if err != nil {
 			return nil, err
-		} else {
-			s.stopReason = fixed.stopReason
+		}
+		if fn == 0 {
+			ok, err := fixed.bornOut(r)
+			budget = fixed.budget
+			if err == errStop {
+				break
+			}
+			if err != nil {
+				return nil, err
+			}
+			if !ok {
+				continue
+			}
+		}
+		if fn > chosenN {
+			chosen, chosenRd, chosenExact, chosenN = fixed, rd, fixedExact, fn
+		}
+		if fn >= rd.policy.MinResults {
+			break
+		}
+	}
+	out.Corrected = ""
+	if chosen != nil {
+		chosen.budget = budget
+		r, e, s, exact, n = chosenRd.parsed, chosenRd.policy, chosen, chosenExact, chosenN
+		out.Parsed, out.Policy, out.Corrected = r, e, chosenRd.corrected
+		if n >= e.MinResults {
 			return rw.settle(s, exact, n), nil
 		}
 	}
@@ -613,6 +662,52 @@ func (s *search) countPlan(p Plan, state []int, label string) (int, error) {
 	}
 	s.out.Steps = append(s.out.Steps, step)
 	return n, nil
+}
+
+// bornOut reports whether the catalog bears out s, a query read again
+// with a typo fixed: it carries s's head product type, and products of
+// that type carry some value of each attribute that was hard in typed,
+// the query as typed (an audience, a size, a gauge), where the catalog
+// lists that attribute's values.
+func (s *search) bornOut(typed *parser.Result) (bool, error) {
+	var head *Clause
+	for _, it := range s.items {
+		if it.c.Kind == parser.KindProductType && strings.Contains(it.c.Evidence, "head product type") {
+			head = it.levels[0].clause
+		}
+	}
+	if head == nil {
+		return true, nil
+	}
+	kind := Plan{Clauses: []Clause{*head}}
+	n, err := s.countPlan(kind, nil, "the product type alone")
+	if err != nil || n == 0 {
+		return false, err
+	}
+	cat, ok := s.rw.engine.(Catalog)
+	if !ok {
+		return true, nil
+	}
+	for _, it := range s.items {
+		c, cl := it.c, it.levels[0].clause
+		if cl == nil || cl == head || c.Excluded || !slices.Contains(ListedFields, cl.Field) {
+			continue
+		}
+		if !slices.ContainsFunc(typed.Constraints, func(t parser.Constraint) bool {
+			return t.Start == c.Start && t.End == c.End && t.Strictness == parser.Hard
+		}) {
+			continue
+		}
+		vals, err := cat.Values(s.ctx, cl.Field, cl.Dimension, kind)
+		s.fail(err)
+		if err != nil {
+			return false, err
+		}
+		if len(vals) == 0 {
+			return false, nil
+		}
+	}
+	return true, nil
 }
 
 // hardOnly is the plan of the constraints that are never relaxed.
