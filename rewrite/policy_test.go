@@ -185,7 +185,7 @@ func TestApply(t *testing.T) {
 		{"extension ladder 300 lb", "and a load rating", []parser.Strictness{parser.Firm, parser.Hard}},
 		{"5/16 carriage bolt 2 in", "a bolt's diameter is hard, inherited from bolt; its length firm", []parser.Strictness{parser.Hard, parser.Firm, parser.Firm}},
 		{"10 inch skillet", "a pan's diameter stays firm", []parser.Strictness{parser.Firm, parser.Firm}},
-		{"16 gauge sheet metal", "a gauge number outside wiring is hard too: a thinner sheet is no substitute", []parser.Strictness{parser.Hard, parser.Soft, parser.Soft}},
+		{"16 gauge sheet metal", "a gauge number outside wiring is hard too: a thinner sheet is no substitute", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"20 gauge earrings", "as is a gauge on jewellery", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"60w halogen bulb", "a bulb's wattage is hard: a fixture is rated for so many watts (common practice)", []parser.Strictness{parser.Hard, parser.Firm}},
 	} {
