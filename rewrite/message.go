@@ -110,6 +110,23 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 	if out.Corrected != "" {
 		msg = fmt.Sprintf("No results for “%s”, read as “%s”.", strings.TrimSpace(out.Query), strings.TrimSpace(out.Corrected))
 	}
+	if len(parts) == 0 && len(out.Plan.Clauses) > 1 {
+		// No one of them is to blame: nothing carried is all of them.
+		var from []int
+		for _, cl := range out.Plan.Clauses {
+			if cl.From >= 0 && cl.From < len(out.Parsed.Constraints) && !cl.Excluded {
+				from = append(from, cl.From)
+			}
+		}
+		slices.Sort(from) // in the query's order
+		var all []string
+		for _, i := range from {
+			all = append(all, out.Parsed.Constraints[i].Text)
+		}
+		if len(all) > 1 {
+			parts = append(parts, "Nothing carried is all of "+strings.Join(all[:len(all)-1], ", ")+" and "+all[len(all)-1])
+		}
+	}
 	if len(parts) > 0 {
 		msg += " " + strings.Join(parts, ". ") + "."
 	}

@@ -465,8 +465,13 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 		return nil, err
 	}
 	s.laddered = true
-	// The hard constraints alone: if they find nothing, stop.
+	// The hard constraints alone, with the head product type at its
+	// broadest, since it is never dropped: every plan asks at least that,
+	// so if it finds nothing, stop.
 	hard := s.hardOnly()
+	if h := s.broadestHead(); h != nil {
+		hard.Clauses = append(hard.Clauses, *h)
+	}
 	if hn, err := s.countPlan(hard, nil, "the hard constraints alone"); err == errStop {
 		// The budget or the deadline ran out here: the query as typed is
 		// the best plan counted, and the note says why.
@@ -708,6 +713,18 @@ func (s *search) bornOut(typed *parser.Result) (bool, error) {
 		}
 	}
 	return true, nil
+}
+
+// broadestHead is the clause of the head product type at its broadest
+// level, when it has levels below its exact one (a parent to widen to);
+// nil when it has none, as hardOnly holds it then, or there is no head.
+func (s *search) broadestHead() *Clause {
+	for _, it := range s.items {
+		if it.c.Kind == parser.KindProductType && !it.c.Excluded && strings.Contains(it.c.Evidence, "head product type") && len(it.levels) > 1 {
+			return it.levels[len(it.levels)-1].clause
+		}
+	}
+	return nil
 }
 
 // hardOnly is the plan of the constraints that are never relaxed.
