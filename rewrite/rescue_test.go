@@ -680,3 +680,33 @@ func TestColourTypoIsWidened(t *testing.T) {
 		t.Errorf("message %q, want it to end %q", o.Message, want)
 	}
 }
+
+// The evidence that orders the search is each constraint counted with
+// what every plan asks, the hard constraints and the head product type
+// at its broadest, not on its own in the whole shop: 30 in is common in
+// the shop (seven rugs are 30 in long) but no table is, so it is the
+// first suspect, and a tight budget is spent on it rather than on the
+// rarer words around it: the first plan relaxed relaxes it. The shop is
+// invented.
+func TestEvidenceWithWhatEveryPlanAsks(t *testing.T) {
+	shop := []product{{ID: "DT-1", Type: "dining table", Material: "oak", Silhouette: "extendable", Measures: map[string]float64{"length": 1828.8}}}
+	for i := range 7 {
+		shop = append(shop, product{ID: fmt.Sprintf("RG-%d", i), Type: "rug", Measures: map[string]float64{"length": 762}})
+	}
+	o, err := New(&memEngine{products: shop}, nil, WithBudget(12)).Rescue(context.Background(), "30 in extendable oak dining table")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := hitIDs(t, &memEngine{products: shop}, o.Plan); !slices.Equal(got, []string{"DT-1"}) {
+		t.Errorf("hits %v, want DT-1 within 12 counts\n%s", got, o.Explanation)
+	}
+	for _, st := range o.Steps {
+		if len(st.Relaxations) == 0 {
+			continue
+		}
+		if st.Relaxations[0].Text != "30 in" {
+			t.Errorf("the first plan relaxed %q, want the suspect 30 in first\n%s", st.Relaxations[0].Text, o.Explanation)
+		}
+		break
+	}
+}

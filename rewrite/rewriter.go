@@ -715,6 +715,22 @@ func (s *search) bornOut(typed *parser.Result) (bool, error) {
 	return true, nil
 }
 
+// withBound is the plan of item it as typed with the hard constraints and
+// the head product type at its broadest (the head itself as typed), and
+// its label.
+func (s *search) withBound(it *item) (Plan, string) {
+	p := s.hardOnly()
+	head := s.broadestHead()
+	if head != nil && it.levels[0].clause.From != head.From {
+		p.Clauses = append(p.Clauses, *head)
+	}
+	if len(p.Clauses) == 0 {
+		return Plan{Clauses: []Clause{*it.levels[0].clause}}, fmt.Sprintf("%q alone", it.c.Text)
+	}
+	p.Clauses = append(p.Clauses, *it.levels[0].clause)
+	return p, fmt.Sprintf("%q with what every plan asks", it.c.Text)
+}
+
 // broadestHead is the clause of the head product type at its broadest
 // level, when it has levels below its exact one (a parent to widen to);
 // nil when it has none, as hardOnly holds it then, or there is no head.
@@ -742,12 +758,17 @@ func (s *search) hardOnly() Plan {
 // a state reached min, and that state (or the best counted) with its
 // count.
 func (s *search) bestFirst(min int) (bool, []int, int) {
-	// Evidence first: each relaxable constraint's count on its own, while
-	// a third of the budget allows.
+	// Evidence first, while a third of the budget allows: each relaxable
+	// constraint's count with what every plan asks (the hard constraints
+	// and the head product type at its broadest), so that one the shop
+	// cannot meet for this kind of product is the first suspect, not one
+	// that is merely rare in the whole shop.
 	most := 0
 	for _, it := range s.items {
 		if len(it.levels) > 1 && s.budget > s.rw.budget*2/3 {
-			if n, err := s.countPlan(Plan{Clauses: []Clause{*it.levels[0].clause}}, nil, fmt.Sprintf("%q alone", it.c.Text)); err == nil {
+			p, label := s.withBound(it)
+			n, err := s.countPlan(p, nil, label)
+			if err == nil {
 				it.solo = n
 				most = max(most, n)
 			}
