@@ -343,8 +343,9 @@ func (rw *Rewriter) ParseIn(query, category string) *parser.Result {
 // planner searches relaxation sets cheapest first: cost comes from the
 // strictness of what is relaxed, from the operator (widening and typo
 // fixes cost less than dropping), and from the counts of each constraint
-// on its own (one that matches nothing alone is the first suspect; a
-// common one costs less to drop than a rare one). It never counts the
+// with what every plan asks, the hard constraints and the head product
+// type at its broadest (one that matches nothing so is the first
+// suspect; a common one costs less to drop than a rare one). It never counts the
 // same plan twice. When the budget or the deadline runs out it returns
 // the best plan found so far, with a Note. When an engine call fails on
 // the way (a count, the catalog's colours or words, the values carried,
