@@ -1,6 +1,7 @@
 package rewrite
 
 import (
+	"context"
 	"slices"
 	"strings"
 	"testing"
@@ -172,5 +173,24 @@ func TestRereadBorneOutByTheCatalog(t *testing.T) {
 	o = mustRescue(t, shop, "womens leather sandles")
 	if o.Corrected != "" || o.Count == 0 {
 		t.Errorf("womens leather sandles: corrected %q, count %d; want no reading as candles and some results\n%s", o.Corrected, o.Count, o.Explanation)
+	}
+}
+
+// The counts of readings tried and not kept are spent from the rescue's
+// budget like any other: a rescue never asks the engine for more counts
+// than its budget, whatever it reads. The shop is invented.
+func TestReadingsSpendTheBudget(t *testing.T) {
+	shop := []product{
+		{ID: "CN-1", Type: "candle", Colour: "ivory", Hex: "#fffff0"},
+		{ID: "SN-1", Type: "sandal", Audience: "women", Material: "leather", Sizes: []string{"7"}},
+	}
+	for budget := 1; budget <= 12; budget++ {
+		eng := &memEngine{products: shop}
+		if _, err := New(eng, nil, WithBudget(budget)).Rescue(context.Background(), "womens leather sandles"); err != nil {
+			t.Fatal(err)
+		}
+		if n := len(eng.counted); n > budget {
+			t.Errorf("budget %d: the engine counted %d plans: %q", budget, n, eng.counted)
+		}
 	}
 }

@@ -454,6 +454,7 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 		}
 	}
 	out.Corrected = ""
+	s.budget = budget // what the readings counted is spent either way
 	if chosen != nil {
 		chosen.budget = budget
 		r, e, s, exact, n = chosenRd.parsed, chosenRd.policy, chosen, chosenExact, chosenN
