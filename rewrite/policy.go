@@ -177,7 +177,7 @@ func (e *PolicyError) Render() string {
 
 // DefaultPolicy returns the policy embedded in whittle.
 func DefaultPolicy() *Policy {
-	p, err := ParsePolicy("default policy", defaultPolicy, lexicon.Default())
+	p, err := parsePolicy("default policy", defaultPolicy, lexicon.Default())
 	if err != nil {
 		panic("whittle: embedded policy: " + err.Error())
 	}
@@ -208,10 +208,48 @@ func LoadPolicy(path string, lex *lexicon.Lexicon) (*Policy, error) {
 // or out of range, an unknown key, kind, dimension, category or product
 // type (with the nearest known name). A nil lex means
 // lexicon.Default().
+//
+// A policy that relaxes below hard a fit dimension the built-in policy
+// makes hard where it applies (a bolt's diameter, a tyre's rim, a bulb's
+// wattage) loads with a warning, as one that relaxes a rating does.
 func ParsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	if lex == nil {
 		lex = lexicon.Default()
 	}
+	pol, err := parsePolicy(name, text, lex)
+	if err != nil {
+		return nil, err
+	}
+	pol.checkFits(lex)
+	return pol, nil
+}
+
+// checkFits warns of each fit dimension p makes less than hard where the
+// built-in policy makes it hard.
+func (p *Policy) checkFits(lex *lexicon.Lexicon) {
+	builtin := DefaultPolicy()
+	check := func(scope string, s Settings, in Effective) {
+		for _, d := range fitDimensions {
+			if v, ok := s.Dimensions[d]; ok && v < parser.Hard && in.Dimensions[d] == parser.Hard {
+				p.Warnings = append(p.Warnings, fmt.Sprintf("%s: %s is %s: fit dimensions (a bolt's or a blade's diameter, a rim's, a bulb's wattage) may then be substituted; defer to local codes and the maker's specification", scope, d, v))
+			}
+		}
+	}
+	check("defaults", p.Defaults, builtin.For("", "", lex))
+	for _, n := range sortedKeys(p.Categories) {
+		check("category."+n, p.Categories[n], builtin.For(n, "", lex))
+	}
+	for _, n := range sortedKeys(p.ProductTypes) {
+		e, err := builtin.Settle("", n, lex)
+		if err == nil {
+			check("product_type."+n, p.ProductTypes[n], e)
+		}
+	}
+}
+
+// parsePolicy is ParsePolicy without the checks against the built-in
+// policy, which it reads itself.
+func parsePolicy(name, text string, lex *lexicon.Lexicon) (*Policy, error) {
 	lines := strings.Split(text, "\n")
 	var top map[string]toml.Primitive
 	md, err := toml.Decode(text, &top)

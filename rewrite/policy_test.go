@@ -149,6 +149,9 @@ func TestRelaxingASafetyConstraintWarns(t *testing.T) {
 		{"current", "[defaults.dimensions]\ncurrent = \"firm\"\n", "defaults: current is firm: ratings may then be substituted"},
 		{"load rating", "[product_type.ladder.dimensions]\nload_rating = \"soft\"\n", "product_type.ladder: load_rating is soft"},
 		{"gauge", "[defaults.dimensions]\ngauge = \"firm\"\n", "defaults: gauge is firm: gauge numbers"},
+		{"bolt diameter", "[product_type.\"hex bolt\".dimensions]\ndiameter = \"firm\"\n", "product_type.hex bolt: diameter is firm: fit dimensions"},
+		{"rim", "[category.tyres.dimensions]\nrim_diameter = \"soft\"\n", "category.tyres: rim_diameter is soft: fit dimensions"},
+		{"a pan's diameter stays quiet", "[product_type.skillet.dimensions]\ndiameter = \"soft\"\n", ""},
 		{"hard stays quiet", "[defaults.dimensions]\nvoltage = \"hard\"\n", ""},
 		{"other dimensions stay quiet", "[defaults.dimensions]\nlength = \"soft\"\n", ""},
 	} {
