@@ -233,6 +233,41 @@ func (p *tagger) broader(b, a *lexicon.Entry) bool {
 	return slices.Contains(p.lex.Lineage(a), b)
 }
 
+// everything are the words after "fits" that name no model: "fits all",
+// "fits most".
+var everything = map[string]bool{"all": true, "most": true, "any": true, "everyone": true, "everybody": true}
+
+// namedSizes are the words after "size" that name a size of their own
+// (common practice): "size os", "size regular", "size tall". Any other
+// word after "size" is read as itself: "travel size shampoo" asks for
+// no size called shampoo.
+var namedSizes = map[string]bool{"os": true, "regular": true, "reg": true, "tall": true, "long": true, "short": true,
+	"standard": true, "universal": true}
+
+// oneSize reads "one size", "one size fits all", "one-size" and
+// "onesize" at unit k as one soft keyword: the product has no sizes to
+// choose from, which a title may say and a size filter cannot. It
+// returns the extra units used, or -1.
+func (p *tagger) oneSize(k int) int {
+	u := &p.units[k]
+	used := 0
+	switch {
+	case u.text == "one-size" || u.text == "onesize":
+	case u.text == "one" && k+1 < len(p.units) && p.units[k+1].kind == uWord && p.units[k+1].text == "size":
+		used = 1
+	default:
+		return -1
+	}
+	if j := k + used; j+2 < len(p.units) && p.units[j+1].kind == uWord && p.units[j+1].text == "fits" &&
+		p.units[j+2].kind == uWord && everything[p.units[j+2].text] {
+		used += 2
+	}
+	end := p.units[k+used].end
+	p.add(Constraint{Kind: KindKeyword, Start: u.start, End: end, Name: "one size",
+		Evidence: "one size: no size to choose, matched in the product's words"})
+	return used
+}
+
 // compatAt reports whether a compatibility phrase starts at unit k, and
 // how many units it takes.
 func (p *tagger) compatAt(k int) int {
@@ -247,7 +282,12 @@ func (p *tagger) compatAt(k int) int {
 		return ""
 	}
 	switch u.text {
-	case "for", "fits":
+	case "for":
+		return 1
+	case "fits":
+		if everything[next(1)] {
+			return 0 // "fits all": a promise, not a model to fit
+		}
 		return 1
 	case "compatible", "works", "made", "designed":
 		if w := next(1); w == "with" || w == "for" {
@@ -394,6 +434,9 @@ func (p *tagger) setNeg(start, end int, text string) {
 func (p *tagger) wordUnit(k int) int {
 	u := &p.units[k]
 	if n := p.modifiedColour(k); n > 0 {
+		return n
+	}
+	if n := p.oneSize(k); n >= 0 {
 		return n
 	}
 	if u.entries == nil {
@@ -584,7 +627,7 @@ func (p *tagger) sizeAfter(k int) int {
 			c.Size = &Size{System: "letter", Value: s}
 		case fitSizes[v.text]:
 			c.Size = &Size{System: "fit", Value: v.text}
-		case v.entries == nil && !structural[v.text] && !negators[v.text]:
+		case v.entries == nil && namedSizes[v.text]:
 			c.Size = &Size{System: "named", Value: v.text}
 		default:
 			return 0 // "letter size copy paper": the next word is no size
