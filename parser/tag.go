@@ -360,6 +360,14 @@ func (p *tagger) add(c Constraint) {
 		p.res.Constraints[p.negIdx].Evidence = "minus before a bare number: not read as a sign or as an exclusion"
 		p.neg = -1
 	}
+	if p.neg >= 0 && c.Kind == KindProductType && p.head != nil && c.Name == p.head.Name && strings.Contains(c.Evidence, "head product type") {
+		// "no show socks": an exclusion that reaches past filler to the
+		// product asked for is no exclusion of it; a query never asks
+		// for what it excludes. The mark is filler.
+		p.negFiller()
+		p.res.Constraints[p.negIdx].Evidence = "exclusion mark before the product asked for: not read as excluding it"
+		p.neg = -1
+	}
 	if p.neg >= 0 && c.Kind != KindFiller {
 		c.Excluded = true
 		c.Evidence = join(c.Evidence, "excluded by "+fmt.Sprintf("%q", p.negText))
