@@ -541,7 +541,14 @@ func (p *tagger) letterSize(k int) int {
 			Evidence: sizeEvidence(u.text, p.category)})
 		return 0
 	}
-	if fitSizes[u.text] && (p.apparel() || p.head == nil) {
+	// "big and tall": one fit size range (common practice).
+	if u.text == "big" && k+2 < len(p.units) && p.units[k+1].kind == uWord && p.units[k+1].text == "and" &&
+		p.units[k+2].kind == uWord && p.units[k+2].text == "tall" && (p.category == "apparel" || p.head == nil) {
+		p.add(Constraint{Kind: KindSize, Start: u.start, End: p.units[k+2].end, Size: &Size{System: "fit", Value: "big and tall"}, Evidence: "fit size"})
+		return 2
+	}
+	// Fit sizes are clothes' ("tall" on boots is a shaft, not a fit).
+	if fitSizes[u.text] && (p.category == "apparel" || p.head == nil) {
 		c := Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "fit", Value: u.text}, Evidence: "fit size"}
 		used := 0
 		if k+1 < len(p.units) && p.units[k+1].kind == uWord && sizeMarkers[p.units[k+1].text] {
