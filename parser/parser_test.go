@@ -39,6 +39,7 @@ func tg(k Kind, text, value string) tagged {
 func (x tagged) excluded() tagged { x.Excluded = true; return x }
 func (x tagged) inferred() tagged { x.Inferred = true; return x }
 func (x tagged) hard() tagged     { x.Strictness = Hard; return x }
+func (x tagged) firm() tagged     { x.Strictness = Firm; return x }
 
 type parseCase struct {
 	name, query, reason string
@@ -469,6 +470,9 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindProductType, "hoodie", "hoodie"), tg(KindSilhouette, "w/o zip", "not zip").excluded()}},
 	{name: "letter size on gloves", query: "gloves womens m", category: "accessories", reason: "gloves come in letter sizes",
 		want: []tagged{tg(KindProductType, "gloves", "gloves"), tg(KindAudience, "womens", "women"), tg(KindSize, "m", "m (letter)")}},
+	{name: "equivalent wattage", query: "led bulb 60 watt equivalent", category: "electrical",
+		reason: "60 watt equivalent is an LED's brightness, the light of a 60 W incandescent bulb (common practice), not the power it draws",
+		want:   []tagged{tg(KindProductType, "led bulb", "led bulb"), tg(KindKeyword, "60 watt equivalent", "60w equivalent").firm()}},
 	{name: "seats", query: "3 seater sofa", category: "furniture", reason: "a number before seater counts seats",
 		want: []tagged{tg(KindMeasure, "3 seater", "3 count"), tg(KindProductType, "sofa", "sofa")}},
 	{name: "thread count", query: "400 thread count sheet set", category: "home", reason: "thread count is one count",

@@ -240,6 +240,14 @@ func (p *tagger) nextWord(k int) (*unit, bool) {
 func (p *tagger) point(k int, q quantity) int {
 	u := &p.units[k]
 	w, spaced := p.nextWord(k)
+	// "60 watt equivalent": an LED's brightness, as the incandescent bulb
+	// of that power gives it (common practice), not the power it draws;
+	// a power asked for would find no LED bulb at all.
+	if q.hasUnit && q.unit.Quantity == units.Power && w != nil && w.entries == nil && equivalentWords[w.text] {
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: q.num.decimal + "w equivalent", Strictness: Firm,
+			Evidence: "the brightness of an incandescent bulb of that power, not the power the bulb draws"})
+		return 1
+	}
 	// Gauge: "14 awg", "12 gauge", "12-gauge", "14/2 awg", "16 gauge".
 	if used := p.gaugeWordAfter(k); used > 0 && !q.hasUnit {
 		if c, ok := p.gauge(k, used, q); ok {
@@ -831,6 +839,10 @@ func (p *tagger) sizeValue(v *unit) (*Size, bool) {
 	}
 	return &Size{System: sys, Value: val}, true
 }
+
+// equivalentWords follow a power to say it is an incandescent bulb's
+// that gives the same light ("60w equivalent", "60 watt equiv").
+var equivalentWords = map[string]bool{"equivalent": true, "equiv": true, "eq": true, "replacement": true}
 
 // holdsVolume reports whether the head product type has a volume slot
 // and no mass slot, so that an ounce on it is a fluid ounce.

@@ -85,3 +85,35 @@ func TestTyreServiceDescription(t *testing.T) {
 		})
 	}
 }
+
+// "60 watt equivalent" asks for an LED bulb as bright as a 60 W
+// incandescent one, which draws about 9 W (common practice); a bulb's
+// power is hard, so read as a power it would find no LED bulb. It is
+// matched in the words a shop writes. The shop is invented.
+func TestEquivalentWattage(t *testing.T) {
+	ps := []catalog.Product{
+		{ID: "LB-1", Title: "Brenvale LED bulb 60W equivalent, 9 W", ProductType: "led bulb", Measures: map[string]string{"power": "9 W"}},
+		{ID: "LB-2", Title: "Brenvale LED bulb 100W equivalent, 14 W", ProductType: "led bulb", Measures: map[string]string{"power": "14 W"}},
+		{ID: "LB-3", Title: "Brenvale incandescent bulb 60 W", ProductType: "light bulb", Measures: map[string]string{"power": "60 W"}},
+	}
+	dir := filepath.Join(t.TempDir(), "idx")
+	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer e.Close()
+	o, err := rewrite.New(e, nil).Rescue(context.Background(), "led bulb 60 watt equivalent")
+	if err != nil {
+		t.Fatal(err)
+	}
+	hits, err := e.Search(context.Background(), o.Plan, 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !o.Exact || len(hits) != 1 || hits[0].ID != "LB-1" {
+		t.Errorf("exact %v, hits %+v; want LB-1 as typed\n%s", o.Exact, hits, o.Explanation)
+	}
+}
