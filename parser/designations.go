@@ -114,6 +114,40 @@ func (p *tagger) serviceAlone(k int) bool {
 	return true
 }
 
+// fNumber is a lens's aperture written as one code: "f2", "f1.8".
+var fNumber = regexp.MustCompile(`^f(\d{1,2}(?:\.\d)?)$`)
+
+// aperture tags a lens's f-number between start and end ("f1.8",
+// "f/1.8", "f 2.8") as one firm phrase, written as lens titles write it,
+// "f/1.8": not a part number, nor a stray f and a number.
+func (p *tagger) aperture(start, end int, number string) {
+	p.add(Constraint{Kind: KindKeyword, Start: start, End: end, Name: "f/" + number, Strictness: Firm,
+		Evidence: "a lens's aperture, its f-number, matched in the product's words"})
+}
+
+// apertureAt reads "f/1.8" and "f 2.8" at word unit k, the f apart from
+// its number; it returns the extra units used, or -1.
+func (p *tagger) apertureAt(k int) int {
+	u := &p.units[k]
+	if u.text != "f" || p.category != "" && p.category != "camera" {
+		return -1
+	}
+	j := k + 1
+	if j < len(p.units) && p.units[j].kind == uSym && p.q[p.units[j].start:p.units[j].end] == "/" {
+		j++
+	}
+	if j >= len(p.units) || p.units[j].kind != uItem || !p.bareNumber(&p.units[j]) {
+		return -1
+	}
+	v := &p.units[j]
+	n := strings.TrimSpace(p.q[v.start:v.end])
+	if fNumber.MatchString("f" + n) {
+		p.aperture(u.start, v.end, n)
+		return j - k
+	}
+	return -1
+}
+
 // codeUnit tags the code at unit k; it returns the extra units used.
 func (p *tagger) codeUnit(k int) int {
 	u := &p.units[k]
@@ -184,6 +218,10 @@ func (p *tagger) code(start int, u *unit) {
 				p.errorf(start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 			}
 		}
+	}
+	if m := fNumber.FindStringSubmatch(strings.ToLower(p.q[start:u.end])); m != nil && (p.category == "" || p.category == "camera") {
+		p.aperture(start, u.end, m[1])
+		return
 	}
 	if len(parts) == 2 && (parts[0] == "a" || parts[0] == "b") && (p.category == "" || p.category == "office") {
 		if d, ok := spec.PaperSize(text); ok {

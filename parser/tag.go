@@ -447,6 +447,9 @@ func (p *tagger) wordUnit(k int) int {
 	if n := p.oneSize(k); n >= 0 {
 		return n
 	}
+	if n := p.apertureAt(k); n >= 0 {
+		return n
+	}
 	if u.entries == nil {
 		switch {
 		case negators[u.text] && k+1 < len(p.units):
