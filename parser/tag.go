@@ -312,7 +312,7 @@ func (p *tagger) findHead() {
 		if p.compatAt(k) > 0 && last != nil {
 			break
 		}
-		if u := &p.units[k]; p.isPT(k) && !u.modifier && !u.feature && !p.negatedAt(k) {
+		if u := &p.units[k]; p.isPT(k) && !u.modifier && !u.feature && !p.negatedAt(k) && !p.countedAt(k) {
 			last = u.chosen
 		}
 	}
@@ -323,6 +323,13 @@ func (p *tagger) findHead() {
 	case last != nil:
 		p.category = last.Category
 	}
+}
+
+// countedAt reports whether unit k is a word that counts the number
+// before it ("500 sheets", "2 pairs"), which packOf and the counts read
+// as a count, not as the product asked for.
+func (p *tagger) countedAt(k int) bool {
+	return k > 0 && countWords[p.units[k].text] != "" && p.units[k-1].kind == uItem && p.bareNumber(&p.units[k-1])
 }
 
 // negatedAt reports whether unit k follows an exclusion word or mark.
