@@ -492,6 +492,15 @@ func (p *tagger) wordUnit(k int) int {
 		}
 	}
 	e := u.chosen
+	if p.category == "paint" && e != nil && e.Kind != lexicon.Pattern {
+		// On paint, a word that is also a sheen is the sheen: "eggshell
+		// white" is white paint in an eggshell finish.
+		for _, alt := range u.entries {
+			if alt.Kind == lexicon.Pattern {
+				e = alt
+			}
+		}
+	}
 	if e == nil {
 		if structural[u.text] {
 			p.add(Constraint{Kind: KindFiller, Start: u.start, End: u.end, Strictness: Filler, Evidence: "connecting word"})
