@@ -317,6 +317,13 @@ func (p *tagger) point(k int, q quantity) int {
 		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: v.end, Name: name, Evidence: "\"N in 1\" names a combination, not inches"})
 		return 1
 	}
+	// A bra size: a band in inches and a cup, "34b", "36dd" (common
+	// practice), on a bra.
+	if w != nil && !spaced && !q.hasUnit && p.isBra() && q.num.integer && q.num.value >= 28 && q.num.value <= 52 && braCups[w.text] {
+		p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "bra", Value: q.num.decimal + w.text},
+			Evidence: "band and cup: a bra size"})
+		return 1
+	}
 	// A number stuck to a word that is no unit: "200gsm", "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
 		name := strings.ToLower(p.q[u.start:w.end])
@@ -839,6 +846,25 @@ func (p *tagger) sizeValue(v *unit) (*Size, bool) {
 	}
 	return &Size{System: sys, Value: val}, true
 }
+
+// isBra reports whether the head product type is a bra ("bra", "sports
+// bra") or a type under one.
+func (p *tagger) isBra() bool {
+	if p.head == nil {
+		return false
+	}
+	for _, e := range p.lex.Lineage(p.head) {
+		if e.Name == "bra" || strings.HasSuffix(e.Name, " bra") {
+			return true
+		}
+	}
+	return false
+}
+
+// braCups are the cup letters of bra sizes (common practice, from
+// memory: UK and US run AA to K, with doubled letters).
+var braCups = map[string]bool{"aa": true, "a": true, "b": true, "c": true, "d": true, "dd": true, "ddd": true, "e": true,
+	"f": true, "ff": true, "g": true, "gg": true, "h": true, "hh": true, "j": true, "jj": true, "k": true}
 
 // equivalentWords follow a power to say it is an incandescent bulb's
 // that gives the same light ("60w equivalent", "60 watt equiv").
