@@ -2,6 +2,7 @@ package parser
 
 import (
 	"fmt"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -170,6 +171,9 @@ func (p *tagger) value(k int) int {
 			p.add(c)
 			return 0
 		}
+		if n, ok := p.monthsSize(k, from, to); ok {
+			return n
+		}
 		if len(from.parts) == 1 && len(to.parts) >= 1 && !to.price {
 			// "1/4-20", "1/4-20 x 1": a thread, then perhaps its length.
 			threadEnd := to.parts[0].end
@@ -240,6 +244,9 @@ func (p *tagger) nextWord(k int) (*unit, bool) {
 func (p *tagger) point(k int, q quantity) int {
 	u := &p.units[k]
 	w, spaced := p.nextWord(k)
+	if n, ok := p.monthsSize(k, single{parts: []quantity{q}}, single{}); ok {
+		return n
+	}
 	// "60 watt equivalent": an LED's brightness, as the incandescent bulb
 	// of that power gives it (common practice), not the power it draws;
 	// a power asked for would find no LED bulb at all.
@@ -845,6 +852,55 @@ func (p *tagger) sizeValue(v *unit) (*Size, bool) {
 		val = strings.ToLower(strings.TrimSpace(p.q[q.start:q.end]))
 	}
 	return &Size{System: sys, Value: val}, true
+}
+
+// monthsWords say that the number before them counts months, as baby
+// clothes are sized.
+var monthsWords = map[string]bool{"months": true, "month": true, "mo": true, "mos": true, "mths": true, "mth": true}
+
+// monthsSize reads a baby's age size at unit k, on clothes: a number or
+// a range of whole months, followed by a months word ("18 months",
+// "6-12 months") or, on a baby's clothes, with m stuck to it ("12m",
+// "3-6m": months, not metres). It is a size, hard, written as shops
+// list it ("6-12m"), and returns the extra units used.
+func (p *tagger) monthsSize(k int, from, to single) (int, bool) {
+	if !(p.apparel() || p.head == nil && p.forBaby()) || len(from.parts) != 1 || len(to.parts) > 1 || from.price || to.price {
+		return 0, false
+	}
+	qs := append(slices.Clone(from.parts), to.parts...)
+	last := qs[len(qs)-1]
+	for i, q := range qs {
+		if !q.num.integer || q.num.value > 48 || q.hasUnit && !(i == len(qs)-1 && q.unit.Symbol == "m") {
+			return 0, false
+		}
+	}
+	u := &p.units[k]
+	end, used := u.end, 0
+	w, _ := p.nextWord(k)
+	switch {
+	case !last.hasUnit && w != nil && w.entries == nil && monthsWords[w.text]:
+		end, used = w.end, 1
+	case last.hasUnit && p.forBaby():
+	default:
+		return 0, false
+	}
+	value := qs[0].num.decimal
+	if len(qs) == 2 {
+		value += "-" + qs[1].num.decimal
+	}
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: end, Size: &Size{System: "age", Value: value + "m"},
+		Evidence: "months of age: a baby's size"})
+	return used, true
+}
+
+// forBaby reports whether the query names the baby audience.
+func (p *tagger) forBaby() bool {
+	for i := range p.units {
+		if e := p.units[i].chosen; e != nil && e.Kind == lexicon.Audience && e.Name == "baby" {
+			return true
+		}
+	}
+	return false
 }
 
 // isBra reports whether the head product type is a bra ("bra", "sports
