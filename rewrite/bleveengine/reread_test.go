@@ -2,7 +2,6 @@ package bleveengine
 
 import (
 	"context"
-	"path/filepath"
 	"strings"
 	"testing"
 
@@ -19,15 +18,7 @@ func TestReadingsOnTheIndex(t *testing.T) {
 		{ID: "HB-1", Title: "Tarnel hex bolt M8 x 40", ProductType: "hex bolt", Spec: []string{"M8"}, Measures: map[string]string{"length": "40 mm"}},
 		{ID: "BO-1", Title: "Ardlow hiking boot", ProductType: "boot", Sizes: []string{"9", "10"}},
 	}
-	dir := filepath.Join(t.TempDir(), "idx")
-	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{}); err != nil {
-		t.Fatal(err)
-	}
-	e, err := Open(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	defer e.Close()
+	e := openProducts(t, ps)
 	rw := rewrite.New(e, nil)
 	for _, tc := range []struct {
 		query, reason, corrected, message string

@@ -27,15 +27,7 @@ func TestTyreServiceDescription(t *testing.T) {
 		{ID: "TY-4", Title: "Kessendry sport tyre 225/45R17 94W", ProductType: "tyre", Spec: []string{"225/45R17 94W"}},
 		{ID: "JK-1", Title: "Ardlow rain jacket xl", ProductType: "rain jacket", Sizes: []string{"xl"}},
 	}
-	dir := filepath.Join(t.TempDir(), "idx")
-	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{}); err != nil {
-		t.Fatal(err)
-	}
-	e, err := Open(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	defer e.Close()
+	e := openProducts(t, ps)
 	rw := rewrite.New(e, nil)
 	for _, tc := range []struct {
 		query, reason string
@@ -96,15 +88,7 @@ func TestEquivalentWattage(t *testing.T) {
 		{ID: "LB-2", Title: "Brenvale LED bulb 100W equivalent, 14 W", ProductType: "led bulb", Measures: map[string]string{"power": "14 W"}},
 		{ID: "LB-3", Title: "Brenvale incandescent bulb 60 W", ProductType: "light bulb", Measures: map[string]string{"power": "60 W"}},
 	}
-	dir := filepath.Join(t.TempDir(), "idx")
-	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{}); err != nil {
-		t.Fatal(err)
-	}
-	e, err := Open(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	defer e.Close()
+	e := openProducts(t, ps)
 	o, err := rewrite.New(e, nil).Rescue(context.Background(), "led bulb 60 watt equivalent")
 	if err != nil {
 		t.Fatal(err)
@@ -116,4 +100,20 @@ func TestEquivalentWattage(t *testing.T) {
 	if !o.Exact || len(hits) != 1 || hits[0].ID != "LB-1" {
 		t.Errorf("exact %v, hits %+v; want LB-1 as typed\n%s", o.Exact, hits, o.Explanation)
 	}
+}
+
+// openProducts indexes ps in a temporary directory and opens the index,
+// closed when the test ends.
+func openProducts(t *testing.T, ps []catalog.Product) *Engine {
+	t.Helper()
+	dir := filepath.Join(t.TempDir(), "idx")
+	if _, err := BuildProducts(context.Background(), ps, dir, BuildOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Cleanup(func() { e.Close() })
+	return e
 }
