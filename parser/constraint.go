@@ -169,3 +169,14 @@ func (r *Result) Of(k Kind) []Constraint {
 	}
 	return out
 }
+
+// headEvidence marks, in its evidence, the product type that heads a
+// query: the product asked for.
+const headEvidence = "head product type"
+
+// IsHead reports whether c is the query's head product type, the product
+// asked for ("rain jacket" in "waterproof rain jacket for hiking"), which
+// a rescue widens but never drops.
+func (c Constraint) IsHead() bool {
+	return c.Kind == KindProductType && strings.Contains(c.Evidence, headEvidence)
+}

@@ -175,3 +175,14 @@ func ExampleSpec_Keys() {
 	// 205/55r16 looks under tyre_size for 205/55r16
 	// 205/55r16 91v looks under tyre for 205/55r16 91v
 }
+
+// The head product type is the product asked for; the others qualify it
+// or name what it fits.
+func ExampleConstraint_IsHead() {
+	for _, c := range parser.Parse("saucepan lid").Constraints {
+		fmt.Println(c.Text, c.IsHead())
+	}
+	// Output:
+	// saucepan false
+	// lid true
+}

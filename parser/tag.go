@@ -367,7 +367,7 @@ func (p *tagger) add(c Constraint) {
 		p.res.Constraints[p.negIdx].Evidence = "minus before a bare number: not read as a sign or as an exclusion"
 		p.neg = -1
 	}
-	if p.neg >= 0 && c.Kind == KindProductType && p.head != nil && c.Name == p.head.Name && strings.Contains(c.Evidence, "head product type") {
+	if p.neg >= 0 && c.IsHead() {
 		// "no show socks": an exclusion that reaches past filler to the
 		// product asked for is no exclusion of it; a query never asks
 		// for what it excludes. The mark is filler.
@@ -528,7 +528,7 @@ func (p *tagger) wordUnit(k int) int {
 	case lexicon.ProductType:
 		c.Category, c.Parent = e.Category, e.Parent
 		if e == p.head {
-			c.Evidence = join(c.Evidence, "head product type")
+			c.Evidence = join(c.Evidence, headEvidence)
 		}
 	case lexicon.Filler:
 		c.Strictness, c.Name = Filler, ""

@@ -56,7 +56,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 		}
 	}
 	for i, it := range items {
-		if it.c.Kind == parser.KindProductType && !it.c.Excluded && state[i] == 0 && strings.Contains(it.c.Evidence, "head product type") {
+		if it.c.IsHead() && !it.c.Excluded && state[i] == 0 {
 			noun = plural(it.c.Name)
 		}
 	}
@@ -76,7 +76,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 	in := ""
 	for _, c := range out.Parsed.Of(parser.KindProductType) {
-		if strings.Contains(c.Evidence, "head product type") {
+		if c.IsHead() {
 			in = " in " + plural(c.Name)
 		}
 	}
@@ -86,7 +86,7 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		if c.Kind == parser.KindProductType && in != "" && len(out.Missing) > 1 {
 			continue // "in lenses" already names it; the rest say what is missing
 		}
-		if c.Kind == parser.KindProductType && strings.Contains(c.Evidence, "head product type") {
+		if c.IsHead() {
 			// The type asked for is what is missing: "the shop carries no
 			// doormats", not "doormat is not carried in doormats".
 			s := fmt.Sprintf("The shop carries no %s", plural(c.Name))

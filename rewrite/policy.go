@@ -561,7 +561,7 @@ func (e Effective) StrictnessOf(c parser.Constraint) parser.Strictness {
 func (p *Policy) Apply(r *parser.Result, lex *lexicon.Lexicon) Effective {
 	head := ""
 	for _, c := range r.Of(parser.KindProductType) {
-		if strings.Contains(c.Evidence, "head product type") {
+		if c.IsHead() {
 			head = c.Name
 		}
 	}

@@ -185,7 +185,7 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 			add(cl, OpReplace, fmt.Sprintf("%q read as %q", c.Name, fixed), fmt.Sprintf("for “%s”", fixed), costReplace)
 		}
 	}
-	if c.Kind == parser.KindProductType && strings.Contains(c.Evidence, "head product type") {
+	if c.IsHead() {
 		// The head is widened, never dropped: a shopper who asked for
 		// lenses is not shown rugs.
 		return nil

@@ -4,7 +4,6 @@ import (
 	"context"
 	"fmt"
 	"slices"
-	"strings"
 	"unicode"
 
 	"github.com/whittle-search/whittle/parser"
@@ -117,7 +116,7 @@ func (rw *Rewriter) readFixed(r *parser.Result, c parser.Constraint, fixed strin
 func headIndex(r *parser.Result) int {
 	h := -1
 	for i, c := range r.Constraints {
-		if c.Kind == parser.KindProductType && strings.Contains(c.Evidence, "head product type") {
+		if c.IsHead() {
 			h = i
 		}
 	}

@@ -679,7 +679,7 @@ func (s *search) countPlan(p Plan, state []int, label string) (int, error) {
 func (s *search) bornOut(typed *parser.Result) (bool, error) {
 	var head *Clause
 	for _, it := range s.items {
-		if it.c.Kind == parser.KindProductType && strings.Contains(it.c.Evidence, "head product type") {
+		if it.c.IsHead() {
 			head = it.levels[0].clause
 		}
 	}
@@ -738,7 +738,7 @@ func (s *search) withBound(it *item) (Plan, string) {
 // nil when it has none, as hardOnly holds it then, or there is no head.
 func (s *search) broadestHead() *Clause {
 	for _, it := range s.items {
-		if it.c.Kind == parser.KindProductType && !it.c.Excluded && strings.Contains(it.c.Evidence, "head product type") && len(it.levels) > 1 {
+		if it.c.IsHead() && !it.c.Excluded && len(it.levels) > 1 {
 			return it.levels[len(it.levels)-1].clause
 		}
 	}
