@@ -861,8 +861,9 @@ var monthsWords = map[string]bool{"months": true, "month": true, "mo": true, "mo
 // monthsSize reads a baby's age size at unit k, on clothes: a number or
 // a range of whole months, followed by a months word ("18 months",
 // "6-12 months") or, on a baby's clothes, with m stuck to it ("12m",
-// "3-6m": months, not metres). It is a size, hard, written as shops
-// list it ("6-12m"), and returns the extra units used.
+// "3-6m": months, not metres), of at most 48 months, past which
+// children's clothes are sized by years. It is a size, hard, written as
+// shops list it ("6-12m"), and returns the extra units used.
 func (p *tagger) monthsSize(k int, from, to single) (int, bool) {
 	if !(p.apparel() || p.head == nil && p.forBaby()) || len(from.parts) != 1 || len(to.parts) > 1 || from.price || to.price {
 		return 0, false

@@ -403,65 +403,21 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 	if err := failure(ctx, err); err != nil {
 		return nil, err
 	}
-	// Each reading's query as typed is counted, in order of preference:
-	// the first that finds enough is kept, else the one that finds most.
-	// A reading that finds nothing is kept only when the catalog bears
-	// it out: it carries the product type, and products of the type
-	// carry some value of each attribute hard as typed. "leather sandles
-	// womens 7" read as candles is dropped, since no candle has an
-	// audience; "extenssion cord 12 awg" read as an extension cord is
-	// kept, since cords have a gauge, if not that one, and the answer is
-	// that it is not carried.
-	var chosen *search
-	var chosenRd *reading
-	var chosenExact []int
-	chosenN, budget := -1, s.budget
-	for _, rd := range rds {
-		out.Corrected = rd.corrected // for the step's label
-		fixed := &search{rw: rw, ctx: ctx, out: out, seen: s.seen, budget: budget, fix: &rd.fix, items: rw.exactItems(rd.parsed), failed: failed}
-		fixedExact := make([]int, len(fixed.items))
-		fn, err := fixed.count(fixedExact)
-		budget = fixed.budget
-		if err == errStop {
-			if chosen == nil {
-				out.Corrected = ""
-				s.stopReason = fixed.stopReason
-				return rw.settle(s, exact, n), nil
-			}
-			break
-		}
-		if err != nil {
-			return nil, err
-		}
-		if fn == 0 {
-			ok, err := fixed.bornOut(r)
-			budget = fixed.budget
-			if err == errStop {
-				break
-			}
-			if err != nil {
-				return nil, err
-			}
-			if !ok {
-				continue
-			}
-		}
-		if fn > chosenN {
-			chosen, chosenRd, chosenExact, chosenN = fixed, rd, fixedExact, fn
-		}
-		if fn >= rd.policy.MinResults {
-			break
-		}
+	p, err := s.pickReading(r, rds)
+	if err != nil {
+		return nil, err
 	}
-	out.Corrected = ""
-	s.budget = budget // what the readings counted is spent either way
-	if chosen != nil {
-		chosen.budget = budget
-		r, e, s, exact, n = chosenRd.parsed, chosenRd.policy, chosen, chosenExact, chosenN
-		out.Parsed, out.Policy, out.Corrected = r, e, chosenRd.corrected
+	switch {
+	case p.search != nil:
+		r, e, s, exact, n = p.reading.parsed, p.reading.policy, p.search, p.exact, p.n
+		out.Parsed, out.Policy, out.Corrected = r, e, p.reading.corrected
 		if n >= e.MinResults {
 			return rw.settle(s, exact, n), nil
 		}
+	case p.stopped != "":
+		// The budget or the deadline ran out before any reading counted.
+		s.stopReason = p.stopped
+		return rw.settle(s, exact, n), nil
 	}
 	if err := rw.addRelaxations(ctx, s.items, e); err != nil {
 		return nil, err
@@ -669,6 +625,71 @@ func (s *search) countPlan(p Plan, state []int, label string) (int, error) {
 	}
 	s.out.Steps = append(s.out.Steps, step)
 	return n, nil
+}
+
+// picked is the reading of a typo a search goes on with: its search,
+// its exact state and that state's count; search is nil when no reading
+// is kept, and stopped then says why the search stopped, if it did.
+type picked struct {
+	search  *search
+	reading *reading
+	exact   []int
+	n       int
+	stopped string
+}
+
+// pickReading counts each reading's query as typed, in order of
+// preference, and keeps the first that finds enough, else the one that
+// finds most. A reading that finds nothing is kept only when the catalog
+// bears it out (bornOut): "leather sandles womens 7" read as candles is
+// dropped, since no candle has an audience; "extenssion cord 12 awg"
+// read as an extension cord is kept, since cords have a gauge, if not
+// that one, and the answer is that it is not carried. What the readings
+// count is spent from s's budget, kept or not.
+func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, error) {
+	var p picked
+	p.n = -1
+	out := s.out
+	defer func() { out.Corrected = "" }() // set for the steps' labels only
+	for _, rd := range rds {
+		out.Corrected = rd.corrected
+		fixed := &search{rw: s.rw, ctx: s.ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: s.rw.exactItems(rd.parsed), failed: s.failed}
+		exact := make([]int, len(fixed.items))
+		n, err := fixed.count(exact)
+		s.budget = fixed.budget
+		if err == errStop {
+			if p.search == nil {
+				p.stopped = fixed.stopReason
+			}
+			break
+		}
+		if err != nil {
+			return picked{}, err
+		}
+		if n == 0 {
+			ok, err := fixed.bornOut(typed)
+			s.budget = fixed.budget
+			if err == errStop {
+				break
+			}
+			if err != nil {
+				return picked{}, err
+			}
+			if !ok {
+				continue
+			}
+		}
+		if n > p.n {
+			p.search, p.reading, p.exact, p.n = fixed, rd, exact, n
+		}
+		if n >= rd.policy.MinResults {
+			break
+		}
+	}
+	if p.search != nil {
+		p.search.budget = s.budget
+	}
+	return p, nil
 }
 
 // bornOut reports whether the catalog bears out s, a query read again
