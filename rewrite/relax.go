@@ -258,24 +258,11 @@ func (rw *Rewriter) typeValues(e *lexicon.Entry) []string {
 // widenColour lists the catalog colours within tol of the query colour.
 // An error is the engine's, reading the catalog's colours.
 func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Clause, int, error) {
-	pal, err := rw.palette(ctx)
-	if err != nil || pal == nil || it.c.Colour == nil || it.c.Colour.Lab == nil || tol <= 0 {
-		return nil, 0, err
-	}
-	l := it.c.Colour.Lab
-	ms := pal.Within(colour.Lab{L: l[0], A: l[1], B: l[2]}, tol)
-	if len(ms) == 0 {
+	if it.c.Colour == nil || it.c.Colour.Lab == nil {
 		return nil, 0, nil
 	}
-	cl := rw.exactClause(it.index, it.c)
-	cl.Values = nil
-	for _, m := range ms {
-		cl.Values = append(cl.Values, m.Name)
-	}
-	if !slices.Contains(cl.Values, it.c.Name) {
-		cl.Values = append(cl.Values, it.c.Name)
-	}
-	return &cl, len(ms), nil
+	l := it.c.Colour.Lab
+	return rw.nearColours(ctx, rw.exactClause(it.index, it.c), colour.Lab{L: l[0], A: l[1], B: l[2]}, it.c.Name, tol)
 }
 
 // widenFixedColour is the colour clause cl, a typo read as the lexicon
@@ -283,7 +270,17 @@ func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Cl
 // the lexicon gives the name no value or none is near.
 func (rw *Rewriter) widenFixedColour(ctx context.Context, cl *Clause, name string, tol float64) (*Clause, int, error) {
 	_, lab, ok := rw.lex.ColourNamed(name)
-	if !ok || tol <= 0 {
+	if !ok {
+		return nil, 0, nil
+	}
+	return rw.nearColours(ctx, *cl, lab, name, tol)
+}
+
+// nearColours is cl asking for the catalog colours within tol of lab,
+// nearest first, and name itself, with how many the catalog has; nil
+// when none is near. An error is the engine's, reading the colours.
+func (rw *Rewriter) nearColours(ctx context.Context, cl Clause, lab colour.Lab, name string, tol float64) (*Clause, int, error) {
+	if tol <= 0 {
 		return nil, 0, nil
 	}
 	pal, err := rw.palette(ctx)
@@ -294,15 +291,14 @@ func (rw *Rewriter) widenFixedColour(ctx context.Context, cl *Clause, name strin
 	if len(ms) == 0 {
 		return nil, 0, nil
 	}
-	wide := *cl
-	wide.Values = []string{}
+	cl.Values = make([]string, 0, len(ms)+1)
 	for _, m := range ms {
-		wide.Values = append(wide.Values, m.Name)
+		cl.Values = append(cl.Values, m.Name)
 	}
-	if !slices.Contains(wide.Values, name) {
-		wide.Values = append(wide.Values, name)
+	if !slices.Contains(cl.Values, name) {
+		cl.Values = append(cl.Values, name)
 	}
-	return &wide, len(ms), nil
+	return &cl, len(ms), nil
 }
 
 type widening struct {
