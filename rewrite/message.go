@@ -40,8 +40,9 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	fix := ""
 	// A typo read as a colour ("olve" as olive) puts a colour in the
 	// plan, so a colour dropped beside it is not "in any colour".
-	typoColour := slices.ContainsFunc(out.Relaxations, func(r Relaxation) bool {
-		return r.Kind == parser.KindKeyword && r.Operator == OpReplace && strings.HasPrefix(r.Phrase, "in ")
+	typoColour := slices.ContainsFunc(out.Plan.Clauses, func(cl Clause) bool {
+		return cl.Field == string(parser.KindColour) && cl.From >= 0 && cl.From < len(out.Parsed.Constraints) &&
+			out.Parsed.Constraints[cl.From].Kind == parser.KindKeyword
 	})
 	for _, r := range out.Relaxations {
 		switch {

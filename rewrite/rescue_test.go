@@ -710,3 +710,15 @@ func TestEvidenceWithWhatEveryPlanAsks(t *testing.T) {
 		break
 	}
 }
+
+// A typo read as a colour puts a colour in the plan, so the colour
+// dropped beside it is not announced as "in any colour": "olve" is one
+// edit from olive (CSS Color 4), and the shop's one jacket is olive, not
+// green. The shop is invented.
+func TestColourTypoBesideADroppedColour(t *testing.T) {
+	shop := []product{{ID: "JK-1", Type: "jacket", Colour: "olive", Hex: "#808000"}}
+	o := mustRescue(t, shop, "olve green jacket")
+	if want := "Showing jackets in olive."; !strings.HasSuffix(o.Message, want) {
+		t.Errorf("message %q, want it to end %q\n%s", o.Message, want, o.Explanation)
+	}
+}
