@@ -114,6 +114,14 @@ func (p *tagger) serviceAlone(k int) bool {
 	return true
 }
 
+// gradeCode matches the grades standards give products, written as one
+// code (from memory): network cable categories of TIA-568 (cat5e, cat6,
+// cat6a, cat7, cat8), memory generations (ddr3 to ddr5), USB and HDMI
+// versions (usb3, usb3.2, hdmi2.1), Wi-Fi generations (wifi6, wifi6e,
+// wifi7), PCI Express generations (pcie3 to pcie5). They are what a
+// product is, not a maker's part number.
+var gradeCode = regexp.MustCompile(`^(cat(5e|6a?|7|8)|ddr[345]|usb[234](\.\d)?|hdmi2(\.1)?|wifi[67]e?|pcie[345])$`)
+
 // fNumber is a lens's aperture written as one code: "f2", "f1.8".
 var fNumber = regexp.MustCompile(`^f(\d{1,2}(?:\.\d)?)$`)
 
@@ -218,6 +226,11 @@ func (p *tagger) code(start int, u *unit) {
 				p.errorf(start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 			}
 		}
+	}
+	if grade := strings.ToLower(p.q[start:u.end]); gradeCode.MatchString(grade) {
+		p.add(Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: grade, Strictness: Firm,
+			Evidence: "a grade a standard names (cable category, memory generation, port version), matched in the product's words, not a part number"})
+		return
 	}
 	if m := fNumber.FindStringSubmatch(strings.ToLower(p.q[start:u.end])); m != nil && (p.category == "" || p.category == "camera") {
 		p.aperture(start, u.end, m[1])
