@@ -114,6 +114,30 @@ func (p *tagger) serviceAlone(k int) bool {
 	return true
 }
 
+// lampBase matches lamp base codes (IEC 60061, from memory): Edison
+// screw bases (e10 to e40), bayonets (b15, b22), bi-pin and twist-lock
+// bases (g4, g9, gu5.3, gu10, gu24). A bulb of another base does not fit
+// the socket.
+var lampBase = regexp.MustCompile(`^(e(10|11|12|14|17|26|27|39|40)|b(15|22)|g(4|9)|gu(5\.3|10|24))$`)
+
+// lampShape matches bulb shape codes (ANSI C79 and common practice, from
+// memory): a19, a21, a60, br30, br40, par20 to par38, mr11, mr16, g25.
+var lampShape = regexp.MustCompile(`^(a(19|21|60)|br(30|40)|par(16|20|30|38)|mr(11|16)|g25)$`)
+
+// lighting reports whether a query is about bulbs: its head is a light
+// bulb or a type under one, or no product type names another category.
+func (p *tagger) lighting() bool {
+	if p.head == nil {
+		return p.category == "" || p.category == "electrical"
+	}
+	for _, e := range p.lex.Lineage(p.head) {
+		if e.Name == "light bulb" {
+			return true
+		}
+	}
+	return false
+}
+
 // gradeCode matches the grades standards give products, written as one
 // code (from memory): network cable categories of TIA-568 (cat5e, cat6,
 // cat6a, cat7, cat8), memory generations (ddr3 to ddr5), USB and HDMI
@@ -226,6 +250,16 @@ func (p *tagger) code(start int, u *unit) {
 				p.errorf(start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
 			}
 		}
+	}
+	if lamp := strings.ToLower(p.q[start:u.end]); p.lighting() && (lampBase.MatchString(lamp) || lampShape.MatchString(lamp)) {
+		c := Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: lamp, Strictness: Firm,
+			Evidence: "a bulb's shape, matched in the product's words"}
+		if lampBase.MatchString(lamp) {
+			c.Strictness = Hard
+			c.Evidence = "a lamp base, which the socket must take (IEC 60061), matched in the product's words; never dropped"
+		}
+		p.add(c)
+		return
 	}
 	if grade := strings.ToLower(p.q[start:u.end]); gradeCode.MatchString(grade) {
 		p.add(Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: grade, Strictness: Firm,
