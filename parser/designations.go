@@ -130,8 +130,17 @@ func (p *tagger) lighting() bool {
 	if p.head == nil {
 		return p.category == "" || p.category == "electrical"
 	}
+	return p.headUnder("light bulb")
+}
+
+// headUnder reports whether the head product type is the product type
+// name or one under it.
+func (p *tagger) headUnder(name string) bool {
+	if p.head == nil {
+		return false
+	}
 	for _, e := range p.lex.Lineage(p.head) {
-		if e.Name == "light bulb" {
+		if e.Name == name {
 			return true
 		}
 	}
@@ -251,22 +260,23 @@ func (p *tagger) code(start int, u *unit) {
 			}
 		}
 	}
-	if lamp := strings.ToLower(p.q[start:u.end]); p.lighting() && (lampBase.MatchString(lamp) || lampShape.MatchString(lamp)) {
-		c := Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: lamp, Strictness: Firm,
+	raw := strings.ToLower(p.q[start:u.end])
+	if p.lighting() && (lampBase.MatchString(raw) || lampShape.MatchString(raw)) {
+		c := Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: raw, Strictness: Firm,
 			Evidence: "a bulb's shape, matched in the product's words"}
-		if lampBase.MatchString(lamp) {
+		if lampBase.MatchString(raw) {
 			c.Strictness = Hard
 			c.Evidence = "a lamp base, which the socket must take (IEC 60061), matched in the product's words; never dropped"
 		}
 		p.add(c)
 		return
 	}
-	if grade := strings.ToLower(p.q[start:u.end]); gradeCode.MatchString(grade) {
-		p.add(Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: grade, Strictness: Firm,
+	if gradeCode.MatchString(raw) {
+		p.add(Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: raw, Strictness: Firm,
 			Evidence: "a grade a standard names (cable category, memory generation, port version), matched in the product's words, not a part number"})
 		return
 	}
-	if m := fNumber.FindStringSubmatch(strings.ToLower(p.q[start:u.end])); m != nil && (p.category == "" || p.category == "camera") {
+	if m := fNumber.FindStringSubmatch(raw); m != nil && (p.category == "" || p.category == "camera") {
 		p.aperture(start, u.end, m[1])
 		return
 	}

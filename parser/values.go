@@ -326,7 +326,7 @@ func (p *tagger) point(k int, q quantity) int {
 	}
 	// A bra size: a band in inches and a cup, "34b", "36dd" (common
 	// practice), on a bra.
-	if w != nil && !spaced && !q.hasUnit && p.isBra() && q.num.integer && q.num.value >= 28 && q.num.value <= 52 && braCups[w.text] {
+	if w != nil && !spaced && !q.hasUnit && p.headUnder("bra") && q.num.integer && q.num.value >= 28 && q.num.value <= 52 && braCups[w.text] {
 		p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "bra", Value: q.num.decimal + w.text},
 			Evidence: "band and cup: a bra size"})
 		return 1
@@ -898,20 +898,6 @@ func (p *tagger) monthsSize(k int, from, to single) (int, bool) {
 func (p *tagger) forBaby() bool {
 	for i := range p.units {
 		if e := p.units[i].chosen; e != nil && e.Kind == lexicon.Audience && e.Name == "baby" {
-			return true
-		}
-	}
-	return false
-}
-
-// isBra reports whether the head product type is a bra ("bra", "sports
-// bra") or a type under one.
-func (p *tagger) isBra() bool {
-	if p.head == nil {
-		return false
-	}
-	for _, e := range p.lex.Lineage(p.head) {
-		if e.Name == "bra" || strings.HasSuffix(e.Name, " bra") {
 			return true
 		}
 	}
