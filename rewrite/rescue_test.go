@@ -98,13 +98,15 @@ func TestRescue(t *testing.T) {
 }
 
 func TestBudgetAndDeadline(t *testing.T) {
-	// A budget of 2 counts: the exact query and the hard constraints alone.
+	// A budget of 2 counts: the exact query and the hard constraints
+	// alone. Those are all the search can count, so what every plan
+	// asks, which finds something, is the plan, and the note says why.
 	o, err := New(&memEngine{products: shop}, nil, WithBudget(2)).Rescue(context.Background(), "merino crew sweater oatmeal")
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(o.Steps) != 2 || !strings.Contains(o.Note, "budget of 2") {
-		t.Errorf("budget: %d steps, note %q", len(o.Steps), o.Note)
+	if len(o.Steps) != 2 || !strings.Contains(o.Note, "within 2 engine counts") || o.Count == 0 || o.Count != o.Steps[1].Count {
+		t.Errorf("budget: %d steps, %d found, note %q\n%s", len(o.Steps), o.Count, o.Note, o.Explanation)
 	}
 	// A deadline that has passed stops the search; the best plan so far
 	// (here the exact one) comes back with a note.
@@ -720,5 +722,47 @@ func TestColourTypoBesideADroppedColour(t *testing.T) {
 	o := mustRescue(t, shop, "olve green jacket")
 	if want := "Showing jackets in olive."; !strings.HasSuffix(o.Message, want) {
 		t.Errorf("message %q, want it to end %q\n%s", o.Message, want, o.Explanation)
+	}
+}
+
+// A query whose constraints each find something among the products of
+// its kind, but not together, can need more counts than the budget to
+// reach its cheapest plan: the shop has no throw pillow covers, only
+// cushions, six of them 18 by 18 in and not mustard, one mustard and 20
+// by 20 in, none velvet. The search then builds a plan up from what
+// every plan asks (cushions) rather than show nothing, and spends no
+// count on a plan that keeps the cover exact, since the cover alone
+// finds nothing. The shop is invented.
+func TestBuildUpWhenTheBudgetRunsShort(t *testing.T) {
+	in := func(x float64) float64 { return x * 25.4 }
+	var shop []product
+	for i, c := range []struct{ name, hex string }{{"navy", "#000080"}, {"ivory", "#fffff0"}, {"teal", "#008080"}, {"plum", "#8e4585"}, {"slate", "#708090"}, {"rose", "#ff007f"}} {
+		shop = append(shop, product{ID: fmt.Sprintf("CU-%d", i), Type: "cushion", Colour: c.name, Hex: c.hex, Material: "linen",
+			Measures: map[string]float64{"width": in(18), "height": in(18)}})
+	}
+	shop = append(shop, product{ID: "CU-M", Type: "cushion", Colour: "mustard", Hex: "#e1ad01", Material: "wool",
+		Measures: map[string]float64{"width": in(20), "height": in(20)}})
+	o, err := New(&memEngine{products: shop}, nil).Rescue(context.Background(), "velvet throw pillow cover 18x18 mustard")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if o.Count == 0 || len(hitIDs(t, &memEngine{products: shop}, o.Plan)) == 0 {
+		t.Errorf("found nothing within the default budget\n%s", o.Explanation)
+	}
+	for _, st := range o.Steps {
+		if len(st.Relaxations) > 0 && !slices.ContainsFunc(st.Relaxations, func(r Relaxation) bool { return r.Kind == parser.KindProductType }) {
+			t.Errorf("counted %q, which keeps the cover that finds nothing\n%s", st.Label, o.Explanation)
+		}
+	}
+	// Every plan the search holds finds at least one product, so the
+	// plan comes back whatever budget is left for building it up.
+	for _, budget := range []int{2, 8, 12} {
+		o, err := New(&memEngine{products: shop}, nil, WithBudget(budget)).Rescue(context.Background(), "velvet throw pillow cover 18x18 mustard")
+		if err != nil {
+			t.Fatal(err)
+		}
+		if o.Count == 0 {
+			t.Errorf("budget %d: found nothing\n%s", budget, o.Explanation)
+		}
 	}
 }

@@ -778,9 +778,9 @@ func (s *search) hardOnly() Plan {
 }
 
 // bestFirst searches relaxation sets cheapest first. It returns whether
-// a state reached min, and that state (or the best counted) with its
+// a state reached want, and that state (or the best counted) with its
 // count.
-func (s *search) bestFirst(min int) (bool, []int, int) {
+func (s *search) bestFirst(want int) (bool, []int, int) {
 	// Evidence first, while a third of the budget allows: each relaxable
 	// constraint's count with what every plan asks (the hard constraints
 	// and the head product type at its broadest), so that one the shop
@@ -802,12 +802,27 @@ func (s *search) bestFirst(min int) (bool, []int, int) {
 			it.rarity = 1 - float64(it.solo)/float64(most)
 		}
 	}
+	// States known to find fewer than want: those counted, and for each
+	// constraint whose evidence finds fewer, the state that keeps it
+	// exact and drops or widens all else to what every plan asks. A
+	// state within one of them is not counted: it cannot find more.
+	var short [][]int
+	for i, it := range s.items {
+		if it.solo >= 0 && it.solo < want {
+			z := s.loosest()
+			z[i] = 0
+			short = append(short, z)
+		}
+	}
 	pq := &queue{}
 	start := make([]int, len(s.items))
 	visited := map[string]bool{stateKey(start): true}
 	s.push(pq, start, visited)
 	var best []int
 	bestN := -1
+	// The counts the last resort may need are kept back from this
+	// search, unless they are most of the budget.
+	reserve := min(s.reserve(), s.rw.budget/3)
 	// Plans that match the same products are counted once, so states
 	// whose plan was seen cost no budget; the visits are bounded too, or
 	// a query of many alike constraints (64 exclusions of one colour)
@@ -823,6 +838,13 @@ func (s *search) bestFirst(min int) (bool, []int, int) {
 			break
 		}
 		st := heap.Pop(pq).(entry).state
+		if slices.ContainsFunc(short, func(z []int) bool { return s.within(st, z) }) {
+			s.push(pq, st, visited)
+			continue
+		}
+		if _, seen := s.seen[s.plan(st).Key()]; !seen && s.budget <= reserve {
+			break
+		}
 		n, err := s.count(st)
 		if err == errStop {
 			break
@@ -833,12 +855,121 @@ func (s *search) bestFirst(min int) (bool, []int, int) {
 		if n > bestN {
 			best, bestN = st, n
 		}
-		if n >= min {
+		if n >= want {
 			return true, st, n
+		}
+		if n < want {
+			short = append(short, st)
 		}
 		s.push(pq, st, visited)
 	}
+	if s.ctx.Err() != nil {
+		return false, best, bestN
+	}
+	// The cheapest plan was not reached within the budget or the visits:
+	// build one up instead, from the counts kept back.
+	why := s.stopReason
+	s.stopReason = ""
+	if st, n, ok := s.buildUp(want, short); ok {
+		s.stopReason = fmt.Sprintf("the search ran short of the cheapest plan within %d engine counts; this one was built up from what every plan asks, the costliest constraint to lose first", s.rw.budget)
+		return true, st, n
+	}
+	if s.stopReason == "" {
+		s.stopReason = why
+	}
 	return false, best, bestN
+}
+
+// loosest is the state of every constraint at the last level of its
+// ladder: dropped, the head product type at its broadest, the hard
+// constraints exact. Its plan is what every plan asks.
+func (s *search) loosest() []int {
+	st := make([]int, len(s.items))
+	for i, it := range s.items {
+		st[i] = len(it.levels) - 1
+	}
+	return st
+}
+
+// within reports whether every product state a matches, state b matches
+// too: each constraint is at the same level in both, or b drops it, or a
+// asks it exact and b widens it, as a widening keeps what it widens. (A
+// typo's replacement keeps nothing of the typo, and one widening need
+// not hold another, so neither is within the other.)
+func (s *search) within(a, b []int) bool {
+	for i, it := range s.items {
+		if a[i] == b[i] {
+			continue
+		}
+		lb := it.levels[b[i]]
+		if lb.clause == nil || a[i] == 0 && lb.relax.Operator == OpWiden {
+			continue
+		}
+		return false
+	}
+	return true
+}
+
+// reserve is the most counts buildUp may spend: two for each constraint
+// that can be relaxed.
+func (s *search) reserve() int {
+	n := 0
+	for _, it := range s.items {
+		n += min(2, len(it.levels)-1)
+	}
+	return n
+}
+
+// buildUp is the last resort of a search that ran short of budget before
+// any plan found min: it starts from what every plan asks, which finds
+// min, and takes the constraints back one at a time, the head product
+// type first, then the costliest to drop, each at the tightest of its
+// exact state and its loosest widening that still finds min. Every state
+// it holds finds min, so it has a rescue however soon the budget runs
+// out; it reports false when what every plan asks finds too few, or
+// nothing asked for is kept. States within one of short are not counted.
+func (s *search) buildUp(want int, short [][]int) ([]int, int, bool) {
+	cur := s.loosest()
+	n, err := s.count(cur)
+	if err != nil || n < want {
+		return nil, 0, false
+	}
+	var order []int
+	for i, it := range s.items {
+		if len(it.levels) > 1 {
+			order = append(order, i)
+		}
+	}
+	importance := func(i int) float64 {
+		it := s.items[i]
+		if it.c.IsHead() {
+			return math.Inf(1)
+		}
+		return it.scaled(len(it.levels) - 1)
+	}
+	slices.SortStableFunc(order, func(a, b int) int { return cmp.Compare(importance(b), importance(a)) })
+	for _, i := range order {
+		last := len(s.items[i].levels) - 1
+		for _, l := range slices.Compact([]int{0, last - 1}) {
+			if l >= last {
+				continue
+			}
+			next := slices.Clone(cur)
+			next[i] = l
+			if slices.ContainsFunc(short, func(z []int) bool { return s.within(next, z) }) {
+				continue
+			}
+			m, err := s.count(next)
+			if err != nil {
+				return cur, n, !s.keepsNothing(cur)
+			}
+			if m >= want {
+				cur, n = next, m
+				break
+			}
+		}
+	}
+	return cur, n, !s.keepsNothing(cur)
 }
 
 // push queues the states one step down from st.
