@@ -325,11 +325,20 @@ func (p *tagger) point(k int, q quantity) int {
 		return 1
 	}
 	// A bra size: a band in inches and a cup, "34b", "36dd" (common
-	// practice), on a bra.
-	if w != nil && !spaced && !q.hasUnit && p.headUnder("bra") && q.num.integer && q.num.value >= 28 && q.num.value <= 52 && braCups[w.text] {
-		p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "bra", Value: q.num.decimal + w.text},
-			Evidence: "band and cup: a bra size"})
-		return 1
+	// practice), on a bra, stuck or spaced. The A cup is read as the
+	// ampere's symbol, so "32a" comes as 32 amperes: on a bra it is the
+	// band and cup too.
+	if p.headUnder("bra") && q.num.integer && q.num.value >= 28 && q.num.value <= 52 {
+		if w != nil && !q.hasUnit && braCups[w.text] {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "bra", Value: q.num.decimal + w.text},
+				Evidence: "band and cup: a bra size"})
+			return 1
+		}
+		if q.hasUnit && q.unit.Quantity == units.Current && strings.EqualFold(strings.ReplaceAll(p.q[u.start:u.end], " ", ""), q.num.decimal+"a") {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "bra", Value: q.num.decimal + "a"},
+				Evidence: "band and cup: a bra size, not amperes"})
+			return 0
+		}
 	}
 	// A number stuck to a word that is no unit: "200gsm", "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
