@@ -46,3 +46,34 @@ func ExampleDollarCurrencies() {
 	fmt.Println(parser.DollarCurrencies())
 	// Output: [AUD CAD HKD MXN NZD SGD USD]
 }
+
+// Options.Currency is read in any case, and a code Parse cannot use is
+// reported by Check rather than lost: before, "cad" silently meant USD.
+// ISO 4217 gives CAD as the Canadian dollar's code and EUR as the euro's.
+func TestOptionsCurrency(t *testing.T) {
+	cases := []struct {
+		name, currency, want string
+		bad                  bool
+		reason               string
+	}{
+		{"upper", "CAD", "CAD", false, "the code as ISO 4217 writes it"},
+		{"lower", "cad", "CAD", false, "the same code typed in lower case"},
+		{"empty", "", "USD", false, "no currency means US dollars"},
+		{"not a dollar", "EUR", "USD", true, "a bare $ cannot mean euros"},
+		{"not a code", "dollars", "USD", true, "not an ISO 4217 code"},
+	}
+	for _, tc := range cases {
+		t.Run(tc.name, func(t *testing.T) {
+			o := parser.Options{Currency: tc.currency}
+			if p := parser.ParseWith("lamp under $40", o).Of(parser.KindPrice); len(p) != 1 || p[0].Price.Currency != tc.want {
+				t.Errorf("%s: price %v, want one in %s", tc.reason, p, tc.want)
+			}
+			if err := o.Check(); (err != nil) != tc.bad {
+				t.Errorf("%s: Check() = %v, want an error: %v", tc.reason, err, tc.bad)
+			}
+		})
+	}
+	if err := (parser.Options{Volume: 7}).Check(); err == nil {
+		t.Error("Check passed volume system 7")
+	}
+}

@@ -186,3 +186,12 @@ func ExampleConstraint_IsHead() {
 	// saucepan false
 	// lid true
 }
+
+func ExampleOptions_Check() {
+	fmt.Println(parser.Options{Currency: "cad", Category: "apparel"}.Check())
+	fmt.Println(parser.Options{Currency: "EUR", Category: "garden"}.Check())
+	// Output:
+	// <nil>
+	// currency "EUR" is not a dollar currency; a bare "$" may mean AUD, CAD, HKD, MXN, NZD, SGD, USD (ISO 4217)
+	// unknown category "garden" (known: apparel, footwear, accessories, home, furniture, lumber, hardware, electrical, camera, tyres, office, batteries, electronics, paint, kitchen)
+}

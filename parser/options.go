@@ -1,6 +1,9 @@
 package parser
 
 import (
+	"errors"
+	"fmt"
+
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/units"
 )
@@ -19,8 +22,9 @@ type Options struct {
 	// Lexicon is the vocabulary; nil means lexicon.Default().
 	Lexicon *lexicon.Lexicon
 	// Currency is the ISO 4217 code a bare "$" or "dollars" means when it
-	// is a dollar currency (USD, CAD, AUD, NZD, SGD, HKD, MXN); default USD.
-	// A bare number next to a price word takes this currency too.
+	// is a dollar currency (USD, CAD, AUD, NZD, SGD, HKD, MXN), in any
+	// case; default USD. A bare number next to a price word takes this
+	// currency too. Any other code means USD: Check reports it.
 	Currency string
 	// Volume selects US customary (default) or imperial gallons, quarts,
 	// pints, cups and fluid ounces.
@@ -62,8 +66,29 @@ var dollarCurrencies = map[string]bool{
 }
 
 func (o *Options) dollar() string {
-	if dollarCurrencies[o.Currency] {
-		return o.Currency
+	if c, err := DollarCurrency(o.Currency); err == nil {
+		return c
 	}
 	return "USD"
+}
+
+// Check reports the options Parse would not use as given, all at once:
+// a Currency that is not a dollar currency's ISO 4217 code (Parse reads
+// "$" as USD then), a Category that is not one of lexicon.Categories
+// (Parse would file the query under it anyway), and a Volume that is
+// neither system (Parse reads US customary then). The zero Options pass.
+func (o Options) Check() error {
+	var errs []error
+	if o.Currency != "" {
+		if _, err := DollarCurrency(o.Currency); err != nil {
+			errs = append(errs, err)
+		}
+	}
+	if err := lexicon.CheckCategory(o.Category); err != nil {
+		errs = append(errs, err)
+	}
+	if o.Volume != units.USCustomary && o.Volume != units.Imperial {
+		errs = append(errs, fmt.Errorf("volume system %d is neither units.USCustomary nor units.Imperial", o.Volume))
+	}
+	return errors.Join(errs...)
 }
