@@ -41,11 +41,11 @@ import (
 // Products are drawn one after another from a single stream, so
 // Demo(m, seed) is the first m products of Demo(n, seed) for m <= n.
 // n <= 0 gives an empty catalog.
-func Demo(n int, seed int64) []Product {
+func Demo(n int, seed uint64) []Product {
 	if n <= 0 {
 		return nil
 	}
-	r := rand.New(rand.NewPCG(uint64(seed), demoStream))
+	r := rand.New(rand.NewPCG(seed, demoStream))
 	out := make([]Product, n)
 	for i := range out {
 		out[i] = demoProduct(r, i+1)

@@ -141,7 +141,7 @@ type RunOptions struct {
 	// DefaultProducts).
 	Products int
 	// CatalogSeed seeds the demo catalog (default 1, the demo's own).
-	CatalogSeed int64
+	CatalogSeed uint64
 	// Generate tunes the labelled set.
 	Generate Options
 	// Fallback is the blind partial match whittle is measured against;
