@@ -618,23 +618,29 @@ func (p *tagger) bedSize(k int) int {
 }
 
 // regionalSize reads "eu 42", "uk 9", "us 10" as a size in that system.
-func (p *tagger) regionalSize(k int) int {
+func (p *tagger) regionalSize(k int) int { return p.regionalSizeFrom(k, p.units[k].start) }
+
+// regionalSizeFrom is regionalSize with the span starting at start, so
+// that "size eu 42" is one span.
+func (p *tagger) regionalSizeFrom(k, start int) int {
 	u := &p.units[k]
 	if !regions[u.text] || !p.sized() || k+1 >= len(p.units) || p.units[k+1].kind != uItem || !p.bareNumber(&p.units[k+1]) {
 		return 0
 	}
 	v := &p.units[k+1]
-	n := v.item.Value.From.Dims.Parts[0].Num
-	if n.Whole == "" {
+	n, err := parseNum(v.item.Value.From.Dims.Parts[0].Num)
+	if err != nil || n.value <= 0 {
 		return 0
 	}
-	val, dec, err := parseWhole(n.Whole)
-	if err != nil || val <= 0 {
-		return 0
-	}
-	p.add(Constraint{Kind: KindSize, Start: u.start, End: v.end, Size: &Size{System: u.text, Value: dec},
-		Evidence: "size in the " + strings.ToUpper(u.text) + " system"})
+	p.add(regional(start, v.end, u.text, n))
 	return 1
+}
+
+// regional is the size n in the system of region, "uk 8 1/2" or "42 eu",
+// spanning start to end. A half size keeps its half: 8 1/2 is 8.5.
+func regional(start, end int, region string, n number) Constraint {
+	return Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: region, Value: n.decimal},
+		Evidence: "size in the " + strings.ToUpper(region) + " system"}
 }
 
 var regions = map[string]bool{"eu": true, "uk": true, "us": true, "fr": true, "it": true, "jp": true, "au": true, "mx": true, "cn": true}
@@ -663,6 +669,11 @@ func (p *tagger) sizeAfter(k int) int {
 			c.Size = &Size{System: "fit", Value: v.text}
 		case v.entries == nil && namedSizes[v.text]:
 			c.Size = &Size{System: "named", Value: v.text}
+		case regions[v.text]:
+			if n := p.regionalSizeFrom(k+1, u.start); n > 0 {
+				return n + 1 // "size eu 42"
+			}
+			return 0
 		default:
 			return 0 // "letter size copy paper": the next word is no size
 		}
@@ -685,6 +696,12 @@ func (p *tagger) sizeAfter(k int) int {
 			if c.Size.System == "numeric" {
 				c.Size.System = "shoe"
 			}
+		}
+		// Or its system: "size 8 uk", "size 42 eu".
+		if regions[next.text] && next.text != "it" && (c.Size.System == "numeric" || c.Size.System == "shoe") && c.Size.Width == "" {
+			c.Size.System = next.text
+			c.End = next.end
+			used++
 		}
 	}
 	p.add(c)

@@ -305,6 +305,12 @@ func (p *tagger) point(k int, q quantity) int {
 			return 2
 		}
 	}
+	// A size with its system after it: "42 eu", "9.5 us" ("it" only
+	// before the number, where it cannot be the pronoun).
+	if w != nil && spaced && !q.hasUnit && regions[w.text] && w.text != "it" && p.sized() && q.num.value > 0 {
+		p.add(regional(u.start, w.end, w.text, q.num))
+		return 1
+	}
 	// A shoe size with its width: "9.5 wide".
 	if w != nil && p.category == "footwear" && !q.hasUnit {
 		if width, ok := widths[w.text]; ok {
