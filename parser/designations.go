@@ -192,26 +192,120 @@ func (p *tagger) apertureAt(k int) int {
 // codeUnit tags the code at unit k; it returns the extra units used.
 func (p *tagger) codeUnit(k int) int {
 	u := &p.units[k]
-	parts := u.item.Code.Parts
-	// "M8 x 1.0": a metric thread with its pitch after a spaced x.
-	if len(parts) == 2 && parts[0] == "m" && k+2 < len(p.units) && p.units[k+1].kind == uWord && p.units[k+1].text == "x" &&
-		p.units[k+2].kind == uItem && p.bareNumber(&p.units[k+2]) && (p.category == "" || p.category == "hardware") {
-		dia, err1 := strconv.ParseFloat(parts[1], 64)
-		pitch, err2 := strconv.ParseFloat(p.units[k+2].item.Value.From.Dims.Parts[0].Num.Whole, 64)
-		if err1 == nil && err2 == nil {
-			end := p.units[k+2].end
-			if pitch == 0 {
-				p.errorf(u.start, end, "%s", zeroPitch)
-				return 2
-			}
-			if d, err := spec.MetricThreadSize(dia, pitch); err == nil {
-				p.add(specConstraint(u.start, end, d, "ISO metric thread"))
-				return 2
-			}
-		}
+	if n, ok := p.spacedThread(k); ok {
+		return n
 	}
 	p.code(u.start, u)
 	return 0
+}
+
+// maxPitch is the coarsest pitch of ISO 261 in M2..M24, M24's 3 mm:
+// after a metric thread's x, a larger number is no pitch but the
+// fastener's length.
+const maxPitch = 3
+
+// spacedThread reads a metric thread at code unit k whose pitch or
+// length follows a spaced x: "M8 x 1.0", "M6 x 20", "M8 x 1.25 x 30",
+// "M8x1.25 x 30". It returns the extra units used.
+func (p *tagger) spacedThread(k int) (int, bool) {
+	u := &p.units[k]
+	parts := u.item.Code.Parts
+	if parts[0] != "m" || !(len(parts) == 2 || len(parts) == 4 && parts[2] == "x") || !p.xThen(k+1) || p.category != "" && p.category != "hardware" {
+		return 0, false
+	}
+	dia, err := strconv.ParseFloat(parts[1], 64)
+	nums := p.bareParts(&p.units[k+2])
+	if err != nil || len(nums) == 0 {
+		return 0, false
+	}
+	if len(parts) == 4 {
+		// The pitch is joined, so what follows the x is the length.
+		pitch, err := strconv.ParseFloat(parts[3], 64)
+		if err != nil || pitch == 0 || len(nums) != 1 || nums[0].value <= maxPitch {
+			return 0, false
+		}
+		d, err := spec.MetricThreadSize(dia, pitch)
+		if err != nil {
+			return 0, false
+		}
+		p.add(specConstraint(u.start, u.end, d, "ISO metric thread"))
+		p.threadLength(nums[0])
+		return 2, true
+	}
+	first := nums[0]
+	if first.value == 0 {
+		p.errorf(u.start, first.end, "%s", zeroPitch)
+		return 2, true
+	}
+	if first.value > maxPitch && len(nums) == 1 {
+		// "M6 x 20": the coarse thread and the length.
+		d, err := spec.MetricThreadSize(dia, 0)
+		if err != nil {
+			return 0, false
+		}
+		p.add(specConstraint(u.start, u.end, d, "ISO metric thread"))
+		p.threadLength(first)
+		return 2, true
+	}
+	d, err := spec.MetricThreadSize(dia, first.value)
+	if err != nil {
+		if p.category == "hardware" && len(nums) == 1 {
+			// "M8 x 1.5": a pitch ISO 261 does not list for M8, as
+			// "m8x1.5" is.
+			p.errorf(u.start, first.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
+			return 2, true
+		}
+		return 0, false
+	}
+	p.add(specConstraint(u.start, first.end, d, "ISO metric thread"))
+	switch {
+	case len(nums) == 2 && nums[1].value > maxPitch:
+		p.threadLength(nums[1]) // "M8 x 1.25 x 30"
+	case len(nums) == 1 && p.xThen(k+3):
+		if more := p.bareParts(&p.units[k+4]); len(more) == 1 && more[0].value > maxPitch {
+			p.threadLength(more[0]) // "M8 x 1.25 x 30" read apart
+			return 4, true
+		}
+	}
+	return 2, true
+}
+
+// xThen reports whether unit k is the word x and a value follows it.
+func (p *tagger) xThen(k int) bool {
+	return k+1 < len(p.units) && p.units[k].kind == uWord && p.units[k].text == "x" && p.units[k+1].kind == uItem
+}
+
+// bareParts are the numbers of value unit v when it is one or two bare
+// numbers, "20" or "1.25 x 30", with no unit, mark or currency; else
+// nil.
+func (p *tagger) bareParts(v *unit) []number {
+	it := v.item
+	if it.Value == nil || it.Value.To != nil || it.Value.Post != "" || it.Value.From.Dims == nil || len(it.Value.From.Dims.Parts) > 2 {
+		return nil
+	}
+	var out []number
+	for _, q := range it.Value.From.Dims.Parts {
+		if q.Unit != "" || q.Mark != "" || q.Currency != "" || q.Label != "" {
+			return nil
+		}
+		n, err := parseNum(q.Num)
+		if err != nil || n.value < 0 {
+			return nil
+		}
+		out = append(out, n)
+	}
+	return out
+}
+
+// threadLength tags n, after a metric thread and an x, as the fastener's
+// length in millimetres: a metric screw or bolt is named by its thread,
+// then its length in mm, "M6 x 20" (common practice, as ISO fastener
+// standards designate them).
+func (p *tagger) threadLength(n number) {
+	mm := mustUnit("mm")
+	c := p.measure(n.start, n.end, quantity{num: n, unit: mm, hasUnit: true}, "length", nil, nil, mm)
+	c.Evidence = "a metric fastener's length in mm, after its thread (M6 x 20)"
+	p.add(c)
 }
 
 // tyreCode matches tyre sizes written as one code with a service prefix:
@@ -237,28 +331,73 @@ func (p *tagger) code(start int, u *unit) {
 			return
 		}
 	}
-	// Metric thread: m8, m8x1.25.
+	// Metric thread: m8, m8x1.25, and a length after it: m6x20,
+	// m8x1.25x30.
 	if parts[0] == "m" && len(parts) >= 2 && (p.category == "" || p.category == "hardware") {
-		dia, err := strconv.ParseFloat(parts[1], 64)
-		pitch := 0.0
-		ok := err == nil && (len(parts) == 2 || (len(parts) == 4 && parts[2] == "x"))
-		if ok && len(parts) == 4 {
-			pitch, err = strconv.ParseFloat(parts[3], 64)
-			ok = err == nil
-			if ok && pitch == 0 && p.category == "hardware" {
-				p.errorf(start, u.end, "%s", zeroPitch)
-				return
-			}
-			ok = ok && pitch != 0
-		}
-		if ok {
-			if d, err := spec.MetricThreadSize(dia, pitch); err == nil {
-				p.add(specConstraint(start, u.end, d, "ISO metric thread"))
-				return
-			} else if p.category == "hardware" {
-				p.errorf(start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
+		var length string
+		if len(parts) == 6 && parts[2] == "x" && parts[4] == "x" {
+			parts, length = parts[:4], parts[5]
+		} else if len(parts) == 4 && parts[2] == "x" {
+			if v, err := strconv.ParseFloat(parts[3], 64); err == nil && v > maxPitch {
+				parts, length = parts[:2], parts[3]
 			}
 		}
+		end := u.end
+		if length != "" {
+			end -= len(length) + 1
+		}
+		if p.joinedThread(start, end, parts, length, u) {
+			return
+		}
+	}
+	p.otherCode(start, u)
+}
+
+// joinedThread tags a metric thread written as one code, parts being
+// the thread's ("m", "8", "x", "1.25") and length what follows it after
+// an x, or "": the thread spans start to end, the length the rest of u.
+// It reports whether it tagged anything, an error included.
+func (p *tagger) joinedThread(start, end int, parts []string, length string, u *unit) bool {
+	dia, err := strconv.ParseFloat(parts[1], 64)
+	pitch := 0.0
+	ok := err == nil && (len(parts) == 2 || (len(parts) == 4 && parts[2] == "x"))
+	if ok && len(parts) == 4 {
+		pitch, err = strconv.ParseFloat(parts[3], 64)
+		ok = err == nil
+		if ok && pitch == 0 && p.category == "hardware" {
+			p.errorf(start, u.end, "%s", zeroPitch)
+			return true
+		}
+		ok = ok && pitch != 0
+	}
+	if !ok {
+		return false
+	}
+	d, err := spec.MetricThreadSize(dia, pitch)
+	if err != nil {
+		if p.category == "hardware" {
+			p.errorf(start, u.end, "%s", strings.TrimPrefix(err.Error(), "spec: "))
+			return true
+		}
+		return false
+	}
+	p.add(specConstraint(start, end, d, "ISO metric thread"))
+	if length != "" {
+		if v, dec, err := parseWhole(length); err == nil && v > 0 {
+			p.threadLength(number{value: v, decimal: dec, integer: !strings.Contains(dec, "."), start: end + 1, end: u.end})
+		}
+	}
+	return true
+}
+
+// otherCode tags a code that is no metric thread: a lamp base or shape,
+// a standard's grade, an aperture, a paper or battery size, or else a
+// part number.
+func (p *tagger) otherCode(start int, u *unit) {
+	parts := u.item.Code.Parts
+	text := strings.Join(parts, "")
+	if start < u.start {
+		text = strings.ToLower(p.q[start:u.start]) + text
 	}
 	raw := strings.ToLower(p.q[start:u.end])
 	if p.lighting() && (lampBase.MatchString(raw) || lampShape.MatchString(raw)) {

@@ -141,6 +141,35 @@ func TestMetricThreadsISO261(t *testing.T) {
 	}
 }
 
+// A metric fastener's length after its thread, for every ISO 261 size of
+// testdata/reference/threads_metric_iso261_262.tsv: "M6 x 20" is the
+// thread and 20 mm of length (common practice), spaced, joined and with
+// the coarse pitch written out, since every pitch the table lists, coarse
+// or fine, is at most maxPitch and 20 is above it.
+func TestMetricFastenerLengthISO261(t *testing.T) {
+	for _, row := range reference.Rows(t, "threads_metric_iso261_262.tsv") {
+		pitches := append([]string{row["coarse_pitch_mm"]}, strings.Fields(row["fine_pitches_ct3d_mm"])...)
+		for _, ps := range pitches {
+			if v, err := strconv.ParseFloat(ps, 64); err != nil || v > maxPitch {
+				t.Errorf("%s: pitch %s above maxPitch %v, which would read it as a length", row["designation"], ps, maxPitch)
+			}
+		}
+		d := strings.ToLower(row["designation"])
+		want := row["designation"] + "x" + row["coarse_pitch_mm"]
+		for _, q := range []string{d + " x 20 bolt", d + "x20 bolt", d + "x" + row["coarse_pitch_mm"] + "x20 bolt", d + " x " + row["coarse_pitch_mm"] + " x 20 bolt"} {
+			r := Parse(q)
+			c := only(t, r, KindSpec)
+			if c.Spec.Designation != want {
+				t.Errorf("%q: thread %s, ISO 261 gives %s", q, c.Spec.Designation, want)
+			}
+			m := only(t, r, KindMeasure)
+			if m.Measure.Dimension != "length" || m.Measure.BaseAmount == nil || *m.Measure.BaseAmount != 20 || m.Text != "20" {
+				t.Errorf("%q: measure %q %s, want the length 20 mm", q, m.Text, m.Value())
+			}
+		}
+	}
+}
+
 // ASME B1.1 unified coarse threads: testdata/reference/threads_unified_asme_b1_1.tsv,
 // fractional sizes as "1/4-20" and numbered sizes as "#10-24".
 func TestUnifiedThreadsASMEB11(t *testing.T) {
