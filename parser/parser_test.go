@@ -471,6 +471,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindSize, "plus size", "plus (fit)"), tg(KindSilhouette, "wrap", "wrap"), tg(KindProductType, "dress", "dress"), tg(KindSize, "2x", "2x (letter)")}},
 	{name: "number with an unknown unit", query: "merino base layer 200gsm", category: "apparel", reason: "200gsm is kept whole, not read as size 200",
 		want: []tagged{tg(KindMaterial, "merino", "merino"), tg(KindProductType, "base layer", "thermal underwear"), tg(KindKeyword, "200gsm", "200gsm")}},
+	{name: "pipe diameter before its length", query: "3/4 x 10 ft copper pipe", category: "hardware", reason: "pipe is sold by a diameter in inches and a length in feet (common practice): 3/4 was read as 0.75 ft, the foot that ends the dimension",
+		want: []tagged{tg(KindMeasure, "3/4", "0.75 in").inferred(), tg(KindMeasure, "10 ft", "10 ft"), tg(KindMaterial, "copper", "copper"), tg(KindProductType, "pipe", "pipe")}},
 	{name: "thread and length, spaced", query: "m6 x 20 screw", category: "hardware", reason: "a metric screw is named by its thread, then its length in mm (common practice); 20 is no ISO 261 pitch, so it is the length, where it was a unitless number",
 		want: []tagged{tg(KindSpec, "m6", "M6x1 (metric_thread)"), tg(KindMeasure, "20", "20 mm"), tg(KindProductType, "screw", "screw")}},
 	{name: "thread and length, joined", query: "m6x20 screw", category: "hardware", reason: "written as one code it is the same designation, where it was a part number that no listing spells",
@@ -774,6 +776,11 @@ func TestMeasureDimensions(t *testing.T) {
 		// A bolt is named by its thread and its length, M8 × 30 a bolt of
 		// thread M8 and length 30 mm (ISO 4017's designations, from memory);
 		// ISO 261 gives M8 a major diameter of 8 mm.
+		{"m8 x 30 bolt", "the length after the thread and an x (the same designations)", []string{"length"}},
+		// Copper and plastic pipe is sold by a nominal diameter in inches
+		// and a length in feet, "3/4 in x 10 ft" (common practice).
+		{"3/4 x 10 ft copper pipe", "the diameter is in inches though the foot comes last: the pipe's slot writes it so", []string{"diameter", "length"}},
+		{"5 x 8 ft rug", "both of the rug's slots are in feet, so the foot after them serves both", []string{"width", "length"}},
 		{"m8 bolt 30 mm", "30 mm lies in the bolt's diameter range too, but M8 gives the diameter", []string{"length"}},
 		{"30 mm m8 bolt", "the same, with the thread typed after the measure", []string{"length"}},
 		{"m8 bolt 1", "a bare 1 would be a 1 in diameter; with M8 it is a length, in the length slot's inches", []string{"length"}},

@@ -776,6 +776,20 @@ func (p *tagger) lengths(s single, from, end, first int) {
 			u, has = *shared, true
 		}
 		var c Constraint
+		// "3/4 x 10 ft copper pipe": a pipe's diameter is written in
+		// inches, its length in feet, so a bare part whose slot the head
+		// writes in a unit of its own, and holds it in that unit, takes
+		// that unit rather than the last part's.
+		if !q.hasUnit && shared != nil && q.label == "" {
+			if sl, ok := p.slotFor(shared.Quantity, filled); ok && sl.Unit != *shared && sl.Holds(q.num.value) {
+				filled++
+				c = p.measure(q.start, qEnd, q, sl.Dimension, nil, nil, sl.Unit)
+				c.Inferred = true
+				c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s), which writes it apart from the %s after it", sl.Unit, p.head.Name, sl.Dimension, rangeText(sl), shared.Symbol)
+				p.add(c)
+				continue
+			}
+		}
 		switch {
 		case has:
 			dim := q.label
