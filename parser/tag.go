@@ -435,6 +435,53 @@ func (p *tagger) tag() {
 	}
 }
 
+// connectors are the plugs and ports shoppers name, however typed ("usb
+// c", "type-c", "usbc"), as product titles write them (common practice),
+// keyed by their words run together without dashes.
+var connectors = map[string]string{
+	"usbc": "usb-c", "typec": "usb-c", "usbtypec": "usb-c", "usba": "usb-a", "usbtypea": "usb-a",
+	"microusb": "micro usb", "miniusb": "mini usb", "hdmi": "hdmi", "displayport": "displayport", "vga": "vga",
+}
+
+// connectorAt reads a connector's name at word unit k, of up to three
+// words and the dashes between them, as one firm phrase matched in the
+// product's words: "type c charger" asks for a USB-C charger, where
+// "type" was filler and "c" a stray letter. It returns the extra units
+// used, or -1.
+func (p *tagger) connectorAt(k int) int {
+	key, name, last := "", "", -1
+	for j, words := k, 0; j < len(p.units) && words < 3; j++ {
+		v := &p.units[j]
+		if v.kind == uSym && p.q[v.start:v.end] == "-" && j > k {
+			continue
+		}
+		if v.kind != uWord || j > k && v.entries != nil && !fillerOnly(v) {
+			break
+		}
+		words++
+		key += strings.ReplaceAll(v.text, "-", "")
+		if c, ok := connectors[key]; ok {
+			name, last = c, j
+		}
+	}
+	if last < 0 {
+		return -1
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: p.units[last].end, Name: name, Strictness: Firm,
+		Evidence: "a connector, matched in the product's words"})
+	return last - k
+}
+
+// fillerOnly reports whether every lexicon reading of unit v is filler.
+func fillerOnly(v *unit) bool {
+	for _, e := range v.entries {
+		if e.Kind != lexicon.Filler {
+			return false
+		}
+	}
+	return true
+}
+
 // setNeg records an exclusion mark at [start, end). A second mark while
 // one is pending is a filler ("not not white").
 func (p *tagger) setNeg(start, end int, text string) {
@@ -455,6 +502,9 @@ func (p *tagger) wordUnit(k int) int {
 		return n
 	}
 	if n := p.apertureAt(k); n >= 0 {
+		return n
+	}
+	if n := p.connectorAt(k); n >= 0 {
 		return n
 	}
 	if u.entries == nil {
