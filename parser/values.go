@@ -421,6 +421,13 @@ const (
 
 // bare tags a number written without a unit.
 func (p *tagger) bare(start, end int, q quantity) {
+	// "50mm 1.8 lens", "70-300 4.5": a lens's widest aperture, written
+	// bare after its focal length, though a lens's focal length slot
+	// may hold it too.
+	if apertures[q.num.decimal] && (p.headUnder("lens") || p.head == nil) && p.afterMillimetres() {
+		p.aperture(start, end, q.num.decimal)
+		return
+	}
 	slots := p.lex.SlotsOf(p.head)
 	for _, s := range slots {
 		if s.Holds(q.num.value) {
@@ -431,6 +438,11 @@ func (p *tagger) bare(start, end int, q quantity) {
 			p.add(c)
 			return
 		}
+	}
+	// "lens 1.8": on a lens, a number no slot holds that is an aperture.
+	if apertures[q.num.decimal] && p.headUnder("lens") {
+		p.aperture(start, end, q.num.decimal)
+		return
 	}
 	if p.apparel() {
 		sys, most := "numeric", float64(maxApparelSize)
@@ -458,6 +470,23 @@ func (p *tagger) bare(start, end int, q quantity) {
 		c.Evidence = fmt.Sprintf("unitless: no measure slot of %s holds %s", p.head.Name, q.num.decimal)
 	}
 	p.add(c)
+}
+
+// apertures are the widest apertures lenses are sold by that are not
+// whole numbers (common practice: the f-number scale in steps of a third
+// of a stop, as lens names write it); a whole number after a focal
+// length is too often something else to read as one.
+var apertures = map[string]bool{"0.95": true, "1.2": true, "1.4": true, "1.7": true, "1.8": true, "2.5": true, "2.8": true, "3.5": true, "4.5": true, "5.6": true, "6.3": true}
+
+// afterMillimetres reports whether the constraint tagged last is a
+// measure in millimetres: a focal length, when no product type says so.
+func (p *tagger) afterMillimetres() bool {
+	cs := p.res.Constraints
+	if len(cs) == 0 {
+		return false
+	}
+	c := cs[len(cs)-1]
+	return c.Kind == KindMeasure && c.Measure != nil && c.Measure.Unit == "mm"
 }
 
 func rangeText(s lexicon.Slot) string {
