@@ -22,7 +22,11 @@ type Constraint struct {
 	// Name is the canonical lexicon name, for product types, colours,
 	// patterns, silhouettes, materials, audiences and brands.
 	Name string
-	// Category and Parent describe a product type.
+	// Category and Parent describe a product type: its category, and
+	// the broader type a rescue may widen it to. Parent is "" when the
+	// lexicon gives none, or when the query rules it out: in "cat6
+	// cable" the grade names an ethernet cable, and a cable of another
+	// kind is no answer.
 	Category, Parent string
 	// Measure, Price, Size, Spec and Colour hold the value of a
 	// constraint of that kind; they are nil for other kinds.

@@ -111,8 +111,11 @@ type tagger struct {
 	toks  []lexer.Token
 	units []unit
 
-	head     *lexicon.Entry // the head product type
-	category string
+	head *lexicon.Entry // the head product type
+	// narrowedBy is the grade code that narrowed the head to a type
+	// below the one typed ("cat6" in "cat6 cable"), or "".
+	narrowedBy string
+	category   string
 
 	// neg is the start of a pending exclusion mark ("not", "-"), or -1;
 	// negEnd its end, negIdx the number of constraints when it was seen.

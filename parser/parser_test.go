@@ -471,6 +471,10 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindSize, "plus size", "plus (fit)"), tg(KindSilhouette, "wrap", "wrap"), tg(KindProductType, "dress", "dress"), tg(KindSize, "2x", "2x (letter)")}},
 	{name: "number with an unknown unit", query: "merino base layer 200gsm", category: "apparel", reason: "200gsm is kept whole, not read as size 200",
 		want: []tagged{tg(KindMaterial, "merino", "merino"), tg(KindProductType, "base layer", "thermal underwear"), tg(KindKeyword, "200gsm", "200gsm")}},
+	{name: "grade names the type", query: "cat6 cable 25 ft white", category: "electronics", reason: "category 6 is a grade of twisted-pair network cable (TIA-568, from memory): the cable is an ethernet cable, as the lexicon's \"cat6 cable\" says",
+		want: []tagged{tg(KindKeyword, "cat6", "cat6").firm(), tg(KindProductType, "cable", "ethernet cable"), tg(KindMeasure, "25 ft", "25 ft"), tg(KindColour, "white", "white")}},
+	{name: "grade beside its own type", query: "cat6 hdmi cable", category: "electronics", reason: "the type typed is not the grade's type's parent, so it stands",
+		want: []tagged{tg(KindKeyword, "cat6", "cat6").firm(), tg(KindProductType, "hdmi cable", "hdmi cable")}},
 	{name: "connector as two words", query: "type c charger", category: "electronics", reason: "type c is the USB-C connector, as titles write it (common practice): \"type\" was filler and \"c\" a stray letter, soft",
 		want: []tagged{tg(KindKeyword, "type c", "usb-c").firm(), tg(KindProductType, "charger", "charger")}},
 	{name: "two connectors and an adapter", query: "usb-c to hdmi adapter", category: "electronics", reason: "an adapter is named by the connectors it joins; each is firm",
@@ -519,7 +523,7 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindKeyword, "a19", "a19").firm(), tg(KindProductType, "bulb", "light bulb")}},
 	{name: "a standard's grade", query: "cat6 cable 50 ft", category: "electronics",
 		reason: "Cat6 is a network cable category of TIA-568 (from memory), what the cable is, not a part number, which would be hard",
-		want:   []tagged{tg(KindKeyword, "cat6", "cat6").firm(), tg(KindProductType, "cable", "cable"), tg(KindMeasure, "50 ft", "50 ft")}},
+		want:   []tagged{tg(KindKeyword, "cat6", "cat6").firm(), tg(KindProductType, "cable", "ethernet cable"), tg(KindMeasure, "50 ft", "50 ft")}},
 	{name: "aperture as a code", query: "50mm f1.8 lens", category: "camera", reason: "f1.8 is the lens's aperture (common practice), not a part number, which would be hard",
 		want: []tagged{tg(KindMeasure, "50mm", "50 mm"), tg(KindKeyword, "f1.8", "f/1.8").firm(), tg(KindProductType, "lens", "lens")}},
 	{name: "bare aperture after a focal length", query: "50mm 1.8 lens", category: "camera", reason: "lenses are named by focal length and widest aperture, \"50mm 1.8\" (common practice): the 1.8 was a unitless number",
@@ -876,5 +880,27 @@ func TestFluidOunces(t *testing.T) {
 	}
 	if m := only(t, Parse("12 oz"), KindMeasure).Measure; m.Quantity != "mass" {
 		t.Errorf("12 oz with no product type is %s, want mass", m.Quantity)
+	}
+}
+
+// A head a grade code narrowed has no parent to widen to: a USB cable
+// is no answer to "cat6 cable" (category 6 is a twisted-pair network
+// cable grade of TIA-568, from memory). A head typed as the narrower
+// type keeps its parent.
+func TestGradeNarrowedHeadHasNoParent(t *testing.T) {
+	for _, tc := range []struct{ query, name, parent string }{
+		{"cat6 cable", "ethernet cable", ""},
+		{"ethernet cable", "ethernet cable", "cable"},
+		{"usb3 cable", "usb cable", ""},
+	} {
+		var head *Constraint
+		for _, c := range Parse(tc.query).Constraints {
+			if c.IsHead() {
+				head = &c
+			}
+		}
+		if head == nil || head.Name != tc.name || head.Parent != tc.parent {
+			t.Errorf("%q: head %+v, want %s with parent %q", tc.query, head, tc.name, tc.parent)
+		}
 	}
 }

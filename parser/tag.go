@@ -308,13 +308,18 @@ func (p *tagger) compatAt(k int) int {
 // compatibility phrase, else the last one in the query.
 func (p *tagger) findHead() {
 	var last *lexicon.Entry
+	at := -1
 	for k := range p.units {
 		if p.compatAt(k) > 0 && last != nil {
 			break
 		}
 		if u := &p.units[k]; p.isPT(k) && !u.modifier && !u.feature && !p.negatedAt(k) && !p.countedAt(k) {
-			last = u.chosen
+			last, at = u.chosen, k
 		}
+	}
+	if child, by := p.gradeNarrows(last); child != nil {
+		p.units[at].chosen, last = child, child
+		p.narrowedBy = by
 	}
 	p.head = last
 	switch {
@@ -323,6 +328,40 @@ func (p *tagger) findHead() {
 	case last != nil:
 		p.category = last.Category
 	}
+}
+
+// gradeTypes are the product types a standard's grade names, by the
+// grade's first letters: a cat6 cable is an ethernet cable, a usb3 cable
+// a usb cable, an hdmi2.1 cable an hdmi cable (common practice).
+var gradeTypes = []struct{ prefix, name string }{{"cat", "ethernet cable"}, {"usb", "usb cable"}, {"hdmi", "hdmi cable"}}
+
+// gradeNarrows is the product type below head that a grade code of the
+// query names, with the code, when head is that type's parent: "cat6
+// cable" heads with an ethernet cable, as the lexicon's "cat6 cable"
+// would if the code were not read first. Else nil.
+func (p *tagger) gradeNarrows(head *lexicon.Entry) (*lexicon.Entry, string) {
+	if head == nil {
+		return nil, ""
+	}
+	for k := range p.units {
+		u := &p.units[k]
+		if u.kind != uItem || u.item.Code == nil || p.negatedAt(k) {
+			continue
+		}
+		raw := strings.ToLower(p.q[u.start:u.end])
+		if !gradeCode.MatchString(raw) {
+			continue
+		}
+		for _, g := range gradeTypes {
+			if !strings.HasPrefix(raw, g.prefix) {
+				continue
+			}
+			if e, ok := p.lex.Lookup(lexicon.ProductType, g.name); ok && e.Parent == head.Name {
+				return e, raw
+			}
+		}
+	}
+	return nil, ""
 }
 
 // countedAt reports whether unit k is a word that counts the number
@@ -578,6 +617,10 @@ func (p *tagger) wordUnit(k int) int {
 	case lexicon.ProductType:
 		c.Category, c.Parent = e.Category, e.Parent
 		if e == p.head {
+			if p.narrowedBy != "" {
+				c.Evidence = join(c.Evidence, "the type "+p.narrowedBy+" names, never widened to "+e.Parent)
+				c.Parent = ""
+			}
 			c.Evidence = join(c.Evidence, headEvidence)
 		}
 	case lexicon.Filler:
