@@ -315,12 +315,18 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 	}
 	v := *m.BaseAmount
 	var out []widening
-	if t := e.MeasureTolerance; t > 0 {
+	count := m.Quantity == "count"
+	// A count widened by a tolerance that holds no other whole number
+	// (3 seats ± 10%) matches what it matched, and is not counted.
+	if t := e.MeasureTolerance; t > 0 && (!count || math.Floor(v*(1+t)) > v || math.Ceil(v*(1-t)) < v) {
 		cl := rw.exactClause(it.index, it.c)
 		lo, hi := v*(1-t), v*(1+t)
 		cl.Min, cl.Max, cl.Near = &lo, &hi, &v
-		out = append(out, widening{&cl, fmt.Sprintf("to ±%g%% (%.4g..%.4g %s)", t*100, lo, hi, m.BaseUnit),
-			fmt.Sprintf("about %s", strings.TrimSpace(m.String()))})
+		phrase := fmt.Sprintf("about %s", strings.TrimSpace(m.String()))
+		if count {
+			phrase = countPhrase(m.Dimension, "about "+strconv.FormatFloat(v, 'f', -1, 64))
+		}
+		out = append(out, widening{&cl, fmt.Sprintf("to ±%g%% (%.4g..%.4g %s)", t*100, lo, hi, m.BaseUnit), phrase})
 	}
 	if sizes := e.StandardSizes[m.Dimension]; len(sizes) > 0 {
 		var base []float64
@@ -523,6 +529,9 @@ func dropPhrase(c parser.Constraint) string {
 	case parser.KindBrand:
 		return "from any brand"
 	case parser.KindMeasure:
+		if c.Measure.Quantity == "count" {
+			return countPhrase(c.Measure.Dimension, "any")
+		}
 		return "in any " + strings.ReplaceAll(c.Measure.Dimension, "_", " ")
 	case parser.KindPrice:
 		return "at any price"
@@ -530,6 +539,28 @@ func dropPhrase(c parser.Constraint) string {
 		return "of any kind"
 	}
 	return fmt.Sprintf("without “%s”", strings.ToLower(c.Text))
+}
+
+// countPhrase says, to a shopper, a count of dimension dim that is how
+// many ("any", "about 4"): "with any number of seats", "in packs of about
+// 24", "in any thread count".
+func countPhrase(dim, how string) string {
+	switch dim {
+	case "pack_size":
+		if how == "any" {
+			return "in any pack size"
+		}
+		return "in packs of " + how
+	case "thread_count", "ply":
+		if how == "any" {
+			return "in any " + strings.ReplaceAll(dim, "_", " ")
+		}
+		return "of " + how + " " + strings.ReplaceAll(dim, "_", " ")
+	}
+	if how == "any" {
+		return "with any number of " + strings.ReplaceAll(dim, "_", " ")
+	}
+	return "with " + how + " " + strings.ReplaceAll(dim, "_", " ")
 }
 
 // widenToCarried widens a measure to the nearest amounts the catalog
@@ -569,6 +600,9 @@ func (rw *Rewriter) widenToCarried(ctx context.Context, it *item, within Plan) (
 	}
 	cl := rw.exactClause(it.index, it.c)
 	cl.Min, cl.Max, cl.Near = &lo, &hi, &v
-	return &widening{&cl, fmt.Sprintf("to the nearest amounts carried (%.4g..%.4g %s)", lo, hi, m.BaseUnit),
-		"in the nearest " + plural(strings.ReplaceAll(m.Dimension, "_", " ")) + " carried"}, nil
+	phrase := "in the nearest " + plural(strings.ReplaceAll(m.Dimension, "_", " ")) + " carried"
+	if m.Quantity == "count" && m.Dimension != "pack_size" && m.Dimension != "thread_count" && m.Dimension != "ply" {
+		phrase = "with the nearest number of " + strings.ReplaceAll(m.Dimension, "_", " ") + " carried"
+	}
+	return &widening{&cl, fmt.Sprintf("to the nearest amounts carried (%.4g..%.4g %s)", lo, hi, m.BaseUnit), phrase}, nil
 }

@@ -766,3 +766,35 @@ func TestBuildUpWhenTheBudgetRunsShort(t *testing.T) {
 		}
 	}
 }
+
+// A count is said as a count: "with the nearest number of seats
+// carried", "with any number of drawers", not "in any seats". A count
+// widened by a tolerance that holds no other whole number (5 seats ±
+// 10%) would match what it matched, so it is not counted. The shop is
+// invented.
+func TestCountPhrases(t *testing.T) {
+	shop := []product{
+		{ID: "SF-4", Type: "sofa", Measures: map[string]float64{"seats": 4}},
+		{ID: "SF-6", Type: "sofa", Measures: map[string]float64{"seats": 6}},
+		{ID: "DR-1", Type: "dresser"},
+	}
+	for _, tc := range []struct{ query, want string }{
+		{"sofa 5 seater", "Showing sofas with the nearest number of seats carried."},
+		{"dresser 7 drawer", "Showing dressers with any number of drawers."},
+	} {
+		o := mustRescue(t, shop, tc.query)
+		if !strings.HasSuffix(o.Message, tc.want) {
+			t.Errorf("%q: message %q, want it to end %q\n%s", tc.query, o.Message, tc.want, o.Explanation)
+		}
+		for _, st := range o.Steps {
+			for _, r := range st.Relaxations {
+				if strings.HasPrefix(r.Detail, "to ±") {
+					t.Errorf("%q: counted %q, a tolerance that holds no other count", tc.query, r.Detail)
+				}
+			}
+		}
+	}
+	if got := countPhrase("pack_size", "about 24"); got != "in packs of about 24" {
+		t.Errorf("pack size: %q", got)
+	}
+}
