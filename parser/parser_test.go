@@ -144,6 +144,21 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for jx-10", "fits jx-10")},
 	},
 	{
+		name: "a model named and numbered", query: "waterproof phone case for lumora 14", category: "electronics",
+		reason: "a model is often a name and a number (common practice): the target is the model, hard, where the name was a stray word and the 14 a unitless number (the model is invented)",
+		want:   []tagged{tg(KindSilhouette, "waterproof", "waterproof"), tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for lumora 14", "fits lumora 14")},
+	},
+	{
+		name: "a model's variant words", query: "phone case for lumora 14 pro max clear", category: "electronics",
+		reason: "the words a maker puts after a model (pro, max) are the model's, though max may also bound a price (invented model)",
+		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for lumora 14 pro max", "fits lumora 14 pro max"), tg(KindColour, "clear", "clear")},
+	},
+	{
+		name: "max bounding a price after a model", query: "charger for zk-3 max $30", category: "electronics",
+		reason: "max before a value is a bound, not the model's variant",
+		want:   []tagged{tg(KindProductType, "charger", "charger"), tg(KindCompatibility, "for zk-3", "fits zk-3"), tg(KindPrice, "max $30", "≤ 30.00 USD")},
+	},
+	{
 		name: "a word after a model code", query: "phone case for jx-10 roomy", category: "electronics",
 		reason: "a model code ends the target; the word after it is the shopper's, not the model's",
 		want:   []tagged{tg(KindProductType, "phone case", "phone case"), tg(KindCompatibility, "for jx-10", "fits jx-10"), tg(KindKeyword, "roomy", "roomy")},

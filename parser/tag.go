@@ -833,11 +833,17 @@ func (p *tagger) compat(k, n int) int {
 	j := k + n
 	end := -1
 	var parts []string
-	code := false   // a model code is in the target
+	code := false   // a model code or number is in the target
 	fitted := false // a code, a brand or a product type is in it
 	for ; j < len(p.units); j++ {
 		v := &p.units[j]
 		if v.kind == uWord {
+			if code && modelSuffixes[v.text] && !(j+1 < len(p.units) && p.units[j+1].kind == uItem && p.units[j+1].item.Value != nil) {
+				// "iphone 14 pro max": the variant, though max is also
+				// a bound ("max $50").
+				parts, end = append(parts, v.text), v.end
+				continue
+			}
 			if v.chosen != nil {
 				e := v.chosen
 				if e.Kind == lexicon.Brand {
@@ -869,9 +875,10 @@ func (p *tagger) compat(k, n int) int {
 			continue
 		}
 		if v.kind == uItem && (v.item.Code != nil || (len(parts) > 0 && p.bareNumber(v) && !p.countAfter(j))) {
+			// A code, or a name and its number ("iphone 14", "hp 63"):
+			// a model either way.
 			parts, end = append(parts, strings.ToLower(p.q[v.start:v.end])), v.end
-			code = code || v.item.Code != nil
-			fitted = fitted || code
+			code, fitted = true, true
 			continue
 		}
 		// "stand for 65 inch tv": a measure and the product it measures.
