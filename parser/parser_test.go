@@ -496,6 +496,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindKeyword, "usb-c", "usb-c").firm(), tg(KindKeyword, "hdmi", "hdmi").firm(), tg(KindProductType, "adapter", "adapter")}},
 	{name: "connector inside a product type", query: "usb c cable 6ft", category: "electronics", reason: "the lexicon's longer phrase wins: a usb-c cable is a usb cable",
 		want: []tagged{tg(KindProductType, "usb c cable", "usb cable"), tg(KindMeasure, "6ft", "6 ft")}},
+	{name: "a faucet's pull-down spout", query: "kitchen faucet pull down matte black", category: "hardware", reason: "a pull-down faucet is a style of kitchen faucet (common practice): down was read as down filling, a material",
+		want: []tagged{tg(KindProductType, "kitchen faucet", "kitchen faucet"), tg(KindSilhouette, "pull down", "pull down"), tg(KindPattern, "matte", "matte"), tg(KindColour, "black", "black")}},
 	{name: "pipe diameter before its length", query: "3/4 x 10 ft copper pipe", category: "hardware", reason: "pipe is sold by a diameter in inches and a length in feet (common practice): 3/4 was read as 0.75 ft, the foot that ends the dimension",
 		want: []tagged{tg(KindMeasure, "3/4", "0.75 in").inferred(), tg(KindMeasure, "10 ft", "10 ft"), tg(KindMaterial, "copper", "copper"), tg(KindProductType, "pipe", "pipe")}},
 	{name: "thread and length, spaced", query: "m6 x 20 screw", category: "hardware", reason: "a metric screw is named by its thread, then its length in mm (common practice); 20 is no ISO 261 pitch, so it is the length, where it was a unitless number",
