@@ -346,6 +346,14 @@ func (p *tagger) point(k int, q quantity) int {
 			return 0
 		}
 	}
+	// Gold's purity in karats on jewellery: "14k", "18kt", "10 karat"
+	// (common practice; the fineness of 24 parts), a firm phrase in the
+	// product's words, written as titles write it.
+	if w != nil && !q.hasUnit && q.num.integer && karats[q.num.decimal] && (w.text == "karat" || !spaced && (w.text == "k" || w.text == "kt")) && p.headUnder("jewelry") {
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: q.num.decimal + "k", Strictness: Firm,
+			Evidence: "gold's purity in karats, matched in the product's words"})
+		return 1
+	}
 	// A number stuck to a word that is no unit: "200gsm", "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
 		name := strings.ToLower(p.q[u.start:w.end])
@@ -444,6 +452,16 @@ func (p *tagger) bare(start, end int, q quantity) {
 		p.aperture(start, end, q.num.decimal)
 		return
 	}
+	// "leather belt 34", "silver ring 7": belts are sized by the waist in
+	// inches, rings by the US ring scale, each written bare (common
+	// practice, ranges from memory).
+	for _, b := range bareSized {
+		if p.headUnder(b.head) && q.num.value >= b.min && q.num.value <= b.max {
+			p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: b.system, Value: q.num.decimal},
+				Evidence: "a bare number on a " + b.head + " reads as its size"})
+			return
+		}
+	}
 	if p.apparel() {
 		sys, most := "numeric", float64(maxApparelSize)
 		if p.category == "footwear" {
@@ -471,6 +489,16 @@ func (p *tagger) bare(start, end int, q quantity) {
 	}
 	p.add(c)
 }
+
+// karats are the gold purities jewellery is sold in (common practice).
+var karats = map[string]bool{"9": true, "10": true, "14": true, "18": true, "22": true, "24": true}
+
+// bareSized are the accessories a bare number sizes, with the size
+// system and the sizes they come in.
+var bareSized = []struct {
+	head, system string
+	min, max     float64
+}{{"belt", "belt", 20, 60}, {"ring", "ring", 1, 16}}
 
 // apertures are the widest apertures lenses are sold by that are not
 // whole numbers (common practice: the f-number scale in steps of a third
@@ -901,6 +929,11 @@ func (p *tagger) sizeValue(v *unit) (*Size, bool) {
 	sys := "numeric"
 	if p.category == "footwear" {
 		sys = "shoe"
+	}
+	for _, b := range bareSized {
+		if p.headUnder(b.head) {
+			sys = b.system
+		}
 	}
 	val := q.num.decimal
 	if q.hasUnit {
