@@ -270,7 +270,7 @@ func ExampleNew() {
 	}
 	// Output:
 	// 0 No results for “rain jacket size m”. size m is not carried in rain jackets.
-	// 2 No exact match for “rain jacket size m”. Showing rain jackets without “size m”.
+	// 2 No exact match for “rain jacket size m”. Showing rain jackets in any size.
 	//   drop size size m
 }
 

@@ -528,6 +528,8 @@ func dropPhrase(c parser.Constraint) string {
 		return "in any style"
 	case parser.KindBrand:
 		return "from any brand"
+	case parser.KindSize:
+		return "in any size"
 	case parser.KindMeasure:
 		if c.Measure.Quantity == "count" {
 			return countPhrase(c.Measure.Dimension, "any")

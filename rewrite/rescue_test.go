@@ -798,3 +798,15 @@ func TestCountPhrases(t *testing.T) {
 		t.Errorf("pack size: %q", got)
 	}
 }
+
+// A belt's size is firm in the built-in policy, since belts are often
+// adjustable and many shops list no belt sizes (common practice): "leather
+// belt 34" in a shop whose belts list none shows its belts "in any size",
+// not nothing. The shop is invented.
+func TestBeltSizeIsDropped(t *testing.T) {
+	shop := []product{{ID: "BT-1", Type: "belt", Material: "leather"}}
+	o := mustRescue(t, shop, "leather belt 34")
+	if want := "Showing belts in any size."; !strings.HasSuffix(o.Message, want) || o.Count != 1 {
+		t.Errorf("message %q (%d found), want it to end %q\n%s", o.Message, o.Count, want, o.Explanation)
+	}
+}
