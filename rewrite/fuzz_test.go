@@ -1,11 +1,14 @@
 package rewrite
 
 import (
+	"context"
 	"errors"
+	"slices"
 	"strings"
 	"testing"
 
 	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/parser"
 )
 
 // FuzzParsePolicy reads generated policy files. Its seed corpus is the
@@ -48,6 +51,47 @@ func FuzzParsePolicy(f *testing.F) {
 			if e.MinResults < 1 || e.ColourTolerance < 0 || e.MeasureTolerance < 0 || e.MeasureTolerance > 1 || e.PriceStretch < 0 {
 				t.Fatalf("%q: category %q gives %+v", text, c, e)
 			}
+		}
+	})
+}
+
+// FuzzRescue rescues generated queries against the invented shop of
+// memengine_test.go. Whatever the query, a rescue either is refused or
+// returns an outcome that counts no more than the budget, keeps every
+// hard constraint in its plan and relaxes none, says something to the
+// shopper when it relaxed anything, and finds what it says it found.
+func FuzzRescue(f *testing.F) {
+	for _, q := range []string{"merino crew sweater oatmeal", "velvet throw pillow cover 18x18 mustard", "m6 x 20 screw",
+		"type c charger", "bra 32a", "uk 8 1/2 boots", "50mm 1.8 lens", "cat6 cable 25 ft white", "-red -blue jacket", "zorblax"} {
+		f.Add(q, uint8(DefaultBudget))
+	}
+	f.Fuzz(func(t *testing.T, q string, budget uint8) {
+		eng := &memEngine{products: shop}
+		o, err := New(eng, nil, WithBudget(int(budget))).Rescue(context.Background(), q)
+		if err != nil {
+			if !errors.Is(err, ErrNothingToSearch) && !strings.Contains(err.Error(), "budget allows no count") {
+				t.Fatalf("%q: %v", q, err)
+			}
+			return
+		}
+		if n := len(eng.counted); n > max(1, int(budget)) {
+			t.Fatalf("%q: %d counts for a budget of %d", q, n, budget)
+		}
+		if o.Message == "" && !o.Exact {
+			t.Fatalf("%q: rescued with no message", q)
+		}
+		for _, r := range o.Relaxations {
+			if o.Parsed.Constraints[r.Constraint].Strictness == parser.Hard {
+				t.Fatalf("%q: relaxed hard %q", q, r.Text)
+			}
+		}
+		for i, c := range o.Parsed.Constraints {
+			if c.Strictness == parser.Hard && !slices.ContainsFunc(o.Plan.Clauses, func(cl Clause) bool { return cl.From == i }) {
+				t.Fatalf("%q: hard %q is not in the plan", q, c.Text)
+			}
+		}
+		if n, _ := (&memEngine{products: shop}).Count(context.Background(), o.Plan); n != o.Count {
+			t.Fatalf("%q: the outcome says %d found, its plan finds %d", q, o.Count, n)
 		}
 	})
 }

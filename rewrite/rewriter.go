@@ -48,7 +48,8 @@ type known struct {
 // Option configures a Rewriter.
 type Option func(*Rewriter)
 
-// WithBudget sets how many engine counts one rescue may spend.
+// WithBudget sets how many engine counts one rescue may spend (default
+// DefaultBudget); n below 1 is 1, the query as typed.
 func WithBudget(n int) Option { return func(rw *Rewriter) { rw.budget = n } }
 
 // WithParseOptions sets how queries are parsed; its lexicon is used too.
