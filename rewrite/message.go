@@ -47,7 +47,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	for _, r := range out.Relaxations {
 		switch {
 		case typoColour && r.Kind == parser.KindColour && r.Operator == OpDrop:
-		case r.Kind == parser.KindProductType && r.Operator == OpReplace:
+		case r.Operator == OpReplace && (r.Kind == parser.KindProductType || r.Kind == parser.KindCompatibility):
 			fix = ", " + r.Phrase
 		case r.Kind == parser.KindProductType && r.Operator == OpWiden:
 			noun = strings.TrimPrefix(r.Phrase, "other ")

@@ -4,6 +4,7 @@ import (
 	"context"
 	"fmt"
 	"slices"
+	"strings"
 	"unicode"
 
 	"github.com/whittle-search/whittle/parser"
@@ -18,6 +19,10 @@ type reading struct {
 	policy    Effective
 	corrected string
 	fix       Relaxation
+	// found is set when the reading is kept only if its query as typed
+	// finds something: the catalog bearing out its product type is not
+	// enough.
+	found bool
 }
 
 // reread reads r's query again when an unknown word in it is a typo of a
@@ -57,7 +62,54 @@ func (rw *Rewriter) reread(ctx context.Context, r *parser.Result) ([]*reading, e
 			return out, nil
 		}
 	}
+	if rd := rw.readAsModel(r); rd != nil {
+		return []*reading{rd}, nil
+	}
 	return nil, nil
+}
+
+// readAsModel reads a part number typed beside a product type as the
+// model the product fits: "jx-12 phone case" is most often a case for
+// the jx-12, typed without "for", not a case whose part number is
+// JX-12. The query is read again with "for" before the code, so the
+// code is a compatibility target, hard like the part number, at the same
+// span. The reading is kept only if it finds something. It is nil when
+// the query has no head product type, no hard part number that is not
+// excluded, or the reading would loosen another hard constraint.
+func (rw *Rewriter) readAsModel(r *parser.Result) *reading {
+	if headIndex(r) < 0 {
+		return nil
+	}
+	for _, c := range r.Constraints {
+		if c.Kind != parser.KindPartNumber || c.Excluded || c.Strictness < parser.Hard {
+			continue
+		}
+		text, p := rw.parseReplaced(r, c, "for "+c.Text)
+		if p == nil {
+			return nil
+		}
+		e := rw.policy.Apply(p, rw.lex)
+		at := slices.IndexFunc(p.Constraints, func(d parser.Constraint) bool {
+			return d.Start == c.Start && d.End == c.End && d.Kind == parser.KindCompatibility && d.Strictness == parser.Hard &&
+				strings.EqualFold(d.Target, c.Code)
+		})
+		if at < 0 || headIndex(p) < 0 || !keepsHard(without1(r, c), p) {
+			return nil
+		}
+		return &reading{parsed: p, policy: e, corrected: text, found: true, fix: Relaxation{
+			Constraint: at, Text: c.Text, Kind: parser.KindCompatibility, Operator: OpReplace,
+			Detail: fmt.Sprintf("%q read as the model the product fits, not its part number; the query read again as %q", c.Text, text),
+			Phrase: fmt.Sprintf("reading “%s” as the model they fit", c.Text),
+		}}
+	}
+	return nil
+}
+
+// without1 is r less constraint c.
+func without1(r *parser.Result, c parser.Constraint) *parser.Result {
+	out := *r
+	out.Constraints = slices.DeleteFunc(slices.Clone(r.Constraints), func(d parser.Constraint) bool { return d.Start == c.Start && d.End == c.End })
+	return &out
 }
 
 // headLen is how many bytes of the query the reading's head takes in.
@@ -83,14 +135,9 @@ func unknownWord(r *parser.Result, c parser.Constraint) bool {
 // readFixed parses r's query with c's word replaced by fixed, and keeps
 // that reading if the fix is part of its head product type.
 func (rw *Rewriter) readFixed(r *parser.Result, c parser.Constraint, fixed string) *reading {
-	text := r.Query[:c.Start] + fixed + r.Query[c.End:]
-	m := fixSpan{start: c.Start, end: c.End, n: len(fixed)}
-	p, ok := m.back(parser.ParseWith(text, rw.parse), r.Query)
-	if !ok {
+	text, p := rw.parseReplaced(r, c, fixed)
+	if p == nil {
 		return nil
-	}
-	if p.Category == "" {
-		p.Category = r.Category
 	}
 	h := headIndex(p)
 	if h < 0 || p.Constraints[h].Start > c.Start || p.Constraints[h].End < c.End {
@@ -110,6 +157,23 @@ func (rw *Rewriter) readFixed(r *parser.Result, c parser.Constraint, fixed strin
 		Detail: fmt.Sprintf("%q read as %q; the query read again as %q", c.Name, fixed, text),
 		Phrase: fmt.Sprintf("reading “%s” as “%s”", c.Text, fixed),
 	}}
+}
+
+// parseReplaced parses r's query with c's span replaced by with, and
+// returns the new text and its parse with every span mapped back onto
+// the query as typed, in r's category when the new text names none; nil
+// when two spans would then overlap.
+func (rw *Rewriter) parseReplaced(r *parser.Result, c parser.Constraint, with string) (string, *parser.Result) {
+	text := r.Query[:c.Start] + with + r.Query[c.End:]
+	m := fixSpan{start: c.Start, end: c.End, n: len(with)}
+	p, ok := m.back(parser.ParseWith(text, rw.parse), r.Query)
+	if !ok {
+		return text, nil
+	}
+	if p.Category == "" {
+		p.Category = r.Category
+	}
+	return text, p
 }
 
 // headIndex is the index of r's head product type, or -1.

@@ -194,3 +194,29 @@ func TestReadingsSpendTheBudget(t *testing.T) {
 		}
 	}
 }
+
+// A code typed beside a product type, without "for", is most often the
+// model the product fits (common practice): "jx-10 lens" in a shop whose
+// lenses fit the jx-10 and none has the part number JX-10 shows them,
+// and says how it read the code. A code that is a part number is found
+// as typed; one that neither names nor fits anything still stops at the
+// hard constraints. The shop is invented (memengine_test.go).
+func TestCodeReadAsTheModelItFits(t *testing.T) {
+	for _, tc := range []struct {
+		name, query, want string
+		count             int
+		reason            string
+	}{
+		{"model", "jx-10 lens", "Showing lenses, reading “jx-10” as the model they fit.", 2, "both lenses fit the jx-10"},
+		{"model and a colour", "jx-10 lens red", "Showing lenses in any colour, reading “jx-10” as the model they fit.", 2, "the colour is dropped on the reading, as on any query"},
+		{"part number", "fn-5018 lens", "", 1, "fn-5018 is a lens's part number: found as typed"},
+		{"neither", "zz-99 lens", "zz-99 is not carried in lenses.", 0, "nothing has or fits zz-99"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			o := mustRescue(t, shop, tc.query)
+			if !strings.HasSuffix(o.Message, tc.want) || o.Count != tc.count {
+				t.Errorf("%s: message %q, %d found; want it to end %q, %d found\n%s", tc.reason, o.Message, o.Count, tc.want, tc.count, o.Explanation)
+			}
+		})
+	}
+}

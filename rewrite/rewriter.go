@@ -668,7 +668,16 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 			return picked{}, err
 		}
 		if n == 0 {
-			ok, err := fixed.bornOut(typed)
+			// A reading that finds nothing is kept when the catalog
+			// bears it out; a code read as the model it fits, when what
+			// it holds hard finds something and the query as typed holds
+			// hard finds nothing ("jx-12 phone case clear" in a shop of
+			// cases for the jx-12, none clear, and no part JX-12).
+			check := func() (bool, error) { return fixed.bornOut(typed) }
+			if rd.found {
+				check = func() (bool, error) { return fixed.hardFinds(s) }
+			}
+			ok, err := check()
 			s.budget = fixed.budget
 			if err == errStop {
 				break
@@ -691,6 +700,33 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 		p.search.budget = s.budget
 	}
 	return p, nil
+}
+
+// hardFinds reports whether the hard constraints and the head product
+// type of s, a reading, find something while those of typed, the search
+// of the query as typed, find nothing.
+func (s *search) hardFinds(typed *search) (bool, error) {
+	fix := s.fix
+	s.fix = nil // for the step's label: this count is of the query as typed
+	n, err := s.countPlan(hardAndHead(typed.items), nil, "the hard constraints alone, as typed")
+	s.fix = fix
+	if err != nil || n > 0 {
+		return false, err
+	}
+	n, err = s.countPlan(hardAndHead(s.items), nil, "the hard constraints alone")
+	return n > 0, err
+}
+
+// hardAndHead is the plan of the hard constraints among items and the
+// head product type, each as typed.
+func hardAndHead(items []*item) Plan {
+	var p Plan
+	for _, it := range items {
+		if cl := it.levels[0].clause; cl != nil && (it.c.Strictness == parser.Hard || it.c.IsHead()) {
+			p.Clauses = append(p.Clauses, *cl)
+		}
+	}
+	return p
 }
 
 // bornOut reports whether the catalog bears out s, a query read again
