@@ -504,6 +504,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindKeyword, "14k", "14k").firm(), tg(KindProductType, "ring", "ring"), tg(KindSize, "size 7", "7 (ring)")}},
 	{name: "karats spelt", query: "18kt gold necklace", category: "accessories", reason: "kt and karat are written too, read as titles write it, 18k",
 		want: []tagged{tg(KindKeyword, "18kt", "18k").firm(), tg(KindColour, "gold", "gold"), tg(KindProductType, "necklace", "necklace")}},
+	{name: "a metal finish", query: "door knob satin nickel", category: "hardware", reason: "door hardware is sold by finish, filed as its colour (common practice; value from memory): satin was a cloth and nickel a metal",
+		want: []tagged{tg(KindProductType, "door knob", "door handle"), tg(KindColour, "satin nickel", "satin nickel")}},
 	{name: "a faucet's pull-down spout", query: "kitchen faucet pull down matte black", category: "hardware", reason: "a pull-down faucet is a style of kitchen faucet (common practice): down was read as down filling, a material",
 		want: []tagged{tg(KindProductType, "kitchen faucet", "kitchen faucet"), tg(KindSilhouette, "pull down", "pull down"), tg(KindPattern, "matte", "matte"), tg(KindColour, "black", "black")}},
 	{name: "pipe diameter before its length", query: "3/4 x 10 ft copper pipe", category: "hardware", reason: "pipe is sold by a diameter in inches and a length in feet (common practice): 3/4 was read as 0.75 ft, the foot that ends the dimension",
