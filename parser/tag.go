@@ -546,6 +546,9 @@ func (p *tagger) wordUnit(k int) int {
 	if n := p.connectorAt(k); n >= 0 {
 		return n
 	}
+	if n := p.spelledWaistInseam(k); n >= 0 {
+		return n
+	}
 	if u.entries == nil {
 		switch {
 		case negators[u.text] && k+1 < len(p.units):

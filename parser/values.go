@@ -322,6 +322,9 @@ func (p *tagger) point(k int, q quantity) int {
 	if q.hasUnit && p.isTrousers() && (q.unit.Symbol == "w" || q.unit.Symbol == "l") && q.num.integer {
 		return p.waistInseam(k, q)
 	}
+	if n := p.spelledWaistInseam(k); n >= 0 {
+		return n
+	}
 	// "7 in 1", "4 in 1": a count of functions, not inches.
 	if q.hasUnit && q.unit.Symbol == "in" && strings.HasSuffix(strings.ToLower(p.q[u.start:u.end]), " in") && k+1 < len(p.units) &&
 		p.units[k+1].kind == uItem && p.bareNumber(&p.units[k+1]) && p.units[k+1].item.Value.From.Dims.Parts[0].Num.Whole == "1" {
@@ -393,6 +396,52 @@ func (p *tagger) waistInseam(k int, q quantity) int {
 	p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: sys, Value: q.num.decimal},
 		Evidence: sys + " on " + p.head.Name})
 	return 0
+}
+
+// trouserWords name a trouser size's two measures, spelt: the waist and
+// the inseam, which shops also call the length or the leg.
+var trouserWords = map[string]string{"waist": "waist", "length": "inseam", "inseam": "inseam", "leg": "inseam", "long": "inseam"}
+
+// spelledWaistInseam reads a trouser size spelt out on trousers, the
+// number before its word or after it: "30 waist 32 length", "waist 30
+// inseam 32", "32 waist" alone. Both give the waist by inseam, as
+// "30x32" does; one alone is that measure. k is the unit of the first
+// number or word. It returns the extra units used, or -1.
+func (p *tagger) spelledWaistInseam(k int) int {
+	if !p.isTrousers() {
+		return -1
+	}
+	// one reads a number and its word at i, in either order.
+	one := func(i int) (string, string, int, bool) {
+		if i+1 >= len(p.units) {
+			return "", "", 0, false
+		}
+		a, b := &p.units[i], &p.units[i+1]
+		num, word := a, b
+		if a.kind == uWord {
+			num, word = b, a
+		}
+		if word.kind != uWord || word.entries != nil || trouserWords[word.text] == "" || num.kind != uItem || !p.bareOrUnit(num, "") {
+			return "", "", 0, false
+		}
+		return trouserWords[word.text], num.item.Value.From.Dims.Parts[0].Num.Whole, p.units[i+1].end, true
+	}
+	what, n, end, ok := one(k)
+	if !ok {
+		return -1
+	}
+	if what2, n2, end2, ok := one(k + 2); ok && what2 != what {
+		waist, inseam := n, n2
+		if what == "inseam" {
+			waist, inseam = n2, n
+		}
+		p.add(Constraint{Kind: KindSize, Start: p.units[k].start, End: end2, Size: &Size{System: "waist_inseam", Value: waist + "x" + inseam},
+			Evidence: "waist and inseam spelt out on " + p.head.Name})
+		return 3
+	}
+	p.add(Constraint{Kind: KindSize, Start: p.units[k].start, End: end, Size: &Size{System: what, Value: n},
+		Evidence: what + " spelt out on " + p.head.Name})
+	return 1
 }
 
 // bareOrUnit reports whether unit v is one whole number with unit sym.
