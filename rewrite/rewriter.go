@@ -879,8 +879,10 @@ func (s *search) bestFirst(want int) (bool, []int, int) {
 			s.push(pq, st, visited)
 			continue
 		}
-		if _, seen := s.seen[s.plan(st).Key()]; !seen && s.budget <= reserve {
-			break
+		if s.budget <= reserve {
+			if _, seen := s.seen[s.plan(st).Key()]; !seen {
+				break
+			}
 		}
 		n, err := s.count(st)
 		if err == errStop {
