@@ -117,10 +117,14 @@ func without(p Plan, i int) Plan {
 
 // costs of the operators, before the evidence of the counts scales them.
 const (
-	costReplace  = 0.4
-	costWiden    = 1.5
-	costDropSoft = 1.0
-	costDropFirm = 4.0
+	costReplace = 0.4
+	costWiden   = 1.5
+	// costWidenType widens a product type to its parent: a little more
+	// than an attribute's widening, since a counter stool of 26 in is
+	// nearer a "28 in counter stool" than a stool of 28 in of any kind.
+	costWidenType = 2.0
+	costDropSoft  = 1.0
+	costDropFirm  = 4.0
 )
 
 func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, within Plan) error {
@@ -154,7 +158,7 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 		if parent, ok := rw.lex.Lookup(lexicon.ProductType, c.Parent); ok {
 			cl := rw.exactClause(it.index, c)
 			cl.Values = rw.typeValues(parent)
-			add(&cl, OpWiden, "to the broader type "+parent.Name, "other "+plural(parent.Name), costWiden)
+			add(&cl, OpWiden, "to the broader type "+parent.Name, "other "+plural(parent.Name), costWidenType)
 		}
 	case parser.KindPrice:
 		if c.Price.Max != nil && e.PriceStretch > 0 {

@@ -810,3 +810,19 @@ func TestBeltSizeIsDropped(t *testing.T) {
 		t.Errorf("message %q (%d found), want it to end %q\n%s", o.Message, o.Count, want, o.Explanation)
 	}
 }
+
+// Widening the product type to its parent costs a little more than
+// widening an attribute: for "counter stool 28in" a counter stool of 26
+// in (within the 10% tolerance) is nearer than a 28 in stool of any
+// kind. The shop is invented.
+func TestTypeWidensAfterAnAttribute(t *testing.T) {
+	in := func(x float64) float64 { return x * 25.4 }
+	shop := []product{
+		{ID: "CS-26", Type: "counter stool", Measures: map[string]float64{"seat_height": in(26)}},
+		{ID: "ST-28", Type: "stool", Measures: map[string]float64{"seat_height": in(28)}},
+	}
+	o := mustRescue(t, shop, "counter stool 28in")
+	if got := hitIDs(t, &memEngine{products: shop}, o.Plan); !slices.Equal(got, []string{"CS-26"}) {
+		t.Errorf("hits %v, want the counter stool of 26 in\n%s", got, o.Explanation)
+	}
+}
