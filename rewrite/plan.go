@@ -63,10 +63,16 @@ func (c Clause) key() string {
 // Plan is an engine-neutral query: every clause must hold.
 type Plan struct {
 	Clauses []Clause `json:"clauses"`
+	// Prefer are clauses the shopper asked for that the plan relaxed,
+	// each as typed, the most important first: a hit need not meet
+	// them, and an engine can rank the hits that meet them first (the
+	// products in the material dropped, the type asked before the
+	// broader type it was widened to). They do not change what matches.
+	Prefer []Clause `json:"prefer,omitempty"`
 }
 
 // Key identifies the plan: two plans with the same key match the same
-// products.
+// products. Prefer is not part of it.
 func (p Plan) Key() string {
 	ks := make([]string, len(p.Clauses))
 	for i, c := range p.Clauses {

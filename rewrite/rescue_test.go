@@ -826,3 +826,31 @@ func TestTypeWidensAfterAnAttribute(t *testing.T) {
 		t.Errorf("hits %v, want the counter stool of 26 in\n%s", got, o.Explanation)
 	}
 }
+
+// The plan prefers what it relaxed, each constraint as typed, the head
+// product type first and then the costliest to drop, so that an engine
+// can rank the hits that meet them first; a replaced typo is not among
+// them. The shops are invented.
+func TestPlanPrefersWhatItRelaxed(t *testing.T) {
+	in := func(x float64) float64 { return x * 25.4 }
+	shop := []product{{ID: "CU-1", Type: "cushion", Colour: "mustard", Hex: "#e1ad01", Material: "linen", Measures: map[string]float64{"width": in(20), "height": in(20)}}}
+	o := mustRescue(t, shop, "velvet throw pillow cover 18x18 mustard")
+	var got []string
+	for _, cl := range o.Plan.Prefer {
+		got = append(got, cl.Field+":"+strings.Join(cl.Values, ","))
+	}
+	// The cover, widened to cushions; the two 18 in measures, firm,
+	// dropped; velvet, soft, dropped last in importance.
+	if len(got) != 4 || got[0] != "product_type:cushion cover" || got[3] != "material:velvet" {
+		t.Errorf("prefer %v, want the cover, the measures, then velvet\n%s", got, o.Explanation)
+	}
+	for _, cl := range o.Plan.Prefer {
+		if slices.ContainsFunc(o.Plan.Clauses, func(c Clause) bool { return c.key() == cl.key() }) {
+			t.Errorf("prefers %s, which the plan already asks", cl.key())
+		}
+	}
+	typo := mustRescue(t, []product{{ID: "SK-1", Type: "skillet"}}, "sklilet")
+	if len(typo.Plan.Prefer) != 0 {
+		t.Errorf("a typo read again prefers %v", typo.Plan.Prefer)
+	}
+}

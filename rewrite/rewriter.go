@@ -458,6 +458,7 @@ func (rw *Rewriter) rescueParsed(ctx context.Context, r *parser.Result, failed *
 func (rw *Rewriter) settle(s *search, state []int, n int) *Outcome {
 	out := s.out
 	out.Count, out.Plan, out.Relaxations = n, s.plan(state), s.relaxationsOf(state)
+	out.Plan.Prefer = s.prefer(state)
 	out.Note = s.stopReason
 	if out.Exact {
 		out.Explanation = fmt.Sprintf("the query as typed finds %d", n)
@@ -511,6 +512,39 @@ func (s *search) plan(state []int) Plan {
 		}
 	}
 	return p
+}
+
+// prefer are the clauses, as typed, of the constraints state widens or
+// drops, the costliest to drop first (the head product type before all):
+// what the shopper asked for that a hit need not meet, for the engine to
+// rank by. A replaced typo is left out: the word as typed matches
+// nothing.
+func (s *search) prefer(state []int) []Clause {
+	type pref struct {
+		cl     Clause
+		weight float64
+	}
+	var ps []pref
+	for i, it := range s.items {
+		if i >= len(state) || state[i] == 0 {
+			continue
+		}
+		r, cl := it.levels[state[i]].relax, it.levels[0].clause
+		if r == nil || r.Operator == OpReplace || cl == nil || cl.Excluded {
+			continue
+		}
+		w := it.scaled(len(it.levels) - 1)
+		if it.c.IsHead() {
+			w = math.Inf(1)
+		}
+		ps = append(ps, pref{*cl, w})
+	}
+	slices.SortStableFunc(ps, func(a, b pref) int { return cmp.Compare(b.weight, a.weight) })
+	var out []Clause
+	for _, p := range ps {
+		out = append(out, p.cl)
+	}
+	return out
 }
 
 // keepsNothing reports whether state drops every constraint that asks

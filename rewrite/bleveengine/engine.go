@@ -176,15 +176,18 @@ type Shown = rewrite.ReportHit
 // ranked by bleve's scores, rounded so that products matched alike tie,
 // ties by id. One of attributes alone, which every match meets, lists
 // its matches with score 1 in the order of preference its clauses give
-// (see [rewrite.Clause.Values] and [rewrite.Clause.Near]): the type
-// asked before its subtypes, the nearest colour before farther ones, the
-// products nearest a widened measure's amount first, the product type's
-// clause before the others; then in id order.
+// (see [rewrite.Clause.Values], [rewrite.Clause.Near] and
+// [rewrite.Plan.Prefer]): the type asked before its subtypes, the
+// products that meet what the plan relaxed before those that do not, the
+// nearest colour before farther ones, the products nearest a widened
+// measure's amount first, the product type's clause before the others;
+// then in id order. A ranked plan scores what it relaxed as optional
+// clauses.
 func (e *Engine) Show(ctx context.Context, p rewrite.Plan, k int) ([]Shown, error) {
 	if !scoredOnly(p) {
 		return e.showListed(ctx, p, k)
 	}
-	out, _, err := e.ranked(ctx, toQuery(p), k)
+	out, _, err := e.ranked(ctx, rankedQuery(p), k)
 	return out, err
 }
 
@@ -281,6 +284,22 @@ func toQuery(p rewrite.Plan) query.Query {
 	}
 	if must == 0 {
 		b.AddMust(everyProduct())
+	}
+	return b
+}
+
+// rankedQuery is toQuery with the clauses p prefers as optional ones,
+// which raise the score of the products that meet them and match no
+// product the plan does not. A plan ranked by score keeps words, so it
+// has a clause to must-match.
+func rankedQuery(p rewrite.Plan) query.Query {
+	q := toQuery(p)
+	b, ok := q.(*query.BooleanQuery)
+	if !ok || len(p.Prefer) == 0 {
+		return q
+	}
+	for _, c := range p.Prefer {
+		b.AddShould(clauseQuery(c))
 	}
 	return b
 }

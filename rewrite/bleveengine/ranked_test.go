@@ -80,3 +80,58 @@ func TestRankedSameWhateverTheSegments(t *testing.T) {
 		}
 	}
 }
+
+// What a plan prefers ranks the hits that meet it first and changes
+// nothing of what matches: among six invented mugs, the two in stoneware
+// come first when the plan prefers stoneware, whether the plan is listed
+// (attributes alone) or scored (it keeps a word), and the count and the
+// matches stay those of the plan without it.
+func TestPreferRanksFirst(t *testing.T) {
+	var ps []catalog.Product
+	for i := 1; i <= 6; i++ {
+		m := "porcelain"
+		if i == 4 || i == 6 {
+			m = "stoneware"
+		}
+		ps = append(ps, catalog.Product{ID: fmt.Sprintf("MG-%d", i), Title: "Speckled " + m + " mug", ProductType: "mug", Category: "home", Material: m})
+	}
+	ctx := context.Background()
+	dir := filepath.Join(t.TempDir(), "idx")
+	if _, err := BuildProducts(ctx, ps, dir, BuildOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	e, err := Open(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer e.Close()
+	stoneware := rewrite.Clause{Field: "material", Values: []string{"stoneware"}}
+	for name, clauses := range map[string][]rewrite.Clause{
+		"listed": {{Field: "product_type", Values: []string{"mug"}}},
+		"scored": {{Field: "keyword", Values: []string{"speckled"}}},
+	} {
+		p := rewrite.Plan{Clauses: clauses, Prefer: []rewrite.Clause{stoneware}}
+		shown, err := e.Show(ctx, p, 3)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var ids []string
+		for _, h := range shown {
+			ids = append(ids, h.ID)
+		}
+		if diff := cmp.Diff([]string{"MG-4", "MG-6", "MG-1"}, ids); diff != "" {
+			t.Errorf("%s: stoneware first, then by id (-want +got):\n%s", name, diff)
+		}
+		n, err := e.Count(ctx, p)
+		if err != nil {
+			t.Fatal(err)
+		}
+		all, err := e.Matches(ctx, p)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if n != 6 || len(all) != 6 {
+			t.Errorf("%s: %d counted, %d matched, want all 6", name, n, len(all))
+		}
+	}
+}

@@ -3,6 +3,7 @@ package bleveengine
 import (
 	"context"
 	"fmt"
+	"slices"
 	"sort"
 	"sync"
 
@@ -110,10 +111,24 @@ func (s *sets) listedMatch(ctx context.Context, p rewrite.Plan) (*roaring.Bitmap
 // preferences returns, for each clause of p that allows several values
 // and is not excluded, the products each of its values matches, in the
 // order of the values, and for each measure with the amount asked, the
-// products in bands ever farther from it: the product type's clauses
-// first, then the others in the plan's order.
+// products in bands ever farther from it; and for each clause p prefers,
+// the products it matches. In order: the product type p prefers (the
+// type asked, widened to its parent), the product type's clauses, the
+// other clauses p prefers in their order, then the plan's other clauses
+// in its order.
 func (s *sets) preferences(ctx context.Context, p rewrite.Plan) ([][]*roaring.Bitmap, error) {
-	var first, rest [][]*roaring.Bitmap
+	var asked, first, relaxed, rest [][]*roaring.Bitmap
+	for _, c := range p.Prefer {
+		b, err := s.clause(ctx, c)
+		if err != nil {
+			return nil, err
+		}
+		if c.Field == "product_type" {
+			asked = append(asked, []*roaring.Bitmap{b})
+		} else {
+			relaxed = append(relaxed, []*roaring.Bitmap{b})
+		}
+	}
 	for _, c := range p.Clauses {
 		if !c.Excluded && c.Near != nil && c.Min != nil && c.Max != nil {
 			bands, err := s.nearBands(ctx, c)
@@ -142,7 +157,7 @@ func (s *sets) preferences(ctx context.Context, p rewrite.Plan) ([][]*roaring.Bi
 			rest = append(rest, each)
 		}
 	}
-	return append(first, rest...), nil
+	return slices.Concat(asked, first, relaxed, rest), nil
 }
 
 // nearBands are the products in ever wider ranges around c.Near, out to
