@@ -196,6 +196,10 @@ var defs = []def{
 	{"tsp", "teaspoon", Volume, "1/6", "floz", []string{"tsp", "tsps", "teaspoon", "teaspoons"}},
 	{"cl", "centilitre", Volume, "10", "ml", []string{"cl", "centilitre", "centilitres", "centiliter", "centiliters"}},
 	{"tbsp", "tablespoon", Volume, "1/2", "floz", []string{"tbsp", "tbsps", "tbs", "tablespoon", "tablespoons"}},
+	// Cubic inch, foot and yard: (25.4 mm)³ = 16.387064 ml exactly, a
+	// foot 12 inches, a yard 3 feet. Soil, mulch, wheelbarrows and
+	// freezers are sold by them.
+	{"in3", "cubic inch", Volume, "16.387064", "ml", []string{"in3", "in³", "cu in", "cubic inch", "cubic inches"}},
 	{"imp_floz", "imperial fluid ounce", Volume, "1/20", "imp_pt", []string{"imp_floz", "imp fl oz", "imperial fl oz", "imperial fluid ounce", "imperial fluid ounces", "uk fl oz", "uk fluid ounce", "uk fluid ounces"}},
 	{"floz", "US fluid ounce", Volume, "1/16", "pt", []string{"us fl oz", "us floz", "us fluid ounce", "us fluid ounces"}},
 	{"dl", "decilitre", Volume, "100", "ml", []string{"dl", "decilitre", "decilitres", "deciliter", "deciliters"}},
@@ -208,6 +212,8 @@ var defs = []def{
 	{"imp_qt", "imperial quart", Volume, "1/4", "imp_gal", []string{"imp_qt", "imp qt", "imperial quart", "imperial quarts", "uk quart", "uk quarts"}},
 	{"gal", "US gallon", Volume, "3785.411784", "ml", []string{"us gal", "us gallon", "us gallons"}},
 	{"imp_gal", "imperial gallon", Volume, "4546.09", "ml", []string{"imp_gal", "imp gal", "imperial gallon", "imperial gallons", "uk gal", "uk gallon", "uk gallons"}},
+	{"ft3", "cubic foot", Volume, "1728", "in3", []string{"ft3", "ft³", "cu ft", "cuft", "cubic foot", "cubic feet", "cubic ft"}},
+	{"yd3", "cubic yard", Volume, "27", "ft3", []string{"yd3", "yd³", "cu yd", "cubic yard", "cubic yards", "cubic yd"}},
 
 	// Power; base watt.
 	{"w", "watt", Power, "1", "", []string{"w", "watt", "watts"}},
