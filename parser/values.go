@@ -289,6 +289,13 @@ func (p *tagger) point(k int, q quantity) int {
 			return 1
 		}
 	}
+	// "3 step ladder", "2 step stool": the steps, which the product
+	// type's own name counts (common practice), not a height.
+	if !q.hasUnit && q.num.integer && q.num.value <= 12 && k+1 < len(p.units) && p.units[k+1].chosen != nil &&
+		p.units[k+1].chosen.Kind == lexicon.ProductType && strings.HasPrefix(p.units[k+1].text, "step ") {
+		p.add(countConstraint(u.start, u.end, q.num.value, "steps", "number before \""+p.units[k+1].text+"\": its steps"))
+		return 0
+	}
 	// A count: "8 pack", "12-pack", "50 pcs".
 	if !q.hasUnit && q.num.integer {
 		if w != nil && w.text == "thread" && k+2 < len(p.units) && p.units[k+2].text == "count" {
@@ -1090,7 +1097,7 @@ var countWords = map[string]string{
 	"tier": "tiers", "tiers": "tiers", "shelf": "shelves", "shelves": "shelves", "door": "doors", "doors": "doors",
 	"burner": "burners", "burners": "burners", "slice": "slices", "outlet": "outlets", "outlets": "outlets",
 	"port": "ports", "ports": "ports", "ring": "rings", "gang": "gangs", "light": "lights", "lights": "lights",
-	"speed": "speeds", "blade": "blades", "blades": "blades", "ply": "ply",
+	"speed": "speeds", "blade": "blades", "blades": "blades", "ply": "ply", "step": "steps", "steps": "steps",
 }
 
 // countAfter reports whether unit k is followed by a counting word.
