@@ -510,6 +510,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindKeyword, "14k", "14k").firm(), tg(KindProductType, "ring", "ring"), tg(KindSize, "size 7", "7 (ring)")}},
 	{name: "karats spelt", query: "18kt gold necklace", category: "accessories", reason: "kt and karat are written too, read as titles write it, 18k",
 		want: []tagged{tg(KindKeyword, "18kt", "18k").firm(), tg(KindColour, "gold", "gold"), tg(KindProductType, "necklace", "necklace")}},
+	{name: "a laptop's memory and storage", query: "laptop 16gb ram 512gb ssd", category: "electronics", reason: "computers are sold by memory and storage written before the part (common practice): the head was the ssd, and ram a product type of its own",
+		want: []tagged{tg(KindProductType, "laptop", "laptop"), tg(KindMeasure, "16gb ram", "16 GB"), tg(KindMeasure, "512gb ssd", "512 GB")}},
 	{name: "steps of a step ladder", query: "3 step ladder", category: "hardware", reason: "a step ladder is sold by its steps, \"3 step\" (common practice): the 3 was a height of 3 ft, from the ladder's height slot",
 		want: []tagged{tg(KindMeasure, "3", "3 count"), tg(KindProductType, "step ladder", "step ladder")}},
 	{name: "steps after a step stool", query: "step stool 2 step", category: "furniture", reason: "step is a count word too: the 2 was unitless and step a stray word",
@@ -832,6 +834,7 @@ func TestMeasureDimensions(t *testing.T) {
 		// thread M8 and length 30 mm (ISO 4017's designations, from memory);
 		// ISO 261 gives M8 a major diameter of 8 mm.
 		{"m8 x 30 bolt", "the length after the thread and an x (the same designations)", []string{"length"}},
+		{"laptop 16gb ram 1tb", "the part names the first; the second is storage by the laptop's slot ranges", []string{"memory", "storage"}},
 		// Copper and plastic pipe is sold by a nominal diameter in inches
 		// and a length in feet, "3/4 in x 10 ft" (common practice).
 		{"3/4 x 10 ft copper pipe", "the diameter is in inches though the foot comes last: the pipe's slot writes it so", []string{"diameter", "length"}},

@@ -7,6 +7,7 @@ import (
 	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon"
+	"github.com/whittle-search/whittle/lexicon/units"
 )
 
 // Words the grammar of shopping gives a role to.
@@ -210,6 +211,10 @@ func (p *tagger) compounds() {
 			u.feature = true
 			continue
 		}
+		if i > 0 && seenPT && dataParts[u.chosen.Name] != "" && p.dataAmount(&p.units[i-1]) {
+			u.feature = true // "laptop 16gb ram": the laptop's memory
+			continue
+		}
 		seenPT = true
 		for p.isPT(i + 1) {
 			v := &p.units[i+1]
@@ -222,6 +227,20 @@ func (p *tagger) compounds() {
 			break
 		}
 	}
+}
+
+// dataParts are the parts of a computer an amount of data before them
+// measures, with the dimension it is: "16gb ram" is the memory, "512gb
+// ssd" the storage.
+var dataParts = map[string]string{"ram": "memory", "ssd": "storage", "hard drive": "storage"}
+
+// dataAmount reports whether unit v is one amount of data ("16gb").
+func (p *tagger) dataAmount(v *unit) bool {
+	if v.kind != uItem || v.item.Value == nil || v.item.Value.To != nil || v.item.Value.From.Dims == nil || len(v.item.Value.From.Dims.Parts) != 1 {
+		return false
+	}
+	u, ok := units.Lookup(v.item.Value.From.Dims.Parts[0].Unit, p.opts.Volume)
+	return ok && u.Quantity == units.Data
 }
 
 // broader reports whether b is a or an ancestor of a, or names the last

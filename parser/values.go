@@ -326,6 +326,16 @@ func (p *tagger) point(k int, q quantity) int {
 			return 1
 		}
 	}
+	// "16gb ram", "512gb ssd" on a laptop: the memory and the storage,
+	// the part's name part of the span.
+	if q.hasUnit && q.unit.Quantity == units.Data && k+1 < len(p.units) && p.units[k+1].feature && p.units[k+1].chosen != nil {
+		if dim := dataParts[p.units[k+1].chosen.Name]; dim != "" {
+			c := p.measure(u.start, p.units[k+1].end, q, dim, nil, nil, q.unit)
+			c.Evidence = "an amount of data before \"" + p.units[k+1].text + "\": the " + dim
+			p.add(c)
+			return 1
+		}
+	}
 	if q.hasUnit && p.isTrousers() && (q.unit.Symbol == "w" || q.unit.Symbol == "l") && q.num.integer {
 		return p.waistInseam(k, q)
 	}
