@@ -848,43 +848,13 @@ func (s *search) hardOnly() Plan {
 	return p
 }
 
-// bestFirst searches relaxation sets cheapest first. It returns whether
-// a state reached want, and that state (or the best counted) with its
-// count.
+// bestFirst searches relaxation sets cheapest first, after the evidence,
+// and builds a plan up (buildUp) when the budget or the visits run short
+// first. It returns whether a state reached want, and that state (or the
+// best counted) with its count.
 func (s *search) bestFirst(want int) (bool, []int, int) {
-	// Evidence first, while a third of the budget allows: each relaxable
-	// constraint's count with what every plan asks (the hard constraints
-	// and the head product type at its broadest), so that one the shop
-	// cannot meet for this kind of product is the first suspect, not one
-	// that is merely rare in the whole shop.
-	most := 0
-	for _, it := range s.items {
-		if len(it.levels) > 1 && s.budget > s.rw.budget*2/3 {
-			p, label := s.withBound(it)
-			n, err := s.countPlan(p, nil, label)
-			if err == nil {
-				it.solo = n
-				most = max(most, n)
-			}
-		}
-	}
-	for _, it := range s.items {
-		if it.solo > 0 && most > 0 {
-			it.rarity = 1 - float64(it.solo)/float64(most)
-		}
-	}
-	// States known to find fewer than want: those counted, and for each
-	// constraint whose evidence finds fewer, the state that keeps it
-	// exact and drops or widens all else to what every plan asks. A
-	// state within one of them is not counted: it cannot find more.
-	var short [][]int
-	for i, it := range s.items {
-		if it.solo >= 0 && it.solo < want {
-			z := s.loosest()
-			z[i] = 0
-			short = append(short, z)
-		}
-	}
+	s.evidence()
+	short := s.shortOfEvidence(want)
 	pq := &queue{}
 	start := make([]int, len(s.items))
 	visited := map[string]bool{stateKey(start): true}
@@ -909,6 +879,8 @@ func (s *search) bestFirst(want int) (bool, []int, int) {
 			break
 		}
 		st := heap.Pop(pq).(entry).state
+		// A state within one known to find too few (one counted, or one
+		// the evidence stands for) cannot find more: it is not counted.
 		if slices.ContainsFunc(short, func(z []int) bool { return s.within(st, z) }) {
 			s.push(pq, st, visited)
 			continue
@@ -931,9 +903,7 @@ func (s *search) bestFirst(want int) (bool, []int, int) {
 		if n >= want {
 			return true, st, n
 		}
-		if n < want {
-			short = append(short, st)
-		}
+		short = append(short, st)
 		s.push(pq, st, visited)
 	}
 	if s.ctx.Err() != nil {
@@ -951,6 +921,46 @@ func (s *search) bestFirst(want int) (bool, []int, int) {
 		s.stopReason = why
 	}
 	return false, best, bestN
+}
+
+// evidence counts, while a third of the budget allows, each relaxable
+// constraint with what every plan asks (the hard constraints and the
+// head product type at its broadest), so that one the shop cannot meet
+// for this kind of product is the first suspect, not one that is merely
+// rare in the whole shop; and sets each one's rarity from the counts.
+func (s *search) evidence() {
+	most := 0
+	for _, it := range s.items {
+		if len(it.levels) > 1 && s.budget > s.rw.budget*2/3 {
+			p, label := s.withBound(it)
+			n, err := s.countPlan(p, nil, label)
+			if err == nil {
+				it.solo = n
+				most = max(most, n)
+			}
+		}
+	}
+	for _, it := range s.items {
+		if it.solo > 0 && most > 0 {
+			it.rarity = 1 - float64(it.solo)/float64(most)
+		}
+	}
+}
+
+// shortOfEvidence are the states the evidence shows find fewer than
+// want: for each constraint whose count with what every plan asks is
+// fewer, the state that keeps it exact and drops or widens all else to
+// what every plan asks. No state within one of them can find more.
+func (s *search) shortOfEvidence(want int) [][]int {
+	var short [][]int
+	for i, it := range s.items {
+		if it.solo >= 0 && it.solo < want {
+			z := s.loosest()
+			z[i] = 0
+			short = append(short, z)
+		}
+	}
+	return short
 }
 
 // loosest is the state of every constraint at the last level of its
