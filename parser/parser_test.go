@@ -510,6 +510,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindKeyword, "14k", "14k").firm(), tg(KindProductType, "ring", "ring"), tg(KindSize, "size 7", "7 (ring)")}},
 	{name: "karats spelt", query: "18kt gold necklace", category: "accessories", reason: "kt and karat are written too, read as titles write it, 18k",
 		want: []tagged{tg(KindKeyword, "18kt", "18k").firm(), tg(KindColour, "gold", "gold"), tg(KindProductType, "necklace", "necklace")}},
+	{name: "refresh rate", query: "gaming monitor 27 inch 144hz", category: "electronics", reason: "a monitor's refresh rate in hertz (SI unit of frequency): 144hz was a stray word",
+		want: []tagged{tg(KindProductType, "gaming monitor", "monitor"), tg(KindMeasure, "27 inch", "27 in"), tg(KindMeasure, "144hz", "144 Hz")}},
 	{name: "a laptop's memory and storage", query: "laptop 16gb ram 512gb ssd", category: "electronics", reason: "computers are sold by memory and storage written before the part (common practice): the head was the ssd, and ram a product type of its own",
 		want: []tagged{tg(KindProductType, "laptop", "laptop"), tg(KindMeasure, "16gb ram", "16 GB"), tg(KindMeasure, "512gb ssd", "512 GB")}},
 	{name: "steps of a step ladder", query: "3 step ladder", category: "hardware", reason: "a step ladder is sold by its steps, \"3 step\" (common practice): the 3 was a height of 3 ft, from the ladder's height slot",

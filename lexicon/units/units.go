@@ -14,19 +14,20 @@ type Quantity string
 
 // The quantities whittle measures. Each has one base unit, given by [Base].
 const (
-	Length  Quantity = "length"
-	Mass    Quantity = "mass"
-	Volume  Quantity = "volume"
-	Power   Quantity = "power"
-	Voltage Quantity = "voltage"
-	Current Quantity = "current"
-	Charge  Quantity = "charge"
-	Data    Quantity = "data"
-	Time    Quantity = "time"
+	Length    Quantity = "length"
+	Mass      Quantity = "mass"
+	Volume    Quantity = "volume"
+	Power     Quantity = "power"
+	Voltage   Quantity = "voltage"
+	Current   Quantity = "current"
+	Charge    Quantity = "charge"
+	Data      Quantity = "data"
+	Time      Quantity = "time"
+	Frequency Quantity = "frequency"
 )
 
 // quantities are the quantities in a fixed order.
-var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time}
+var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency}
 
 // Quantities returns every quantity in a fixed order, in a slice of the
 // caller's own.
@@ -55,7 +56,7 @@ var written = map[string]string{
 	"ml": "mL", "cl": "cL", "dl": "dL", "l": "L", "floz": "fl oz", "imp_floz": "imp fl oz", "imp_cup": "imp cup",
 	"imp_pt": "imp pt", "imp_qt": "imp qt", "imp_gal": "imp gal", "w": "W", "kw": "kW", "mv": "mV", "v": "V",
 	"kv": "kV", "ma": "mA", "a": "A", "mah": "mAh", "ah": "Ah", "kb": "kB", "mb": "MB", "gb": "GB", "tb": "TB",
-	"pb": "PB", "day": "d",
+	"pb": "PB", "day": "d", "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
 }
 
 // String returns the symbol as it is usually written: "mm", "in", "mL",
@@ -69,7 +70,7 @@ func (u Unit) String() string {
 }
 
 // Base returns the base unit symbol for q: "mm", "g", "ml", "w", "v", "a",
-// "mah", "gb" or "s". It returns "" for an unknown quantity.
+// "mah", "gb", "s" or "hz". It returns "" for an unknown quantity.
 func Base(q Quantity) string {
 	switch q {
 	case Length:
@@ -90,6 +91,8 @@ func Base(q Quantity) string {
 		return "gb"
 	case Time:
 		return "s"
+	case Frequency:
+		return "hz"
 	}
 	return ""
 }
@@ -245,6 +248,12 @@ var defs = []def{
 	{"min", "minute", Time, "60", "s", []string{"min", "mins", "minute", "minutes"}},
 	{"h", "hour", Time, "60", "min", []string{"h", "hr", "hrs", "hour", "hours"}},
 	{"day", "day", Time, "24", "h", []string{"day", "days"}},
+
+	// Frequency; base hertz. A monitor's refresh rate, a radio's band.
+	{"hz", "hertz", Frequency, "1", "", []string{"hz", "hertz"}},
+	{"khz", "kilohertz", Frequency, "1000", "hz", []string{"khz", "kilohertz"}},
+	{"mhz", "megahertz", Frequency, "1000", "khz", []string{"mhz", "megahertz"}},
+	{"ghz", "gigahertz", Frequency, "1000", "mhz", []string{"ghz", "gigahertz"}},
 }
 
 // splitVolume lists the spellings whose meaning depends on the

@@ -116,6 +116,10 @@ var derivedFactors = []struct {
 	{"in3", 16.387064, "cubic inch = (25.4 mm)³, from the inch row of unit_conversions.tsv (0.0254 m, exact)"},
 	{"ft3", 28316.846592, "cubic foot = (304.8 mm)³, from the foot row of unit_conversions.tsv (0.3048 m, exact)"},
 	{"yd3", 764554.857984, "cubic yard = (914.4 mm)³, from the yard row of unit_conversions.tsv (0.9144 m, exact)"},
+	{"hz", 1, "base unit of frequency"},
+	{"khz", 1e3, "SI Brochure, prefix kilo"},
+	{"mhz", 1e6, "SI Brochure, prefix mega = 1e6"},
+	{"ghz", 1e9, "SI Brochure, prefix giga = 1e9"},
 	{"imp_cup", 284.130625, "imperial cup = half an imperial pint = 10 imperial fl oz (from memory), from the imp pt row of unit_conversions.tsv"},
 	{"w", 1, "base unit of power"},
 	{"kw", 1000, "SI Brochure, prefix kilo"},
@@ -175,6 +179,7 @@ var canonicalSymbols = []string{
 	"w", "kw", "v", "mv", "kv", "a", "ma", "mah", "ah",
 	"kb", "mb", "gb", "tb", "pb",
 	"s", "ms", "min", "h", "day",
+	"hz", "khz", "mhz", "ghz",
 }
 
 // TestUnitSetIsCheckedAndComplete makes sure every unit's factor is checked
