@@ -252,8 +252,12 @@ var parseCases = []parseCase{
 		want:   []tagged{tg(KindProductType, "flip-flops", "flip-flop")},
 	},
 	{
-		name: "over-stemmed: stock", query: "in stock", reason: "stockings stems to stock; stock is no stocking",
+		name: "over-stemmed: stock", query: "stock", reason: "stockings stems to stock; stock is no stocking",
 		want: []tagged{tg(KindKeyword, "stock", "stock")},
+	},
+	{
+		name: "in stock", query: "lamp in stock", category: "home", reason: "availability is not an attribute of the product the shopper describes: filler, as free shipping is",
+		want: []tagged{tg(KindProductType, "lamp", "lamp")},
 	},
 	{
 		name: "stemmed and kept: a plural", query: "leggings women", category: "apparel",
