@@ -256,6 +256,10 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindKeyword, "stock", "stock")},
 	},
 	{
+		name: "for her", query: "watch for him", category: "accessories", reason: "for him and for her name who a product is for (common practice), not a model it fits: \"him\" was a stray word",
+		want: []tagged{tg(KindProductType, "watch", "watch"), tg(KindAudience, "for him", "men")},
+	},
+	{
 		name: "in stock", query: "lamp in stock", category: "home", reason: "availability is not an attribute of the product the shopper describes: filler, as free shipping is",
 		want: []tagged{tg(KindProductType, "lamp", "lamp")},
 	},
