@@ -68,6 +68,40 @@ func (p *tagger) tyres() bool {
 	return false
 }
 
+// spacedTyre reads a tyre size typed as three bare numbers on tyres,
+// "tire 225 65 17": the section width in mm, the aspect ratio and the
+// rim in inches, as the sidewall's 225/65R17 gives them. The tyre is read
+// as radial, which nearly every car tyre sold is (common practice), and
+// the evidence says so. q is the first number, at unit k; it returns
+// the extra units used, or 0.
+func (p *tagger) spacedTyre(k int, q quantity) int {
+	if p.category != "tyres" || q.hasUnit || !q.num.integer || k+2 >= len(p.units) {
+		return 0
+	}
+	nums := []int{int(q.num.value)}
+	for _, v := range p.units[k+1 : k+3] {
+		if v.kind != uItem || !v.spaceBefore || !p.bareOrUnit(&v, "") {
+			return 0
+		}
+		n, err := strconv.Atoi(v.item.Value.From.Dims.Parts[0].Num.Whole)
+		if err != nil {
+			return 0
+		}
+		nums = append(nums, n)
+	}
+	w, a, rim := nums[0], nums[1], nums[2]
+	if w%5 != 0 || a%5 != 0 {
+		return 0
+	}
+	d, err := spec.TyreSize(w, a, 'R', float64(rim))
+	if err != nil {
+		return 0
+	}
+	end := p.units[k+2].end
+	p.add(specConstraint(p.units[k].start, end, d, "ISO metric tyre size typed as three numbers, read as radial"))
+	return 2
+}
+
 // loadVersions are the words that mark a tyre built for a higher load
 // at the same size: XL, extra load, reinforced (common practice).
 var loadVersions = map[string]bool{"xl": true, "extra load": true, "reinforced": true}

@@ -8,6 +8,7 @@ package parser
 import (
 	"fmt"
 	"math"
+	"regexp"
 	"strconv"
 	"strings"
 	"testing"
@@ -73,13 +74,23 @@ func TestLumberSizesPS20(t *testing.T) {
 	}
 }
 
+// radialSize splits a radial designation of the reference table, "205/55
+// R16", into its three numbers.
+var radialSize = regexp.MustCompile(`^(\d{3})/(\d{2}) ?R(\d{2})$`)
+
 // ISO metric tyre designations (ISO 4000-1 / ETRTO), worked examples in
-// testdata/reference/tyre_size_examples.tsv, written both "205/55 R16"
-// and "205/55r16".
+// testdata/reference/tyre_size_examples.tsv, written "205/55 R16",
+// "205/55r16" and, for radial sizes, as three numbers on tyres.
 func TestTyreSizesISO(t *testing.T) {
 	for _, row := range reference.Rows(t, "tyre_size_examples.tsv") {
 		joined := strings.ToLower(strings.ReplaceAll(row["designation"], " ", ""))
-		for _, q := range []string{row["designation"] + " tyres", joined} {
+		qs := []string{row["designation"] + " tyres", joined}
+		// A radial size typed as three numbers on tyres: "tyres 205 55
+		// 16" (common practice).
+		if m := radialSize.FindStringSubmatch(row["designation"]); m != nil {
+			qs = append(qs, "tyres "+m[1]+" "+m[2]+" "+m[3])
+		}
+		for _, q := range qs {
 			c := only(t, Parse(q), KindSpec)
 			if c.Spec.System != "tyre" {
 				t.Errorf("%q: system %s, want tyre", q, c.Spec.System)

@@ -296,6 +296,9 @@ func (p *tagger) point(k int, q quantity) int {
 		p.add(countConstraint(u.start, u.end, q.num.value, "steps", "number before \""+p.units[k+1].text+"\": its steps"))
 		return 0
 	}
+	if n := p.spacedTyre(k, q); n > 0 {
+		return n
+	}
 	// A count: "8 pack", "12-pack", "50 pcs".
 	if !q.hasUnit && q.num.integer {
 		if w != nil && w.text == "thread" && k+2 < len(p.units) && p.units[k+2].text == "count" {
