@@ -211,6 +211,10 @@ func (p *tagger) compounds() {
 			u.feature = true
 			continue
 		}
+		if seenPT && formWords[u.text] {
+			u.feature = true // "plywood 4x8 sheet": the plywood's form, not bedding
+			continue
+		}
 		if i > 0 && seenPT && dataParts[u.chosen.Name] != "" && p.dataAmount(&p.units[i-1]) {
 			u.feature = true // "laptop 16gb ram": the laptop's memory
 			continue
@@ -228,6 +232,11 @@ func (p *tagger) compounds() {
 		}
 	}
 }
+
+// formWords name the form a product comes in, after the product ("a 4x8
+// sheet of plywood"), though alone they are a product type of their own
+// (a bed sheet).
+var formWords = map[string]bool{"sheet": true, "sheets": true}
 
 // dataParts are the parts of a computer an amount of data before them
 // measures, with the dimension it is: "16gb ram" is the memory, "512gb
@@ -619,6 +628,10 @@ func (p *tagger) wordUnit(k int) int {
 		}
 		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: u.text, Evidence: "not in the lexicon"})
 		p.res.Unrecognised = append(p.res.Unrecognised, u.text)
+		return 0
+	}
+	if e.Kind == lexicon.ProductType && u.feature && formWords[u.text] {
+		p.add(Constraint{Kind: KindFiller, Start: u.start, End: u.end, Strictness: Filler, Evidence: "the form the product comes in"})
 		return 0
 	}
 	if e.Kind == lexicon.ProductType && (u.modifier || u.feature) {
