@@ -50,7 +50,7 @@ func Parse(query string) *Result {
 //     the query already gives, by a designation or an earlier measure,
 //     when another slot holds it: in "m8 bolt 30 mm" M8 gives the
 //     diameter, so 30 mm is the length.
-//   - A number stuck to a word that is no unit ("200gsm", "1080p") is one
+//   - A number stuck to a word that is no unit ("1080p", "4k") is one
 //     keyword.
 //   - "m", "s" and "l" are letter sizes only in apparel, footwear and
 //     accessories, and "m" right after a number is metres.

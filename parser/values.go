@@ -377,7 +377,7 @@ func (p *tagger) point(k int, q quantity) int {
 			Evidence: "gold's purity in karats, matched in the product's words"})
 		return 1
 	}
-	// A number stuck to a word that is no unit: "200gsm", "1080p", "4k".
+	// A number stuck to a word that is no unit: "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
 		name := strings.ToLower(p.q[u.start:w.end])
 		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: name, Evidence: "a number with a unit whittle does not know"})

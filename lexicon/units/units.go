@@ -24,10 +24,12 @@ const (
 	Data      Quantity = "data"
 	Time      Quantity = "time"
 	Frequency Quantity = "frequency"
+	// Grammage is mass per area, as paper and towels are sold.
+	Grammage Quantity = "grammage"
 )
 
 // quantities are the quantities in a fixed order.
-var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency}
+var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage}
 
 // Quantities returns every quantity in a fixed order, in a slice of the
 // caller's own.
@@ -70,7 +72,7 @@ func (u Unit) String() string {
 }
 
 // Base returns the base unit symbol for q: "mm", "g", "ml", "w", "v", "a",
-// "mah", "gb", "s" or "hz". It returns "" for an unknown quantity.
+// "mah", "gb", "s", "hz" or "gsm". It returns "" for an unknown quantity.
 func Base(q Quantity) string {
 	switch q {
 	case Length:
@@ -93,6 +95,8 @@ func Base(q Quantity) string {
 		return "s"
 	case Frequency:
 		return "hz"
+	case Grammage:
+		return "gsm"
 	}
 	return ""
 }
@@ -254,6 +258,10 @@ var defs = []def{
 	{"khz", "kilohertz", Frequency, "1000", "hz", []string{"khz", "kilohertz"}},
 	{"mhz", "megahertz", Frequency, "1000", "khz", []string{"mhz", "megahertz"}},
 	{"ghz", "gigahertz", Frequency, "1000", "mhz", []string{"ghz", "gigahertz"}},
+
+	// Grammage; base gram per square metre, written gsm as the paper and
+	// textile trades write it.
+	{"gsm", "gram per square metre", Grammage, "1", "", []string{"gsm"}},
 }
 
 // splitVolume lists the spellings whose meaning depends on the

@@ -117,6 +117,7 @@ var derivedFactors = []struct {
 	{"ft3", 28316.846592, "cubic foot = (304.8 mm)³, from the foot row of unit_conversions.tsv (0.3048 m, exact)"},
 	{"yd3", 764554.857984, "cubic yard = (914.4 mm)³, from the yard row of unit_conversions.tsv (0.9144 m, exact)"},
 	{"hz", 1, "base unit of frequency"},
+	{"gsm", 1, "base unit of grammage, g/m²"},
 	{"khz", 1e3, "SI Brochure, prefix kilo"},
 	{"mhz", 1e6, "SI Brochure, prefix mega = 1e6"},
 	{"ghz", 1e9, "SI Brochure, prefix giga = 1e9"},
@@ -179,7 +180,7 @@ var canonicalSymbols = []string{
 	"w", "kw", "v", "mv", "kv", "a", "ma", "mah", "ah",
 	"kb", "mb", "gb", "tb", "pb",
 	"s", "ms", "min", "h", "day",
-	"hz", "khz", "mhz", "ghz",
+	"hz", "khz", "mhz", "ghz", "gsm",
 }
 
 // TestUnitSetIsCheckedAndComplete makes sure every unit's factor is checked
