@@ -102,6 +102,27 @@ func (p *tagger) spacedTyre(k int, q quantity) int {
 	return 2
 }
 
+// vesaPattern reads a screen's mounting pattern, the hole spacing in mm
+// a wall mount must match (the VESA mounting interface standard, from
+// memory): "vesa 400x400" with the word at unit w before the pattern at
+// unit k, or "400x400 vesa" with it after. It is a hard phrase, written
+// "vesa 400x400" as titles write it, since a mount of another pattern
+// does not fit; start is where the span begins. It returns the extra
+// units used, and whether it read one.
+func (p *tagger) vesaPattern(k, w, start int) (int, bool) {
+	if k < 0 || w < 0 || k >= len(p.units) || w >= len(p.units) || p.units[w].kind != uWord || p.units[w].text != "vesa" || p.units[k].kind != uItem {
+		return 0, false
+	}
+	nums := p.bareParts(&p.units[k])
+	if len(nums) != 2 || !nums[0].integer || !nums[1].integer || nums[0].value < 50 || nums[0].value > 1000 || nums[1].value < 50 || nums[1].value > 1000 {
+		return 0, false
+	}
+	end := max(p.units[k].end, p.units[w].end)
+	p.add(Constraint{Kind: KindKeyword, Start: start, End: end, Name: "vesa " + nums[0].decimal + "x" + nums[1].decimal, Strictness: Hard,
+		Evidence: "a VESA mounting pattern, the hole spacing in mm a mount must match, matched in the product's words"})
+	return 1, true
+}
+
 // loadVersions are the words that mark a tyre built for a higher load
 // at the same size: XL, extra load, reinforced (common practice).
 var loadVersions = map[string]bool{"xl": true, "extra load": true, "reinforced": true}

@@ -577,6 +577,9 @@ func (p *tagger) wordUnit(k int) int {
 	if n := p.spelledWaistInseam(k); n >= 0 {
 		return n
 	}
+	if n, ok := p.vesaPattern(k+1, k, u.start); ok {
+		return n // "vesa 400x400"
+	}
 	if u.entries == nil {
 		switch {
 		case negators[u.text] && k+1 < len(p.units):

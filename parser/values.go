@@ -157,6 +157,9 @@ func (p *tagger) value(k int) int {
 	if p.serviceAlone(k) {
 		return 0
 	}
+	if n, ok := p.vesaPattern(k, k+1, u.start); ok {
+		return n // "400x400 vesa"
+	}
 	from, ok := p.readSingle(v.From)
 	if !ok {
 		return 0

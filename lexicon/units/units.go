@@ -58,7 +58,7 @@ var written = map[string]string{
 	"ml": "mL", "cl": "cL", "dl": "dL", "l": "L", "floz": "fl oz", "imp_floz": "imp fl oz", "imp_cup": "imp cup",
 	"imp_pt": "imp pt", "imp_qt": "imp qt", "imp_gal": "imp gal", "w": "W", "kw": "kW", "mv": "mV", "v": "V",
 	"kv": "kV", "ma": "mA", "a": "A", "mah": "mAh", "ah": "Ah", "kb": "kB", "mb": "MB", "gb": "GB", "tb": "TB",
-	"pb": "PB", "day": "d", "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
+	"pb": "PB", "day": "d", "um": "µm", "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
 }
 
 // String returns the symbol as it is usually written: "mm", "in", "mL",
@@ -180,6 +180,7 @@ type def struct {
 // usage.
 var defs = []def{
 	// Length; base millimetre.
+	{"um", "micrometre", Length, "1/1000", "mm", []string{"um", "µm", "μm", "micron", "microns", "micrometre", "micrometres", "micrometer", "micrometers"}},
 	{"mil", "mil", Length, "1/1000", "in", []string{"mil", "mils", "thou"}},
 	{"mm", "millimetre", Length, "1", "", []string{"mm", "mms", "millimetre", "millimetres", "millimeter", "millimeters"}},
 	{"cm", "centimetre", Length, "10", "mm", []string{"cm", "cms", "centimetre", "centimetres", "centimeter", "centimeters"}},

@@ -103,6 +103,7 @@ var derivedFactors = []struct {
 	source string
 }{
 	{"mm", 1, "base unit of length"},
+	{"um", 0.001, "SI Brochure, prefix micro = 1e-6: a micron is a micrometre"},
 	{"cm", 10, "SI Brochure, prefix centi = 1e-2"},
 	{"m", 1000, "SI Brochure, prefix milli = 1e-3"},
 	{"km", 1e6, "SI Brochure, prefix kilo = 1e3"},
@@ -173,7 +174,7 @@ func TestUSGallonIsCubicInches(t *testing.T) {
 
 // canonicalSymbols is whittle's unit set as specified for the package.
 var canonicalSymbols = []string{
-	"mm", "cm", "m", "km", "in", "ft", "yd", "mi", "mil",
+	"um", "mm", "cm", "m", "km", "in", "ft", "yd", "mi", "mil",
 	"g", "kg", "mg", "lb", "oz",
 	"ml", "cl", "dl", "l", "floz", "cup", "pt", "qt", "gal", "tsp", "tbsp",
 	"imp_floz", "imp_cup", "imp_pt", "imp_qt", "imp_gal", "in3", "ft3", "yd3",
