@@ -233,6 +233,29 @@ func (p *tagger) compounds() {
 	}
 }
 
+// unitAlone tags a unit of volume named with no number, on a product
+// sold by volume, as one of that unit: "paint quart navy" is a quart of
+// paint, "gallon of paint" a gallon (common practice). It reports
+// whether it tagged one.
+func (p *tagger) unitAlone(k int) bool {
+	u := &p.units[k]
+	if u.entries != nil || k > 0 && p.units[k-1].kind == uItem || strings.HasSuffix(u.text, "s") {
+		return false // "5 gallon" is read with its number; "in gallons" says no amount
+	}
+	un, ok := units.Lookup(u.text, p.opts.Volume)
+	if !ok || un.Quantity != units.Volume || un.ToBase < 100 {
+		return false // not a teaspoon or a millilitre
+	}
+	if _, ok := p.slotFor(units.Volume, 0); !ok {
+		return false
+	}
+	one := quantity{num: number{value: 1, decimal: "1", integer: true, start: u.start, end: u.end}, unit: un, hasUnit: true}
+	c := p.measure(u.start, u.end, one, "", nil, nil, un)
+	c.Evidence = "a unit named alone: one " + un.Name
+	p.add(c)
+	return true
+}
+
 // formWords name the form a product comes in, after the product ("a 4x8
 // sheet of plywood"), though alone they are a product type of their own
 // (a bed sheet).
@@ -579,6 +602,9 @@ func (p *tagger) wordUnit(k int) int {
 	}
 	if n, ok := p.vesaPattern(k+1, k, u.start); ok {
 		return n // "vesa 400x400"
+	}
+	if p.unitAlone(k) {
+		return 0
 	}
 	if u.entries == nil {
 		switch {
