@@ -501,6 +501,14 @@ const (
 
 // bare tags a number written without a unit.
 func (p *tagger) bare(start, end int, q quantity) {
+	// "18650 rechargeable": a lithium-ion cell's size, its diameter and
+	// length in mm run together (18 by 65.0; common practice), which a
+	// charger or a torch must take: a hard phrase in the product's words.
+	if cellSizes[q.num.decimal] && (p.head == nil || p.category == "batteries" || p.category == "electronics" || p.category == "electrical") {
+		p.add(Constraint{Kind: KindKeyword, Start: start, End: end, Name: q.num.decimal, Strictness: Hard,
+			Evidence: "a lithium-ion cell size, its diameter and length in mm, matched in the product's words"})
+		return
+	}
 	// "50mm 1.8 lens", "70-300 4.5": a lens's widest aperture, written
 	// bare after its focal length, though a lens's focal length slot
 	// may hold it too.
@@ -561,6 +569,10 @@ func (p *tagger) bare(start, end int, q quantity) {
 	}
 	p.add(c)
 }
+
+// cellSizes are the cylindrical lithium-ion cells sold by size (common
+// practice).
+var cellSizes = map[string]bool{"10440": true, "14500": true, "16340": true, "18350": true, "18650": true, "20700": true, "21700": true, "26650": true, "32650": true}
 
 // karats are the gold purities jewellery is sold in (common practice).
 var karats = map[string]bool{"9": true, "10": true, "14": true, "18": true, "22": true, "24": true}
