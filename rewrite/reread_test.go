@@ -220,3 +220,16 @@ func TestCodeReadAsTheModelItFits(t *testing.T) {
 		})
 	}
 }
+
+// A typo read as a product type the shop carries none of, in a query
+// that names no other product type, is answered with that type rather
+// than dropped: "memory foam matress queen" in a shop of queen quilts
+// and no mattresses is told the shop carries no mattresses, not shown
+// quilts (mattress is one edit from matress). The shop is invented.
+func TestTypoOfATypeNotCarried(t *testing.T) {
+	shop := []product{{ID: "QT-1", Type: "quilt", Sizes: []string{"queen"}}}
+	o := mustRescue(t, shop, "memory foam matress queen")
+	if want := "The shop carries no mattresses."; !strings.HasSuffix(o.Message, want) || o.Count != 0 {
+		t.Errorf("message %q, %d found; want it to end %q and nothing found\n%s", o.Message, o.Count, want, o.Explanation)
+	}
+}

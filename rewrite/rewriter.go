@@ -686,6 +686,11 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 	p.n = -1
 	out := s.out
 	defer func() { out.Corrected = "" }() // set for the steps' labels only
+	// The first reading whose product type the shop does not carry at
+	// all, kept for the answer when no reading is kept and the query as
+	// typed names no product type: "memory foam matress queen" in a shop
+	// of no mattresses is told so, not shown quilts in queen size.
+	var uncarried picked
 	for _, rd := range rds {
 		out.Corrected = rd.corrected
 		fixed := &search{rw: s.rw, ctx: s.ctx, out: out, seen: s.seen, budget: s.budget, fix: &rd.fix, items: s.rw.exactItems(rd.parsed), failed: s.failed}
@@ -720,6 +725,9 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 				return picked{}, err
 			}
 			if !ok {
+				if uncarried.search == nil && !rd.found && fixed.typeUncarried() {
+					uncarried = picked{search: fixed, reading: rd, exact: exact, n: 0}
+				}
 				continue
 			}
 		}
@@ -730,10 +738,25 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 			break
 		}
 	}
+	if p.search == nil && uncarried.search != nil && headIndex(typed) < 0 {
+		p = uncarried
+	}
 	if p.search != nil {
 		p.search.budget = s.budget
 	}
 	return p, nil
+}
+
+// typeUncarried reports whether s, a reading, has a head product type
+// the catalog carries none of, as bornOut counted it.
+func (s *search) typeUncarried() bool {
+	for _, it := range s.items {
+		if it.c.IsHead() {
+			n, ok := s.seen[Plan{Clauses: []Clause{*it.levels[0].clause}}.Key()]
+			return ok && n == 0
+		}
+	}
+	return false
 }
 
 // hardFinds reports whether the hard constraints and the head product
