@@ -250,6 +250,9 @@ func (p *tagger) point(k int, q quantity) int {
 	if n, ok := p.monthsSize(k, single{parts: []quantity{q}}, single{}); ok {
 		return n
 	}
+	if n, ok := p.apparelFraction(k, q); ok {
+		return n
+	}
 	// "60 watt equivalent": an LED's brightness, as the incandescent bulb
 	// of that power gives it (common practice), not the power it draws;
 	// a power asked for would find no LED bulb at all.
@@ -419,6 +422,55 @@ func (p *tagger) waistInseam(k int, q quantity) int {
 	p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: sys, Value: q.num.decimal},
 		Evidence: sys + " on " + p.head.Name})
 	return 0
+}
+
+// fractionStyles are the styles clothes name by a fraction and a word
+// (common practice): "1/2 zip" is a half zip, "3/4 sleeve" three quarter
+// sleeves.
+var fractionStyles = map[string]string{"1/2 zip": "half zip", "1/4 zip": "quarter zip", "3/4 sleeve": "three quarter sleeve",
+	"3/4 sleeves": "three quarter sleeve", "3/4 length": "cropped", "7/8 length": "cropped"}
+
+// apparelFraction reads a fraction on clothes, which is never a size of
+// less than one: a style with the word after it ("1/2 zip", "3/4
+// sleeve"), a pair of sizes ("32/34" on jeans is the waist by the
+// inseam; "34/35" on a shirt its sleeve), or a shirt's neck and sleeve
+// ("16 34/35"). It returns the extra units used, and whether it read one.
+func (p *tagger) apparelFraction(k int, q quantity) (int, bool) {
+	u := &p.units[k]
+	if !p.apparel() || q.hasUnit || !q.num.fraction || u.item.Value == nil || u.item.Value.From.Dims == nil {
+		return 0, false
+	}
+	n := u.item.Value.From.Dims.Parts[0].Num
+	f := n.Only
+	if f == nil {
+		f = n.Frac
+	}
+	if f == nil || f.Vulgar != "" {
+		return 0, false
+	}
+	if w, _ := p.nextWord(k); w != nil && n.Only != nil {
+		if style, ok := fractionStyles[f.Num+"/"+f.Den+" "+w.text]; ok {
+			p.add(Constraint{Kind: KindSilhouette, Start: u.start, End: w.end, Name: style, Evidence: "a fraction and a word that name a style"})
+			return 1, true
+		}
+	}
+	a, err1 := strconv.Atoi(f.Num)
+	b, err2 := strconv.Atoi(f.Den)
+	if err1 != nil || err2 != nil || a < 10 || b < 10 {
+		return 0, false
+	}
+	size := &Size{System: "numeric", Value: f.Num + "/" + f.Den}
+	evidence := "two sizes written as a fraction, not a size below one"
+	switch {
+	case n.Only != nil && p.isTrousers():
+		size = &Size{System: "waist_inseam", Value: f.Num + "x" + f.Den}
+		evidence = "waist over inseam on " + p.head.Name
+	case n.Only == nil:
+		size.Value = n.Whole + " " + size.Value
+		evidence = "a neck size and a sleeve, as shirts are sized"
+	}
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: size, Evidence: evidence})
+	return 0, true
 }
 
 // trouserWords name a trouser size's two measures, spelt: the waist and
