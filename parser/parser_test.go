@@ -397,6 +397,8 @@ var parseCases = []parseCase{
 		want: []tagged{tg(KindSize, "petite", "petite (fit)"), tg(KindProductType, "jeans", "jeans")}},
 	{name: "waist by inseam", query: "jeans 32x30", category: "apparel", reason: "WxL on jeans is waist by inseam (common practice)",
 		want: []tagged{tg(KindProductType, "jeans", "jeans"), tg(KindSize, "32x30", "32x30 (waist_inseam)")}},
+	{name: "a child's size after size", query: "kids shoes size 13c", category: "footwear", reason: "13c is a child's size 13 (common practice), as it is read bare; the c was a stray letter",
+		want: []tagged{tg(KindAudience, "kids", "kids"), tg(KindProductType, "shoes", "shoe"), tg(KindSize, "size 13c", "13c (numeric)")}},
 	{name: "waist over inseam", query: "jeans 32/34", category: "apparel", reason: "32/34 on jeans is the waist over the inseam (common practice), not a size of 0.94",
 		want: []tagged{tg(KindProductType, "jeans", "jeans"), tg(KindSize, "32/34", "32x34 (waist_inseam)")}},
 	{name: "neck and sleeve", query: "dress shirt 16 34/35", category: "apparel", reason: "dress shirts are sized by neck and sleeve, 16 34/35 (common practice), not a size of 16.97",

@@ -256,6 +256,11 @@ func (p *tagger) unitAlone(k int) bool {
 	return true
 }
 
+// childLetters are the letters children's sizes take after the number
+// (common practice): toddler (4t), youth (10y), child (12c) and kids
+// (3k).
+var childLetters = map[string]bool{"t": true, "y": true, "c": true, "k": true}
+
 // formWords name the form a product comes in, after the product ("a 4x8
 // sheet of plywood"), though alone they are a product type of their own
 // (a bed sheet).
@@ -842,6 +847,15 @@ func (p *tagger) sizeAfter(k int) int {
 		c.Size = s
 	default:
 		return 0
+	}
+	// A child's or toddler's size letter stuck to the number: "size 13c",
+	// "size 4t", as the number read bare takes it.
+	if k+2 < len(p.units) && p.units[k+2].kind == uWord && !p.units[k+2].spaceBefore && childLetters[p.units[k+2].text] &&
+		p.apparel() && (c.Size.System == "numeric" || c.Size.System == "shoe") && !strings.ContainsAny(c.Size.Value, ".x/ ") {
+		c.Size.System, c.Size.Value = "numeric", c.Size.Value+p.units[k+2].text
+		c.End = p.units[k+2].end
+		p.add(c)
+		return used + 1
 	}
 	// A shoe width may follow: "size 9.5 wide".
 	if k+2 < len(p.units) && p.units[k+2].kind == uWord {

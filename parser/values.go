@@ -289,7 +289,7 @@ func (p *tagger) point(k int, q quantity) int {
 			return 1
 		}
 		// Toddler, youth and child sizes: "4t", "10y", "12c".
-		if p.apparel() && (w.text == "t" || w.text == "y" || w.text == "c" || w.text == "k") {
+		if p.apparel() && childLetters[w.text] {
 			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "numeric", Value: q.num.decimal + w.text},
 				Evidence: "number with a size letter"})
 			return 1
