@@ -602,7 +602,7 @@ func (p *tagger) wordUnit(k int) int {
 	if n := p.connectorAt(k); n >= 0 {
 		return n
 	}
-	if n := p.spelledWaistInseam(k); n >= 0 {
+	if n := p.spelledSize(k); n >= 0 {
 		return n
 	}
 	if n, ok := p.vesaPattern(k+1, k, u.start); ok {

@@ -348,7 +348,7 @@ func (p *tagger) point(k int, q quantity) int {
 	if q.hasUnit && p.isTrousers() && (q.unit.Symbol == "w" || q.unit.Symbol == "l") && q.num.integer {
 		return p.waistInseam(k, q)
 	}
-	if n := p.spelledWaistInseam(k); n >= 0 {
+	if n := p.spelledSize(k); n >= 0 {
 		return n
 	}
 	// "7 in 1", "4 in 1": a count of functions, not inches.
@@ -477,15 +477,43 @@ func (p *tagger) apparelFraction(k int, q quantity) (int, bool) {
 // the inseam, which shops also call the length or the leg.
 var trouserWords = map[string]string{"waist": "waist", "length": "inseam", "inseam": "inseam", "leg": "inseam", "long": "inseam"}
 
-// spelledWaistInseam reads a trouser size spelt out on trousers, the
-// number before its word or after it: "30 waist 32 length", "waist 30
-// inseam 32", "32 waist" alone. Both give the waist by inseam, as
-// "30x32" does; one alone is that measure. k is the unit of the first
-// number or word. It returns the extra units used, or -1.
-func (p *tagger) spelledWaistInseam(k int) int {
-	if !p.isTrousers() {
-		return -1
+// spelledGarments are the sizes of two measures that shoppers spell out,
+// by the garment they size: a trouser's waist and inseam (which shops
+// also call the length or the leg), a shirt's neck and sleeve. Each
+// names the words of its measures, the first measure's name, and how
+// the two are written together.
+var spelledGarments = []struct {
+	on    func(p *tagger) bool
+	words map[string]string
+	first string
+	pair  func(first, second string) *Size
+	noun  string
+}{
+	{func(p *tagger) bool { return p.isTrousers() }, trouserWords, "waist",
+		func(a, b string) *Size { return &Size{System: "waist_inseam", Value: a + "x" + b} }, "waist and inseam"},
+	{func(p *tagger) bool { return p.headUnder("shirt") }, map[string]string{"neck": "neck", "collar": "neck", "sleeve": "sleeve"}, "neck",
+		func(a, b string) *Size { return &Size{System: "numeric", Value: a + " " + b} }, "neck and sleeve"},
+}
+
+// spelledSize reads a two-measure size spelt out, the number
+// before its word or after it: "30 waist 32 length" and "waist 30 inseam
+// 32" on trousers, "neck 16 sleeve 34" on a shirt; one alone ("32
+// waist") is that measure. Both give the size as its garment writes it,
+// 30x32, "16 34". k is the unit of the first number or word. It returns
+// the extra units used, or -1.
+func (p *tagger) spelledSize(k int) int {
+	for _, g := range spelledGarments {
+		if g.on(p) {
+			return p.spelledPair(k, g.words, g.first, g.pair, g.noun)
+		}
 	}
+	return -1
+}
+
+// spelledPair is spelledSize for one garment: its measures' words, the
+// first measure's name, how the two are written together, and the noun
+// for the evidence.
+func (p *tagger) spelledPair(k int, words map[string]string, first string, pair func(a, b string) *Size, noun string) int {
 	// one reads a number and its word at i, in either order.
 	one := func(i int) (string, string, int, bool) {
 		if i+1 >= len(p.units) {
@@ -496,22 +524,25 @@ func (p *tagger) spelledWaistInseam(k int) int {
 		if a.kind == uWord {
 			num, word = b, a
 		}
-		if word.kind != uWord || word.entries != nil || trouserWords[word.text] == "" || num.kind != uItem || !p.bareOrUnit(num, "") {
+		if word.kind != uWord || word.entries != nil || words[word.text] == "" || num.kind != uItem {
 			return "", "", 0, false
 		}
-		return trouserWords[word.text], num.item.Value.From.Dims.Parts[0].Num.Whole, p.units[i+1].end, true
+		ns := p.bareParts(num)
+		if len(ns) != 1 || ns[0].fraction {
+			return "", "", 0, false
+		}
+		return words[word.text], ns[0].decimal, p.units[i+1].end, true
 	}
 	what, n, end, ok := one(k)
 	if !ok {
 		return -1
 	}
 	if what2, n2, end2, ok := one(k + 2); ok && what2 != what {
-		waist, inseam := n, n2
-		if what == "inseam" {
-			waist, inseam = n2, n
+		if what != first {
+			n, n2 = n2, n
 		}
-		p.add(Constraint{Kind: KindSize, Start: p.units[k].start, End: end2, Size: &Size{System: "waist_inseam", Value: waist + "x" + inseam},
-			Evidence: "waist and inseam spelt out on " + p.head.Name})
+		p.add(Constraint{Kind: KindSize, Start: p.units[k].start, End: end2, Size: pair(n, n2),
+			Evidence: noun + " spelt out on " + p.head.Name})
 		return 3
 	}
 	p.add(Constraint{Kind: KindSize, Start: p.units[k].start, End: end, Size: &Size{System: what, Value: n},
