@@ -195,3 +195,11 @@ func ExampleDidYouMean() {
 	// unknown command "serch"; did you mean "search"?
 	// unknown command "zzz"
 }
+
+func ExampleNearWords_VowelSlips() {
+	// "sandles" is one edit from "candles" but only its vowels are
+	// wrong for "sandals".
+	nw := lexicon.NewNearWords([]string{"candles", "sandals"})
+	fmt.Println(nw.VowelSlips("sandles"))
+	// Output: [1]
+}

@@ -2,6 +2,7 @@ package lexicon
 
 import (
 	"slices"
+	"strings"
 	"unicode/utf8"
 )
 
@@ -19,16 +20,20 @@ import (
 //
 // A NearWords is safe for concurrent use once made.
 type NearWords struct {
-	words    []string
-	byDel    map[string][]int32
-	byLength map[int][]int32
+	words        []string
+	byDel        map[string][]int32
+	byLength     map[int][]int32
+	byConsonants map[string][]int32
 }
 
 // NewNearWords indexes words; it takes a few milliseconds for a
 // thousand words.
 func NewNearWords(words []string) *NearWords {
-	n := &NearWords{words: words, byDel: make(map[string][]int32, 8*len(words)), byLength: make(map[int][]int32)}
+	n := &NearWords{words: words, byDel: make(map[string][]int32, 8*len(words)), byLength: make(map[int][]int32),
+		byConsonants: make(map[string][]int32, len(words))}
 	for i, w := range words {
+		k := consonants(w)
+		n.byConsonants[k] = append(n.byConsonants[k], int32(i))
 		for _, d := range deletions(w) {
 			n.byDel[d] = append(n.byDel[d], int32(i))
 		}
@@ -75,6 +80,47 @@ func (n *NearWords) AllNearest(w string, limit int) ([]int, int) {
 	})
 	slices.Sort(all)
 	return slices.Compact(all), bestD
+}
+
+// VowelSlips returns the indexes, in the list's order, of the words
+// that differ from w only in their vowels (a, e, i, o and u put in, left
+// out or put for another), that begin with w's letter and are within two
+// edits of it: "sandles" slips to "sandals", two edits away, and not to
+// "candles", one away. Getting a vowel wrong is the commonest way a word
+// is misspelt, and the first letter the least often wrong (common
+// knowledge of spelling correction), so a slip is a likelier reading
+// than a word as near or nearer that changes a consonant. It returns nil
+// for w of fewer than three consonants, which too many words share.
+func (n *NearWords) VowelSlips(w string) []int {
+	k := consonants(w)
+	first, _ := utf8.DecodeRuneInString(w)
+	if utf8.RuneCountInString(k) < 3 {
+		return nil
+	}
+	var out []int
+	for _, j := range n.byConsonants[k] {
+		c := n.words[j]
+		if f, _ := utf8.DecodeRuneInString(c); f != first || c == w {
+			continue
+		}
+		if EditDistanceWithin(w, c, 2) <= 2 {
+			out = append(out, int(j))
+		}
+	}
+	return out
+}
+
+// consonants is w less its vowels a, e, i, o and u, in either case.
+func consonants(w string) string {
+	var b strings.Builder
+	for _, r := range w {
+		switch r {
+		case 'a', 'e', 'i', 'o', 'u', 'A', 'E', 'I', 'O', 'U':
+			continue
+		}
+		b.WriteRune(r)
+	}
+	return b.String()
 }
 
 // candidates calls f with the index of every word that may be within

@@ -9,6 +9,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"unicode/utf8"
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
@@ -368,14 +369,14 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 	return out
 }
 
-// replaceTypo reads an unknown word as the lexicon word it is one or two
-// edits from: distance 1 for words of 4 to 7 letters, 2 for longer ones;
-// never for numbers or codes.
+// replaceTypo reads an unknown word as the likeliest word nearestWords
+// gives; never for numbers or codes.
 func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint) (*Clause, string, error) {
-	best, err := rw.nearestWord(ctx, c.Name)
-	if best == nil {
+	near, err := rw.nearestWords(ctx, c.Name)
+	if len(near) == 0 {
 		return nil, "", err
 	}
+	best := near[0]
 	name := best.word
 	if best.entry != nil {
 		name = best.entry.Name
@@ -385,29 +386,14 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 	return &cl, name, nil
 }
 
-// nearestWord is the vocabulary word an unknown word w is a typo of: the
-// first, in the vocabulary's order, of the least edit distance, within 1
-// for words of 4 to 7 letters and 2 for longer ones; nil for shorter
+// nearestWords are the vocabulary words an unknown word w may be a typo
+// of, likeliest first: for words of 5 letters or more, those that
+// differ from it only in vowels, within two edits ("sandles" for
+// sandals), then those of the least edit
+// distance, within 1 for words of 4 to 7 letters and 2 for longer ones
+// ("candles"), each in the vocabulary's order. It is nil for shorter
 // words, numbers and codes, or when no word is that near.
 // An error is the engine's, reading the catalog's words.
-func (rw *Rewriter) nearestWord(ctx context.Context, w string) (*wordEntry, error) {
-	limit, ok := typoLimit(w)
-	if !ok {
-		return nil, nil
-	}
-	words, near, err := rw.words(ctx)
-	if err != nil {
-		return nil, err
-	}
-	j, _ := near.Nearest(w, limit)
-	if j < 0 {
-		return nil, nil
-	}
-	return &words[j], nil
-}
-
-// nearestWords are all the vocabulary words of the least edit distance
-// from w, in the vocabulary's order, within nearestWord's limits.
 func (rw *Rewriter) nearestWords(ctx context.Context, w string) ([]*wordEntry, error) {
 	limit, ok := typoLimit(w)
 	if !ok {
@@ -417,10 +403,16 @@ func (rw *Rewriter) nearestWords(ctx context.Context, w string) ([]*wordEntry, e
 	if err != nil {
 		return nil, err
 	}
+	var slips []int
+	if utf8.RuneCountInString(w) >= 5 {
+		slips = near.VowelSlips(w)
+	}
 	all, _ := near.AllNearest(w, limit)
-	out := make([]*wordEntry, len(all))
-	for i, j := range all {
-		out[i] = &words[j]
+	var out []*wordEntry
+	for _, j := range slices.Concat(slips, all) {
+		if !slices.ContainsFunc(out, func(e *wordEntry) bool { return e == &words[j] }) {
+			out = append(out, &words[j])
+		}
 	}
 	return out, nil
 }

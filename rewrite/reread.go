@@ -189,9 +189,10 @@ func headIndex(r *parser.Result) int {
 
 // keepsHard reports whether every constraint hard in was is hard in now,
 // at the same span, of the same kind and value and with the same
-// exclusion: reading a query again never loosens or changes what was
-// never to be relaxed ("m8 blot" read as "m8 boot" would make the thread
-// M8 a part number; as "m8 bolt" it stays the thread).
+// exclusion, or is a size given its system (sizeSystemFound): reading a
+// query again never loosens or changes what was never to be relaxed
+// ("m8 blot" read as "m8 boot" would make the thread M8 a part number;
+// as "m8 bolt" it stays the thread).
 func keepsHard(was, now *parser.Result) bool {
 	for _, c := range was.Constraints {
 		if c.Strictness < parser.Hard {
@@ -199,12 +200,21 @@ func keepsHard(was, now *parser.Result) bool {
 		}
 		if !slices.ContainsFunc(now.Constraints, func(d parser.Constraint) bool {
 			return d.Start == c.Start && d.End == c.End && d.Excluded == c.Excluded && d.Strictness == parser.Hard &&
-				d.Kind == c.Kind && d.Value() == c.Value()
+				d.Kind == c.Kind && (d.Value() == c.Value() || sizeSystemFound(c, d))
 		}) {
 			return false
 		}
 	}
 	return true
+}
+
+// sizeSystemFound reports whether now is size was, a number read with
+// no system ("size 8" in a query of no category), read in the system
+// the fixed product type gives it: "sandles womens size 8" read as
+// sandals makes the 8 a shoe size, the same size of the same product.
+func sizeSystemFound(was, now parser.Constraint) bool {
+	return was.Size != nil && now.Size != nil && was.Size.System == "numeric" && now.Size.System != "numeric" &&
+		was.Size.Value == now.Size.Value && was.Size.Width == now.Size.Width
 }
 
 // fixSpan is a word of the raw query, [start, end), replaced by n bytes

@@ -158,8 +158,8 @@ func TestRereadSteps(t *testing.T) {
 // Levenshtein), and the boot comes first in the vocabulary; a shop of
 // bolts and no boots is searched for bolts. A reading of which the shop
 // carries nothing, not even the product type with the hard constraints,
-// is not used at all: "sandles" is one edit from candles, but "womens
-// leather sandles" is no query about candles. The shops are invented.
+// is not used at all: "cantles" is one edit from candles, but "womens
+// leather cantles" is no query about candles. The shops are invented.
 func TestRereadBorneOutByTheCatalog(t *testing.T) {
 	bolts := []product{{ID: "HB-1", Type: "hex bolt", Specs: map[string]string{"metric_thread": "m8x1.25"}}}
 	o := mustRescue(t, bolts, "blot")
@@ -170,9 +170,39 @@ func TestRereadBorneOutByTheCatalog(t *testing.T) {
 		{ID: "CN-1", Type: "candle", Colour: "ivory", Hex: "#fffff0"},
 		{ID: "SN-1", Type: "sandal", Audience: "women", Material: "leather", Sizes: []string{"7"}},
 	}
-	o = mustRescue(t, shop, "womens leather sandles")
+	o = mustRescue(t, shop, "womens leather cantles")
 	if o.Corrected != "" || o.Count == 0 {
-		t.Errorf("womens leather sandles: corrected %q, count %d; want no reading as candles and some results\n%s", o.Corrected, o.Count, o.Explanation)
+		t.Errorf("womens leather cantles: corrected %q, count %d; want no reading as candles and some results\n%s", o.Corrected, o.Count, o.Explanation)
+	}
+}
+
+// A misspelling that gets only vowels wrong is read as the word it slips
+// from before a word as near or nearer that changes a consonant:
+// "sandles" is one edit from candles and two from sandals, and a shopper
+// who types it wants sandals (a common misspelling; that vowels are the
+// letters most often wrong is common knowledge of spelling correction).
+// Read as sandals, a bare "size 7" becomes a shoe size, the same hard
+// size. The shop is invented: SN-1 is a women's sandal in 7 and 8.
+func TestRereadVowelSlip(t *testing.T) {
+	shop := []product{
+		{ID: "CN-1", Type: "candle", Colour: "ivory", Hex: "#fffff0"},
+		{ID: "CN-2", Type: "candle", Colour: "red", Hex: "#ff0000"},
+		{ID: "SN-1", Type: "sandal", Audience: "women", Material: "leather", Sizes: []string{"7", "8"}},
+		{ID: "BT-1", Type: "boot", Audience: "women", Material: "leather", Sizes: []string{"7"}},
+	}
+	for _, tc := range []struct {
+		query, corrected, reason string
+		ids                      []string
+	}{
+		{"sandles", "sandals", "candles are one edit away and carried, but the slip is read first and found", []string{"SN-1"}},
+		{"womens leather sandles", "womens leather sandals", "the audience and material are the sandal's", []string{"SN-1"}},
+		{"sandles womens size 7", "sandals womens size 7", "size 7, read with no category as a plain number, is the sandal's shoe size; BT-1 is a boot", []string{"SN-1"}},
+	} {
+		o := mustRescue(t, shop, tc.query)
+		got := hitIDs(t, &memEngine{products: shop}, o.Plan)
+		if o.Corrected != tc.corrected || !slices.Equal(got, tc.ids) {
+			t.Errorf("%q: corrected %q, hits %v; want %q, %v (%s)\n%s", tc.query, o.Corrected, got, tc.corrected, tc.ids, tc.reason, o.Explanation)
+		}
 	}
 }
 

@@ -171,7 +171,7 @@ func (rw *Rewriter) words(ctx context.Context) ([]wordEntry, *lexicon.NearWords,
 				if !strings.ContainsAny(w, " -") && len(w) >= 4 {
 					vocab = append(vocab, wordEntry{word: w, entry: e, kind: kindOfEntry(e), typeWord: k == lexicon.ProductType})
 					// Shoppers type product types in the plural, so a typo
-					// of one is nearest the plural: "sandles" is one edit
+					// of one is nearest the plural: "sandels" is one edit
 					// from sandals, two from sandal.
 					if pl := plural(w); k == lexicon.ProductType && pl != w {
 						vocab = append(vocab, wordEntry{word: pl, entry: e, kind: kindOfEntry(e), typeWord: true})
@@ -676,7 +676,7 @@ type picked struct {
 // pickReading counts each reading's query as typed, in order of
 // preference, and keeps the first that finds enough, else the one that
 // finds most. A reading that finds nothing is kept only when the catalog
-// bears it out (bornOut): "leather sandles womens 7" read as candles is
+// bears it out (bornOut): "leather cantles womens 7" read as candles is
 // dropped, since no candle has an audience; "extenssion cord 12 awg"
 // read as an extension cord is kept, since cords have a gauge, if not
 // that one, and the answer is that it is not carried. What the readings
