@@ -590,6 +590,9 @@ func (p *tagger) setNeg(start, end int, text string) {
 // wordUnit tags a word unit and returns how many extra units it used.
 func (p *tagger) wordUnit(k int) int {
 	u := &p.units[k]
+	if n := p.lightColour(k); n >= 0 {
+		return n
+	}
 	if n := p.modifiedColour(k); n > 0 {
 		return n
 	}

@@ -383,6 +383,18 @@ func (p *tagger) point(k int, q quantity) int {
 			Evidence: "gold's purity in karats, matched in the product's words"})
 		return 1
 	}
+	// A lamp's colour temperature: "2700k", "5000 k". Lamps are sold
+	// from about 1800 K to 6500 K (common practice), so a number of 1000
+	// to 10000 before a k is kelvin, on a product that has a colour
+	// temperature or with no product type; "4k" and "14k" are not.
+	if w != nil && w.text == "k" && !q.hasUnit && q.num.integer && q.num.value >= 1000 && q.num.value <= 10000 && p.lit() {
+		kelvin := mustUnit("kelvin")
+		q.unit, q.hasUnit = kelvin, true
+		c := p.measure(u.start, w.end, q, "", nil, nil, kelvin)
+		c.Evidence = "k after a number of 1000 to 10000: a colour temperature in kelvin"
+		p.add(c)
+		return 1
+	}
 	// A number stuck to a word that is no unit: "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
 		name := strings.ToLower(p.q[u.start:w.end])
@@ -406,6 +418,57 @@ func (p *tagger) point(k int, q quantity) int {
 	}
 	p.bare(u.start, u.end, q)
 	return 0
+}
+
+// lit reports whether the query's product gives light, with a colour
+// temperature slot, or the query names no product type.
+func (p *tagger) lit() bool {
+	if p.head == nil {
+		return true
+	}
+	_, ok := p.slotFor(units.ColourTemperature, 0)
+	return ok
+}
+
+// lightColours are the names lamps' whites are sold under, as ranges of
+// colour temperature in kelvin: soft and warm white 2700 to 3000 K,
+// bright and cool white 3500 to 4100 K, daylight 5000 to 6500 K (common
+// practice in the trade's packaging, from memory; the nominal values
+// 2700, 3000, 3500, 4000, 5000 and 6500 K are those of ANSI C78.377,
+// also from memory).
+var lightColours = map[string][2]float64{
+	"soft white": {2700, 3000}, "warm white": {2700, 3000}, "bright white": {3500, 4100},
+	"cool white": {3500, 4100}, "daylight": {5000, 6500},
+}
+
+// lightColour reads a white a lamp is sold under ("warm white",
+// "daylight") as the range of colour temperature it names, on a product
+// with a colour temperature slot; elsewhere "soft white" is a colour.
+// It returns the extra units used, or -1.
+func (p *tagger) lightColour(k int) int {
+	if p.head == nil || !p.lit() {
+		return -1
+	}
+	u := &p.units[k]
+	for n := 1; n >= 0; n-- {
+		if k+n >= len(p.units) || p.units[k+n].kind != uWord {
+			continue
+		}
+		name := u.text
+		if n == 1 {
+			name += " " + p.units[k+1].text
+		}
+		r, ok := lightColours[name]
+		if !ok {
+			continue
+		}
+		kelvin := mustUnit("kelvin")
+		c := p.measure(u.start, p.units[k+n].end, quantity{}, "", &r[0], &r[1], kelvin)
+		c.Evidence = fmt.Sprintf("%q on a lamp: a colour temperature of %g to %g K", name, r[0], r[1])
+		p.add(c)
+		return n
+	}
+	return -1
 }
 
 // waistInseam reads "32w 30l" (or "32w" or "30l" alone) on trousers.

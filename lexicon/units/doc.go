@@ -1,7 +1,7 @@
 // Package units knows the units of measure that shoppers type in queries:
 // lengths, masses, volumes (cubic inches, feet and yards among them),
-// power, voltage, current, battery charge, data sizes, time, frequency
-// and grammage (gsm).
+// power, voltage, current, battery charge, data sizes, time, frequency,
+// grammage (gsm) and a lamp's colour temperature (kelvin).
 //
 // Every unit has a factor to the base unit of its quantity (see [Base]),
 // derived at start-up with exact rational arithmetic from the legal

@@ -26,10 +26,13 @@ const (
 	Frequency Quantity = "frequency"
 	// Grammage is mass per area, as paper and towels are sold.
 	Grammage Quantity = "grammage"
+	// ColourTemperature is the colour of a lamp's white light, in
+	// kelvin: 2700 K is warm, 5000 K daylight.
+	ColourTemperature Quantity = "colour_temperature"
 )
 
 // quantities are the quantities in a fixed order.
-var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage}
+var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage, ColourTemperature}
 
 // Quantities returns every quantity in a fixed order, in a slice of the
 // caller's own.
@@ -59,6 +62,7 @@ var written = map[string]string{
 	"imp_pt": "imp pt", "imp_qt": "imp qt", "imp_gal": "imp gal", "w": "W", "kw": "kW", "mv": "mV", "v": "V",
 	"kv": "kV", "ma": "mA", "a": "A", "mah": "mAh", "ah": "Ah", "kb": "kB", "mb": "MB", "gb": "GB", "tb": "TB",
 	"pb": "PB", "day": "d", "um": "µm", "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
+	"kelvin": "K",
 }
 
 // String returns the symbol as it is usually written: "mm", "in", "mL",
@@ -72,7 +76,7 @@ func (u Unit) String() string {
 }
 
 // Base returns the base unit symbol for q: "mm", "g", "ml", "w", "v", "a",
-// "mah", "gb", "s", "hz" or "gsm". It returns "" for an unknown quantity.
+// "mah", "gb", "s", "hz", "gsm" or "kelvin". It returns "" for an unknown quantity.
 func Base(q Quantity) string {
 	switch q {
 	case Length:
@@ -97,6 +101,8 @@ func Base(q Quantity) string {
 		return "hz"
 	case Grammage:
 		return "gsm"
+	case ColourTemperature:
+		return "kelvin"
 	}
 	return ""
 }
@@ -263,6 +269,13 @@ var defs = []def{
 	// Grammage; base gram per square metre, written gsm as the paper and
 	// textile trades write it.
 	{"gsm", "gram per square metre", Grammage, "1", "", []string{"gsm"}},
+
+	// Colour temperature; base kelvin, the SI unit of thermodynamic
+	// temperature, in which lamps are sold, written K. Its key is its
+	// name, as K alone is no spelling here: shoppers write "4k" for a
+	// screen's resolution and "14k" for gold, and the parser reads
+	// "2700k" itself.
+	{"kelvin", "kelvin", ColourTemperature, "1", "", []string{"kelvins"}},
 }
 
 // splitVolume lists the spellings whose meaning depends on the

@@ -119,6 +119,7 @@ var derivedFactors = []struct {
 	{"yd3", 764554.857984, "cubic yard = (914.4 mm)³, from the yard row of unit_conversions.tsv (0.9144 m, exact)"},
 	{"hz", 1, "base unit of frequency"},
 	{"gsm", 1, "base unit of grammage, g/m²"},
+	{"kelvin", 1, "base unit of colour temperature, the kelvin (SI Brochure)"},
 	{"khz", 1e3, "SI Brochure, prefix kilo"},
 	{"mhz", 1e6, "SI Brochure, prefix mega = 1e6"},
 	{"ghz", 1e9, "SI Brochure, prefix giga = 1e9"},
@@ -181,7 +182,7 @@ var canonicalSymbols = []string{
 	"w", "kw", "v", "mv", "kv", "a", "ma", "mah", "ah",
 	"kb", "mb", "gb", "tb", "pb",
 	"s", "ms", "min", "h", "day",
-	"hz", "khz", "mhz", "ghz", "gsm",
+	"hz", "khz", "mhz", "ghz", "gsm", "kelvin",
 }
 
 // TestUnitSetIsCheckedAndComplete makes sure every unit's factor is checked

@@ -40,21 +40,30 @@ import (
 //
 // Products are drawn one after another from a single stream, so
 // Demo(m, seed) is the first m products of Demo(n, seed) for m <= n.
+// Measures added to a kind after the catalog was first drawn (a bulb's
+// colour temperature) come from a second stream, drawn only for the
+// products of such kinds, so adding one leaves every other product, and
+// every other attribute of those products, as it was.
 // n <= 0 gives an empty catalog.
 func Demo(n int, seed uint64) []Product {
 	if n <= 0 {
 		return nil
 	}
 	r := rand.New(rand.NewPCG(seed, demoStream))
+	later := rand.New(rand.NewPCG(seed, demoLaterStream))
 	out := make([]Product, n)
 	for i := range out {
-		out[i] = demoProduct(r, i+1)
+		out[i] = demoProduct(r, later, i+1)
 	}
 	return out
 }
 
-// demoStream is the second word of the PCG state; any fixed value will do.
-const demoStream = 0x486f6c6c6f776d65 // "Hollowme"
+// demoStream and demoLaterStream are the second word of the PCG state of
+// the two streams; any two fixed values will do.
+const (
+	demoStream      = 0x486f6c6c6f776d65 // "Hollowme"
+	demoLaterStream = 0x6c61746572000000 // "later"
+)
 
 // demoShopColour is one of the store's own colour names with its sRGB value.
 type demoShopColour struct {
@@ -184,10 +193,11 @@ type demoKind struct {
 	shop        bool     // takes the store's colour names
 	noColour    bool
 	groups      []demoGroup
-	specs       []string // one is chosen, smallest first
-	beds        bool     // sold in bed sizes
-	compat      []string // models it fits
-	title       int      // where the first group's values go in the title
+	later       []demoGroup // measures added later, from the second stream
+	specs       []string    // one is chosen, smallest first
+	beds        bool        // sold in bed sizes
+	compat      []string    // models it fits
+	title       int         // where the first group's values go in the title
 }
 
 // stock starts a kind: its product type and price range in cents. The
@@ -212,6 +222,18 @@ func (k *demoKind) m(dim string, values ...string) *demoKind {
 		g.opts = append(g.opts, []string{v})
 	}
 	k.groups = append(k.groups, g)
+	return k
+}
+
+// mLater adds a measure as m does, drawn from the second stream (see
+// Demo): for measures added to a kind after its products were first
+// drawn.
+func (k *demoKind) mLater(dim string, values ...string) *demoKind {
+	k.later = append(k.later, demoGroup{dims: []string{dim}})
+	g := &k.later[len(k.later)-1]
+	for _, v := range values {
+		g.opts = append(g.opts, []string{v})
+	}
 	return k
 }
 
@@ -291,8 +313,9 @@ func demoPick(r *rand.Rand, s []string) string {
 	return s[r.IntN(len(s))]
 }
 
-// demoProduct draws product number id from r.
-func demoProduct(r *rand.Rand, id int) Product {
+// demoProduct draws product number id from r, and the measures its kind
+// gained later from later.
+func demoProduct(r, later *rand.Rand, id int) Product {
 	w := r.IntN(demoDeptTotal)
 	var d *demoDept
 	for _, d = range demoDepts {
@@ -347,6 +370,16 @@ func demoProduct(r *rand.Rand, id int) Product {
 				}
 				titleMeasure += v
 			}
+		}
+	}
+	for _, g := range k.later {
+		// Not part of scale, so the price stays as it was drawn.
+		oi := later.IntN(len(g.opts))
+		for di, dim := range g.dims {
+			if p.Measures == nil {
+				p.Measures = make(map[string]string, 4)
+			}
+			p.Measures[dim] = g.opts[oi][di]
 		}
 	}
 	if len(k.specs) > 0 {

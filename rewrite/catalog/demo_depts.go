@@ -246,7 +246,10 @@ func demoElectrical() *demoDept {
 		kinds: []*demoKind{
 			stock("electrical wire", 1900, 18900).mat("copper").spec("14 awg", "12 awg", "10 awg").m("length", "25 ft", "50 ft", "100 ft", "250 ft").titled(demoTitleAfter),
 			stock("extension cord", 1200, 8900).plain("orange", "black", "yellow").spec("16 awg", "14 awg", "12 awg").m("length", "10 ft", "25 ft", "50 ft", "100 ft").titled(demoTitleBefore),
-			stock("led bulb", 300, 1200).m("power", "5 W", "9 W", "11 W", "15 W").titled(demoTitleBefore),
+			// The whites lamps are sold in (2700 K warm to 5000 K
+			// daylight; common practice).
+			stock("led bulb", 300, 1200).m("power", "5 W", "9 W", "11 W", "15 W").titled(demoTitleBefore).
+				mLater("colour_temperature", "2700 K", "3000 K", "4000 K", "5000 K"),
 			stock("smart bulb", 1200, 2900).m("power", "9 W", "10 W"),
 			stock("light switch", 300, 1500).plain("white", "ivory", "black"),
 			stock("dimmer switch", 1500, 4500).plain("white", "ivory", "black"),

@@ -3,6 +3,7 @@ package catalog
 import (
 	"fmt"
 	"math"
+	"math/rand/v2"
 	"regexp"
 	"slices"
 	"strconv"
@@ -40,6 +41,54 @@ func TestDemoDeterministic(t *testing.T) {
 		if got := Demo(n, 1); len(got) != 0 {
 			t.Errorf("Demo(%d, 1) has %d products, want none", n, len(got))
 		}
+	}
+}
+
+// The measures a kind gained later come from their own stream: drawn
+// from another, they change, and nothing else does, neither the other
+// products nor the other attributes of those that have them. So adding
+// one to the demo leaves the rest of the catalog, and every figure made
+// from it, as it was.
+func TestDemoLaterStream(t *testing.T) {
+	later := map[string]bool{}
+	for _, d := range demoDepts {
+		for _, k := range d.kinds {
+			for _, g := range k.later {
+				for _, dim := range g.dims {
+					later[dim] = true
+				}
+			}
+		}
+	}
+	if len(later) == 0 {
+		t.Fatal("no kind has a measure added later")
+	}
+	strip := func(ps []Product) []Product {
+		for i := range ps {
+			for dim := range later {
+				delete(ps[i].Measures, dim)
+			}
+		}
+		return ps
+	}
+	draw := func(laterSeed uint64) []Product {
+		r := rand.New(rand.NewPCG(7, demoStream))
+		l := rand.New(rand.NewPCG(laterSeed, demoLaterStream))
+		out := make([]Product, 2000)
+		for i := range out {
+			out[i] = demoProduct(r, l, i+1)
+		}
+		return out
+	}
+	a, b := draw(7), draw(99)
+	if diff := cmp.Diff(a, Demo(2000, 7)); diff != "" {
+		t.Fatalf("draw(7) is not Demo(2000, 7):\n%s", diff)
+	}
+	if cmp.Equal(a, b) {
+		t.Fatal("another later stream draws the same later measures; the test shows nothing")
+	}
+	if diff := cmp.Diff(strip(a), strip(b)); diff != "" {
+		t.Errorf("the later stream changed more than the later measures:\n%s", diff)
 	}
 }
 
@@ -286,11 +335,14 @@ func TestDemoMeasures(t *testing.T) {
 				t.Errorf("%s: %s %q has no unit", p.ID, dim, s)
 				continue
 			}
-			u, ok := units.Lookup(m.Unit, units.USCustomary)
-			if !ok {
+			// m.Unit is the unit as written ("W", "K"): find it so.
+			all := units.Units()
+			j := slices.IndexFunc(all, func(u units.Unit) bool { return u.String() == m.Unit })
+			if j < 0 {
 				t.Errorf("%s: %s %q: unit %q unknown", p.ID, dim, s, m.Unit)
 				continue
 			}
+			u := all[j]
 			var amounts []float64
 			switch {
 			case m.Amount != nil:
