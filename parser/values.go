@@ -160,6 +160,9 @@ func (p *tagger) value(k int) int {
 	if n, ok := p.vesaPattern(k, k+1, u.start); ok {
 		return n // "400x400 vesa"
 	}
+	if p.halfNeck(k) {
+		return 0
+	}
 	from, ok := p.readSingle(v.From)
 	if !ok {
 		return 0
@@ -534,6 +537,37 @@ func (p *tagger) apparelFraction(k int, q quantity) (int, bool) {
 	}
 	p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: size, Evidence: evidence})
 	return 0, true
+}
+
+// halfNeck reads a shirt's neck in half inches and its sleeve, "15.5
+// 34/35", on clothes: the grammar takes it for a mixed number with a
+// decimal whole, an error anywhere else ("2.5 1/2 in"). Necks run from
+// 13 to 20 inches in halves and sleeves are two-figure inches (common
+// practice). It reports whether it read one.
+func (p *tagger) halfNeck(k int) bool {
+	u := &p.units[k]
+	v := u.item.Value
+	if !p.apparel() || v.To != nil || v.From.Dims == nil || len(v.From.Dims.Parts) != 1 {
+		return false
+	}
+	q := v.From.Dims.Parts[0]
+	n := q.Num
+	if q.Mark != "" || q.Unit != "" || q.Currency != "" || q.Label != "" || n.Frac == nil || n.Frac.Vulgar != "" {
+		return false
+	}
+	whole, half, ok := strings.Cut(n.Whole, ".")
+	neck, err := strconv.Atoi(whole)
+	if !ok || half != "5" || err != nil || neck < 13 || neck > 20 {
+		return false
+	}
+	a, err1 := strconv.Atoi(n.Frac.Num)
+	b, err2 := strconv.Atoi(n.Frac.Den)
+	if err1 != nil || err2 != nil || a < 10 || a > 99 || b < 10 || b > 99 {
+		return false
+	}
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: u.end, Size: &Size{System: "numeric", Value: n.Whole + " " + n.Frac.Num + "/" + n.Frac.Den},
+		Evidence: "a neck size in half inches and a sleeve, as shirts are sized"})
+	return true
 }
 
 // trouserWords name a trouser size's two measures, spelt: the waist and
