@@ -91,7 +91,7 @@ type Size struct {
 // wire gauge, a screw thread, a paper size or a battery size.
 type Spec struct {
 	// System is one of: lumber, tyre, awg, metric_thread, unified_thread,
-	// paper, battery.
+	// paper, battery, pipe_schedule.
 	System string
 	// Designation is the normalised code ("2x4", "225/45R17", "M8x1.25").
 	Designation string

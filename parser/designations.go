@@ -11,13 +11,18 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/spec"
+	"github.com/whittle-search/whittle/lexicon/units"
 	"github.com/whittle-search/whittle/parser/internal/grammar"
 )
 
-// specConstraint wraps a standard designation.
+// specConstraint wraps a standard designation. A designation of no
+// dimensions (a pipe schedule) has none, nil, as its JSON reads back.
 func specConstraint(start, end int, d spec.Designation, evidence string) Constraint {
 	for k, v := range d.Dimensions {
 		d.Dimensions[k] = tidy(v)
+	}
+	if len(d.Dimensions) == 0 {
+		d.Dimensions = nil
 	}
 	return Constraint{Kind: KindSpec, Start: start, End: end, Evidence: join(evidence, d.Source),
 		Spec: &Spec{System: string(d.System), Designation: d.Code, Dimensions: d.Dimensions, Attributes: d.Attributes, Standard: d.Source}}
@@ -200,6 +205,79 @@ func (p *tagger) headUnder(name string) bool {
 		}
 	}
 	return false
+}
+
+// scheduleCode matches a pipe schedule written as one code: "sch40",
+// "sch-80", "schedule40", "sch10s".
+var scheduleCode = regexp.MustCompile(`^sch(?:edule)?-?(\d+s?)$`)
+
+// piped reports whether the query's product is a pipe, a pipe fitting
+// or conduit, which are sold by schedule, or the query names no product
+// type.
+func (p *tagger) piped() bool {
+	return p.head == nil || p.headUnder("pipe") || p.headUnder("pipe fitting") || p.headUnder("conduit")
+}
+
+// scheduleAfter reads "sch 40", "sch. 80" or "schedule 40" at word unit
+// k, on a pipe (piped), as the pipe's wall schedule, hard. It returns
+// the extra units used, or 0 when there is none.
+func (p *tagger) scheduleAfter(k int) int {
+	u := &p.units[k]
+	j := k + 1
+	if j < len(p.units) && p.units[j].kind == uSym && p.units[j].tok.Value == "." && !p.units[j].spaceBefore {
+		j++
+	}
+	if j >= len(p.units) || p.units[j].kind != uItem || !p.piped() {
+		return 0
+	}
+	v := &p.units[j]
+	val := v.item.Value
+	if val == nil || val.To != nil || val.Post != "" || val.From.Dims == nil || len(val.From.Dims.Parts) != 1 {
+		return 0
+	}
+	q := val.From.Dims.Parts[0]
+	n := q.Num
+	if n.Only != nil || q.Mark != "" || q.Currency != "" || q.Label != "" {
+		return 0
+	}
+	number, end := n.Whole, v.end
+	switch {
+	case q.Unit == "s" && n.Frac == nil:
+		number += "s" // "sch 10s", read as seconds
+	case q.Unit != "" && n.Frac == nil:
+		return 0
+	case n.Frac != nil:
+		end = n.Pos.Offset + len(n.Whole) // "sch 40 1/2 in": the fraction is a size
+	}
+	d, ok := spec.PipeSchedule(number)
+	if !ok {
+		return 0
+	}
+	p.add(specConstraint(u.start, end, d, "a pipe's wall schedule"))
+	if n.Frac != nil {
+		p.fractionAfterSchedule(n.Frac, q.Unit, v.end)
+	}
+	return j - k
+}
+
+// fractionAfterSchedule tags the fraction the grammar joined to a
+// schedule number as a mixed number ("sch 40 1/2 in"), up to end: the
+// pipe's size, in its unit if one was typed.
+func (p *tagger) fractionAfterSchedule(f *grammar.Frac, unit string, end int) {
+	num, err := parseNum(&grammar.Num{Pos: f.Pos, EndPos: f.EndPos, Only: f})
+	if err != nil {
+		p.res.Errors = append(p.res.Errors, err)
+		return
+	}
+	q := quantity{num: num, start: f.Pos.Offset, end: end}
+	if unit != "" {
+		q.unit, q.hasUnit = units.Lookup(unit, p.opts.Volume)
+	}
+	if !q.hasUnit {
+		p.bare(q.start, end, q)
+		return
+	}
+	p.add(p.measure(q.start, end, q, "", nil, nil, q.unit))
 }
 
 // gradeCode matches the grades standards give products, written as one
@@ -464,6 +542,12 @@ func (p *tagger) otherCode(start int, u *unit) {
 		}
 		p.add(c)
 		return
+	}
+	if m := scheduleCode.FindStringSubmatch(raw); m != nil && p.piped() {
+		if d, ok := spec.PipeSchedule(m[1]); ok {
+			p.add(specConstraint(start, u.end, d, "a pipe's wall schedule"))
+			return
+		}
 	}
 	if gradeCode.MatchString(raw) {
 		p.add(Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: raw, Strictness: Firm,

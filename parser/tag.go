@@ -627,6 +627,10 @@ func (p *tagger) wordUnit(k int) int {
 			if n := p.codeAfter(k); n > 0 {
 				return n
 			}
+		case u.text == "sch" || u.text == "schedule":
+			if n := p.scheduleAfter(k); n > 0 {
+				return n
+			}
 		case u.text == "awg":
 			if n := p.gaugeBefore(k); n >= 0 {
 				return n

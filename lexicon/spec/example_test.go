@@ -77,3 +77,13 @@ func ExampleBatterySize() {
 	// AA 1.5 V 14.5 x 50.5 mm
 	// 9V 6LR61 26.5 x 17.5 x 48.5 mm
 }
+
+func ExamplePipeSchedule() {
+	d, ok := spec.PipeSchedule("80")
+	fmt.Println(d.Code, d.Source, ok)
+	_, ok = spec.PipeSchedule("50")
+	fmt.Println(ok)
+	// Output:
+	// SCH 80 ASME B36.10M true
+	// false
+}

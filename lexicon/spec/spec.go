@@ -14,14 +14,22 @@ const (
 	UnifiedThread System = "unified_thread"
 	Paper         System = "paper"
 	Battery       System = "battery"
+	// Schedule is the wall schedule of pipe ("SCH 40").
+	Schedule System = "pipe_schedule"
 )
+
+// Systems returns every system whittle knows, in a fixed order, in a
+// slice of the caller's own.
+func Systems() []System {
+	return []System{Lumber, Tyre, AWG, MetricThread, UnifiedThread, Paper, Battery, Schedule}
+}
 
 // Designation is one standard size.
 type Designation struct {
 	// System is the family the designation belongs to.
 	System System
 	// Code is the normalised designation: "2x4", "225/45R17", "14 AWG",
-	// "14/2 AWG", "M8x1.25", "1/4-20 UNC", "A4", "AA", "CR2032".
+	// "14/2 AWG", "M8x1.25", "1/4-20 UNC", "A4", "AA", "CR2032", "SCH 40".
 	Code string
 	// Dimensions holds physical sizes in millimetres. The keys depend on
 	// the system and are listed with each function.
@@ -31,7 +39,7 @@ type Designation struct {
 	Attributes map[string]string
 	// Source names the standard the designation comes from: "PS 20",
 	// "ISO 4000-1", "ASTM B258", "ISO 261", "ASME B1.1", "ISO 216",
-	// "IEC 60086".
+	// "IEC 60086", "ASME B36.10M".
 	Source string
 }
 

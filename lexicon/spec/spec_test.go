@@ -411,3 +411,30 @@ func BenchmarkMetricThreadSize(b *testing.B) {
 		}
 	}
 }
+
+// Pipe schedules, as ASME B36.10M and B36.19M number them and ASTM
+// D1785 uses them for PVC (all from memory of the standards).
+func TestPipeSchedule(t *testing.T) {
+	for _, tc := range []struct {
+		in, code, source string
+		ok               bool
+		reason           string
+	}{
+		{"40", "SCH 40", "ASME B36.10M", true, "the standard wall of steel pipe, and the usual PVC pipe"},
+		{" 80 ", "SCH 80", "ASME B36.10M", true, "extra strong; space around is ignored"},
+		{"160", "SCH 160", "ASME B36.10M", true, "the heaviest numbered schedule"},
+		{"10s", "SCH 10S", "ASME B36.19M", true, "a stainless schedule, in either case"},
+		{"50", "", "", false, "no standard lists schedule 50"},
+		{"120s", "", "", false, "the S schedules stop at 80S"},
+		{"4O", "", "", false, "a letter O is no zero"},
+		{"", "", "", false, "nothing"},
+	} {
+		d, ok := PipeSchedule(tc.in)
+		if ok != tc.ok || d.Code != tc.code || d.Source != tc.source {
+			t.Errorf("PipeSchedule(%q) = %q %q %v; want %q %q %v (%s)", tc.in, d.Code, d.Source, ok, tc.code, tc.source, tc.ok, tc.reason)
+		}
+		if ok && (d.System != Schedule || d.Attributes["schedule"] == "" || d.Dimensions == nil) {
+			t.Errorf("PipeSchedule(%q) = %+v: want system %s, a schedule attribute and a map of dimensions", tc.in, d, Schedule)
+		}
+	}
+}

@@ -341,7 +341,7 @@ func (r *Reader) spec(s string) (*parser.Spec, error) {
 	res := parser.ParseWith(s, parser.Options{Lexicon: r.lex})
 	ss := res.Of(parser.KindSpec)
 	if len(ss) != 1 {
-		return nil, errors.New("not a standard designation whittle knows (lumber, tyre, wire gauge, thread, paper, battery)")
+		return nil, errors.New("not a standard designation whittle knows (lumber, tyre, wire gauge, thread, paper, battery, pipe schedule)")
 	}
 	return ss[0].Spec, nil
 }
