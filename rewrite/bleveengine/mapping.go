@@ -12,6 +12,7 @@ import (
 
 	"github.com/whittle-search/whittle/lexicon"
 	"github.com/whittle-search/whittle/lexicon/colour"
+	"github.com/whittle-search/whittle/lexicon/spec"
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite"
 	"github.com/whittle-search/whittle/rewrite/catalog"
@@ -104,17 +105,18 @@ func indexMapping(lex *lexicon.Lexicon) *mapping.IndexMappingImpl {
 	doc.AddFieldMappingsAt(fFacts, stored)
 	// Measures and designations: one field per dimension the lexicon's
 	// slots name and per standard system, so nothing is mapped on the fly.
-	m, mv, spec := mapping.NewDocumentMapping(), mapping.NewDocumentMapping(), mapping.NewDocumentMapping()
+	m, mv, designations := mapping.NewDocumentMapping(), mapping.NewDocumentMapping(), mapping.NewDocumentMapping()
 	for _, dim := range dimensions(lex) {
 		m.AddFieldMappingsAt(dim, num)
 		mv.AddFieldMappingsAt(dim, kw)
 	}
-	for _, sys := range []string{"lumber", "tyre", parser.TyreSize, "awg", "metric_thread", "unified_thread", "paper", "battery"} {
-		spec.AddFieldMappingsAt(sys, kw)
+	designations.AddFieldMappingsAt(parser.TyreSize, kw)
+	for _, sys := range spec.Systems() {
+		designations.AddFieldMappingsAt(string(sys), kw)
 	}
 	doc.AddSubDocumentMapping("m", m)
 	doc.AddSubDocumentMapping("mv", mv)
-	doc.AddSubDocumentMapping("spec", spec)
+	doc.AddSubDocumentMapping("spec", designations)
 	// Without a disabled mapping at "_all", bleve still adds the empty
 	// catch-all field to every document, and composing it costs an
 	// eighth of the build.

@@ -49,15 +49,14 @@ func TestDamagedIndex(t *testing.T) {
 			os.WriteFile(filepath.Join(dir, vocabFile), b, 0o644)
 		}, "holds 20 documents where the build wrote 21"},
 		// An index an older whittle built lacks fields queries now look
-		// in (each tyre's size alone); it is refused, not searched.
-		{"older layout", func(t *testing.T, dir string) {
-			b, err := os.ReadFile(filepath.Join(dir, vocabFile))
-			if err != nil {
-				t.Fatal(err)
-			}
-			b = []byte(strings.Replace(string(b), `,"layout":2`, ``, 1))
-			os.WriteFile(filepath.Join(dir, vocabFile), b, 0o644)
-		}, "built by another version of whittle (its layout is 1, this one reads 2): rebuild it"},
+		// in (each tyre's size alone, a lamp's colour temperature, a
+		// pipe's schedule); it is refused, not searched.
+		{"first layout", func(t *testing.T, dir string) {
+			setLayout(t, dir, "")
+		}, fmt.Sprintf("built by another version of whittle (its layout is 1, this one reads %d): rebuild it", layout)},
+		{"the layout before", func(t *testing.T, dir string) {
+			setLayout(t, dir, fmt.Sprintf(`,"layout":%d`, layout-1))
+		}, fmt.Sprintf("built by another version of whittle (its layout is %d, this one reads %d): rebuild it", layout-1, layout)},
 		{"damaged metadata", func(t *testing.T, dir string) { overwrite(t, filepath.Join(dir, "index"), "index_meta.json", garbage) }, ""},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
@@ -262,5 +261,22 @@ func TestOpenTwice(t *testing.T) {
 		if err != nil || n != 3 {
 			t.Errorf("rain jackets = %d, %v; want 3 (testdata/catalog/shop.jsonl)", n, err)
 		}
+	}
+}
+
+// setLayout writes the layout field of the index at dir as field: ""
+// for none, as the first layout wrote.
+func setLayout(t *testing.T, dir, field string) {
+	t.Helper()
+	b, err := os.ReadFile(filepath.Join(dir, vocabFile))
+	if err != nil {
+		t.Fatal(err)
+	}
+	now := fmt.Sprintf(`,"layout":%d`, layout)
+	if !strings.Contains(string(b), now) {
+		t.Fatalf("the vocabulary does not hold %s: %s", now, b)
+	}
+	if err := os.WriteFile(filepath.Join(dir, vocabFile), []byte(strings.Replace(string(b), now, field, 1)), 0o644); err != nil {
+		t.Fatal(err)
 	}
 }

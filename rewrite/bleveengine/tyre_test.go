@@ -42,21 +42,7 @@ func TestTyreServiceDescription(t *testing.T) {
 		{"tyres 94w", "a service description written apart from the size is no voltage", []string{"TY-4"}, ""},
 	} {
 		t.Run(tc.query, func(t *testing.T) {
-			o, err := rw.Rescue(context.Background(), tc.query)
-			if err != nil {
-				t.Fatal(err)
-			}
-			var got []string
-			if o.Count > 0 {
-				hits, err := e.Search(context.Background(), o.Plan, 10)
-				if err != nil {
-					t.Fatal(err)
-				}
-				for _, h := range hits {
-					got = append(got, h.ID)
-				}
-				slices.Sort(got)
-			}
+			o, got := rescuedIDs(t, e, rw, tc.query)
 			if !slices.Equal(got, tc.want) {
 				t.Errorf("%s: found %v, want %v\n%s", tc.reason, got, tc.want, o.Explanation)
 			}
@@ -104,6 +90,29 @@ func TestEquivalentWattage(t *testing.T) {
 
 // openProducts indexes ps in a temporary directory and opens the index,
 // closed when the test ends.
+// rescuedIDs rescues query and returns the outcome and the ids of the
+// first ten products its plan finds, sorted; none when it counts none.
+func rescuedIDs(t *testing.T, e *Engine, rw *rewrite.Rewriter, query string) (*rewrite.Outcome, []string) {
+	t.Helper()
+	o, err := rw.Rescue(context.Background(), query)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var got []string
+	if o.Count > 0 {
+		hits, err := e.Search(context.Background(), o.Plan, 10)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, h := range hits {
+			got = append(got, h.ID)
+		}
+		slices.Sort(got)
+	}
+	return o, got
+}
+
+// openProducts indexes ps in a temporary directory and opens it.
 func openProducts(t *testing.T, ps []catalog.Product) *Engine {
 	t.Helper()
 	dir := filepath.Join(t.TempDir(), "idx")

@@ -225,9 +225,9 @@ func (k *demoKind) m(dim string, values ...string) *demoKind {
 	return k
 }
 
-// mLater adds a measure as m does, drawn from the second stream (see
-// Demo): for measures added to a kind after its products were first
-// drawn.
+// mLater adds a measure as m does (or, for the dimension "spec", a
+// standard designation), drawn from the second stream (see Demo): for
+// what is added to a kind after its products were first drawn.
 func (k *demoKind) mLater(dim string, values ...string) *demoKind {
 	k.later = append(k.later, demoGroup{dims: []string{dim}})
 	g := &k.later[len(k.later)-1]
@@ -372,16 +372,6 @@ func demoProduct(r, later *rand.Rand, id int) Product {
 			}
 		}
 	}
-	for _, g := range k.later {
-		// Not part of scale, so the price stays as it was drawn.
-		oi := later.IntN(len(g.opts))
-		for di, dim := range g.dims {
-			if p.Measures == nil {
-				p.Measures = make(map[string]string, 4)
-			}
-			p.Measures[dim] = g.opts[oi][di]
-		}
-	}
 	if len(k.specs) > 0 {
 		si := r.IntN(len(k.specs))
 		if len(k.specs) > 1 {
@@ -435,6 +425,21 @@ func demoProduct(r, later *rand.Rand, id int) Product {
 
 	p.Title = demoTitle(&p, k, titleMeasure)
 	p.Description = demoDescription(r, d, &p)
+	for _, g := range k.later {
+		// After the title and description, and not part of scale, so the
+		// text and the price stay as they were drawn.
+		oi := later.IntN(len(g.opts))
+		for di, dim := range g.dims {
+			if dim == "spec" {
+				p.Spec = append(p.Spec, g.opts[oi][di])
+				continue
+			}
+			if p.Measures == nil {
+				p.Measures = make(map[string]string, 4)
+			}
+			p.Measures[dim] = g.opts[oi][di]
+		}
+	}
 	return p
 }
 

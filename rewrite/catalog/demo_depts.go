@@ -226,7 +226,10 @@ func demoHardware() *demoDept {
 			stock("rope", 900, 3900).mat("nylon", "polypropylene", "jute").m("length", "50 ft", "100 ft", "200 ft"),
 			stock("step ladder", 5900, 19900).mat("aluminium", "fibreglass").m("height", "4 ft", "6 ft", "8 ft").titled(demoTitleBefore),
 			stock("extension ladder", 14900, 39900).mat("aluminium", "fibreglass").m("height", "16 ft", "20 ft", "24 ft", "28 ft").titled(demoTitleBefore),
-			stock("pvc pipe", 300, 2500).m("diameter", "0.5 in", "0.75 in", "1 in", "1.5 in", "2 in").m("length", "10 ft"),
+			// PVC pipe comes in schedule 40 and the heavier 80 (ASTM
+			// D1785, from memory).
+			stock("pvc pipe", 300, 2500).m("diameter", "0.5 in", "0.75 in", "1 in", "1.5 in", "2 in").m("length", "10 ft").
+				mLater("spec", "sch 40", "sch 40", "sch 80"),
 		},
 	}
 }

@@ -44,29 +44,43 @@ func TestDemoDeterministic(t *testing.T) {
 	}
 }
 
-// The measures a kind gained later come from their own stream: drawn
-// from another, they change, and nothing else does, neither the other
-// products nor the other attributes of those that have them. So adding
+// The measures and designations a kind gained later come from their own
+// stream: drawn from another, they change, and nothing else does,
+// neither the other products nor the other attributes of those that
+// have them. So adding
 // one to the demo leaves the rest of the catalog, and every figure made
 // from it, as it was.
 func TestDemoLaterStream(t *testing.T) {
-	later := map[string]bool{}
+	later := map[string]bool{}          // measures
+	laterSpecs := map[string][]string{} // designations, by product type
 	for _, d := range demoDepts {
 		for _, k := range d.kinds {
 			for _, g := range k.later {
-				for _, dim := range g.dims {
-					later[dim] = true
+				for di, dim := range g.dims {
+					if dim != "spec" {
+						later[dim] = true
+						continue
+					}
+					for _, o := range g.opts {
+						laterSpecs[k.name] = append(laterSpecs[k.name], o[di])
+					}
 				}
 			}
 		}
 	}
-	if len(later) == 0 {
-		t.Fatal("no kind has a measure added later")
+	if len(later) == 0 || len(laterSpecs) == 0 {
+		t.Fatal("no kind has a measure and a designation added later")
 	}
 	strip := func(ps []Product) []Product {
 		for i := range ps {
 			for dim := range later {
 				delete(ps[i].Measures, dim)
+			}
+			if vs := laterSpecs[ps[i].ProductType]; vs != nil {
+				ps[i].Spec = slices.DeleteFunc(ps[i].Spec, func(s string) bool { return slices.Contains(vs, s) })
+				if len(ps[i].Spec) == 0 {
+					ps[i].Spec = nil
+				}
 			}
 		}
 		return ps
@@ -393,23 +407,27 @@ func TestDemoSpecs(t *testing.T) {
 	}
 	tyreRE := regexp.MustCompile(`^([0-9]{3})/([0-9]{2})R([0-9]{2})$`)
 
-	cases := []struct {
+	type specCase struct {
 		category string
 		system   string
 		inTable  func(t *testing.T, s string, sp *parser.Spec)
 		reason   string
-	}{
+		// productType, when set, is the one type of the category the
+		// case is for; the category's other case takes the others.
+		productType string
+	}
+	cases := []specCase{
 		{"lumber", "lumber", func(t *testing.T, s string, _ *parser.Spec) {
 			if !slices.Contains(lumber, s) {
 				t.Errorf("%q is not a PS 20 nominal size %v", s, lumber)
 			}
-		}, "nominal sizes of PS 20 (lumber_ps20_sizes.tsv)"},
+		}, "nominal sizes of PS 20 (lumber_ps20_sizes.tsv)", ""},
 		{"electrical", "awg", func(t *testing.T, s string, _ *parser.Spec) {
 			g, ok := strings.CutSuffix(s, " awg")
 			if !ok || !slices.Contains(gauges, g) {
 				t.Errorf("%q is not an AWG gauge of ASTM B258 (awg_wire_diameters.tsv)", s)
 			}
-		}, "wire gauges (awg_wire_diameters.tsv)"},
+		}, "wire gauges (awg_wire_diameters.tsv)", ""},
 		{"hardware", "metric_thread", func(t *testing.T, s string, _ *parser.Spec) {
 			d, pitch, ok := strings.Cut(s, "x")
 			want, found := coarse[d]
@@ -421,17 +439,24 @@ func TestDemoSpecs(t *testing.T) {
 			if !sameNumber(pitch, want) {
 				t.Errorf("%q: pitch %s, ISO 261 coarse pitch of %s is %s", s, pitch, d, want)
 			}
-		}, "metric threads at ISO 261 coarse pitch"},
+		}, "metric threads at ISO 261 coarse pitch", ""},
+		{"hardware", "pipe_schedule", func(t *testing.T, s string, sp *parser.Spec) {
+			// ASTM D1785 makes PVC pipe in schedules 40, 80 and 120
+			// (from memory).
+			if n := sp.Attributes["schedule"]; n != "40" && n != "80" && n != "120" {
+				t.Errorf("%q: schedule %q is not one PVC pipe is made in", s, n)
+			}
+		}, "the schedules of PVC pipe", "pvc pipe"},
 		{"office", "paper", func(t *testing.T, s string, _ *parser.Spec) {
 			if !slices.Contains(paper, s) {
 				t.Errorf("%q is not an ISO 216 size (iso216_paper_sizes.tsv)", s)
 			}
-		}, "ISO 216 paper sizes"},
+		}, "ISO 216 paper sizes", ""},
 		{"batteries", "battery", func(t *testing.T, s string, _ *parser.Spec) {
 			if !slices.Contains(batteries, s) {
 				t.Errorf("%q is not an IEC 60086 size %v (iec60086_batteries.tsv)", s, batteries)
 			}
-		}, "IEC 60086 battery sizes"},
+		}, "IEC 60086 battery sizes", ""},
 		{"tyres", "tyre", func(t *testing.T, s string, sp *parser.Spec) {
 			m := tyreRE.FindStringSubmatch(s)
 			if m == nil {
@@ -448,13 +473,14 @@ func TestDemoSpecs(t *testing.T) {
 			if want, ok := tyreDiameter[s]; ok && !sameNumber(strconv.FormatFloat(sp.Dimensions["overall_diameter"], 'f', 1, 64), want) {
 				t.Errorf("%q: overall diameter %g mm, tyre_size_examples.tsv gives %s", s, sp.Dimensions["overall_diameter"], want)
 			}
-		}, "ISO metric tyre sizes (tyre_size_examples.tsv)"},
+		}, "ISO metric tyre sizes (tyre_size_examples.tsv)", ""},
 	}
 	for _, tc := range cases {
 		t.Run(tc.category, func(t *testing.T) {
 			seen := 0
 			for _, p := range demo5000() {
-				if p.Category != tc.category {
+				if p.Category != tc.category || tc.productType != "" && p.ProductType != tc.productType ||
+					tc.productType == "" && slices.ContainsFunc(cases, func(o specCase) bool { return o.category == tc.category && o.productType == p.ProductType }) {
 					continue
 				}
 				for _, s := range p.Spec {
