@@ -264,6 +264,13 @@ func (p *tagger) point(k int, q quantity) int {
 			Evidence: "the brightness of an incandescent bulb of that power, not the power the bulb draws"})
 		return 1
 	}
+	// A square drive: "3/8 drive", "1/2 inch drive", "1/2in drive" on
+	// sockets, ratchets and torque wrenches (ASME B107 and ISO 1174 sizes,
+	// from memory), which the socket and its handle must share; not on a
+	// drill, whose 1/2 in is its chuck.
+	if w != nil && w.text == "drive" && (!q.hasUnit || q.unit.Symbol == "in") && driveSizes[q.num.value] && p.driven() {
+		return p.wordMeasure(u.start, w.end, q, "in", "drive_size", "a number before \"drive\": the square drive, in inches")
+	}
 	// Gauge: "14 awg", "12 gauge", "12-gauge", "14/2 awg", "16 gauge".
 	if used := p.gaugeWordAfter(k); used > 0 && !q.hasUnit {
 		if c, ok := p.gauge(k, used, q); ok {
@@ -391,12 +398,7 @@ func (p *tagger) point(k int, q quantity) int {
 	// to 10000 before a k is kelvin, on a product that has a colour
 	// temperature or with no product type; "4k" and "14k" are not.
 	if w != nil && w.text == "k" && !q.hasUnit && q.num.integer && q.num.value >= 1000 && q.num.value <= 10000 && p.lit() {
-		kelvin := mustUnit("kelvin")
-		q.unit, q.hasUnit = kelvin, true
-		c := p.measure(u.start, w.end, q, "", nil, nil, kelvin)
-		c.Evidence = "k after a number of 1000 to 10000: a colour temperature in kelvin"
-		p.add(c)
-		return 1
+		return p.wordMeasure(u.start, w.end, q, "kelvin", "", "k after a number of 1000 to 10000: a colour temperature in kelvin")
 	}
 	// A number stuck to a word that is no unit: "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
@@ -421,6 +423,17 @@ func (p *tagger) point(k int, q quantity) int {
 	}
 	p.bare(u.start, u.end, q)
 	return 0
+}
+
+// wordMeasure tags q, a number and the word after it, [start, end), as a
+// measure in the unit of symbol sym and of dimension dim (or the one its
+// range finds, for ""), with evidence. It returns 1, the word used.
+func (p *tagger) wordMeasure(start, end int, q quantity, sym, dim, evidence string) int {
+	q.unit, q.hasUnit = mustUnit(sym), true
+	c := p.measure(start, end, q, dim, nil, nil, q.unit)
+	c.Evidence = evidence
+	p.add(c)
+	return 1
 }
 
 // lit reports whether the query's product gives light, with a colour
@@ -753,6 +766,24 @@ func (p *tagger) bare(start, end int, q quantity) {
 // cellSizes are the cylindrical lithium-ion cells sold by size (common
 // practice).
 var cellSizes = map[string]bool{"10440": true, "14500": true, "16340": true, "18350": true, "18650": true, "20700": true, "21700": true, "26650": true, "32650": true}
+
+// driven reports whether the query's product has a square drive (a
+// drive_size slot), or the query names no product type.
+func (p *tagger) driven() bool {
+	if p.head == nil {
+		return true
+	}
+	for _, sl := range p.lex.SlotsOf(p.head) {
+		if sl.Dimension == "drive_size" {
+			return true
+		}
+	}
+	return false
+}
+
+// driveSizes are the square drives of sockets and their handles, in
+// inches (common practice; ASME B107 and ISO 1174 from memory).
+var driveSizes = map[float64]bool{0.25: true, 0.375: true, 0.5: true, 0.75: true, 1: true}
 
 // karats are the gold purities jewellery is sold in (common practice).
 var karats = map[string]bool{"9": true, "10": true, "14": true, "18": true, "22": true, "24": true}

@@ -191,6 +191,8 @@ func TestApply(t *testing.T) {
 		{"16 gauge sheet metal", "a gauge number outside wiring is hard too: a thinner sheet is no substitute", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"20 gauge earrings", "as is a gauge on jewellery", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"60w halogen bulb", "a bulb's wattage is hard: a fixture is rated for so many watts (common practice)", []parser.Strictness{parser.Hard, parser.Firm}},
+		{"3/8 drive torque wrench", "a square drive is hard in hardware: the socket must go on it (ASME B107, from memory)", []parser.Strictness{parser.Hard, parser.Firm}},
+		{"10mm socket 1/2 drive", "and a socket's size across flats: a 3/8 in socket is within 5% of 10 mm and rounds the nut", []parser.Strictness{parser.Hard, parser.Firm, parser.Hard}},
 	} {
 		r := parser.Parse(tc.query)
 		DefaultPolicy().Apply(r, lex)

@@ -65,8 +65,9 @@ type vocabulary struct {
 }
 
 // layout numbers the index's field layout: 2 files each tyre also by its
-// size alone (parser.TyreSize); 3 maps a lamp's colour temperature and a
-// pipe's schedule. An index without the number is layout 1.
+// size alone (parser.TyreSize); 3 maps a lamp's colour temperature, a
+// pipe's schedule and a socket's drive and size. An index without the
+// number is layout 1.
 const layout = 3
 
 // ErrOldLayout is the error Open returns, wrapped, for an index written
