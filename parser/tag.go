@@ -194,9 +194,11 @@ func (p *tagger) isPT(i int) bool {
 // ("variable nd filter"), become one span; otherwise the first qualifies
 // the second ("saucepan lid") and is a modifier. A product type after
 // "with", or after a material once a product type was named ("marble
-// top"), is a feature of the product.
+// top"), is a feature of the product, and so is a light's part named
+// after the light ("flood light motion sensor").
 func (p *tagger) compounds() {
 	seenPT := false
+	var lamp *lexicon.Entry // the first product type named that gives light
 	for i := 0; i < len(p.units); i++ {
 		if !p.isPT(i) {
 			continue
@@ -219,7 +221,14 @@ func (p *tagger) compounds() {
 			u.feature = true // "laptop 16gb ram": the laptop's memory
 			continue
 		}
+		if lamp != nil && lightParts[u.chosen.Name] {
+			u.feature = true // "flood light 5000k motion sensor"
+			continue
+		}
 		seenPT = true
+		if p.givesLight(u.chosen) {
+			lamp = u.chosen
+		}
 		for p.isPT(i + 1) {
 			v := &p.units[i+1]
 			if v.chosen == u.chosen || p.broader(v.chosen, u.chosen) {
@@ -227,10 +236,29 @@ func (p *tagger) compounds() {
 				p.units = append(p.units[:i+1], p.units[i+2:]...)
 				continue
 			}
+			if lamp != nil && lightParts[v.chosen.Name] {
+				break // "flood light motion sensor": the light's sensor
+			}
 			u.modifier = true
 			break
 		}
 	}
+}
+
+// lightParts are the product types that, named after a light, are a
+// part of it: "flood light motion sensor" is a light that has one, where
+// "motion sensor light" is one too, the sensor qualifying the light.
+var lightParts = map[string]bool{"motion sensor": true}
+
+// givesLight reports whether product type e gives light: it has a
+// colour temperature slot.
+func (p *tagger) givesLight(e *lexicon.Entry) bool {
+	for _, s := range p.lex.SlotsOf(e) {
+		if s.Quantity == units.ColourTemperature {
+			return true
+		}
+	}
+	return false
 }
 
 // unitAlone tags a unit of volume named with no number, on a product
