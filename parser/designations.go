@@ -288,6 +288,12 @@ func (p *tagger) fractionAfterSchedule(f *grammar.Frac, unit string, end int) {
 // product is, not a maker's part number.
 var gradeCode = regexp.MustCompile(`^(cat(5e|6a?|7|8)|ddr[345]|usb[234](\.\d)?|hdmi2(\.1)?|wifi[67]e?|pcie[345])$`)
 
+// cardGrade matches the speed classes of SD memory cards (the SD
+// Association's video classes v6 to v90 and UHS classes u1 and u3, from
+// memory), read as grades on a memory card only: elsewhere "v30" may be
+// a model.
+var cardGrade = regexp.MustCompile(`^(v(6|10|30|60|90)|u[13])$`)
+
 // fNumber is a lens's aperture written as one code: "f2", "f1.8".
 var fNumber = regexp.MustCompile(`^f(\d{1,2}(?:\.\d)?)$`)
 
@@ -549,9 +555,9 @@ func (p *tagger) otherCode(start int, u *unit) {
 			return
 		}
 	}
-	if gradeCode.MatchString(raw) {
+	if gradeCode.MatchString(raw) || cardGrade.MatchString(raw) && p.headUnder("memory card") {
 		p.add(Constraint{Kind: KindKeyword, Start: start, End: u.end, Name: raw, Strictness: Firm,
-			Evidence: "a grade a standard names (cable category, memory generation, port version), matched in the product's words, not a part number"})
+			Evidence: "a grade a standard names (cable category, memory generation, port version, card speed class), matched in the product's words, not a part number"})
 		return
 	}
 	if m := fNumber.FindStringSubmatch(raw); m != nil && (p.category == "" || p.category == "camera") {

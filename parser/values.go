@@ -264,12 +264,13 @@ func (p *tagger) point(k int, q quantity) int {
 			Evidence: "the brightness of an incandescent bulb of that power, not the power the bulb draws"})
 		return 1
 	}
-	// A square drive: "3/8 drive", "1/2 inch drive", "1/2in drive" on
-	// sockets, ratchets and torque wrenches (ASME B107 and ISO 1174 sizes,
-	// from memory), which the socket and its handle must share; not on a
-	// drill, whose 1/2 in is its chuck.
-	if w != nil && w.text == "drive" && (!q.hasUnit || q.unit.Symbol == "in") && driveSizes[q.num.value] && p.driven() {
-		return p.wordMeasure(u.start, w.end, q, "in", "drive_size", "a number before \"drive\": the square drive, in inches")
+	// A measure named by the word after it: "3/8 drive" on sockets,
+	// ratchets and torque wrenches, the square drive (ASME B107 and ISO
+	// 1174 sizes, from memory), which the socket and its handle must
+	// share, not on a drill, whose 1/2 in is its chuck; "3/8 nap" on a
+	// roller cover, the depth of its pile (common practice).
+	if n := p.namedMeasure(k, q); n > 0 {
+		return n
 	}
 	// Gauge: "14 awg", "12 gauge", "12-gauge", "14/2 awg", "16 gauge".
 	if used := p.gaugeWordAfter(k); used > 0 && !q.hasUnit {
@@ -767,18 +768,50 @@ func (p *tagger) bare(start, end int, q quantity) {
 // practice).
 var cellSizes = map[string]bool{"10440": true, "14500": true, "16340": true, "18350": true, "18650": true, "20700": true, "21700": true, "26650": true, "32650": true}
 
-// driven reports whether the query's product has a square drive (a
-// drive_size slot), or the query names no product type.
-func (p *tagger) driven() bool {
-	if p.head == nil {
-		return true
+// namedDimensions are the words that, after a number, name the
+// dimension it measures, and the amounts that dimension takes, in
+// inches (nil for any).
+var namedDimensions = map[string]struct {
+	dimension, what string
+	holds           func(inches float64) bool
+}{
+	"drive": {"drive_size", "the square drive", func(v float64) bool { return driveSizes[v] }},
+	"nap":   {"nap", "the depth of a roller's pile", nil},
+}
+
+// namedMeasure tags q and the word after it at unit k as the measure the
+// word names (namedDimensions), in inches when no unit is typed, on a
+// product with a slot of that dimension or, for a drive, on none. It
+// returns the extra units used, or 0.
+func (p *tagger) namedMeasure(k int, q quantity) int {
+	w, _ := p.nextWord(k)
+	if w == nil || q.hasUnit && q.unit.Quantity != units.Length {
+		return 0
 	}
+	named, ok := namedDimensions[w.text]
+	if !ok {
+		return 0
+	}
+	inches := q.num.value
+	if q.hasUnit {
+		inches = q.num.value * q.unit.ToBase / mustUnit("in").ToBase
+	}
+	if named.holds != nil && !named.holds(inches) {
+		return 0
+	}
+	slotted := p.head == nil && named.dimension == "drive_size"
 	for _, sl := range p.lex.SlotsOf(p.head) {
-		if sl.Dimension == "drive_size" {
-			return true
-		}
+		slotted = slotted || sl.Dimension == named.dimension
 	}
-	return false
+	if !slotted {
+		return 0
+	}
+	sym := "in"
+	if q.hasUnit {
+		sym = q.unit.Symbol
+	}
+	return p.wordMeasure(p.units[k].start, w.end, q, sym, named.dimension,
+		fmt.Sprintf("a number before %q: %s", w.text, named.what))
 }
 
 // driveSizes are the square drives of sockets and their handles, in
