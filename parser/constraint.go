@@ -77,9 +77,9 @@ type Price struct {
 type Size struct {
 	// System is one of: letter (xs..5xl, 1x..5x), numeric (8, 4t), shoe,
 	// waist_inseam, waist, inseam, fit (petite, tall, plus, big and
-	// tall), bed (queen, king), number (#8, #10), bra (34b), age (months:
-	// 6-12m), a region (eu, uk, us, fr, it, jp, au, mx, cn), or named (os,
-	// regular, tall... after "size").
+	// tall), bed (queen, king), number (#8, #10), bra (34b), suit (42r:
+	// chest and length), age (months: 6-12m), a region (eu, uk, us, fr,
+	// it, jp, au, mx, cn), or named (os, regular, tall... after "size").
 	System string
 	// Value is the normalised size: "l", "8", "32x30", "9.5", "petite".
 	Value string

@@ -875,6 +875,18 @@ func (p *tagger) sizeAfter(k int) int {
 			return 0 // "letter size copy paper": the next word is no size
 		}
 	case uItem:
+		if val := v.item.Value; val != nil && val.To != nil && p.headUnder("socks") {
+			// "size 10-13" on socks. What a range that is none reports
+			// is reported when it is read as a value.
+			reported := len(p.res.Errors)
+			from, ok1 := p.readSingle(val.From)
+			to, ok2 := p.readSingle(val.To)
+			p.res.Errors = p.res.Errors[:reported]
+			if ok1 && ok2 && p.sockSize(u.start, v.end, from, to) {
+				return 1
+			}
+			return 0
+		}
 		s, ok := p.sizeValue(v)
 		if !ok {
 			return 0

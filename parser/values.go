@@ -180,6 +180,9 @@ func (p *tagger) value(k int) int {
 		if n, ok := p.monthsSize(k, from, to); ok {
 			return n
 		}
+		if p.sockSize(u.start, u.end, from, to) {
+			return 0
+		}
 		if len(from.parts) == 1 && len(to.parts) >= 1 && !to.price {
 			// "1/4-20", "1/4-20 x 1": a thread, then perhaps its length.
 			threadEnd := to.parts[0].end
@@ -299,12 +302,23 @@ func (p *tagger) point(k int, q quantity) int {
 			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "letter", Value: s}, Evidence: "letter size"})
 			return 1
 		}
-		// Toddler, youth and child sizes: "4t", "10y", "12c".
-		if p.apparel() && childLetters[w.text] {
+		// Toddler, youth and child sizes: "4t", "10y", "12c"; not on a
+		// bra, whose "36c" is a band and a cup (read below).
+		if p.apparel() && childLetters[w.text] && !p.headUnder("bra") {
 			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "numeric", Value: q.num.decimal + w.text},
 				Evidence: "number with a size letter"})
 			return 1
 		}
+		// A girl's 6X, the size between 6 and 7 (common practice), not a
+		// sixth X: letter sizes stop at 5x.
+		if p.apparel() && q.num.decimal == "6" && w.text == "x" {
+			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "numeric", Value: "6x"},
+				Evidence: "a girl's size 6X"})
+			return 1
+		}
+	}
+	if n, ok := p.suitSize(k, q); ok {
+		return n
 	}
 	// "3 step ladder", "2 step stool": the steps, which the product
 	// type's own name counts (common practice), not a height.
@@ -814,6 +828,33 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 		fmt.Sprintf("a number before %q: %s", w.text, named.what))
 }
 
+// suitSize reads a suit's chest and length, "42r", "40l", "38 short", on
+// suits and their jackets (common practice: the chest in inches, then
+// short, regular or long). The L and the S come as litres and seconds.
+// It returns the extra units used, and whether it read one.
+func (p *tagger) suitSize(k int, q quantity) (int, bool) {
+	if !q.num.integer || q.num.value < 32 || q.num.value > 62 || !p.headUnder("suit") && !p.headUnder("blazer") {
+		return 0, false
+	}
+	u := &p.units[k]
+	letter, end, used := "", u.end, 0
+	if w, _ := p.nextWord(k); w != nil && !q.hasUnit && suitLengths[w.text] != "" {
+		letter, end, used = suitLengths[w.text], w.end, 1
+	} else if q.hasUnit && (q.unit.Symbol == "l" || q.unit.Symbol == "s") {
+		letter = q.unit.Symbol
+	}
+	if letter == "" {
+		return 0, false
+	}
+	p.add(Constraint{Kind: KindSize, Start: u.start, End: end, Size: &Size{System: "suit", Value: q.num.decimal + letter},
+		Evidence: "a suit's chest and length"})
+	return used, true
+}
+
+// suitLengths are the letters of a suit's length after its chest size:
+// short, regular, long (common practice).
+var suitLengths = map[string]string{"s": "s", "r": "r", "l": "l", "short": "s", "regular": "r", "reg": "r", "long": "l"}
+
 // driveSizes are the square drives of sockets and their handles, in
 // inches (common practice; ASME B107 and ISO 1174 from memory).
 var driveSizes = map[float64]bool{0.25: true, 0.375: true, 0.5: true, 0.75: true, 1: true}
@@ -1311,6 +1352,22 @@ func (p *tagger) monthsSize(k int, from, to single) (int, bool) {
 	p.add(Constraint{Kind: KindSize, Start: u.start, End: end, Size: &Size{System: "age", Value: value + "m"},
 		Evidence: "months of age: a baby's size"})
 	return used, true
+}
+
+// sockSize reads a range of two whole numbers on socks, "10-13", as the
+// sock size it names (common practice: socks are sized by the run of
+// shoe sizes they fit), not a measure of no unit.
+func (p *tagger) sockSize(start, end int, from, to single) bool {
+	if !p.headUnder("socks") || len(from.parts) != 1 || len(to.parts) != 1 || from.price || to.price {
+		return false
+	}
+	a, b := from.parts[0], to.parts[0]
+	if a.hasUnit || b.hasUnit || !a.num.integer || !b.num.integer || a.num.value < 2 || b.num.value > 16 || a.num.value >= b.num.value {
+		return false
+	}
+	p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: "numeric", Value: a.num.decimal + "-" + b.num.decimal},
+		Evidence: "a run of shoe sizes: a sock size"})
+	return true
 }
 
 // forBaby reports whether the query names the baby audience.
