@@ -259,6 +259,9 @@ func (p *tagger) point(k int, q quantity) int {
 	if n, ok := p.apparelFraction(k, q); ok {
 		return n
 	}
+	if n := p.percent(k, q); n > 0 {
+		return n
+	}
 	// "60 watt equivalent": an LED's brightness, as the incandescent bulb
 	// of that power gives it (common practice), not the power it draws;
 	// a power asked for would find no LED bulb at all.
@@ -414,6 +417,15 @@ func (p *tagger) point(k int, q quantity) int {
 	// temperature or with no product type; "4k" and "14k" are not.
 	if w != nil && w.text == "k" && !q.hasUnit && q.num.integer && q.num.value >= 1000 && q.num.value <= 10000 && p.lit() {
 		return p.wordMeasure(u.start, w.end, q, "kelvin", "", "k after a number of 1000 to 10000: a colour temperature in kelvin")
+	}
+	// A display or video resolution: "4k", "1080p", on electronics and
+	// cameras or with no product type (common practice), a firm phrase
+	// in the product's words: a 4K screen is not a 1080p one.
+	if w != nil && !spaced && !q.hasUnit && resolutions[q.num.decimal+w.text] &&
+		(p.head == nil || p.category == "electronics" || p.category == "camera") {
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: q.num.decimal + w.text, Strictness: Firm,
+			Evidence: "a display or video resolution, matched in the product's words"})
+		return 1
 	}
 	// A number stuck to a word that is no unit: "1080p", "4k".
 	if w != nil && !spaced && !q.hasUnit {
@@ -849,6 +861,35 @@ func (p *tagger) suitSize(k int, q quantity) (int, bool) {
 	p.add(Constraint{Kind: KindSize, Start: u.start, End: end, Size: &Size{System: "suit", Value: q.num.decimal + letter},
 		Evidence: "a suit's chest and length"})
 	return used, true
+}
+
+// resolutions are the display and video resolutions products are sold
+// by (common practice).
+var resolutions = map[string]bool{"480p": true, "720p": true, "1080p": true, "1080i": true, "1440p": true, "2160p": true,
+	"4k": true, "5k": true, "8k": true}
+
+// percent reads a number before a percent sign at unit k: before "off"
+// a discount ("50% off"), filler; before a material ("100% cotton") the
+// share of it, filler too, since the material is asked for anyway; else
+// a percentage in the product's words ("75% keyboard"). It returns the extra units used, or 0 when no percent
+// sign follows.
+func (p *tagger) percent(k int, q quantity) int {
+	if k+1 >= len(p.units) || p.units[k+1].kind != uSym || p.units[k+1].tok.Value != "%" || q.hasUnit {
+		return 0
+	}
+	u, sign := &p.units[k], &p.units[k+1]
+	if k+2 < len(p.units) && p.units[k+2].kind == uWord && p.units[k+2].text == "off" {
+		p.add(Constraint{Kind: KindFiller, Start: u.start, End: p.units[k+2].end, Strictness: Filler,
+			Evidence: "a discount, which no product's words hold"})
+		return 2
+	}
+	if k+2 < len(p.units) && p.units[k+2].chosen != nil && p.units[k+2].chosen.Kind == lexicon.Material {
+		p.add(Constraint{Kind: KindFiller, Start: u.start, End: sign.end, Strictness: Filler, Evidence: "the share of the material after it"})
+		return 1
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: u.start, End: sign.end, Name: strings.ToLower(p.q[u.start:sign.end]),
+		Evidence: "a percentage, matched in the product's words"})
+	return 1
 }
 
 // suitLengths are the letters of a suit's length after its chest size:
