@@ -56,6 +56,10 @@ type item struct {
 	// rarity is 1 - solo over the largest solo count (0 for the commonest).
 	solo   int
 	rarity float64
+	// names is set on the word that names what the shopper wants in a
+	// query of no product type (unknownHead): like a head product type it
+	// is never dropped.
+	names bool
 }
 
 // ladders builds each constraint's states: exact first, then every
@@ -72,15 +76,56 @@ func (rw *Rewriter) ladders(ctx context.Context, r *parser.Result, e Effective) 
 // aside), each with its exact state only.
 func (rw *Rewriter) exactItems(r *parser.Result) []*item {
 	var items []*item
+	head := unknownHead(r)
 	for i, c := range r.Constraints {
 		if c.Kind == parser.KindFiller || c.Strictness == parser.Filler {
 			continue
 		}
 		exact := rw.exactClause(i, c)
-		items = append(items, &item{index: i, c: c, solo: -1, levels: []level{{clause: &exact}}})
+		items = append(items, &item{index: i, c: c, solo: -1, levels: []level{{clause: &exact}}, names: i == head})
 	}
 	return items
 }
+
+// unknownHead is the index of the word that names the product in a
+// query of no product type, when the lexicon does not know it: the last
+// word before a word that starts what qualifies it ("shampoo for dry
+// hair"), or else the last word of the query, as an English noun phrase
+// ends in its noun (common knowledge of English). It is -1 when the
+// query has a head product type, a designation, a part number or a
+// model it fits, or that word is known or no plain word (a colour, a
+// size, a number). Dropping it would show what the
+// other words match, a hair dryer for "dry hair", when the shop carries
+// no shampoo.
+func unknownHead(r *parser.Result) int {
+	if headIndex(r) >= 0 {
+		return -1
+	}
+	for _, c := range r.Constraints {
+		// A designation, a part number or a model fitted says what the
+		// product is ("cr2032 blister" is a battery).
+		if !c.Excluded && (c.Kind == parser.KindSpec || c.Kind == parser.KindPartNumber || c.Kind == parser.KindCompatibility) {
+			return -1
+		}
+	}
+	last := -1
+	for i, c := range r.Constraints {
+		if c.Kind == parser.KindFiller {
+			if last >= 0 && postModifiers[strings.ToLower(c.Text)] {
+				break
+			}
+			continue
+		}
+		last = i
+	}
+	if last < 0 || !unknownWord(r, r.Constraints[last]) {
+		return -1
+	}
+	return last
+}
+
+// postModifiers are the words after a noun that start what qualifies it.
+var postModifiers = map[string]bool{"for": true, "with": true, "w/": true, "without": true, "in": true, "on": true, "from": true, "to": true}
 
 // addRelaxations gives each item the states below its exact one.
 //
@@ -194,6 +239,16 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 		// The head is widened, never dropped: a shopper who asked for
 		// lenses is not shown rugs.
 		return nil
+	}
+	if it.names {
+		// Nor is a word that names the product, unknown, when it is no
+		// typo of any word whittle knows: a shopper who asked for shampoo
+		// is not shown hair dryers. A word near one may be a typo read
+		// wrong, and is dropped as any unknown word is.
+		near, err := rw.nearestWords(ctx, c.Name)
+		if err != nil || len(near) == 0 {
+			return err
+		}
 	}
 	drop := costDropSoft
 	if c.Strictness >= parser.Firm {

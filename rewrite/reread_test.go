@@ -263,3 +263,32 @@ func TestTypoOfATypeNotCarried(t *testing.T) {
 		t.Errorf("message %q, %d found; want it to end %q and nothing found\n%s", o.Message, o.Count, want, o.Explanation)
 	}
 }
+
+// A word that names the product, in a query of no product type, is not
+// dropped when it is no typo of any word whittle knows: the shop
+// carries none of it, and the other words would show something else. It
+// is the last word before one that starts what qualifies it ("shampoo
+// for dry hair"), or the last word (common knowledge of English noun
+// phrases). A designation says what the product is, so a word after one
+// is dropped as before. The shop is invented.
+func TestUnknownHeadIsKept(t *testing.T) {
+	shop := []product{
+		{ID: "HD-1", Type: "hair dryer", Colour: "black", Hex: "#000000", Words: []string{"hair", "dryer", "dry"}},
+		{ID: "CC-1", Type: "battery", Specs: map[string]string{"battery": "cr2032"}},
+	}
+	for _, tc := range []struct {
+		query, reason string
+		count         int
+		message       string
+	}{
+		{"shampoo for dry hair", "shampoo names the product and is near no known word: HD-1 is no shampoo", 0, "shampoo is not carried"},
+		{"zorblax", "a word alone is the query's noun", 0, "zorblax is not carried"},
+		{"dry hair zorblax", "the last word names the product", 0, "zorblax is not carried"},
+		{"cr2032 blister", "the designation names the product: blister is dropped", 1, "without “blister”"},
+	} {
+		o := mustRescue(t, shop, tc.query)
+		if o.Count != tc.count || !strings.Contains(o.Message, tc.message) {
+			t.Errorf("%q: count %d, message %q; want %d and %q (%s)\n%s", tc.query, o.Count, o.Message, tc.count, tc.message, tc.reason, o.Explanation)
+		}
+	}
+}
