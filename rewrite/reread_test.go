@@ -292,3 +292,21 @@ func TestUnknownHeadIsKept(t *testing.T) {
 		}
 	}
 }
+
+// A typo fixed is rescued as if typed right, even where the shop lacks
+// the type it names, when the type takes in the head typed: "sofa tabel
+// walnut" is a sofa table (a console table, in the lexicon), and a shop
+// of no console tables shows walnut tables, as "sofa table walnut"
+// does, not the sofas that "sofa" alone names. The shop is invented.
+func TestRereadCompletingTheHead(t *testing.T) {
+	shop := []product{
+		{ID: "SO-1", Type: "sofa", Material: "walnut"},
+		{ID: "DT-1", Type: "dining table", Material: "walnut"},
+	}
+	for _, q := range []string{"sofa tabel walnut", "sofa table walnut"} {
+		o := mustRescue(t, shop, q)
+		if got := hitIDs(t, &memEngine{products: shop}, o.Plan); !slices.Equal(got, []string{"DT-1"}) {
+			t.Errorf("%q: hits %v, want the walnut table DT-1\n%s", q, got, o.Explanation)
+		}
+	}
+}

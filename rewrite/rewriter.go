@@ -713,6 +713,13 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 			// hard finds nothing ("jx-12 phone case clear" in a shop of
 			// cases for the jx-12, none clear, and no part JX-12).
 			check := func() (bool, error) { return fixed.bornOut(typed) }
+			if completesHead(typed, rd) {
+				// "sofa tabel walnut": the typed head, sofa, was part of
+				// the type meant, a sofa table; read so, the query is
+				// rescued as if typed right, widened to tables if the shop
+				// has no sofa tables, not shown sofas.
+				check = func() (bool, error) { return true, nil }
+			}
 			if rd.found {
 				check = func() (bool, error) { return fixed.hardFinds(s) }
 			}
@@ -745,6 +752,18 @@ func (s *search) pickReading(typed *parser.Result, rds []*reading) (picked, erro
 		p.search.budget = s.budget
 	}
 	return p, nil
+}
+
+// completesHead reports whether reading rd's head product type takes in
+// the head of typed, the query as typed, and more: the typed head was a
+// word of the type meant ("sofa" of "sofa table").
+func completesHead(typed *parser.Result, rd *reading) bool {
+	h := headIndex(typed)
+	if h < 0 || rd.fix.Kind != parser.KindProductType {
+		return false
+	}
+	was, now := typed.Constraints[h], rd.parsed.Constraints[rd.fix.Constraint]
+	return now.Start <= was.Start && was.End <= now.End && now.End-now.Start > was.End-was.Start
 }
 
 // typeUncarried reports whether s, a reading, has a head product type
