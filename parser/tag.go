@@ -2,6 +2,7 @@ package parser
 
 import (
 	"fmt"
+	"regexp"
 	"slices"
 	"strings"
 	"unicode/utf8"
@@ -288,6 +289,10 @@ func (p *tagger) unitAlone(k int) bool {
 // (common practice): toddler (4t), youth (10y), child (12c) and kids
 // (3k).
 var childLetters = map[string]bool{"t": true, "y": true, "c": true, "k": true}
+
+// fireClasses matches a fire extinguisher's class letters as written
+// together, in order: "abc", "bc", "ab", "k", "d".
+var fireClasses = regexp.MustCompile(`^(a?b?c?|d|k)$`)
 
 // formWords name the form a product comes in, after the product ("a 4x8
 // sheet of plywood"), though alone they are a product type of their own
@@ -621,6 +626,9 @@ func (p *tagger) wordUnit(k int) int {
 	if n := p.lightColour(k); n >= 0 {
 		return n
 	}
+	if n := p.poleCount(k); n >= 0 {
+		return n
+	}
 	if n := p.modifiedColour(k); n > 0 {
 		return n
 	}
@@ -677,6 +685,14 @@ func (p *tagger) wordUnit(k int) int {
 		}
 		if d, ok := p.batteryWord(k); ok {
 			p.add(specConstraint(u.start, u.end, d, "battery size word"))
+			return 0
+		}
+		// A fire extinguisher's classes, "abc", "bc", "k" (the classes of
+		// fire it is rated for, NFPA 10, from memory): one rated for less
+		// is no substitute, so the phrase is hard.
+		if p.headUnder("fire extinguisher") && fireClasses.MatchString(u.text) {
+			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: u.text, Strictness: Hard,
+				Evidence: "the classes of fire an extinguisher is rated for, matched in the product's words; never dropped"})
 			return 0
 		}
 	}

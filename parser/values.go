@@ -1468,6 +1468,23 @@ var countWords = map[string]string{
 	"burner": "burners", "burners": "burners", "slice": "slices", "outlet": "outlets", "outlets": "outlets",
 	"port": "ports", "ports": "ports", "ring": "rings", "gang": "gangs", "light": "lights", "lights": "lights",
 	"speed": "speeds", "blade": "blades", "blades": "blades", "ply": "ply", "step": "steps", "steps": "steps",
+	"pole": "poles", "poles": "poles",
+}
+
+// poleWords count a breaker's or a switch's poles in words: "double pole"
+// is two (common practice in electrical supply).
+var poleWords = map[string]float64{"single": 1, "double": 2, "triple": 3}
+
+// poleCount reads "single pole", "double pole" or "triple pole" at word
+// unit k, in electrical goods or with no product type, as the count of
+// poles. It returns the extra units used, or -1.
+func (p *tagger) poleCount(k int) int {
+	n, ok := poleWords[p.units[k].text]
+	if !ok || k+1 >= len(p.units) || p.units[k+1].kind != uWord || p.units[k+1].text != "pole" || p.category != "" && p.category != "electrical" {
+		return -1
+	}
+	p.add(countConstraint(p.units[k].start, p.units[k+1].end, n, "poles", "\""+p.units[k].text+" pole\": the count of poles"))
+	return 1
 }
 
 // countAfter reports whether unit k is followed by a counting word.

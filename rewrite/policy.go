@@ -360,8 +360,11 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 	for _, d := range sortedKeys(out.Dimensions) {
 		if slices.Contains(safetyDimensions, d) {
 			what := "ratings"
-			if d == "gauge" {
+			switch d {
+			case "gauge":
 				what = "gauge numbers"
+			case "poles":
+				what = "a breaker's or a switch's poles"
 			}
 			pol.checkSafety(sub("dimensions", d), d, what, out.Dimensions[d], at)
 		}
@@ -380,9 +383,10 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 
 // safetyDimensions are the measure dimensions a substitute for could
 // hurt someone: ratings (a breaker's or a fuse's current, a battery's or
-// a tool's voltage, what a ladder or a strap is rated to carry) and gauge
-// numbers outside wiring (a shotgun's, a needle's, sheet metal's).
-var safetyDimensions = []string{"current", "gauge", "load_rating", "peak_current", "voltage"}
+// a tool's voltage, what a ladder or a strap is rated to carry), a
+// breaker's or a switch's poles, and gauge numbers outside wiring (a
+// shotgun's, a needle's, sheet metal's).
+var safetyDimensions = []string{"current", "gauge", "load_rating", "peak_current", "poles", "voltage"}
 
 // fitDimensions are the measure dimensions the built-in policy makes
 // hard for some product types because a part must have them to fit or
