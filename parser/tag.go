@@ -434,10 +434,13 @@ func (p *tagger) gradeNarrows(head *lexicon.Entry) (*lexicon.Entry, string) {
 	}
 	for k := range p.units {
 		u := &p.units[k]
-		if u.kind != uItem || u.item.Code == nil || p.negatedAt(k) {
+		if p.negatedAt(k) {
 			continue
 		}
-		raw := strings.ToLower(p.q[u.start:u.end])
+		raw, _ := p.spacedCode(k) // "cat 6 cable"
+		if raw == "" && u.kind == uItem && u.item.Code != nil {
+			raw = strings.ToLower(p.q[u.start:u.end])
+		}
 		if !gradeCode.MatchString(raw) {
 			continue
 		}
@@ -600,6 +603,44 @@ func (p *tagger) connectorAt(k int) int {
 	return last - k
 }
 
+// gradeWords start a grade a standard names that shoppers also write
+// with a space: "cat 6", "usb 3.0", "hdmi 2.1", "wifi 6", "ddr 4".
+var gradeWords = map[string]bool{"cat": true, "usb": true, "hdmi": true, "wifi": true, "ddr": true, "pcie": true}
+
+// spacedGrade reads a grade written with a space at word unit k ("cat
+// 6", "cat 5e", "usb 3.0") as the grade written as one code ("cat6"),
+// where the number was read as a length and the word as a stray one. It
+// returns the extra units used, or -1.
+func (p *tagger) spacedGrade(k int) int {
+	code, last := p.spacedCode(k)
+	if last < 0 {
+		return -1
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: p.units[last].end, Name: code, Strictness: Firm,
+		Evidence: "a grade a standard names, written with a space, matched in the product's words"})
+	return last - k
+}
+
+// spacedCode is the grade written with a space that starts at unit k, as
+// one code, and the index of its last unit; "", -1 when there is none.
+func (p *tagger) spacedCode(k int) (string, int) {
+	u := &p.units[k]
+	if u.kind != uWord || !gradeWords[u.text] || k+1 >= len(p.units) || p.units[k+1].kind != uItem || !p.units[k+1].spaceBefore {
+		return "", -1
+	}
+	last := k + 1
+	if w, spaced := p.nextWord(k + 1); w != nil && !spaced {
+		last = k + 2 // "cat 5e", "wifi 6e"
+	}
+	for ; last > k; last-- {
+		code := u.text + strings.ReplaceAll(strings.ToLower(p.q[p.units[k+1].start:p.units[last].end]), " ", "")
+		if gradeCode.MatchString(code) {
+			return code, last
+		}
+	}
+	return "", -1
+}
+
 // fillerOnly reports whether every lexicon reading of unit v is filler.
 func fillerOnly(v *unit) bool {
 	for _, e := range v.entries {
@@ -637,6 +678,9 @@ func (p *tagger) wordUnit(k int) int {
 	}
 	if n := p.apertureAt(k); n >= 0 {
 		return n
+	}
+	if n := p.spacedGrade(k); n >= 0 {
+		return n // before the connector: "hdmi 2.1" is the grade
 	}
 	if n := p.connectorAt(k); n >= 0 {
 		return n
