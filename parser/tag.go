@@ -214,8 +214,10 @@ func (p *tagger) compounds() {
 			u.feature = true
 			continue
 		}
-		if seenPT && formWords[u.text] {
-			u.feature = true // "plywood 4x8 sheet": the plywood's form, not bedding
+		if formWords[u.text] && (seenPT || p.lumberAfter(i)) {
+			// "plywood 4x8 sheet", "4x8 sheet 1/2 osb": the sheet good's
+			// form, not bedding.
+			u.feature = true
 			continue
 		}
 		if i > 0 && seenPT && dataParts[u.chosen.Name] != "" && p.dataAmount(&p.units[i-1]) {
@@ -244,6 +246,17 @@ func (p *tagger) compounds() {
 			break
 		}
 	}
+}
+
+// lumberAfter reports whether a product type of lumber (plywood, osb,
+// drywall) comes after unit i.
+func (p *tagger) lumberAfter(i int) bool {
+	for j := i + 1; j < len(p.units); j++ {
+		if p.isPT(j) && p.units[j].chosen.Category == "lumber" {
+			return true
+		}
+	}
+	return false
 }
 
 // lightParts are the product types that, named after a light, are a

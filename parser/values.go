@@ -262,6 +262,14 @@ func (p *tagger) point(k int, q quantity) int {
 	if n := p.percent(k, q); n > 0 {
 		return n
 	}
+	// A nail's penny size, "16d": its length (common practice; the table
+	// of lengths from memory), where the d was read as a depth.
+	if in, ok := pennyInches[q.num.decimal]; ok && q.label == "d" && !q.hasUnit && p.headUnder("nail") {
+		c := p.measure(u.start, u.end, quantity{num: number{value: in, decimal: strconv.FormatFloat(in, 'f', -1, 64)}}, "length", nil, nil, mustUnit("in"))
+		c.Evidence = fmt.Sprintf("a nail's penny size: %sd is %g in long", q.num.decimal, in)
+		p.add(c)
+		return 0
+	}
 	// "60 watt equivalent": an LED's brightness, as the incandescent bulb
 	// of that power gives it (common practice), not the power it draws;
 	// a power asked for would find no LED bulb at all.
@@ -862,6 +870,11 @@ func (p *tagger) suitSize(k int, q quantity) (int, bool) {
 		Evidence: "a suit's chest and length"})
 	return used, true
 }
+
+// pennyInches are the lengths in inches of nails by penny size (common
+// practice in the trade, from memory).
+var pennyInches = map[string]float64{"2": 1, "3": 1.25, "4": 1.5, "5": 1.75, "6": 2, "7": 2.25, "8": 2.5, "9": 2.75,
+	"10": 3, "12": 3.25, "16": 3.5, "20": 4, "30": 4.5, "40": 5, "50": 5.5, "60": 6}
 
 // resolutions are the display and video resolutions products are sold
 // by (common practice).
