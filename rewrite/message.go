@@ -103,7 +103,11 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		}
 		s := fmt.Sprintf("%s is not carried%s", what, in)
 		if len(m.Carried) > 0 {
-			s += fmt.Sprintf("; %s carried: %s", plural(fieldName(c)), summarise(m.Carried))
+			order := ""
+			if c.Colour != nil && c.Colour.Lab != nil {
+				order = ", nearest first"
+			}
+			s += fmt.Sprintf("; %s carried%s: %s", plural(fieldName(c)), order, summarise(m.Carried))
 		}
 		parts = append(parts, s)
 	}

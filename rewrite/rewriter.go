@@ -1207,6 +1207,9 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 			s.fail(err)
 			if err == nil {
 				m.Carried = carried(vals)
+				if c := s.out.Parsed.Constraints[cl.From]; c.Colour != nil && c.Colour.Lab != nil {
+					m.Carried = rw.nearestFirst(ctx, m.Carried, colour.Lab{L: c.Colour.Lab[0], A: c.Colour.Lab[1], B: c.Colour.Lab[2]})
+				}
 				if cl.Field == string(parser.KindMeasure) && cl.Unit != "" {
 					for j := range m.Carried {
 						m.Carried[j] += " " + cl.Unit
@@ -1216,6 +1219,31 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 		}
 		s.out.Missing = append(s.out.Missing, m)
 	}
+}
+
+// nearestFirst orders names, the colours a catalog carries, by their
+// CIEDE2000 difference from lab, nearest first, so that a colour not
+// carried is answered with the colours nearest it ("duck egg blue is
+// not carried in chalk paints; colours carried, nearest first: ...");
+// names the catalog's palette lacks keep their order, after. The names
+// are as they were when the palette cannot be read.
+func (rw *Rewriter) nearestFirst(ctx context.Context, names []string, lab colour.Lab) []string {
+	pal, err := rw.palette(ctx)
+	if err != nil || pal == nil {
+		return names
+	}
+	out := make([]string, 0, len(names))
+	for _, m := range pal.Nearest(lab, pal.Len()) {
+		if slices.Contains(names, m.Name) && !slices.Contains(out, m.Name) {
+			out = append(out, m.Name)
+		}
+	}
+	for _, n := range names {
+		if !slices.Contains(out, n) {
+			out = append(out, n)
+		}
+	}
+	return out
 }
 
 // carried lists the values a catalog carries, numbers in order.
