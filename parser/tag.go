@@ -744,6 +744,14 @@ func (p *tagger) wordUnit(k int) int {
 			p.add(specConstraint(u.start, u.end, d, "battery size word"))
 			return 0
 		}
+		// A tyre's load range, "load range e" (the letter of its ply
+		// rating, common practice), a load rating: hard.
+		if u.text == "load" && (p.category == "tyres" || p.category == "") && k+2 < len(p.units) && p.units[k+1].text == "range" &&
+			p.units[k+2].kind == uWord && len(p.units[k+2].text) == 1 && strings.Contains("bcdef", p.units[k+2].text) {
+			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: p.units[k+2].end, Name: "load range " + p.units[k+2].text, Strictness: Hard,
+				Evidence: "a tyre's load range, a load rating, matched in the product's words; never dropped"})
+			return 2
+		}
 		// A fire extinguisher's classes, "abc", "bc", "k" (the classes of
 		// fire it is rated for, NFPA 10, from memory): one rated for less
 		// is no substitute, so the phrase is hard.

@@ -160,7 +160,7 @@ func (p *tagger) value(k int) int {
 	if n, ok := p.vesaPattern(k, k+1, u.start); ok {
 		return n // "400x400 vesa"
 	}
-	if p.halfNeck(k) {
+	if p.halfNeck(k) || p.wheelFit(k) {
 		return 0
 	}
 	from, ok := p.readSingle(v.From)
@@ -587,6 +587,46 @@ func (p *tagger) apparelFraction(k int, q quantity) (int, bool) {
 	return 0, true
 }
 
+// wheelFit reads what a wheel and its lug nuts must have to fit the
+// car, written as two numbers by an x: a wheel's bolt pattern, "5x114.3"
+// (the lugs, 3 to 10, on a pitch circle of 98 to 210 mm; common
+// practice), a hard phrase in the product's words; and a lug nut's or a
+// wheel stud's metric thread, "12x1.5" (ISO 261), a hard designation.
+// Neither is ever widened: a wheel that does not fit can come off. It
+// reports whether it read one.
+func (p *tagger) wheelFit(k int) bool {
+	u := &p.units[k]
+	v := u.item.Value
+	if v.To != nil || v.Post != "" || v.From.Dims == nil || len(v.From.Dims.Parts) != 2 {
+		return false
+	}
+	var n [2]number
+	for i, q := range v.From.Dims.Parts {
+		if q.Unit != "" || q.Mark != "" || q.Currency != "" || q.Label != "" || q.Num.Only != nil || q.Num.Frac != nil {
+			return false
+		}
+		num, err := parseNum(q.Num)
+		if err != nil {
+			return false
+		}
+		n[i] = num
+	}
+	switch {
+	case (p.headUnder("wheel") || p.headUnder("wheel spacer")) && n[0].integer && n[0].value >= 3 && n[0].value <= 10 && n[1].value >= 98 && n[1].value <= 210:
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: n[0].decimal + "x" + n[1].decimal, Strictness: Hard,
+			Evidence: "a wheel's bolt pattern, lugs by pitch circle in mm, matched in the product's words; never dropped"})
+		return true
+	case p.headUnder("lug nut") || p.headUnder("wheel stud"):
+		d, err := spec.MetricThreadSize(n[0].value, n[1].value)
+		if err != nil {
+			return false
+		}
+		p.add(specConstraint(u.start, u.end, d, "a lug nut's thread, diameter by pitch in mm"))
+		return true
+	}
+	return false
+}
+
 // halfNeck reads a shirt's neck in half inches and its sleeve, "15.5
 // 34/35", on clothes: the grammar takes it for a mixed number with a
 // decimal whole, an error anywhere else ("2.5 1/2 in"). Necks run from
@@ -806,31 +846,36 @@ var cellSizes = map[string]bool{"10440": true, "14500": true, "16340": true, "18
 // dimension it measures, and the amounts that dimension takes, in
 // inches (nil for any).
 var namedDimensions = map[string]struct {
-	dimension, what string
-	holds           func(inches float64) bool
+	dimension, what, unit string
+	holds                 func(amount float64) bool // in unit; nil for any
 }{
-	"drive": {"drive_size", "the square drive", func(v float64) bool { return driveSizes[v] }},
-	"nap":   {"nap", "the depth of a roller's pile", nil},
+	"drive": {"drive_size", "the square drive", "in", func(v float64) bool { return driveSizes[v] }},
+	"nap":   {"nap", "the depth of a roller's pile", "in", nil},
+	"cca":   {"cold_cranking_amps", "a battery's cold cranking amps", "a", nil},
 }
 
 // namedMeasure tags q and the word after it at unit k as the measure the
-// word names (namedDimensions), in inches when no unit is typed, on a
+// word names (namedDimensions), in its unit when no unit is typed, on a
 // product with a slot of that dimension or, for a drive, on none. It
 // returns the extra units used, or 0.
 func (p *tagger) namedMeasure(k int, q quantity) int {
 	w, _ := p.nextWord(k)
-	if w == nil || q.hasUnit && q.unit.Quantity != units.Length {
+	if w == nil {
 		return 0
 	}
 	named, ok := namedDimensions[w.text]
 	if !ok {
 		return 0
 	}
-	inches := q.num.value
-	if q.hasUnit {
-		inches = q.num.value * q.unit.ToBase / mustUnit("in").ToBase
+	in := mustUnit(named.unit)
+	if q.hasUnit && q.unit.Quantity != in.Quantity {
+		return 0
 	}
-	if named.holds != nil && !named.holds(inches) {
+	amount := q.num.value
+	if q.hasUnit {
+		amount = q.num.value * q.unit.ToBase / in.ToBase
+	}
+	if named.holds != nil && !named.holds(amount) {
 		return 0
 	}
 	slotted := p.head == nil && named.dimension == "drive_size"
@@ -840,7 +885,7 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	if !slotted {
 		return 0
 	}
-	sym := "in"
+	sym := named.unit
 	if q.hasUnit {
 		sym = q.unit.Symbol
 	}

@@ -386,7 +386,7 @@ func (pol *Policy) settings(key []string, s settingsTOML, at func([]string, stri
 // a tool's voltage, what a ladder or a strap is rated to carry), a
 // breaker's or a switch's poles, and gauge numbers outside wiring (a
 // shotgun's, a needle's, sheet metal's).
-var safetyDimensions = []string{"current", "gauge", "load_rating", "peak_current", "poles", "voltage"}
+var safetyDimensions = []string{"cold_cranking_amps", "current", "gauge", "load_rating", "peak_current", "poles", "voltage"}
 
 // fitDimensions are the measure dimensions the built-in policy makes
 // hard for some product types because a part must have them to fit or

@@ -67,7 +67,8 @@ type vocabulary struct {
 // layout numbers the index's field layout: 2 files each tyre also by its
 // size alone (parser.TyreSize); 3 maps the dimensions and designations
 // added with it: a lamp's colour temperature, a pipe's schedule, a
-// socket's drive and size, a roller's nap, a breaker's poles. An index
+// socket's drive and size, a roller's nap, a breaker's poles, a battery's
+// cold cranking amps. An index
 // without the number is layout 1.
 const layout = 3
 
