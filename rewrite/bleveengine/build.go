@@ -68,8 +68,7 @@ type vocabulary struct {
 // size alone (parser.TyreSize); 3 maps the dimensions and designations
 // added with it: a lamp's colour temperature, a pipe's schedule, a
 // socket's drive and size, a roller's nap, a breaker's poles, a battery's
-// cold cranking amps. An index
-// without the number is layout 1.
+// cold cranking amps. An index without the number is layout 1.
 const layout = 3
 
 // ErrOldLayout is the error Open returns, wrapped, for an index written
