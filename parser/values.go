@@ -1529,6 +1529,29 @@ var countWords = map[string]string{
 	"pole": "poles", "poles": "poles",
 }
 
+// ladderTypes are a ladder's duty ratings (ANSI A14, from memory: type
+// IAA 375 lb, IA 300 lb, I 250 lb, II 225 lb, III 200 lb).
+// The key is as typed, the value as the standard writes it, in roman
+// numerals.
+var ladderTypes = map[string]string{"iaa": "iaa", "ia": "ia", "i": "i", "ii": "ii", "iii": "iii", "1aa": "iaa", "1a": "ia", "1": "i", "2": "ii", "3": "iii"}
+
+// ladderType reads "type ia" at word unit k on a ladder as its duty
+// rating, a load rating: a hard phrase in the product's words, where
+// "type" and "i" were filler. It returns the extra units used, or -1.
+func (p *tagger) ladderType(k int) int {
+	if p.units[k].text != "type" || k+1 >= len(p.units) || !p.headUnder("ladder") {
+		return -1
+	}
+	v := &p.units[k+1]
+	rating := ladderTypes[strings.ToLower(p.q[v.start:v.end])]
+	if rating == "" {
+		return -1
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: v.end, Name: "type " + rating, Strictness: Hard,
+		Evidence: "a ladder's duty rating, a load rating, matched in the product's words; never dropped"})
+	return 1
+}
+
 // poleWords count a breaker's or a switch's poles in words: "double pole"
 // is two (common practice in electrical supply).
 var poleWords = map[string]float64{"single": 1, "double": 2, "triple": 3}
