@@ -848,10 +848,14 @@ var cellSizes = map[string]bool{"10440": true, "14500": true, "16340": true, "18
 var namedDimensions = map[string]struct {
 	dimension, what, unit string
 	holds                 func(amount float64) bool // in unit; nil for any
+	// anywhere is set for a word that names the dimension on any
+	// product, with a unit typed: "300 lb capacity" on a chair.
+	anywhere bool
 }{
-	"drive": {"drive_size", "the square drive", "in", func(v float64) bool { return driveSizes[v] }},
-	"nap":   {"nap", "the depth of a roller's pile", "in", nil},
-	"cca":   {"cold_cranking_amps", "a battery's cold cranking amps", "a", nil},
+	"drive":    {"drive_size", "the square drive", "in", func(v float64) bool { return driveSizes[v] }, false},
+	"nap":      {"nap", "the depth of a roller's pile", "in", nil, false},
+	"cca":      {"cold_cranking_amps", "a battery's cold cranking amps", "a", nil, false},
+	"capacity": {"load_rating", "the load it is rated to carry", "lb", nil, true},
 }
 
 // namedMeasure tags q and the word after it at unit k as the measure the
@@ -863,8 +867,12 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	if w == nil {
 		return 0
 	}
+	end, used := w.end, 1
+	if (w.text == "weight" || w.text == "load") && k+2 < len(p.units) && p.units[k+2].kind == uWord && p.units[k+2].text == "capacity" {
+		w, end, used = &p.units[k+2], p.units[k+2].end, 2 // "300 lb weight capacity"
+	}
 	named, ok := namedDimensions[w.text]
-	if !ok {
+	if !ok || named.anywhere && !q.hasUnit {
 		return 0
 	}
 	in := mustUnit(named.unit)
@@ -878,7 +886,7 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	if named.holds != nil && !named.holds(amount) {
 		return 0
 	}
-	slotted := p.head == nil && named.dimension == "drive_size"
+	slotted := named.anywhere || p.head == nil && named.dimension == "drive_size"
 	for _, sl := range p.lex.SlotsOf(p.head) {
 		slotted = slotted || sl.Dimension == named.dimension
 	}
@@ -889,8 +897,8 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	if q.hasUnit {
 		sym = q.unit.Symbol
 	}
-	return p.wordMeasure(p.units[k].start, w.end, q, sym, named.dimension,
-		fmt.Sprintf("a number before %q: %s", w.text, named.what))
+	p.wordMeasure(p.units[k].start, end, q, sym, named.dimension, fmt.Sprintf("a number before %q: %s", w.text, named.what))
+	return used
 }
 
 // suitSize reads a suit's chest and length, "42r", "40l", "38 short", on

@@ -187,6 +187,7 @@ func TestApply(t *testing.T) {
 		{"20 amp breaker", "a current rating is hard everywhere", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"double pole breaker", "so is a breaker's count of poles", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"car battery 650 cca", "and a battery's cold cranking amps", []parser.Strictness{parser.Firm, parser.Hard}},
+		{"office chair 300 lb capacity", "and a weight capacity, as a load rating", []parser.Strictness{parser.Firm, parser.Hard}},
 		{"12v drill", "so is a voltage", []parser.Strictness{parser.Hard, parser.Firm}},
 		{"extension ladder 300 lb", "and a load rating", []parser.Strictness{parser.Firm, parser.Hard}},
 		{"5/16 carriage bolt 2 in", "a bolt's diameter is hard, inherited from bolt; its length firm", []parser.Strictness{parser.Hard, parser.Firm, parser.Firm}},
