@@ -437,10 +437,11 @@ func (p *tagger) findHead() {
 // a usb cable, an hdmi2.1 cable an hdmi cable (common practice).
 var gradeTypes = []struct{ prefix, name string }{{"cat", "ethernet cable"}, {"usb", "usb cable"}, {"hdmi", "hdmi cable"}}
 
-// gradeNarrows is the product type below head that a grade code of the
-// query names, with the code, when head is that type's parent: "cat6
-// cable" heads with an ethernet cable, as the lexicon's "cat6 cable"
-// would if the code were not read first. Else nil.
+// gradeNarrows is the product type below head that a grade code or a
+// connector of the query names, with the code, when head is that type's
+// parent: "cat6 cable" heads with an ethernet cable, as the lexicon's
+// "cat6 cable" would if the code were not read first, and "usb type c
+// cable" with a usb cable. Else nil.
 func (p *tagger) gradeNarrows(head *lexicon.Entry) (*lexicon.Entry, string) {
 	if head == nil {
 		return nil, ""
@@ -454,7 +455,12 @@ func (p *tagger) gradeNarrows(head *lexicon.Entry) (*lexicon.Entry, string) {
 		if raw == "" && u.kind == uItem && u.item.Code != nil {
 			raw = strings.ToLower(p.q[u.start:u.end])
 		}
-		if !gradeCode.MatchString(raw) {
+		if raw == "" && u.kind == uWord {
+			raw, _ = p.connectorSpan(k) // "usb type c cable"
+		} else if !gradeCode.MatchString(raw) {
+			continue
+		}
+		if raw == "" {
 			continue
 		}
 		for _, g := range gradeTypes {
@@ -593,21 +599,7 @@ var connectors = map[string]string{
 // "type" was filler and "c" a stray letter. It returns the extra units
 // used, or -1.
 func (p *tagger) connectorAt(k int) int {
-	key, name, last := "", "", -1
-	for j, words := k, 0; j < len(p.units) && words < 3; j++ {
-		v := &p.units[j]
-		if v.kind == uSym && p.q[v.start:v.end] == "-" && j > k {
-			continue
-		}
-		if v.kind != uWord || j > k && v.entries != nil && !fillerOnly(v) {
-			break
-		}
-		words++
-		key += strings.ReplaceAll(v.text, "-", "")
-		if c, ok := connectors[key]; ok {
-			name, last = c, j
-		}
-	}
+	name, last := p.connectorSpan(k)
 	if last < 0 {
 		return -1
 	}
@@ -652,6 +644,27 @@ func (p *tagger) spacedCode(k int) (string, int) {
 		}
 	}
 	return "", -1
+}
+
+// connectorSpan is the connector named at unit k (connectorAt), and the
+// index of its last unit; "", -1 when there is none.
+func (p *tagger) connectorSpan(k int) (string, int) {
+	key, name, last := "", "", -1
+	for j, words := k, 0; j < len(p.units) && words < 3; j++ {
+		v := &p.units[j]
+		if v.kind == uSym && p.q[v.start:v.end] == "-" && j > k {
+			continue
+		}
+		if v.kind != uWord || j > k && v.entries != nil && !fillerOnly(v) {
+			break
+		}
+		words++
+		key += strings.ReplaceAll(v.text, "-", "")
+		if c, ok := connectors[key]; ok {
+			name, last = c, j
+		}
+	}
+	return name, last
 }
 
 // fillerOnly reports whether every lexicon reading of unit v is filler.
