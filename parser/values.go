@@ -713,6 +713,9 @@ func (p *tagger) spelledPair(k int, words map[string]string, first string, pair 
 			return "", "", 0, false
 		}
 		ns := p.bareParts(num)
+		if len(ns) != 1 {
+			ns = p.inchParts(num) // "9 inch inseam"
+		}
 		if len(ns) != 1 || ns[0].fraction {
 			return "", "", 0, false
 		}
@@ -733,6 +736,24 @@ func (p *tagger) spelledPair(k int, words map[string]string, first string, pair 
 	p.add(Constraint{Kind: KindSize, Start: p.units[k].start, End: end, Size: &Size{System: what, Value: n},
 		Evidence: what + " spelt out on " + p.head.Name})
 	return 1
+}
+
+// inchParts is the number of unit v when it is one amount in inches
+// ("9 inch", `30"`), as a garment's measures are written; else nil.
+func (p *tagger) inchParts(v *unit) []number {
+	it := v.item
+	if it.Value == nil || it.Value.To != nil || it.Value.Post != "" || it.Value.From.Dims == nil || len(it.Value.From.Dims.Parts) != 1 {
+		return nil
+	}
+	q := it.Value.From.Dims.Parts[0]
+	if u, ok := units.Lookup(q.Unit, p.opts.Volume); !(q.Mark == `"` || ok && u.Symbol == "in") || q.Currency != "" {
+		return nil
+	}
+	n, err := parseNum(q.Num)
+	if err != nil {
+		return nil
+	}
+	return []number{n}
 }
 
 // bareOrUnit reports whether unit v is one whole number with unit sym.
