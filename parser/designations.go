@@ -242,7 +242,7 @@ func (p *tagger) scheduleAfter(k int) int {
 	}
 	number, end := n.Whole, v.end
 	switch {
-	case q.Unit == "s" && n.Frac == nil:
+	case strings.EqualFold(q.Unit, "s") && n.Frac == nil:
 		number += "s" // "sch 10s", read as seconds
 	case q.Unit != "" && n.Frac == nil:
 		return 0

@@ -864,8 +864,8 @@ func (p *tagger) bare(start, end int, q quantity) {
 var cellSizes = map[string]bool{"10440": true, "14500": true, "16340": true, "18350": true, "18650": true, "20700": true, "21700": true, "26650": true, "32650": true}
 
 // namedDimensions are the words that, after a number, name the
-// dimension it measures, and the amounts that dimension takes, in
-// inches (nil for any).
+// dimension it measures: the dimension, what it is (for the evidence),
+// the unit a number of no unit is read in, and the amounts it takes.
 var namedDimensions = map[string]struct {
 	dimension, what, unit string
 	holds                 func(amount float64) bool // in unit; nil for any
@@ -881,8 +881,9 @@ var namedDimensions = map[string]struct {
 
 // namedMeasure tags q and the word after it at unit k as the measure the
 // word names (namedDimensions), in its unit when no unit is typed, on a
-// product with a slot of that dimension or, for a drive, on none. It
-// returns the extra units used, or 0.
+// product with a slot of that dimension; a drive also on no product
+// type, and a capacity, with its unit typed, on any. It returns the
+// extra units used, or 0.
 func (p *tagger) namedMeasure(k int, q quantity) int {
 	w, _ := p.nextWord(k)
 	if w == nil {

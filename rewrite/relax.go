@@ -94,9 +94,8 @@ func (rw *Rewriter) exactItems(r *parser.Result) []*item {
 // ends in its noun (common knowledge of English). It is -1 when the
 // query has a head product type, a designation, a part number or a
 // model it fits, or that word is known or no plain word (a colour, a
-// size, a number). Dropping it would show what the
-// other words match, a hair dryer for "dry hair", when the shop carries
-// no shampoo.
+// size, a number). Dropping it would show what the other words match, a
+// hair dryer for "dry hair", when the shop carries no shampoo.
 func unknownHead(r *parser.Result) int {
 	if headIndex(r) >= 0 {
 		return -1
@@ -442,13 +441,12 @@ func (rw *Rewriter) replaceTypo(ctx context.Context, i int, c parser.Constraint)
 }
 
 // nearestWords are the vocabulary words an unknown word w may be a typo
-// of, likeliest first: for words of 5 letters or more, those that
-// differ from it only in vowels, within two edits ("sandles" for
-// sandals), then those of the least edit
-// distance, within 1 for words of 4 to 7 letters and 2 for longer ones
-// ("candles"), each in the vocabulary's order. It is nil for shorter
-// words, numbers and codes, or when no word is that near.
-// An error is the engine's, reading the catalog's words.
+// of, likeliest first: for words of 5 letters or more, those that differ
+// from it only in vowels, within two edits ("sandles" for sandals), then
+// those of the least edit distance, within 1 for words of 4 to 7 letters
+// and 2 for longer ones ("candles"), each in the vocabulary's order. It
+// is nil for shorter words, numbers and codes, or when no word is that
+// near. An error is the engine's, reading the catalog's words.
 func (rw *Rewriter) nearestWords(ctx context.Context, w string) ([]*wordEntry, error) {
 	limit, ok := typoLimit(w)
 	if !ok {
