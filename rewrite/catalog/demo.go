@@ -40,10 +40,11 @@ import (
 //
 // Products are drawn one after another from a single stream, so
 // Demo(m, seed) is the first m products of Demo(n, seed) for m <= n.
-// Measures added to a kind after the catalog was first drawn (a bulb's
-// colour temperature) come from a second stream, drawn only for the
-// products of such kinds, so adding one leaves every other product, and
-// every other attribute of those products, as it was.
+// Measures and designations added to a kind after the catalog was
+// first drawn (a bulb's colour temperature, a pipe's schedule) come from
+// a second stream, drawn only for the products of such kinds, so adding
+// one leaves every other product, and every other attribute of those
+// products, as it was.
 // n <= 0 gives an empty catalog.
 func Demo(n int, seed uint64) []Product {
 	if n <= 0 {
@@ -193,7 +194,7 @@ type demoKind struct {
 	shop        bool     // takes the store's colour names
 	noColour    bool
 	groups      []demoGroup
-	later       []demoGroup // measures added later, from the second stream
+	later       []demoGroup // measures and designations added later, from the second stream
 	specs       []string    // one is chosen, smallest first
 	beds        bool        // sold in bed sizes
 	compat      []string    // models it fits
@@ -313,8 +314,8 @@ func demoPick(r *rand.Rand, s []string) string {
 	return s[r.IntN(len(s))]
 }
 
-// demoProduct draws product number id from r, and the measures its kind
-// gained later from later.
+// demoProduct draws product number id from r, and the measures and
+// designations its kind gained later from later.
 func demoProduct(r, later *rand.Rand, id int) Product {
 	w := r.IntN(demoDeptTotal)
 	var d *demoDept
