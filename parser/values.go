@@ -426,6 +426,14 @@ func (p *tagger) point(k int, q quantity) int {
 	if w != nil && w.text == "k" && !q.hasUnit && q.num.integer && q.num.value >= 1000 && q.num.value <= 10000 && p.lit() {
 		return p.wordMeasure(u.start, w.end, q, "kelvin", "", "k after a number of 1000 to 10000: a colour temperature in kelvin")
 	}
+	// "3 way", "3-way", "4 way": a switch or a lamp that works from
+	// three or four places or levels (common practice), a firm phrase in
+	// the product's words, not a number and a stray word.
+	if way, used := p.wayAfter(k); way != nil && !q.hasUnit && (q.num.decimal == "3" || q.num.decimal == "4") {
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: way.end, Name: q.num.decimal + "-way", Strictness: Firm,
+			Evidence: "a switch's or a lamp's ways, matched in the product's words"})
+		return used
+	}
 	// A display or video resolution: "4k", "1080p", on electronics and
 	// cameras or with no product type (common practice), a firm phrase
 	// in the product's words: a 4K screen is not a 1080p one.
@@ -458,6 +466,20 @@ func (p *tagger) point(k int, q quantity) int {
 	}
 	p.bare(u.start, u.end, q)
 	return 0
+}
+
+// wayAfter is the word "way" after the number at unit k, spaced or after
+// a dash ("3 way", "3-way"), and the units it takes; nil when there is
+// none.
+func (p *tagger) wayAfter(k int) (*unit, int) {
+	if w, _ := p.nextWord(k); w != nil && w.text == "way" {
+		return w, 1
+	}
+	if k+2 < len(p.units) && p.units[k+1].kind == uSym && p.units[k+1].tok.Value == "-" && !p.units[k+1].spaceBefore &&
+		p.units[k+2].kind == uWord && p.units[k+2].text == "way" && !p.units[k+2].spaceBefore {
+		return &p.units[k+2], 2
+	}
+	return nil, 0
 }
 
 // wordMeasure tags q, a number and the word after it, [start, end), as a
@@ -1556,7 +1578,7 @@ var countWords = map[string]string{
 	"burner": "burners", "burners": "burners", "slice": "slices", "outlet": "outlets", "outlets": "outlets",
 	"port": "ports", "ports": "ports", "ring": "rings", "gang": "gangs", "light": "lights", "lights": "lights",
 	"speed": "speeds", "blade": "blades", "blades": "blades", "ply": "ply", "step": "steps", "steps": "steps",
-	"pole": "poles", "poles": "poles",
+	"pole": "poles", "poles": "poles", "wick": "wicks", "wicks": "wicks",
 }
 
 // ladderTypes are a ladder's duty ratings (ANSI A14, from memory: type
