@@ -2,6 +2,7 @@ package parser
 
 import (
 	"fmt"
+	"math"
 	"slices"
 	"strconv"
 	"strings"
@@ -140,6 +141,23 @@ func (p *tagger) item(k int) int {
 	case it.Compare != nil:
 		s, ok := p.readSingle(it.Compare.Val)
 		if ok {
+			// "under 1k", "under 2k usd": thousands, as shoppers write
+			// prices, and a price whatever slot the number would fit (a
+			// laptop's 2000 GB).
+			if w, spaced := p.nextWord(k); w != nil && !spaced && w.text == "k" && thousands(&s) {
+				end, used := w.end, 1
+				if !s.price {
+					s.price, s.currency, s.amount = true, p.opts.Currency, s.parts[0].num
+					if c, ok := p.currency(strings.ToLower(p.wordAfter(k + 1))); ok {
+						s.currency, end, used = c, p.units[k+2].end, 2
+					}
+					if s.currency == "" {
+						s.currency = "USD"
+					}
+				}
+				p.bound(u.start, end, s, it.Compare.Op)
+				return used
+			}
 			p.bound(u.start, u.end, s, it.Compare.Op)
 		}
 	case it.Value != nil:
@@ -1146,6 +1164,30 @@ func (p *tagger) price(start, end int, s single, min, max *number, evidence stri
 }
 
 // bound applies a comparison word to a single value.
+// wordAfter is the text of the word after unit k, spaced, or "".
+func (p *tagger) wordAfter(k int) string {
+	if w, spaced := p.nextWord(k); w != nil && spaced {
+		return w.text
+	}
+	return ""
+}
+
+// thousands multiplies s, a price or a bare number, by a thousand, and
+// reports whether it was one.
+func thousands(s *single) bool {
+	n := &s.amount
+	if !s.price {
+		if len(s.parts) != 1 || s.parts[0].hasUnit || s.parts[0].currency != "" {
+			return false
+		}
+		n = &s.parts[0].num
+	}
+	n.value *= 1000
+	n.decimal = strconv.FormatFloat(n.value, 'f', -1, 64)
+	n.integer = n.value == math.Trunc(n.value)
+	return true
+}
+
 func (p *tagger) bound(start, end int, s single, op string) {
 	isMin := minOps[op]
 	if !isMin && !maxOps[op] {
@@ -1172,6 +1214,20 @@ func (p *tagger) bound(start, end int, s single, op string) {
 		lo = &v
 	} else {
 		hi = &v
+	}
+	// "dress under 50 pounds": pounds spelt out, on a product sold by no
+	// weight, are pounds sterling.
+	if q.hasUnit && q.unit.Symbol == "lb" && strings.Contains(strings.ToLower(p.q[q.start:q.end]), "pound") && p.head != nil {
+		if _, weighed := p.slotFor(units.Mass, 0); !weighed {
+			s.price, s.currency, s.amount = true, "GBP", q.num
+			ev = join(ev, "pounds on a product sold by no weight: pounds sterling")
+			if isMin {
+				p.price(start, end, s, &s.amount, nil, ev)
+			} else {
+				p.price(start, end, s, nil, &s.amount, ev)
+			}
+			return
+		}
 	}
 	if q.hasUnit {
 		c := p.measure(start, end, q, q.label, lo, hi, q.unit)
