@@ -174,6 +174,7 @@ const (
 
 func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, within Plan) error {
 	c := it.c
+	drops := dropPhrase(c)
 	add := func(cl *Clause, op, detail, phrase string, cost float64) {
 		it.levels = append(it.levels, level{clause: cl, cost: cost,
 			relax: &Relaxation{Constraint: it.index, Text: c.Text, Kind: c.Kind, Operator: op, Detail: detail, Phrase: phrase}})
@@ -220,7 +221,9 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 		}
 		if cl != nil && cl.Field == string(parser.KindColour) {
 			// A colour misspelt: the colour, then the catalog colours near
-			// it, as a colour typed right is widened.
+			// it, as a colour typed right is widened; dropped, it is
+			// dropped as a colour is.
+			drops = "in any colour"
 			add(cl, OpReplace, fmt.Sprintf("%q read as %q", c.Name, fixed), "in "+fixed, costReplace)
 			wide, n, err := rw.widenFixedColour(ctx, cl, fixed, e.ColourTolerance)
 			if err != nil {
@@ -253,7 +256,7 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 	if c.Strictness >= parser.Firm {
 		drop = costDropFirm
 	}
-	add(nil, OpDrop, "dropped", dropPhrase(c), drop)
+	add(nil, OpDrop, "dropped", drops, drop)
 	return nil
 }
 

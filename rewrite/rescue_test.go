@@ -665,10 +665,10 @@ func hitIDs(t *testing.T, eng Engine, p Plan) []string {
 
 // A colour misspelt is read as the colour and, when the catalog has
 // none of that name, widened to the catalog colours near it, as a colour
-// typed right is: "burgandy" is one edit from burgundy (#800020 in the
-// lexicon, from memory), and the shop's merlot (#82001f, invented) is
-// within ΔE00 1 of it, far inside apparel's tolerance of 4; its navy is
-// not. The shop is invented.
+// typed right is, or dropped as one: "burgandy" is one edit from
+// burgundy (#800020 in the lexicon, from memory), and the shop's merlot
+// (#82001f, invented) is within ΔE00 1 of it, far inside apparel's
+// tolerance of 4; its navy is not. The shop is invented.
 func TestColourTypoIsWidened(t *testing.T) {
 	dresses := []product{
 		{ID: "DR-1", Type: "dress", Colour: "merlot", Hex: "#82001f"},
@@ -680,6 +680,12 @@ func TestColourTypoIsWidened(t *testing.T) {
 	}
 	if want := "Showing dresses in colours close to burgundy."; !strings.HasSuffix(o.Message, want) {
 		t.Errorf("message %q, want it to end %q", o.Message, want)
+	}
+	// With no colour near burgundy, the misspelt colour is dropped, and
+	// said to be dropped as a colour is.
+	o = mustRescue(t, dresses[1:], "burgandy dress")
+	if want := "Showing dresses in any colour."; o.Count != 1 || !strings.HasSuffix(o.Message, want) {
+		t.Errorf("count %d, message %q, want 1 and a message ending %q\n%s", o.Count, o.Message, want, o.Explanation)
 	}
 }
 
