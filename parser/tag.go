@@ -699,6 +699,9 @@ func (p *tagger) wordUnit(k int) int {
 	if n := p.ladderType(k); n >= 0 {
 		return n
 	}
+	if n := p.paperWord(k); n >= 0 {
+		return n
+	}
 	if n := p.modifiedColour(k); n > 0 {
 		return n
 	}

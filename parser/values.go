@@ -1660,6 +1660,34 @@ func (p *tagger) ladderType(k int) int {
 	return 1
 }
 
+// usPaper are the US paper sizes office goods are sold in (ANSI/ASME
+// Y14.1 letter 8.5 x 11 in, legal 8.5 x 14 in, ledger or tabloid 11 x 17
+// in; from memory).
+var usPaper = map[string]bool{"letter": true, "legal": true, "tabloid": true, "ledger": true}
+
+// paperWord reads a US paper size at word unit k ("letter", "letter
+// size") on office goods, or with "size" after it and no product type,
+// as a firm phrase in
+// the product's words, where "size" after it took the next number for a
+// hard size ("file folders letter size 100"). It returns the extra units
+// used, or -1.
+func (p *tagger) paperWord(k int) int {
+	u := &p.units[k]
+	if !usPaper[u.text] || u.entries != nil {
+		return -1
+	}
+	end, used := u.end, 0
+	if w, _ := p.nextWord(k); w != nil && w.text == "size" {
+		end, used = w.end, 1
+	}
+	if p.category != "office" && (p.head != nil || used == 0) {
+		return -1 // "letter opener"
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: u.start, End: end, Name: u.text, Strictness: Firm,
+		Evidence: "a US paper size, matched in the product's words"})
+	return used
+}
+
 // poleWords count a breaker's or a switch's poles in words: "double pole"
 // is two (common practice in electrical supply).
 var poleWords = map[string]float64{"single": 1, "double": 2, "triple": 3}
