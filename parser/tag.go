@@ -687,38 +687,31 @@ func (p *tagger) setNeg(start, end int, text string) {
 	p.neg, p.negEnd, p.negText, p.negIdx = start, end, text, len(p.res.Constraints)
 }
 
+// phraseReaders read a phrase that starts at a word unit, in order, before
+// the word's lexicon entries: each returns the extra units it used, or
+// -1 when the phrase is not its own. modifiedColour comes between the
+// two lists.
+var (
+	phraseReaders = []func(*tagger, int) int{(*tagger).lightColour, (*tagger).poleCount, (*tagger).ladderType, (*tagger).paperWord}
+	// spacedGrade comes before connectorAt: "hdmi 2.1" is the grade.
+	laterPhraseReaders = []func(*tagger, int) int{(*tagger).oneSize, (*tagger).apertureAt, (*tagger).spacedGrade, (*tagger).connectorAt, (*tagger).spelledSize}
+)
+
 // wordUnit tags a word unit and returns how many extra units it used.
 func (p *tagger) wordUnit(k int) int {
 	u := &p.units[k]
-	if n := p.lightColour(k); n >= 0 {
-		return n
-	}
-	if n := p.poleCount(k); n >= 0 {
-		return n
-	}
-	if n := p.ladderType(k); n >= 0 {
-		return n
-	}
-	if n := p.paperWord(k); n >= 0 {
-		return n
+	for _, read := range phraseReaders {
+		if n := read(p, k); n >= 0 {
+			return n
+		}
 	}
 	if n := p.modifiedColour(k); n > 0 {
 		return n
 	}
-	if n := p.oneSize(k); n >= 0 {
-		return n
-	}
-	if n := p.apertureAt(k); n >= 0 {
-		return n
-	}
-	if n := p.spacedGrade(k); n >= 0 {
-		return n // before the connector: "hdmi 2.1" is the grade
-	}
-	if n := p.connectorAt(k); n >= 0 {
-		return n
-	}
-	if n := p.spelledSize(k); n >= 0 {
-		return n
+	for _, read := range laterPhraseReaders {
+		if n := read(p, k); n >= 0 {
+			return n
+		}
 	}
 	if n, ok := p.vesaPattern(k+1, k, u.start); ok {
 		return n // "vesa 400x400"
