@@ -636,20 +636,9 @@ func (p *tagger) apparelFraction(k int, q quantity) (int, bool) {
 // reports whether it read one.
 func (p *tagger) wheelFit(k int) bool {
 	u := &p.units[k]
-	v := u.item.Value
-	if v.To != nil || v.Post != "" || v.From.Dims == nil || len(v.From.Dims.Parts) != 2 {
+	n := p.bareParts(u)
+	if len(n) != 2 || n[0].fraction || n[1].fraction {
 		return false
-	}
-	var n [2]number
-	for i, q := range v.From.Dims.Parts {
-		if q.Unit != "" || q.Mark != "" || q.Currency != "" || q.Label != "" || q.Num.Only != nil || q.Num.Frac != nil {
-			return false
-		}
-		num, err := parseNum(q.Num)
-		if err != nil {
-			return false
-		}
-		n[i] = num
 	}
 	switch {
 	case (p.headUnder("wheel") || p.headUnder("wheel spacer")) && n[0].integer && n[0].value >= 3 && n[0].value <= 10 && n[1].value >= 98 && n[1].value <= 210:
