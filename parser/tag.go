@@ -599,12 +599,18 @@ var connectors = map[string]string{
 // "type" was filler and "c" a stray letter. It returns the extra units
 // used, or -1.
 func (p *tagger) connectorAt(k int) int {
-	name, last := p.connectorSpan(k)
+	return p.firmPhrase(k, p.connectorSpan, "a connector, matched in the product's words")
+}
+
+// firmPhrase tags the phrase find finds at unit k, with the name and the
+// last unit it gives, as a firm keyword with evidence. It returns the
+// extra units used, or -1 when find finds none.
+func (p *tagger) firmPhrase(k int, find func(int) (string, int), evidence string) int {
+	name, last := find(k)
 	if last < 0 {
 		return -1
 	}
-	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: p.units[last].end, Name: name, Strictness: Firm,
-		Evidence: "a connector, matched in the product's words"})
+	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: p.units[last].end, Name: name, Strictness: Firm, Evidence: evidence})
 	return last - k
 }
 
@@ -617,13 +623,7 @@ var gradeWords = map[string]bool{"cat": true, "usb": true, "hdmi": true, "wifi":
 // where the number was read as a length and the word as a stray one. It
 // returns the extra units used, or -1.
 func (p *tagger) spacedGrade(k int) int {
-	code, last := p.spacedCode(k)
-	if last < 0 {
-		return -1
-	}
-	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: p.units[last].end, Name: code, Strictness: Firm,
-		Evidence: "a grade a standard names, written with a space, matched in the product's words"})
-	return last - k
+	return p.firmPhrase(k, p.spacedCode, "a grade a standard names, written with a space, matched in the product's words")
 }
 
 // spacedCode is the grade written with a space that starts at unit k, as
