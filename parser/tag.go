@@ -1150,7 +1150,7 @@ func (p *tagger) finish() {
 
 var specCategory = map[string]string{
 	"lumber": "lumber", "tyre": "tyres", "awg": "electrical", "metric_thread": "hardware",
-	"unified_thread": "hardware", "paper": "office", "battery": "batteries",
+	"unified_thread": "hardware", "paper": "office", "battery": "batteries", "pipe_schedule": "hardware",
 }
 
 // packOf reads "pack of 8" at unit k.
