@@ -18,6 +18,12 @@ type Constraint struct {
 	// Evidence is a short reason for the reading, e.g. "unit from product
 	// type lens".
 	Evidence string
+	// OrGroup, when not 0, joins this constraint to the others of the
+	// same OrGroup as alternatives the shopper offered, any one of which
+	// will do: "navy or black", "size 8 or 9", "full/queen". They are of
+	// one kind, and the planner makes them one requirement. Groups are
+	// numbered from 1 in query order; see [Result.Alternatives].
+	OrGroup int
 
 	// Name is the canonical lexicon name, for product types, colours,
 	// patterns, silhouettes, materials, audiences and brands.

@@ -195,3 +195,18 @@ func ExampleOptions_Check() {
 	// currency "EUR" is not a dollar currency; a bare "$" may mean AUD, CAD, HKD, MXN, NZD, SGD, USD (ISO 4217)
 	// unknown category "garden" (known: apparel, footwear, accessories, home, furniture, lumber, hardware, electrical, camera, tyres, office, batteries, electronics, paint, kitchen)
 }
+
+func ExampleResult_Alternatives() {
+	r := parser.Parse("navy or black shirt size s/m")
+	for _, i := range []int{0, 3, 4} {
+		var texts []string
+		for _, j := range r.Alternatives(i) {
+			texts = append(texts, r.Constraints[j].Text)
+		}
+		fmt.Printf("%q: any of %q\n", r.Constraints[i].Text, texts)
+	}
+	// Output:
+	// "navy": any of ["navy" "black"]
+	// "shirt": any of ["shirt"]
+	// "size s": any of ["size s" "m"]
+}

@@ -25,6 +25,7 @@ var goldenQueries = map[string]string{
 	"compatibility": "replacement filter for vt-200 vacuum",
 	"tyre":          "225/45 r17 winter tyres",
 	"errors":        "1/0 lens \xff under 99999999999999999999 usd",
+	"alternatives":  "navy or black shirt size s/m under $40",
 }
 
 func TestGolden(t *testing.T) {

@@ -54,6 +54,28 @@ func checkInvariants(t *testing.T, q string, r *Result) {
 			}
 		}
 	}
+	// Alternatives are two or more, of one kind, excluded alike, and
+	// numbered from 1 in query order.
+	groups := 0
+	for i, c := range r.Constraints {
+		if c.OrGroup == 0 {
+			continue
+		}
+		alts := r.Alternatives(i)
+		if len(alts) < 2 {
+			t.Fatalf("%q: constraint %d is alone in or-group %d", q, i, c.OrGroup)
+		}
+		for _, j := range alts {
+			if o := r.Constraints[j]; o.Kind != c.Kind || o.Excluded != c.Excluded || o.Strictness != c.Strictness {
+				t.Fatalf("%q: or-group %d joins %s %q with %s %q", q, c.OrGroup, c.Kind, c.Text, o.Kind, o.Text)
+			}
+		}
+		if alts[0] == i {
+			if groups++; c.OrGroup != groups {
+				t.Fatalf("%q: or-group %d is the %d-th in query order", q, c.OrGroup, groups)
+			}
+		}
+	}
 	for _, e := range r.Errors {
 		if e.Start < 0 || e.End > len(q) || e.Start > e.End {
 			t.Fatalf("%q: error span %d-%d out of bounds", q, e.Start, e.End)

@@ -31,6 +31,7 @@ type wireConstraint struct {
 	Excluded   bool       `json:"excluded"`
 	Inferred   bool       `json:"inferred"`
 	Evidence   string     `json:"evidence"`
+	OrGroup    int        `json:"or_group,omitempty"`
 
 	Name     string `json:"name,omitempty"`
 	Category string `json:"category,omitempty"`
@@ -115,7 +116,7 @@ func rawString(s *string) json.RawMessage {
 // then the fields of its kind.
 func (c Constraint) MarshalJSON() ([]byte, error) {
 	w := wireConstraint{Kind: c.Kind, Text: c.Text, Start: c.Start, End: c.End, Strictness: c.Strictness,
-		Excluded: c.Excluded, Inferred: c.Inferred, Evidence: c.Evidence,
+		Excluded: c.Excluded, Inferred: c.Inferred, Evidence: c.Evidence, OrGroup: c.OrGroup,
 		Name: c.Name, Category: c.Category, Parent: c.Parent, Target: c.Target, Code: c.Code}
 	if m := c.Measure; m != nil {
 		w.Dimension, w.Quantity = m.Dimension, m.Quantity
@@ -145,7 +146,7 @@ func (c *Constraint) UnmarshalJSON(b []byte) error {
 		return err
 	}
 	*c = Constraint{Kind: w.Kind, Text: w.Text, Start: w.Start, End: w.End, Strictness: w.Strictness,
-		Excluded: w.Excluded, Inferred: w.Inferred, Evidence: w.Evidence,
+		Excluded: w.Excluded, Inferred: w.Inferred, Evidence: w.Evidence, OrGroup: w.OrGroup,
 		Name: w.Name, Category: w.Category, Parent: w.Parent, Target: w.Target, Code: w.Code}
 	switch w.Kind {
 	case KindMeasure:

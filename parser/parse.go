@@ -68,6 +68,11 @@ func Parse(query string) *Result {
 //     excludes what it starts ("-cr2032", "-12awg", "-$50"), but before
 //     a bare number it is neither a sign nor an exclusion ("-20").
 //   - A quoted phrase is hard, whatever its kind.
+//   - Values of one kind joined by "or", or sizes of one system joined
+//     by a slash, are alternatives, one OrGroup ("navy or black",
+//     "full/queen"); colours joined by a slash are one two-tone colour.
+//     A number with no unit before "or" takes the unit after it ("12 or
+//     14 awg"), and an exclusion before "or" covers what follows it.
 func ParseWith(query string, opts Options) *Result {
 	r := &Result{Query: query}
 	if len(query) > opts.maxBytes() {
@@ -89,6 +94,12 @@ func ParseWith(query string, opts Options) *Result {
 		r.Errors = append(r.Errors, &Error{Start: c.Start, End: len(query),
 			Msg: fmt.Sprintf("query has %d constraints; the limit is %d, so the rest from here are not read", len(r.Constraints), max)})
 		r.Constraints = r.Constraints[:max]
+		// An alternative whose others were cut stands alone.
+		for i := range r.Constraints {
+			if r.Constraints[i].OrGroup != 0 && len(r.Alternatives(i)) < 2 {
+				r.Constraints[i].OrGroup = 0
+			}
+		}
 	}
 	sort.SliceStable(r.Errors, func(i, j int) bool { return r.Errors[i].Start < r.Errors[j].Start })
 	for _, e := range r.Errors {
@@ -168,5 +179,6 @@ func (p *tagger) run() {
 	p.findHead()
 	p.tag()
 	p.settleDimensions()
+	p.alternatives()
 	p.finish()
 }
