@@ -58,7 +58,7 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	}
 	for i, it := range items {
 		if it.c.IsHead() && !it.c.Excluded && state[i] == 0 {
-			noun = plural(it.c.Name)
+			noun = it.nameList(plural)
 		}
 	}
 	msg := lead + " Showing " + noun
@@ -126,7 +126,7 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		slices.Sort(from) // in the query's order
 		var all []string
 		for _, i := range from {
-			all = append(all, out.Parsed.Constraints[i].Text)
+			all = append(all, clauseText(out.Parsed, i))
 		}
 		if len(all) > 1 {
 			parts = append(parts, "Nothing carried is all of "+strings.Join(all[:len(all)-1], ", ")+" and "+all[len(all)-1])

@@ -60,6 +60,92 @@ type item struct {
 	// query of no product type (unknownHead): like a head product type it
 	// is never dropped.
 	names bool
+	// group holds the constraints of c's or-group, in query order, when
+	// it has one ("navy or black"): the item is all of them as one
+	// requirement, and c spans them, the head among them where there is
+	// one. It is nil for a constraint on its own.
+	group []parser.Constraint
+}
+
+// members are the constraints the item stands for: its or-group, or c.
+func (it *item) members() []parser.Constraint {
+	if it.group != nil {
+		return it.group
+	}
+	return []parser.Constraint{it.c}
+}
+
+// names joins the canonical names of the item's members with "or"
+// ("navy or black"), each through f (plural, say) when it is not nil.
+func (it *item) nameList(f func(string) string) string {
+	var names []string
+	for _, m := range it.members() {
+		n := m.Name
+		if f != nil {
+			n = f(n)
+		}
+		if !slices.Contains(names, n) {
+			names = append(names, n)
+		}
+	}
+	return orList(names)
+}
+
+// orList writes "a", "a or b", "a, b or c".
+func orList(xs []string) string {
+	if len(xs) < 2 {
+		return strings.Join(xs, "")
+	}
+	return strings.Join(xs[:len(xs)-1], ", ") + " or " + xs[len(xs)-1]
+}
+
+// newItem is the item of constraint i of r with its exact state: with
+// the alternatives of its or-group, when it is the first of one.
+func (rw *Rewriter) newItem(r *parser.Result, i int) *item {
+	it := &item{index: i, c: r.Constraints[i], solo: -1}
+	if alts := r.Alternatives(i); len(alts) > 1 {
+		first, last := r.Constraints[alts[0]], r.Constraints[alts[len(alts)-1]]
+		for _, j := range alts {
+			m := r.Constraints[j]
+			it.group = append(it.group, m)
+			if m.IsHead() {
+				it.c = m
+			}
+			it.c.Strictness = max(it.c.Strictness, m.Strictness)
+		}
+		it.c.Start, it.c.End = first.Start, last.End
+		it.c.Text = r.Query[first.Start:last.End]
+	}
+	exact := rw.itemClause(it)
+	it.levels = []level{{clause: &exact}}
+	return it
+}
+
+// itemClause is the item's exact clause: its constraint's, or any of the
+// values of its or-group's, in query order.
+func (rw *Rewriter) itemClause(it *item) Clause {
+	if it.group == nil {
+		return rw.exactClause(it.index, it.c)
+	}
+	cl := rw.exactClause(it.index, it.group[0])
+	for _, m := range it.group[1:] {
+		for _, v := range rw.exactClause(it.index, m).Values {
+			if !slices.Contains(cl.Values, v) {
+				cl.Values = append(cl.Values, v)
+			}
+		}
+	}
+	return cl
+}
+
+// clauseText is what the shopper typed for constraint i of r: the whole
+// of its or-group ("navy or black"), when it has one.
+func clauseText(r *parser.Result, i int) string {
+	alts := r.Alternatives(i)
+	if len(alts) == 0 {
+		return ""
+	}
+	return r.Query[r.Constraints[alts[0]].Start:r.Constraints[alts[len(alts)-1]].End]
 }
 
 // ladders builds each constraint's states: exact first, then every
@@ -78,11 +164,12 @@ func (rw *Rewriter) exactItems(r *parser.Result) []*item {
 	var items []*item
 	head := unknownHead(r)
 	for i, c := range r.Constraints {
-		if c.Kind == parser.KindFiller || c.Strictness == parser.Filler {
-			continue
+		if c.Kind == parser.KindFiller || c.Strictness == parser.Filler || r.Alternatives(i)[0] != i {
+			continue // filler, or an alternative the first of its group stands for
 		}
-		exact := rw.exactClause(i, c)
-		items = append(items, &item{index: i, c: c, solo: -1, levels: []level{{clause: &exact}}, names: i == head})
+		it := rw.newItem(r, i)
+		it.names = i == head
+		items = append(items, it)
 	}
 	return items
 }
@@ -186,8 +273,9 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 			return err
 		}
 		if cl != nil {
-			add(cl, OpWiden, fmt.Sprintf("to %s within ΔE00 %g of %s", textout.Count(n, "catalog colour", "catalog colours"), e.ColourTolerance, c.Name),
-				"in colours close to "+c.Name, costWiden)
+			names := it.nameList(nil)
+			add(cl, OpWiden, fmt.Sprintf("to %s within ΔE00 %g of %s", textout.Count(n, "catalog colour", "catalog colours"), e.ColourTolerance, names),
+				"in colours close to "+names, costWiden)
 		}
 	case parser.KindMeasure:
 		for _, w := range rw.widenMeasure(it, e) {
@@ -201,10 +289,31 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 			add(w.clause, OpWiden, w.detail, w.phrase, costWiden*1.5)
 		}
 	case parser.KindProductType:
-		if parent, ok := rw.lex.Lookup(lexicon.ProductType, c.Parent); ok {
-			cl := rw.exactClause(it.index, c)
-			cl.Values = rw.typeValues(parent)
-			add(&cl, OpWiden, "to the broader type "+parent.Name, "other "+plural(parent.Name), costWidenType)
+		// Each type of an or-group widens to its parent; one with none
+		// stays as it is.
+		cl := rw.itemClause(it)
+		cl.Values = nil
+		var parents, plurals []string
+		for _, m := range it.members() {
+			vals := rw.exactClause(it.index, m).Values
+			if parent, ok := rw.lex.Lookup(lexicon.ProductType, m.Parent); ok {
+				vals = rw.typeValues(parent)
+				if !slices.Contains(parents, parent.Name) {
+					parents, plurals = append(parents, parent.Name), append(plurals, plural(parent.Name))
+				}
+			}
+			for _, v := range vals {
+				if !slices.Contains(cl.Values, v) {
+					cl.Values = append(cl.Values, v)
+				}
+			}
+		}
+		if len(parents) > 0 {
+			detail := "to the broader type " + parents[0]
+			if len(parents) > 1 {
+				detail = "to the broader types " + orList(parents)
+			}
+			add(&cl, OpWiden, detail, "other "+orList(plurals), costWidenType)
 		}
 	case parser.KindPrice:
 		if c.Price.Max != nil && e.PriceStretch > 0 {
@@ -319,12 +428,50 @@ func (rw *Rewriter) typeValues(e *lexicon.Entry) []string {
 
 // widenColour lists the catalog colours within tol of the query colour.
 // An error is the engine's, reading the catalog's colours.
+//
+// For an or-group ("navy or black") it is the colours near any of them:
+// those near the first, then those near the next, and so on.
 func (rw *Rewriter) widenColour(ctx context.Context, it *item, tol float64) (*Clause, int, error) {
-	if it.c.Colour == nil || it.c.Colour.Lab == nil {
+	var out *Clause
+	var carried []string // the catalog's colours among the values
+	for _, m := range it.members() {
+		if m.Colour == nil || m.Colour.Lab == nil {
+			continue
+		}
+		l := m.Colour.Lab
+		cl, n, err := rw.nearColours(ctx, rw.exactClause(it.index, m), colour.Lab{L: l[0], A: l[1], B: l[2]}, m.Name, tol)
+		if err != nil {
+			return nil, 0, err
+		}
+		if cl == nil {
+			continue
+		}
+		for _, v := range cl.Values[:n] {
+			if !slices.Contains(carried, v) {
+				carried = append(carried, v)
+			}
+		}
+		if out == nil {
+			out = cl
+			continue
+		}
+		for _, v := range cl.Values {
+			if !slices.Contains(out.Values, v) {
+				out.Values = append(out.Values, v)
+			}
+		}
+	}
+	if out == nil {
 		return nil, 0, nil
 	}
-	l := it.c.Colour.Lab
-	return rw.nearColours(ctx, rw.exactClause(it.index, it.c), colour.Lab{L: l[0], A: l[1], B: l[2]}, it.c.Name, tol)
+	// The names asked, of the group, are in the clause too, whether or
+	// not the catalog has them; the count is of those it has.
+	for _, v := range rw.itemClause(it).Values {
+		if !slices.Contains(out.Values, v) {
+			out.Values = append(out.Values, v)
+		}
+	}
+	return out, len(carried), nil
 }
 
 // widenFixedColour is the colour clause cl, a typo read as the lexicon

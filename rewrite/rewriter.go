@@ -1190,11 +1190,12 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 			continue
 		}
 		rest := Plan{Clauses: append(append([]Clause(nil), hard.Clauses[:i]...), hard.Clauses[i+1:]...)}
-		n, err := s.countPlan(rest, nil, fmt.Sprintf("the hard constraints without %q", s.out.Parsed.Constraints[cl.From].Text))
+		text := clauseText(s.out.Parsed, cl.From)
+		n, err := s.countPlan(rest, nil, fmt.Sprintf("the hard constraints without %q", text))
 		if err != nil || n == 0 {
 			continue
 		}
-		m := Missing{Constraint: cl.From, Text: s.out.Parsed.Constraints[cl.From].Text}
+		m := Missing{Constraint: cl.From, Text: text}
 		if cat != nil && slices.Contains(ListedFields, cl.Field) {
 			// Among products of the kind asked for.
 			like := rest
