@@ -20,8 +20,8 @@ import (
 
 func TestTourHasEveryStop(t *testing.T) {
 	stops := Tour(catalog.Demo(3000, 1), lexicon.Default())
-	if len(stops) < 8 {
-		t.Fatalf("the tour has %d stops, want 8: %+v", len(stops), stops)
+	if len(stops) < 9 {
+		t.Fatalf("the tour has %d stops, want 9: %+v", len(stops), stops)
 	}
 	for _, s := range stops {
 		if s.Query == "" || s.Shows == "" {
@@ -57,6 +57,7 @@ func TestRun(t *testing.T) {
 	}
 	for _, want := range []string{
 		"exact matches",                     // the exact hit
+		"· or colour",                       // colours offered as alternatives
 		"in colours close to",               // the colour widened
 		"in any pattern",                    // the pattern dropped
 		"(inferred)",                        // the unit inferred

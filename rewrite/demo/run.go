@@ -125,7 +125,7 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 	}
 	fmt.Fprintf(w, "%d. %s\n   query:   %s\n", n, s.Shows, s.Query)
 	var read []string
-	for _, c := range o.Parsed.Constraints {
+	for i, c := range o.Parsed.Constraints {
 		if c.Kind == parser.KindFiller {
 			continue
 		}
@@ -133,7 +133,11 @@ func stop(ctx context.Context, w io.Writer, n int, s Stop, rw *rewrite.Rewriter,
 		if c.Inferred {
 			v += " (inferred)"
 		}
-		read = append(read, fmt.Sprintf("%s %s [%s]", c.Kind, v, c.Strictness))
+		or := ""
+		if c.OrGroup != 0 && c.Start > o.Parsed.Constraints[o.Parsed.Alternatives(i)[0]].Start {
+			or = "or " // one of alternatives, after the first
+		}
+		read = append(read, fmt.Sprintf("%s%s %s [%s]", or, c.Kind, v, c.Strictness))
 	}
 	fmt.Fprintf(w, "   read as: %s\n", strings.Join(read, " · "))
 	msg := o.Message

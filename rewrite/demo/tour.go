@@ -29,6 +29,7 @@ func Tour(ps []catalog.Product, lex *lexicon.Lexicon) []Stop {
 		}
 	}
 	add("an exact hit", exactHit(ps, lex))
+	add("two colours offered as alternatives: either will do", alternativeColours(ps, lex))
 	add("a colour the shop does not name, widened to its nearest colour names", widenedColour(ps, lex))
 	add("a pattern dropped while the size stays", droppedPattern(ps, lex))
 	add("a unit inferred from the product", inferredUnit(ps))
@@ -62,6 +63,43 @@ func exactHit(ps []catalog.Product, lex *lexicon.Lexicon) string {
 	for _, p := range ps {
 		if p.Colour != "" && isLexiconColour(lex, p.Colour) && p.ProductType != "" && (p.InStock == nil || *p.InStock) {
 			return p.Colour + " " + p.ProductType
+		}
+	}
+	return ""
+}
+
+// alternativeColours asks for a product type in either of two colours:
+// one the shop sells it in, and one it sells other types in but not
+// this one. Asked for both, a plain engine finds nothing.
+func alternativeColours(ps []catalog.Product, lex *lexicon.Lexicon) string {
+	sold := map[string]bool{}
+	for _, p := range ps {
+		if isLexiconColour(lex, p.Colour) {
+			sold[strings.ToLower(p.Colour)] = true
+		}
+	}
+	var colours []string
+	for c := range sold {
+		colours = append(colours, c)
+	}
+	sort.Strings(colours)
+	types, m := byType(ps)
+	for _, t := range types {
+		in, has := "", map[string]bool{}
+		for _, p := range m[t] {
+			c := strings.ToLower(p.Colour)
+			has[c] = true
+			if in == "" && sold[c] && (p.InStock == nil || *p.InStock) {
+				in = c
+			}
+		}
+		if in == "" {
+			continue
+		}
+		for _, c := range colours {
+			if !has[c] && !strings.Contains(c, " ") {
+				return c + " or " + in + " " + t
+			}
 		}
 	}
 	return ""
