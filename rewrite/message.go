@@ -53,7 +53,13 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 			noun = strings.TrimPrefix(r.Phrase, "other ")
 		case r.Kind == parser.KindProductType && r.Operator == OpDrop:
 		default:
-			phrases = append(phrases, r.Phrase)
+			p := r.Phrase
+			if r.Operator == OpDrop {
+				p = keptBeside(items, state, r)
+			}
+			if p != "" && !slices.Contains(phrases, p) {
+				phrases = append(phrases, p)
+			}
 		}
 	}
 	for i, it := range items {
@@ -70,6 +76,33 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 		msg += fmt.Sprintf(" (still only %d)", out.Count)
 	}
 	return msg + "."
+}
+
+// keptBeside is what a shopper reads of r, a drop, when the plan keeps
+// another constraint of its kind: "black brown boots" with black dropped
+// shows boots "in brown", not "in any colour". It is "" when that one
+// was relaxed too, as its own phrase says what is shown ("in colours
+// close to brown"), and r's own phrase when none is kept.
+func keptBeside(items []*item, state []int, r Relaxation) string {
+	lead, ok := map[parser.Kind]string{parser.KindColour: "in ", parser.KindMaterial: "in ", parser.KindPattern: "in ",
+		parser.KindSilhouette: "in ", parser.KindBrand: "from "}[r.Kind]
+	if !ok {
+		return r.Phrase
+	}
+	var kept []string
+	for i, it := range items {
+		if it.index == r.Constraint || it.c.Kind != r.Kind || it.c.Excluded || i >= len(state) || it.levels[state[i]].clause == nil {
+			continue
+		}
+		if state[i] > 0 {
+			return ""
+		}
+		kept = append(kept, it.nameList(nil))
+	}
+	if len(kept) == 0 {
+		return r.Phrase
+	}
+	return lead + strings.Join(kept, " and ")
 }
 
 // hardStopMessage explains that the constraints that are never relaxed

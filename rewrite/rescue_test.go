@@ -91,6 +91,10 @@ func TestRescue(t *testing.T) {
 			count: 4, ops: []string{"drop colour"}, message: "Showing rain jackets in any colour."},
 		{name: "hard stop on alternative sizes", query: "trail running shoes size 13 or 14", reason: "neither size is carried: the group is named as typed",
 			count: 0, message: "size 13 or 14 is not carried in trail running shoes; sizes carried: 7, 8, 9, 10, 11, 12."},
+		{name: "one of two colours dropped", query: "black brown hiking boots", reason: "HB-1 is brown, not black too: black is dropped and brown kept, so the boots shown are in brown, not in any colour",
+			count: 1, ops: []string{"drop colour"}, message: "Showing hiking boots in brown."},
+		{name: "two colours dropped", query: "navy lavender hiking boots", reason: "no hiking boot is near either colour: both are dropped, and the message says so once",
+			count: 1, ops: []string{"drop colour", "drop colour"}, message: "Showing hiking boots in any colour."},
 		{name: "drop an unknown word", query: "zorblax rain jacket", reason: "the unknown word is dropped; the product type stays: RJ-1 to RJ-4",
 			count: 4, ops: []string{"drop keyword"}},
 	} {
