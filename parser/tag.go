@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"regexp"
 	"slices"
+	"strconv"
 	"strings"
 	"unicode/utf8"
 
@@ -996,6 +997,26 @@ func (p *tagger) sizeAfter(k int) int {
 		c.End = p.units[k+2].end
 		p.add(c)
 		return used + 1
+	}
+	// A suit's length after its chest: "size 40r", "size 42 long", and
+	// "size 40l", whose L came as litres.
+	if c.Size.System == "numeric" && (p.headUnder("suit") || p.headUnder("blazer")) {
+		chest, length, next := c.Size.Value, "", false
+		if n := len(chest); n > 0 && (chest[n-1] == 'l' || chest[n-1] == 's') {
+			chest, length = chest[:n-1], chest[n-1:]
+		} else if k+2 < len(p.units) && p.units[k+2].kind == uWord && suitLengths[p.units[k+2].text] != "" {
+			length, next = suitLengths[p.units[k+2].text], true
+		}
+		if n, err := strconv.Atoi(chest); err == nil && n >= 32 && n <= 62 && length != "" {
+			c.Size.System, c.Size.Value = "suit", chest+length
+			c.Evidence += ": a suit's chest and length"
+			if next {
+				c.End = p.units[k+2].end
+				used++
+			}
+			p.add(c)
+			return used
+		}
 	}
 	// A shoe width may follow: "size 9.5 wide".
 	if k+2 < len(p.units) && p.units[k+2].kind == uWord {
