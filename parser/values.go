@@ -1632,20 +1632,34 @@ var countWords = map[string]string{
 // numerals.
 var ladderTypes = map[string]string{"iaa": "iaa", "ia": "ia", "i": "i", "ii": "ii", "iii": "iii", "1aa": "iaa", "1a": "ia", "1": "i", "2": "ii", "3": "iii"}
 
-// ladderType reads "type ia" at word unit k on a ladder as its duty
-// rating, a load rating: a hard phrase in the product's words, where
-// "type" and "i" were filler. It returns the extra units used, or -1.
-func (p *tagger) ladderType(k int) int {
-	if p.units[k].text != "type" || k+1 >= len(p.units) || !p.headUnder("ladder") {
+// copperTubeTypes are the wall types of copper water tube (ASTM B88,
+// from memory: type K has the thickest wall, then L, then M), which set
+// the pressure a tube holds and where plumbing codes allow it.
+var copperTubeTypes = map[string]string{"k": "k", "l": "l", "m": "m"}
+
+// typeRating reads "type ia" at word unit k on a ladder as its duty
+// rating, a load rating, and "type l" on a pipe as a copper tube's wall
+// type: a hard phrase in the product's words, where "type" and "ia" or
+// "l" were filler and a stray word, and a rescue dropped the letter. It
+// returns the extra units used, or -1.
+func (p *tagger) typeRating(k int) int {
+	if p.units[k].text != "type" || k+1 >= len(p.units) {
 		return -1
 	}
 	v := &p.units[k+1]
-	rating := ladderTypes[strings.ToLower(p.q[v.start:v.end])]
+	typed := strings.ToLower(p.q[v.start:v.end])
+	var rating, evidence string
+	switch {
+	case p.headUnder("ladder"):
+		rating, evidence = ladderTypes[typed], "a ladder's duty rating, a load rating"
+	case p.headUnder("pipe"):
+		rating, evidence = copperTubeTypes[typed], "a copper tube's wall type (ASTM B88), which sets the pressure it holds"
+	}
 	if rating == "" {
 		return -1
 	}
 	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: v.end, Name: "type " + rating, Strictness: Hard,
-		Evidence: "a ladder's duty rating, a load rating, matched in the product's words; never dropped"})
+		Evidence: evidence + ", matched in the product's words; never dropped"})
 	return 1
 }
 
