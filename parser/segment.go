@@ -38,6 +38,10 @@ type unit struct {
 	// ("saucepan lid"); feature marks one that describes a part ("with
 	// lid", "marble top"). Neither can be the head.
 	modifier, feature bool
+	// partTyped marks a feature that keeps its typed words, not the
+	// lexicon's name for them: a keyboard's "brown switches" are no
+	// light switch.
+	partTyped bool
 }
 
 // word is one matchable word: a lexer word, or one part of a hyphenated

@@ -197,10 +197,11 @@ func (p *tagger) isPT(i int) bool {
 // the second ("saucepan lid") and is a modifier. A product type after
 // "with", or after a material once a product type was named ("marble
 // top"), is a feature of the product, and so is a light's part named
-// after the light ("flood light motion sensor").
+// after the light ("flood light motion sensor"), or a keyboard's
+// switches named after the keyboard (partAfter).
 func (p *tagger) compounds() {
 	seenPT := false
-	var lamp *lexicon.Entry // the first product type named that gives light
+	var owners []*lexicon.Entry // the product types named, not features
 	for i := 0; i < len(p.units); i++ {
 		if !p.isPT(i) {
 			continue
@@ -225,14 +226,23 @@ func (p *tagger) compounds() {
 			u.feature = true // "laptop 16gb ram": the laptop's memory
 			continue
 		}
-		if lamp != nil && lightParts[u.chosen.Name] {
+		if p.partAfter(owners, u.chosen) {
 			u.feature = true // "flood light 5000k motion sensor"
+			if u.chosen.Name == "light switch" {
+				// A keyboard's switches, with their colour, which names
+				// how they press, not the keyboard's colour: "brown
+				// switches".
+				u.partTyped = true
+				if prev := &p.units[i-1]; prev.kind == uWord && prev.chosen != nil && prev.chosen.Kind == lexicon.Colour {
+					u.start, u.text = prev.start, prev.text+" "+u.text
+					p.units = append(p.units[:i-1], p.units[i:]...)
+					i--
+				}
+			}
 			continue
 		}
 		seenPT = true
-		if p.givesLight(u.chosen) {
-			lamp = u.chosen
-		}
+		owners = append(owners, u.chosen)
 		for p.isPT(i + 1) {
 			v := &p.units[i+1]
 			if v.chosen == u.chosen || p.broader(v.chosen, u.chosen) {
@@ -240,7 +250,7 @@ func (p *tagger) compounds() {
 				p.units = append(p.units[:i+1], p.units[i+2:]...)
 				continue
 			}
-			if lamp != nil && lightParts[v.chosen.Name] {
+			if p.partAfter(append(owners, u.chosen), v.chosen) {
 				break // "flood light motion sensor": the light's sensor
 			}
 			u.modifier = true
@@ -260,10 +270,23 @@ func (p *tagger) lumberAfter(i int) bool {
 	return false
 }
 
-// lightParts are the product types that, named after a light, are a
-// part of it: "flood light motion sensor" is a light that has one, where
-// "motion sensor light" is one too, the sensor qualifying the light.
-var lightParts = map[string]bool{"motion sensor": true}
+// partAfter reports whether product type e, named after the product
+// types owners, is a part of one of them rather than the product asked
+// for: a light's motion sensor ("flood light motion sensor", where
+// "motion sensor light" is a light too, the sensor qualifying it), a
+// keyboard's switches ("mechanical keyboard brown switches" is a
+// keyboard, not a light switch: common practice in keyboards).
+func (p *tagger) partAfter(owners []*lexicon.Entry, e *lexicon.Entry) bool {
+	for _, o := range owners {
+		switch {
+		case e.Name == "motion sensor" && p.givesLight(o):
+			return true
+		case e.Name == "light switch" && o.Name == "keyboard":
+			return true
+		}
+	}
+	return false
+}
 
 // givesLight reports whether product type e gives light: it has a
 // colour temperature slot.
@@ -798,11 +821,14 @@ func (p *tagger) wordUnit(k int) int {
 		return 0
 	}
 	if e.Kind == lexicon.ProductType && (u.modifier || u.feature) {
-		ev := "product type before another: a modifier"
+		ev, name := "product type before another: a modifier", e.Name
 		if u.feature {
 			ev = "product type naming a part of the product: a feature"
 		}
-		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: e.Name, Evidence: ev})
+		if u.partTyped {
+			ev, name = "a keyboard's switches: a feature, in the words typed", u.text
+		}
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: name, Evidence: ev})
 		return 0
 	}
 	if e.Kind == lexicon.Audience || e.Kind == lexicon.Silhouette || e.Kind == lexicon.Filler {
