@@ -280,6 +280,14 @@ func (p *tagger) point(k int, q quantity) int {
 	if n := p.percent(k, q); n > 0 {
 		return n
 	}
+	// A version after a cable of a standard's grades ("hdmi cable 10 ft
+	// 2.1", "usb cable 3.0"): the grade, as if written after the
+	// standard's name, not a second length of 2.1 ft.
+	if std := p.cableStandard(); std != "" && !q.hasUnit && !q.num.integer && gradeCode.MatchString(std+q.num.decimal) {
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: std + q.num.decimal, Strictness: Firm,
+			Evidence: "a version number on the cable: its " + std + " grade, matched in the product's words"})
+		return 0
+	}
 	// A nail's penny size, "16d": its length (common practice; the table
 	// of lengths from memory), where the d was read as a depth.
 	if in, ok := pennyInches[q.num.decimal]; ok && q.label == "d" && !q.hasUnit && p.headUnder("nail") {
@@ -950,6 +958,19 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	}
 	p.wordMeasure(p.units[k].start, end, q, sym, named.dimension, fmt.Sprintf("a number before %q: %s", w.text, named.what))
 	return used
+}
+
+// cableStandard is the standard whose grades the head product type is
+// sold by, "hdmi" for an hdmi cable and "usb" for a usb cable; "" for
+// any other.
+func (p *tagger) cableStandard() string {
+	switch {
+	case p.headUnder("hdmi cable"):
+		return "hdmi"
+	case p.headUnder("usb cable"):
+		return "usb"
+	}
+	return ""
 }
 
 // suitSize reads a suit's chest and length, "42r", "40l", "38 short", on
