@@ -203,3 +203,9 @@ func ExampleNearWords_VowelSlips() {
 	fmt.Println(nw.VowelSlips("sandles"))
 	// Output: [1]
 }
+
+// A shopper after boys' clothes is served by kids' clothes too.
+func ExampleAudienceServes() {
+	fmt.Println(lexicon.AudienceServes("boys"), lexicon.AudienceServes("kids"), lexicon.AudienceServes("men"))
+	// Output: [boys kids] [kids boys girls] [men]
+}

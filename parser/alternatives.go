@@ -21,7 +21,9 @@ var alternativeKinds = map[Kind]bool{
 // ("navy or black", "size 8 or 9"), a list of them with commas before
 // the "or" ("red, blue or green"), and sizes of one system joined by a
 // slash ("full/queen", "s/m"), the way a size that fits either is
-// written on a label (common practice). Colours joined by a slash are
+// written on a label (common practice), and audiences side by side or
+// joined by "and" ("toddler boys", "mens and womens"), since a product
+// is made for one audience. Colours joined by a slash are
 // not alternatives: "black/white" names one two-tone colourway (common
 // practice).
 //
@@ -70,6 +72,15 @@ func (p *tagger) alternatives() {
 		if x.Kind == KindSize && joinable(x, y) && p.q[x.End:y.Start] == "/" {
 			link(i, i+1)
 		}
+		// Audiences side by side, or joined by "and": a product is made
+		// for one, so "toddler boys" and "mens and womens" ask for
+		// either, where both at once find nothing.
+		if between := strings.TrimSpace(p.q[x.End:y.Start]); x.Kind == KindAudience && joinable(x, y) && (between == "" || between == "/" || audienceJoins[between]) {
+			link(i, i+1)
+		}
+		if x.Kind == KindAudience && i+2 < len(cs) && joinable(x, cs[i+2]) && y.Kind == KindFiller && audienceJoins[strings.ToLower(y.Text)] {
+			link(i, i+2)
+		}
 	}
 	if groups == 0 {
 		return
@@ -87,6 +98,10 @@ func (p *tagger) alternatives() {
 		}
 	}
 }
+
+// audienceJoins are the words between two audiences that ask for
+// either of them.
+var audienceJoins = map[string]bool{"and": true, "&": true}
 
 // joinable reports whether x and y may be alternatives of one group:
 // of one kind that takes alternatives, both excluded or neither, and, for

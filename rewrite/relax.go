@@ -397,6 +397,10 @@ func (rw *Rewriter) exactClause(i int, c parser.Constraint) Clause {
 		cl.Values = []string{c.Target}
 	case c.Kind == parser.KindPartNumber:
 		cl.Values = []string{strings.ToLower(c.Code)}
+	case c.Kind == parser.KindAudience && !c.Excluded:
+		// "boys pajamas" finds the kids' pajamas, made for boys too; an
+		// exclusion ("-kids") stays the audience named.
+		cl.Values = lexicon.AudienceServes(c.Name)
 	case c.Name != "":
 		cl.Values = []string{c.Name}
 	default:
