@@ -284,9 +284,10 @@ func (p *tagger) fractionAfterSchedule(f *grammar.Frac, unit string, end int) {
 // code (from memory): network cable categories of TIA-568 (cat5e, cat6,
 // cat6a, cat7, cat8), memory generations (ddr3 to ddr5), USB and HDMI
 // versions (usb3, usb3.2, hdmi1.4, hdmi2.0, hdmi2.1), Wi-Fi generations (wifi6, wifi6e,
-// wifi7), PCI Express generations (pcie3 to pcie5). They are what a
+// wifi7), PCI Express generations (pcie3 to pcie5), an air filter's
+// MERV rating (merv1 to merv16, ASHRAE 52.2). They are what a
 // product is, not a maker's part number.
-var gradeCode = regexp.MustCompile(`^(cat(5e|6a?|7|8)|ddr[345]|usb[234](\.\d)?|hdmi(1\.4|2(\.[01])?)|wifi[67]e?|pcie[345])$`)
+var gradeCode = regexp.MustCompile(`^(cat(5e|6a?|7|8)|ddr[345]|usb[234](\.\d)?|hdmi(1\.4|2(\.[01])?)|wifi[67]e?|pcie[345]|merv([1-9]|1[0-6]))$`)
 
 // cardGrade matches the speed classes of SD memory cards (the SD
 // Association's video classes v6 to v90 and UHS classes u1 and u3, from

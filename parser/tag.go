@@ -138,8 +138,16 @@ func spells(e *lexicon.Entry, text string) bool {
 // adds or leaves off ("jackets", "sock", "showing" for "show") is within
 // those. A reading through a phrase written as one word ("vneck") is not
 // judged.
+//
+// A colour is never reached through a word ending in "ing" that its
+// spellings lack: "sanding disc" is no sand-coloured disc, as an -ing
+// word is a verb's, and colours are named by nouns and adjectives
+// (common knowledge of English).
 func overStemmed(e *lexicon.Entry, text string) bool {
 	tw := lexicon.Words(text)
+	if e.Kind == lexicon.Colour && len(tw) > 0 && strings.HasSuffix(tw[len(tw)-1], "ing") && !spells(e, text) {
+		return true
+	}
 	judged := false
 	for _, p := range append([]string{e.Name}, e.Aliases...) {
 		pw := lexicon.Words(p)
@@ -639,8 +647,9 @@ func (p *tagger) firmPhrase(k int, find func(int) (string, int), evidence string
 }
 
 // gradeWords start a grade a standard names that shoppers also write
-// with a space: "cat 6", "usb 3.0", "hdmi 2.1", "wifi 6", "ddr 4".
-var gradeWords = map[string]bool{"cat": true, "usb": true, "hdmi": true, "wifi": true, "ddr": true, "pcie": true}
+// with a space: "cat 6", "usb 3.0", "hdmi 2.1", "wifi 6", "ddr 4",
+// "merv 11".
+var gradeWords = map[string]bool{"cat": true, "usb": true, "hdmi": true, "wifi": true, "ddr": true, "pcie": true, "merv": true}
 
 // spacedGrade reads a grade written with a space at word unit k ("cat
 // 6", "cat 5e", "usb 3.0") as the grade written as one code ("cat6"),

@@ -288,6 +288,14 @@ func (p *tagger) point(k int, q quantity) int {
 			Evidence: "a version number on the cable: its " + std + " grade, matched in the product's words"})
 		return 0
 	}
+	// An abrasive's grit, "220 grit": a firm phrase in the product's
+	// words (grit numbers follow their own scales, CAMI and FEPA P, not
+	// a measure), where the number was unitless and grit a stray word.
+	if !q.hasUnit && q.num.integer && w != nil && (w.text == "grit" || w.text == "grits") {
+		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: q.num.decimal + " grit", Strictness: Firm,
+			Evidence: "an abrasive's grit, matched in the product's words"})
+		return 1
+	}
 	// A nail's penny size, "16d": its length (common practice; the table
 	// of lengths from memory), where the d was read as a depth.
 	if in, ok := pennyInches[q.num.decimal]; ok && q.label == "d" && !q.hasUnit && p.headUnder("nail") {
@@ -1644,7 +1652,7 @@ var countWords = map[string]string{
 	"burner": "burners", "burners": "burners", "slice": "slices", "outlet": "outlets", "outlets": "outlets",
 	"port": "ports", "ports": "ports", "ring": "rings", "gang": "gangs", "light": "lights", "lights": "lights",
 	"speed": "speeds", "blade": "blades", "blades": "blades", "ply": "ply", "step": "steps", "steps": "steps",
-	"pole": "poles", "poles": "poles", "wick": "wicks", "wicks": "wicks",
+	"pole": "poles", "poles": "poles", "wick": "wicks", "wicks": "wicks", "tooth": "teeth", "teeth": "teeth",
 }
 
 // ladderTypes are a ladder's duty ratings (ANSI A14, from memory: type
