@@ -108,6 +108,11 @@ type Spec struct {
 	Attributes map[string]string
 	// Standard names the standard the values come from ("PS 20").
 	Standard string
+	// Also are other designations of the system, any of which will do
+	// in Designation's place: the fine threads of a metric size asked
+	// for with "fine thread" and no pitch ("m8 fine thread" is M8x0.75
+	// or M8x1). Dimensions and Attributes are Designation's.
+	Also []string
 }
 
 // TyreSize is the key under which [Spec.Keys] files a tyre's size alone,

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"regexp"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -26,6 +27,47 @@ func specConstraint(start, end int, d spec.Designation, evidence string) Constra
 	}
 	return Constraint{Kind: KindSpec, Start: start, End: end, Evidence: join(evidence, d.Source),
 		Spec: &Spec{System: string(d.System), Designation: d.Code, Dimensions: d.Dimensions, Attributes: d.Attributes, Standard: d.Source}}
+}
+
+// noPitch notes that the metric thread starting at start was typed with
+// no pitch.
+func (p *tagger) noPitch(start int) {
+	if p.barePitch == nil {
+		p.barePitch = map[int]bool{}
+	}
+	p.barePitch[start] = true
+}
+
+// finePitch reads a metric thread typed with no pitch as its fine
+// threads when the query asks for a fine thread ("m8 fine thread
+// bolt"): a bare M8 is the coarse M8x1.25, which the shopper said is
+// not wanted (common practice: M8 alone means coarse, ISO 261 lists the
+// fine pitches). The spec becomes the fine threads, any of which will
+// do (Spec.Also), still hard.
+func (p *tagger) finePitch() {
+	fine := slices.ContainsFunc(p.res.Constraints, func(c Constraint) bool {
+		return c.Kind == KindSilhouette && c.Name == "fine thread" && !c.Excluded
+	})
+	if !fine {
+		return
+	}
+	for i := range p.res.Constraints {
+		c := &p.res.Constraints[i]
+		if c.Spec == nil || c.Spec.System != string(spec.MetricThread) || !p.barePitch[c.Start] {
+			continue
+		}
+		ds, err := spec.MetricFineThreads(c.Spec.Dimensions["major_diameter"])
+		if err != nil || len(ds) == 0 {
+			continue
+		}
+		f := specConstraint(c.Start, c.End, ds[0], "ISO metric thread")
+		for _, d := range ds[1:] {
+			f.Spec.Also = append(f.Spec.Also, d.Code)
+		}
+		f.Text, f.Strictness, f.Excluded = c.Text, c.Strictness, c.Excluded
+		f.Evidence = join(c.Evidence, "fine thread asked, so ISO 261's fine pitches, not the coarse one a bare size means")
+		*c = f
+	}
 }
 
 // tyre tags "225/45R17".
@@ -383,6 +425,7 @@ func (p *tagger) spacedThread(k int) (int, bool) {
 		if err != nil {
 			return 0, false
 		}
+		p.noPitch(u.start)
 		p.add(specConstraint(u.start, u.end, d, "ISO metric thread"))
 		p.threadLength(first)
 		return 2, true
@@ -520,6 +563,9 @@ func (p *tagger) joinedThread(start, end int, parts []string, length string, u *
 			return true
 		}
 		return false
+	}
+	if pitch == 0 {
+		p.noPitch(start)
 	}
 	p.add(specConstraint(start, end, d, "ISO metric thread"))
 	if length != "" {

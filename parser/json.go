@@ -60,6 +60,7 @@ type wireConstraint struct {
 	DimensionsMM map[string]float64 `json:"dimensions_mm,omitempty"`
 	Attributes   map[string]string  `json:"attributes,omitempty"`
 	Standard     string             `json:"standard,omitempty"`
+	Also         []string           `json:"also,omitempty"`
 
 	Hex      string      `json:"hex,omitempty"`
 	Lab      *[3]float64 `json:"lab,omitempty"`
@@ -131,7 +132,7 @@ func (c Constraint) MarshalJSON() ([]byte, error) {
 		w.System, w.Value, w.Width = s.System, s.Value, s.Width
 	}
 	if s := c.Spec; s != nil {
-		w.System, w.Designation, w.DimensionsMM, w.Attributes, w.Standard = s.System, s.Designation, s.Dimensions, s.Attributes, s.Standard
+		w.System, w.Designation, w.DimensionsMM, w.Attributes, w.Standard, w.Also = s.System, s.Designation, s.Dimensions, s.Attributes, s.Standard, s.Also
 	}
 	if col := c.Colour; col != nil {
 		w.Hex, w.Lab, w.Families = col.Hex, col.Lab, col.Families
@@ -178,7 +179,7 @@ func (c *Constraint) UnmarshalJSON(b []byte) error {
 	case KindSize:
 		c.Size = &Size{System: w.System, Value: w.Value, Width: w.Width}
 	case KindSpec:
-		c.Spec = &Spec{System: w.System, Designation: w.Designation, Dimensions: w.DimensionsMM, Attributes: w.Attributes, Standard: w.Standard}
+		c.Spec = &Spec{System: w.System, Designation: w.Designation, Dimensions: w.DimensionsMM, Attributes: w.Attributes, Standard: w.Standard, Also: w.Also}
 	case KindColour:
 		c.Colour = &Colour{Hex: w.Hex, Lab: w.Lab, Families: w.Families}
 	}

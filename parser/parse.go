@@ -133,6 +133,10 @@ type tagger struct {
 	neg, negEnd, negIdx int
 	negText             string
 
+	// barePitch holds the start offsets of the metric threads typed with
+	// no pitch ("m8"), read as coarse, for finePitch to reconsider.
+	barePitch map[int]bool
+
 	// byRange holds the end offsets of the measures whose dimension was
 	// chosen only because the amount lies in a slot's typical range, for
 	// settleDimensions to reconsider.
@@ -179,6 +183,7 @@ func (p *tagger) run() {
 	p.findHead()
 	p.tag()
 	p.settleDimensions()
+	p.finePitch()
 	p.alternatives()
 	p.finish()
 }

@@ -26,7 +26,7 @@ func (c Constraint) Value() string {
 		}
 		s += ")"
 	case c.Spec != nil:
-		s = c.Spec.Designation + " (" + c.Spec.System + ")"
+		s = strings.Join(append([]string{c.Spec.Designation}, c.Spec.Also...), " or ") + " (" + c.Spec.System + ")"
 	case c.Kind == KindCompatibility:
 		s = "fits " + c.Target
 	case c.Kind == KindPartNumber:

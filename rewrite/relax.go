@@ -393,6 +393,9 @@ func (rw *Rewriter) exactClause(i int, c parser.Constraint) Clause {
 	case c.Spec != nil:
 		key, d := c.Spec.Key()
 		cl.Dimension, cl.Values = key, []string{d}
+		for _, a := range c.Spec.Also {
+			cl.Values = append(cl.Values, strings.ToLower(a))
+		}
 	case c.Kind == parser.KindCompatibility:
 		cl.Values = []string{c.Target}
 	case c.Kind == parser.KindPartNumber:

@@ -150,6 +150,55 @@ func TestAudiences(t *testing.T) {
 	}
 }
 
+// "fine thread" with a bare metric size asks for its fine pitches, any
+// of them, never the coarse one the size alone means (ISO 261's pitches
+// for M8: coarse 1.25, fine 0.75 and 1, threads_metric_iso261_262.tsv).
+func TestFineThread(t *testing.T) {
+	bolts := []product{
+		{ID: "BT-1", Type: "bolt", Specs: map[string]string{"metric_thread": "m8x1.25"}},
+		{ID: "BT-2", Type: "bolt", Specs: map[string]string{"metric_thread": "m8x1"}, Silhouette: "fine thread"},
+		{ID: "BT-3", Type: "bolt", Specs: map[string]string{"metric_thread": "m8x0.75"}},
+	}
+	for _, tc := range []struct {
+		query, reason string
+		ids           []string
+	}{
+		{"m8 fine thread bolt", "BT-2 is fine and says so; BT-3 is fine too, found once the style is dropped", []string{"BT-2"}},
+		{"m8 bolt", "a bare M8 is the coarse thread", []string{"BT-1"}},
+		{"m8 bolt fine threads", "the fine pitches, whatever the words' order", []string{"BT-2"}},
+		{"m8x1.25 fine thread bolt", "a pitch typed is kept as typed", []string{"BT-1"}},
+	} {
+		t.Run(tc.query, func(t *testing.T) {
+			o := mustRescue(t, bolts, tc.query)
+			var ids []string
+			for _, pr := range bolts {
+				if matches(pr, o.Plan) {
+					ids = append(ids, pr.ID)
+				}
+			}
+			if !slices.Equal(ids, tc.ids) {
+				t.Errorf("%s: the plan finds %v, want %v\n%s", tc.reason, ids, tc.ids, o.Explanation)
+			}
+		})
+	}
+	// Without the style word in the catalog, the style is dropped and
+	// both fine bolts are shown, the coarse one never.
+	o := mustRescue(t, bolts[:1:1], "m8 fine thread bolt")
+	if o.Count != 0 {
+		t.Errorf("a shop of coarse M8 bolts only shows %d for a fine thread", o.Count)
+	}
+	o = mustRescue(t, []product{bolts[0], bolts[2]}, "m8 fine thread bolt")
+	var ids []string
+	for _, pr := range []product{bolts[0], bolts[2]} {
+		if matches(pr, o.Plan) {
+			ids = append(ids, pr.ID)
+		}
+	}
+	if !slices.Equal(ids, []string{"BT-3"}) {
+		t.Errorf("dropping the style shows %v, want BT-3\n%s", ids, o.Explanation)
+	}
+}
+
 func TestBudgetAndDeadline(t *testing.T) {
 	// A budget of 2 counts: the exact query and the hard constraints
 	// alone. Those are all the search can count, so what every plan

@@ -52,6 +52,17 @@ func ExampleMetricThreadSize() {
 	// true
 }
 
+func ExampleMetricFineThreads() {
+	ds, _ := spec.MetricFineThreads(10)
+	for _, d := range ds {
+		fmt.Println(d.Code, d.Attributes["pitch_kind"])
+	}
+	// Output:
+	// M10x0.75 fine
+	// M10x1 fine
+	// M10x1.25 fine
+}
+
 func ExampleUnifiedThreadSize() {
 	d, _ := spec.UnifiedThreadSize("1/4", 0)
 	fmt.Printf("%s: major %.2f mm, pitch %.3f mm\n", d.Code, d.Dimensions["major_diameter"], d.Dimensions["pitch"])

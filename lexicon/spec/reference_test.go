@@ -231,6 +231,20 @@ func TestMetricThreadReference(t *testing.T) {
 					t.Errorf("code %q, want %q", f.Code, want)
 				}
 			}
+			// MetricFineThreads lists each of them once, finest first.
+			want := map[float64]bool{}
+			for _, p := range fine {
+				want[p] = true
+			}
+			all, err := MetricFineThreads(dia)
+			if err != nil || len(all) != len(want) {
+				t.Fatalf("MetricFineThreads: %d threads, %v; the table lists %d fine pitches", len(all), err, len(want))
+			}
+			for i, f := range all {
+				if !want[f.Dimensions["pitch"]] || i > 0 && f.Dimensions["pitch"] <= all[i-1].Dimensions["pitch"] {
+					t.Errorf("MetricFineThreads: %s is not a fine pitch of the table, or out of order", f.Code)
+				}
+			}
 		})
 	}
 }

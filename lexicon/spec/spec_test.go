@@ -145,6 +145,12 @@ func TestMetricThreadErrors(t *testing.T) {
 			if !errors.Is(err, tc.want) {
 				t.Errorf("MetricThreadSize(%v, %v) = %q, %v; want %v (%s)", tc.diameter, tc.pitch, d.Code, err, tc.want, tc.reason)
 			}
+			// A diameter it refuses has no fine threads either.
+			if tc.pitch == 0 {
+				if ds, err := MetricFineThreads(tc.diameter); !errors.Is(err, tc.want) || ds != nil {
+					t.Errorf("MetricFineThreads(%v) = %v, %v; want %v (%s)", tc.diameter, ds, err, tc.want, tc.reason)
+				}
+			}
 		})
 	}
 }

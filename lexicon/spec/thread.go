@@ -114,6 +114,30 @@ func MetricThreadSize(diameter, pitch float64) (Designation, error) {
 	}, nil
 }
 
+// MetricFineThreads returns the fine threads ISO 261 lists for the
+// nominal diameter in millimetres, finest pitch first: for 8, M8x0.75
+// and M8x1. It takes the errors of [MetricThreadSize] for a diameter
+// not listed.
+func MetricFineThreads(diameter float64) ([]Designation, error) {
+	if _, err := MetricThreadSize(diameter, 0); err != nil {
+		return nil, err
+	}
+	var out []Designation
+	for _, r := range data().metric {
+		if !sameMM(r.diameter, diameter) {
+			continue
+		}
+		for _, f := range r.fine {
+			d, err := MetricThreadSize(diameter, f)
+			if err != nil {
+				return nil, err
+			}
+			out = append(out, d)
+		}
+	}
+	return out, nil
+}
+
 // unifiedRow is one ASME B1.1 size.
 type unifiedRow struct {
 	size     string // "#4" or "1/4"
