@@ -113,6 +113,17 @@ func TestRescue(t *testing.T) {
 	}
 }
 
+// planIDs are the ids of the products the outcome's plan matches.
+func planIDs(products []product, o *Outcome) []string {
+	var ids []string
+	for _, pr := range products {
+		if matches(pr, o.Plan) {
+			ids = append(ids, pr.ID)
+		}
+	}
+	return ids
+}
+
 // A kids' product is made for boys and girls alike, and a product for
 // one audience only: the products of this invented shop show which
 // audiences a query finds.
@@ -137,13 +148,7 @@ func TestAudiences(t *testing.T) {
 	} {
 		t.Run(tc.query, func(t *testing.T) {
 			o := mustRescue(t, pyjamas, tc.query)
-			var ids []string
-			for _, pr := range pyjamas {
-				if matches(pr, o.Plan) {
-					ids = append(ids, pr.ID)
-				}
-			}
-			if !o.Exact || !slices.Equal(ids, tc.ids) {
+			if ids := planIDs(pyjamas, o); !o.Exact || !slices.Equal(ids, tc.ids) {
 				t.Errorf("%s: exact=%v, the plan finds %v, want %v\n%s", tc.reason, o.Exact, ids, tc.ids, o.Explanation)
 			}
 		})
@@ -170,13 +175,7 @@ func TestFineThread(t *testing.T) {
 	} {
 		t.Run(tc.query, func(t *testing.T) {
 			o := mustRescue(t, bolts, tc.query)
-			var ids []string
-			for _, pr := range bolts {
-				if matches(pr, o.Plan) {
-					ids = append(ids, pr.ID)
-				}
-			}
-			if !slices.Equal(ids, tc.ids) {
+			if ids := planIDs(bolts, o); !slices.Equal(ids, tc.ids) {
 				t.Errorf("%s: the plan finds %v, want %v\n%s", tc.reason, ids, tc.ids, o.Explanation)
 			}
 		})
@@ -187,14 +186,9 @@ func TestFineThread(t *testing.T) {
 	if o.Count != 0 {
 		t.Errorf("a shop of coarse M8 bolts only shows %d for a fine thread", o.Count)
 	}
-	o = mustRescue(t, []product{bolts[0], bolts[2]}, "m8 fine thread bolt")
-	var ids []string
-	for _, pr := range []product{bolts[0], bolts[2]} {
-		if matches(pr, o.Plan) {
-			ids = append(ids, pr.ID)
-		}
-	}
-	if !slices.Equal(ids, []string{"BT-3"}) {
+	some := []product{bolts[0], bolts[2]}
+	o = mustRescue(t, some, "m8 fine thread bolt")
+	if ids := planIDs(some, o); !slices.Equal(ids, []string{"BT-3"}) {
 		t.Errorf("dropping the style shows %v, want BT-3\n%s", ids, o.Explanation)
 	}
 }
