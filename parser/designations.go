@@ -149,6 +149,42 @@ func (p *tagger) spacedTyre(k int, q quantity) int {
 	return 2
 }
 
+// flotationRim matches what follows a flotation size's width, stuck to
+// it: the construction and the rim, and a light truck's "lt" ("r20",
+// "r17lt").
+var flotationRim = regexp.MustCompile(`^([rdb])(\d{2}(\.5)?)(lt)?$`)
+
+// flotationTyre reads a flotation tyre size at unit k, "33x12.50r20":
+// the overall diameter by the section width in inches, then the
+// construction and the rim, as light truck and off-road tyres are sized
+// (spec.FlotationTyreSize), on tyres or with no product type. The
+// dimension was two unitless parts and the rest a hard part number that
+// nothing matched. It returns the extra units used, and whether it read
+// one.
+func (p *tagger) flotationTyre(k int) (int, bool) {
+	if p.category != "tyres" && p.head != nil || k+1 >= len(p.units) {
+		return 0, false
+	}
+	n, v := p.bareParts(&p.units[k]), &p.units[k+1]
+	if len(n) != 2 || v.kind != uItem || v.spaceBefore || v.item.Code == nil {
+		return 0, false
+	}
+	m := flotationRim.FindStringSubmatch(strings.ToLower(p.q[v.start:v.end]))
+	if m == nil {
+		return 0, false
+	}
+	rim, err := strconv.ParseFloat(m[2], 64)
+	if err != nil {
+		return 0, false
+	}
+	d, err := spec.FlotationTyreSize(n[0].value, n[1].value, m[1][0], rim)
+	if err != nil {
+		return 0, false
+	}
+	p.add(specConstraint(p.units[k].start, v.end, d, "flotation tyre size: diameter by width in inches, then construction and rim"))
+	return 1, true
+}
+
 // vesaPattern reads a screen's mounting pattern, the hole spacing in mm
 // a wall mount must match (the VESA mounting interface standard, from
 // memory): "vesa 400x400" with the word at unit w before the pattern at

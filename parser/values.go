@@ -178,6 +178,9 @@ func (p *tagger) value(k int) int {
 	if n, ok := p.vesaPattern(k, k+1, u.start); ok {
 		return n // "400x400 vesa"
 	}
+	if n, ok := p.flotationTyre(k); ok {
+		return n // "33x12.50r20"
+	}
 	if p.halfNeck(k) || p.wheelFit(k) {
 		return 0
 	}

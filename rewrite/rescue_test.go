@@ -193,6 +193,27 @@ func TestFineThread(t *testing.T) {
 	}
 }
 
+// A flotation tyre size is a designation, hard, found by its size
+// alone as a metric one is; a tyre of the next size is no answer.
+func TestFlotationTyre(t *testing.T) {
+	tyres := []product{
+		{ID: "TY-1", Type: "all-terrain tyre", Specs: map[string]string{"tyre": "33x12.50r20 114q"}},
+		{ID: "TY-2", Type: "all-terrain tyre", Specs: map[string]string{"tyre": "35x12.50r20 121q"}},
+	}
+	for _, tc := range []struct {
+		query, reason string
+		count         int
+	}{
+		{"33x12.50r20 all terrain tires", "TY-1 is that size, listed with its service description", 1},
+		{"tire 34x12.50r20", "no tyre is 34 in across, and 33 or 35 is not swapped in", 0},
+	} {
+		o := mustRescue(t, tyres, tc.query)
+		if ids := planIDs(tyres, o); o.Count != tc.count || len(ids) != tc.count {
+			t.Errorf("%s: %q found %d (%v), want %d\n%s", tc.reason, tc.query, o.Count, ids, tc.count, o.Explanation)
+		}
+	}
+}
+
 func TestBudgetAndDeadline(t *testing.T) {
 	// A budget of 2 counts: the exact query and the hard constraints
 	// alone. Those are all the search can count, so what every plan

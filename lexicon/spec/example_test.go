@@ -98,3 +98,9 @@ func ExamplePipeSchedule() {
 	// SCH 80 ASME B36.10M true
 	// false
 }
+
+func ExampleFlotationTyreSize() {
+	d, _ := spec.FlotationTyreSize(33, 12.5, 'r', 20)
+	fmt.Printf("%s %.1f mm across, %.1f mm wide\n", d.Code, d.Dimensions["overall_diameter"], d.Dimensions["section_width"])
+	// Output: 33X12.50R20 838.2 mm across, 317.5 mm wide
+}

@@ -67,6 +67,43 @@ func TestTyreAccepted(t *testing.T) {
 	}
 }
 
+// Flotation sizes are in inches; 1 in = 25.4 mm exactly
+// (unit_conversions.tsv, NIST SP 811), so each figure is worked by hand.
+func TestFlotationTyreSize(t *testing.T) {
+	for _, tc := range []struct {
+		name                    string
+		diameter, width, rim    float64
+		c                       byte
+		code                    string
+		overall, wide, sidewall float64
+		want                    error
+		reason                  string
+	}{
+		{"33x12.50r20", 33, 12.5, 20, 'r', "33X12.50R20", 838.2, 317.5, 165.1, nil, "33 x 25.4, 12.5 x 25.4, (33 - 20) / 2 x 25.4"},
+		{"31x10.50r15", 31, 10.5, 15, 'R', "31X10.50R15", 787.4, 266.7, 203.2, nil, "a common light truck size (common practice)"},
+		{"35x12.50r17", 35, 12.5, 17, 'R', "35X12.50R17", 889, 317.5, 228.6, nil, ""},
+		{"width over diameter", 20, 21, 15, 'R', "", 0, 0, 0, ErrOutOfRange, "no tyre is wider than it is tall"},
+		{"rim over diameter", 24, 10, 26, 'R', "", 0, 0, 0, ErrOutOfRange, "the rim sits inside the tyre"},
+		{"too large", 60, 14.5, 20, 'R', "", 0, 0, 0, ErrOutOfRange, "beyond the sizes sold"},
+		{"odd width", 33, 12.3, 20, 'R', "", 0, 0, 0, ErrNotStandard, "widths are in half inches"},
+		{"dash construction", 33, 12.5, 20, '-', "", 0, 0, 0, ErrNotStandard, "a flotation size has a letter"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			d, err := FlotationTyreSize(tc.diameter, tc.width, tc.c, tc.rim)
+			if !errors.Is(err, tc.want) {
+				t.Fatalf("err %v, want %v (%s)", err, tc.want, tc.reason)
+			}
+			if err != nil {
+				return
+			}
+			if d.Code != tc.code || !near(d.Dimensions["overall_diameter"], tc.overall, 1e-9) || !near(d.Dimensions["section_width"], tc.wide, 1e-9) ||
+				!near(d.Dimensions["sidewall_height"], tc.sidewall, 1e-9) || d.System != Tyre {
+				t.Errorf("got %q %v; want %q, %g, %g, %g mm (%s)", d.Code, d.Dimensions, tc.code, tc.overall, tc.wide, tc.sidewall, tc.reason)
+			}
+		})
+	}
+}
+
 func TestWireErrors(t *testing.T) {
 	tests := []struct {
 		name              string

@@ -71,3 +71,62 @@ func TyreSize(width, aspect int, construction byte, rim float64) (Designation, e
 		Source: "ISO 4000-1",
 	}, nil
 }
+
+// FlotationTyreSize returns the flotation (inch) tyre size "diameter x
+// width construction rim", as in 33x12.50R20, the way light truck and
+// off-road tyres are sized (common practice; the layout from memory):
+// overall diameter and section width in inches, the construction code
+// and the rim diameter in inches. The width keeps two decimals, as the
+// sizes are written ("12.50").
+//
+// Code: "33X12.50R20". Dimensions, in millimetres: "overall_diameter",
+// "section_width", "sidewall_height" ((overall - rim) / 2) and
+// "rim_diameter". Attributes: "construction", "construction_name",
+// "rim_diameter_in" and "sizing" ("flotation").
+//
+// Values outside the sizes sold give an error wrapping [ErrOutOfRange]:
+// diameter 20..50 in, width 6..20 in and under the diameter, rim
+// 10..26 in and under the diameter. A diameter, width or rim not in half
+// inches (a width in hundredths of an inch for the .50s) gives an error
+// wrapping [ErrNotStandard], as does an unknown construction.
+func FlotationTyreSize(diameter, width float64, construction byte, rim float64) (Designation, error) {
+	if !(diameter >= 20 && diameter <= 50) {
+		return Designation{}, fmt.Errorf("%w: flotation tyre diameter %g in (want 20..50)", ErrOutOfRange, diameter)
+	}
+	if !(width >= 6 && width <= 20) || width >= diameter {
+		return Designation{}, fmt.Errorf("%w: flotation tyre width %g in (want 6..20, under the diameter)", ErrOutOfRange, width)
+	}
+	if !(rim >= 10 && rim <= 26) || rim >= diameter {
+		return Designation{}, fmt.Errorf("%w: flotation tyre rim %g in (want 10..26, under the diameter)", ErrOutOfRange, rim)
+	}
+	for _, v := range []float64{diameter, width, rim} {
+		if v*2 != math.Trunc(v*2) {
+			return Designation{}, fmt.Errorf("%w: flotation tyre size %g in is not a whole or half inch", ErrNotStandard, v)
+		}
+	}
+	if 'a' <= construction && construction <= 'z' {
+		construction -= 'a' - 'A'
+	}
+	name, ok := constructionNames[construction]
+	if !ok || construction == '-' {
+		return Designation{}, fmt.Errorf("%w: tyre construction %q (want R, D or B)", ErrNotStandard, construction)
+	}
+	rimCode := formatNumber(rim)
+	return Designation{
+		System: Tyre,
+		Code:   formatNumber(diameter) + "X" + strconv.FormatFloat(width, 'f', 2, 64) + string(construction) + rimCode,
+		Dimensions: map[string]float64{
+			"overall_diameter": diameter * 25.4,
+			"section_width":    width * 25.4,
+			"sidewall_height":  (diameter - rim) * 25.4 / 2,
+			"rim_diameter":     rim * 25.4,
+		},
+		Attributes: map[string]string{
+			"construction":      string(construction),
+			"construction_name": name,
+			"rim_diameter_in":   rimCode,
+			"sizing":            "flotation",
+		},
+		Source: "flotation sizes (common practice)",
+	}, nil
+}
