@@ -725,7 +725,7 @@ func (p *tagger) setNeg(start, end int, text string) {
 // -1 when the phrase is not its own. modifiedColour comes between the
 // two lists.
 var (
-	phraseReaders = []func(*tagger, int) int{(*tagger).lightColour, (*tagger).poleCount, (*tagger).typeRating, (*tagger).paperWord}
+	phraseReaders = []func(*tagger, int) int{(*tagger).lightColour, (*tagger).poleCount, (*tagger).typeRating, (*tagger).groupSize, (*tagger).paperWord}
 	// spacedGrade comes before connectorAt: "hdmi 2.1" is the grade.
 	laterPhraseReaders = []func(*tagger, int) int{(*tagger).oneSize, (*tagger).apertureAt, (*tagger).spacedGrade, (*tagger).connectorAt, (*tagger).spelledSize}
 )

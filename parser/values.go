@@ -3,6 +3,7 @@ package parser
 import (
 	"fmt"
 	"math"
+	"regexp"
 	"slices"
 	"strconv"
 	"strings"
@@ -1737,6 +1738,40 @@ func (p *tagger) poleCount(k int) int {
 	}
 	p.add(countConstraint(p.units[k].start, p.units[k+1].end, n, "poles", "\""+p.units[k].text+" pole\": the count of poles"))
 	return 1
+}
+
+// batteryGroup matches a BCI group size, the case size and terminal
+// layout of a car battery ("24", "24f", "51r", "h6", "t5"; the BCI's
+// layout, from memory).
+var batteryGroup = regexp.MustCompile(`^(\d{1,3}[a-z]{0,2}|[ht]\d{1,2})$`)
+
+// groupSize reads "group 24f" at word unit k on a car battery as its
+// BCI group size: a hard phrase in the product's words, since a battery
+// of another group does not fit the tray or reach the cables. "group"
+// was a stray word and 24f one that whittle did not know. It returns
+// the extra units used, or -1.
+func (p *tagger) groupSize(k int) int {
+	if p.units[k].text != "group" || k+1 >= len(p.units) || !p.headUnder("car battery") {
+		return -1
+	}
+	first := k + 1
+	if p.units[first].kind == uWord && p.units[first].text == "size" {
+		first++ // "group size 24f"
+	}
+	if first >= len(p.units) {
+		return -1
+	}
+	last := first
+	if last+1 < len(p.units) && p.units[last+1].kind == uWord && !p.units[last+1].spaceBefore {
+		last++ // "24f": the number and the letter after it
+	}
+	code := strings.ToLower(p.q[p.units[first].start:p.units[last].end])
+	if !batteryGroup.MatchString(code) {
+		return -1
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: p.units[k].start, End: p.units[last].end, Name: "group " + code, Strictness: Hard,
+		Evidence: "a car battery's BCI group size, which sets its case and terminals, matched in the product's words; never dropped"})
+	return last - k
 }
 
 // countAfter reports whether unit k is followed by a counting word.
