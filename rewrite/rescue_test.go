@@ -71,6 +71,8 @@ func TestRescue(t *testing.T) {
 			count: 1, ops: []string{"widen measure"}, message: "nearest standard lengths"},
 		{name: "hard stop on size", query: "trail running shoes size 13", reason: "size is hard: it is not relaxed, and the sizes carried are named",
 			count: 0, message: "size 13 is not carried in trail running shoes; sizes carried: 7, 8, 9, 10, 11, 12."},
+		{name: "hard stop in a type widened", query: "chelsea boots size 13", reason: "no chelsea boot is carried: the sizes named are of the boots the type widens to, HB-1's",
+			count: 0, message: "size 13 is not carried in chelsea boots; sizes carried: 9, 10, 11."},
 		{name: "hard stop on focal length", query: "85 lens", reason: "focal length is hard in camera",
 			count: 0, message: "85 mm is not carried in lenses; focal lengths carried: 35 mm, 50 mm."},
 		{name: "hard stop on wire gauge", query: "14 awg wire", reason: "a wire gauge is never substituted",

@@ -1197,11 +1197,18 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 		}
 		m := Missing{Constraint: cl.From, Text: text}
 		if cat != nil && slices.Contains(ListedFields, cl.Field) {
-			// Among products of the kind asked for.
+			// Among products of the kind asked for: the head at its
+			// broadest, as the hard constraints were counted, so that a
+			// type the shop carries none of ("cargo pants") names the
+			// sizes of the type it widens to.
 			like := rest
 			for _, it := range s.items {
 				if it.c.Kind == parser.KindProductType && !it.c.Excluded {
-					like.Clauses = append(slices.Clone(like.Clauses), *it.levels[0].clause)
+					cl := it.levels[0].clause
+					if b := s.broadestHead(); b != nil && it.c.IsHead() {
+						cl = b
+					}
+					like.Clauses = append(slices.Clone(like.Clauses), *cl)
 				}
 			}
 			vals, err := cat.Values(ctx, cl.Field, cl.Dimension, like)
