@@ -29,10 +29,13 @@ const (
 	// ColourTemperature is the colour of a lamp's white light, in
 	// kelvin: 2700 K is warm, 5000 K daylight.
 	ColourTemperature Quantity = "colour_temperature"
+	// Pressure, in kilopascals: a pressure washer's or a compressor's
+	// output, a tyre's inflation.
+	Pressure Quantity = "pressure"
 )
 
 // quantities are the quantities in a fixed order.
-var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage, ColourTemperature}
+var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage, ColourTemperature, Pressure}
 
 // Quantities returns every quantity in a fixed order, in a slice of the
 // caller's own.
@@ -62,7 +65,7 @@ var written = map[string]string{
 	"imp_pt": "imp pt", "imp_qt": "imp qt", "imp_gal": "imp gal", "w": "W", "kw": "kW", "mv": "mV", "v": "V",
 	"kv": "kV", "ma": "mA", "a": "A", "mah": "mAh", "ah": "Ah", "kb": "kB", "mb": "MB", "gb": "GB", "tb": "TB",
 	"pb": "PB", "day": "d", "um": "µm", "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
-	"kelvin": "K",
+	"kelvin": "K", "kpa": "kPa", "mpa": "MPa",
 }
 
 // String returns the symbol as it is usually written: "mm", "in", "mL",
@@ -76,7 +79,8 @@ func (u Unit) String() string {
 }
 
 // Base returns the base unit symbol for q: "mm", "g", "ml", "w", "v", "a",
-// "mah", "gb", "s", "hz", "gsm" or "kelvin". It returns "" for an unknown quantity.
+// "mah", "gb", "s", "hz", "gsm", "kelvin" or "kpa". It returns "" for an
+// unknown quantity.
 func Base(q Quantity) string {
 	switch q {
 	case Length:
@@ -103,6 +107,8 @@ func Base(q Quantity) string {
 		return "gsm"
 	case ColourTemperature:
 		return "kelvin"
+	case Pressure:
+		return "kpa"
 	}
 	return ""
 }
@@ -276,6 +282,14 @@ var defs = []def{
 	// screen's resolution and "14k" for gold, and the parser reads
 	// "2700k" itself.
 	{"kelvin", "kelvin", ColourTemperature, "1", "", []string{"kelvins"}},
+
+	// Pressure; base kilopascal. A psi is a pound-force per square inch:
+	// 9.80665 m/s² × 0.45359237 kg / (0.0254 m)² = 44482216152605 /
+	// 6451600000000 kPa exactly. "bar" is no spelling here, as it names
+	// products too ("3 bar stools", "24 in towel bar").
+	{"kpa", "kilopascal", Pressure, "1", "", []string{"kpa", "kilopascal", "kilopascals"}},
+	{"psi", "pound per square inch", Pressure, "44482216152605/6451600000000", "kpa", []string{"psi", "lb/in2", "pounds per square inch"}},
+	{"mpa", "megapascal", Pressure, "1000", "kpa", []string{"mpa", "megapascal", "megapascals"}},
 }
 
 // splitVolume lists the spellings whose meaning depends on the

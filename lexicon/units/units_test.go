@@ -27,6 +27,7 @@ var referenceSymbols = map[string]string{
 	"L": "l", "gal": "gal", "qt": "qt", "pt": "pt", "cup": "cup", "fl oz": "floz",
 	"tbsp": "tbsp", "tsp": "tsp",
 	"imp gal": "imp_gal", "imp pt": "imp_pt", "imp fl oz": "imp_floz",
+	"psi": "psi",
 }
 
 // unsupportedReference lists the rows of unit_conversions.tsv whittle does
@@ -42,14 +43,13 @@ var unsupportedReference = map[string]string{
 	"t":    "tonne: a bare t is too ambiguous in queries",
 	"g_n":  "standard gravity: acceleration, not a whittle quantity",
 	"lbf":  "pound-force: force, not a whittle quantity",
-	"psi":  "pressure, not a whittle quantity",
-	"bar":  "pressure, not a whittle quantity",
+	"bar":  "bar: a pressure, but the word names products too (bar stool, towel bar), so the spelling stays unknown",
 }
 
 // siToBase is the factor from the SI unit named in unit_conversions.tsv to
 // whittle's base unit of the same quantity (SI prefixes; 1 l = 1 dm³, so
 // 1 m³ = 1e6 ml).
-var siToBase = map[string]float64{"m": 1000, "kg": 1000, "m^3": 1e6}
+var siToBase = map[string]float64{"m": 1000, "kg": 1000, "m^3": 1e6, "Pa": 0.001}
 
 // TestFactorsMatchReference checks every supported row of
 // testdata/reference/unit_conversions.tsv (NIST SP 811 Appendix B and the
@@ -75,7 +75,7 @@ func TestFactorsMatchReference(t *testing.T) {
 			if !ok {
 				t.Fatalf("unexpected SI unit %q", row["si_unit"])
 			}
-			if q := map[string]Quantity{"m": Length, "kg": Mass, "m^3": Volume}[row["si_unit"]]; u.Quantity != q {
+			if q := map[string]Quantity{"m": Length, "kg": Mass, "m^3": Volume, "Pa": Pressure}[row["si_unit"]]; u.Quantity != q {
 				t.Errorf("%s measures %s, reference row is in %s", want, u.Quantity, row["si_unit"])
 			}
 			si, err := strconv.ParseFloat(row["factor_to_si"], 64)
@@ -120,6 +120,8 @@ var derivedFactors = []struct {
 	{"hz", 1, "base unit of frequency"},
 	{"gsm", 1, "base unit of grammage, g/m²"},
 	{"kelvin", 1, "base unit of colour temperature, the kelvin (SI Brochure)"},
+	{"kpa", 1, "base unit of pressure"},
+	{"mpa", 1000, "SI Brochure, prefix mega: 1 MPa = 1000 kPa"},
 	{"khz", 1e3, "SI Brochure, prefix kilo"},
 	{"mhz", 1e6, "SI Brochure, prefix mega = 1e6"},
 	{"ghz", 1e9, "SI Brochure, prefix giga = 1e9"},
@@ -183,6 +185,7 @@ var canonicalSymbols = []string{
 	"kb", "mb", "gb", "tb", "pb",
 	"s", "ms", "min", "h", "day",
 	"hz", "khz", "mhz", "ghz", "gsm", "kelvin",
+	"kpa", "mpa", "psi",
 }
 
 // TestUnitSetIsCheckedAndComplete makes sure every unit's factor is checked
