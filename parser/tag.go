@@ -200,8 +200,9 @@ func (p *tagger) isPT(i int) bool {
 }
 
 // compounds settles product types that stand next to each other: the
-// same type twice ("thermal base layer"), or a type and a broader one
-// ("variable nd filter"), become one span; otherwise the first qualifies
+// same type twice ("thermal base layer"), a type and a broader one
+// ("variable nd filter"), or a type and one of its own kinds ("blanket
+// throw", read as the throw), become one span; otherwise the first qualifies
 // the second ("saucepan lid") and is a modifier. A product type after
 // "with", or after a material once a product type was named ("marble
 // top"), is a feature of the product, and so is a light's part named
@@ -255,6 +256,13 @@ func (p *tagger) compounds() {
 			v := &p.units[i+1]
 			if v.chosen == u.chosen || p.broader(v.chosen, u.chosen) {
 				u.end, u.text = v.end, u.text+" "+v.text
+				p.units = append(p.units[:i+1], p.units[i+2:]...)
+				continue
+			}
+			if slices.Contains(p.lex.Lineage(v.chosen)[1:], u.chosen) {
+				// "blanket throw", "sweater cardigan": a type, then one of
+				// its own kinds, is that kind.
+				u.end, u.text, u.chosen = v.end, u.text+" "+v.text, v.chosen
 				p.units = append(p.units[:i+1], p.units[i+2:]...)
 				continue
 			}
