@@ -324,9 +324,13 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 				fmt.Sprintf("up to %.2f %s", max, c.Price.Currency), costWiden)
 		}
 	case parser.KindKeyword:
-		cl, fixed, err := rw.replaceTypo(ctx, it.index, c)
-		if err != nil {
-			return err
+		var cl *Clause
+		var fixed string
+		if !rw.knownWord(c) {
+			var err error
+			if cl, fixed, err = rw.replaceTypo(ctx, it.index, c); err != nil {
+				return err
+			}
 		}
 		if cl != nil && cl.Field == string(parser.KindColour) {
 			// A colour misspelt: the colour, then the catalog colours near
@@ -578,6 +582,19 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 		}
 	}
 	return out
+}
+
+// knownWord reports whether keyword c is a word of the lexicon, a
+// product type read as a modifier or a feature ("blanket" in "blanket
+// throw"): no typo, so never replaced, though a plural of it is one edit
+// away.
+func (rw *Rewriter) knownWord(c parser.Constraint) bool {
+	for _, k := range []lexicon.Kind{lexicon.ProductType, lexicon.Colour, lexicon.Material, lexicon.Pattern, lexicon.Silhouette, lexicon.Brand} {
+		if _, ok := rw.lex.Lookup(k, c.Name); ok {
+			return true
+		}
+	}
+	return false
 }
 
 // replaceTypo reads an unknown word as the likeliest word nearestWords

@@ -195,6 +195,21 @@ func TestFineThread(t *testing.T) {
 	}
 }
 
+// A product type read as a modifier ("blanket" in "blanket sofa") is a
+// word whittle knows, no typo: it is never "replaced" by the catalog's
+// own "blanket", which would say "Showing sofas for “blanket”".
+func TestModifierIsNoTypo(t *testing.T) {
+	rw := New(&memEngine{products: []product{{ID: "BL-1", Type: "blanket"}, {ID: "SF-1", Type: "sofa"}}}, nil)
+	r := parser.Parse("blanket sofa")
+	for _, it := range rw.ladders(context.Background(), r, rw.policy.Apply(r, rw.lex)) {
+		for _, l := range it.levels {
+			if l.relax != nil && l.relax.Operator == OpReplace {
+				t.Errorf("%q is replaced: %s", it.c.Text, l.relax.Detail)
+			}
+		}
+	}
+}
+
 // A flotation tyre size is a designation, hard, found by its size
 // alone as a metric one is; a tyre of the next size is no answer.
 func TestFlotationTyre(t *testing.T) {
