@@ -13,7 +13,7 @@ import (
 var alternativeKinds = map[Kind]bool{
 	KindProductType: true, KindColour: true, KindPattern: true, KindSilhouette: true,
 	KindMaterial: true, KindSize: true, KindAudience: true, KindSpec: true,
-	KindBrand: true, KindPartNumber: true,
+	KindBrand: true, KindPartNumber: true, KindCompatibility: true,
 }
 
 // alternatives joins into one group (Constraint.OrGroup) the values a
@@ -28,7 +28,8 @@ var alternativeKinds = map[Kind]bool{
 // practice).
 //
 // A number with no unit before "or" takes the unit after it: in "12 or
-// 14 awg" both are gauges (borrowUnit). An exclusion before "or" covers
+// 14 awg" both are gauges (borrowUnit); a code after "or" after a model
+// fitted is a second model ("for jx-10 or jx-12"). An exclusion before "or" covers
 // what follows it, as in English: "not red or blue" is neither.
 func (p *tagger) alternatives() {
 	cs := p.res.Constraints
@@ -48,6 +49,13 @@ func (p *tagger) alternatives() {
 		}
 		a, b := j-1, j+1
 		p.borrowUnit(a, b)
+		if cs[a].Kind == KindCompatibility && cs[b].Kind == KindPartNumber && cs[a].Excluded == cs[b].Excluded {
+			// "case for jx-10 or jx-12": the code after "or" is a second
+			// model it may fit, not a part number the case must have.
+			cs[b].Kind, cs[b].Target, cs[b].Code = KindCompatibility, strings.ToLower(cs[b].Code), ""
+			cs[b].Strictness = DefaultStrictness(KindCompatibility)
+			cs[b].Evidence = fmt.Sprintf("a second target after %q", cs[a].Text)
+		}
 		if cs[a].Excluded && !cs[b].Excluded && cs[a].Kind == cs[b].Kind {
 			cs[b].Excluded = true
 			cs[b].Evidence = join(cs[b].Evidence, fmt.Sprintf("excluded with %q", cs[a].Text))

@@ -181,9 +181,9 @@ func clauseMatches(pr product, c Clause) bool {
 		v := specOf(pr, c.Dimension)
 		return v != "" && slices.Contains(c.Values, v)
 	case "compatibility":
-		return slices.Contains(pr.Compat, c.Values[0])
+		return slices.ContainsFunc(c.Values, func(v string) bool { return slices.Contains(pr.Compat, v) })
 	case "keyword":
-		return slices.Contains(pr.Words, c.Values[0])
+		return slices.ContainsFunc(c.Values, func(v string) bool { return slices.Contains(pr.Words, v) })
 	}
 	return slices.Contains(c.Values, attr(pr, c.Field))
 }

@@ -87,6 +87,8 @@ func TestRescue(t *testing.T) {
 			exact: true, count: 1},
 		{name: "gauges offered as alternatives", query: "12 or 14 awg wire", reason: "12 or 14 awg is either gauge, and WR-1 is 12 awg; read alone the 12 was a length",
 			exact: true, count: 1},
+		{name: "models offered as alternatives", query: "lens for jx-20 or jx-10", reason: "either model will do: both lenses fit the jx-10, and LN-1 is available; jx-10 was a part number nothing has",
+			exact: true, count: 2},
 		{name: "alternative colours widened together", query: "mustard or saffron rain jacket", reason: "no rain jacket is either by name; harvest gold is within ΔE00 4 of mustard",
 			count: 1, ops: []string{"widen colour"}, message: "Showing rain jackets in colours close to mustard or saffron."},
 		{name: "alternative colours dropped together", query: "lavender or lilac rain jacket", reason: "no rain jacket is near either: the group is dropped as one colour",
