@@ -85,6 +85,8 @@ func TestAlternatives(t *testing.T) {
 			reason: "two targets, each after \"for\", are alternatives too",
 			want: []alt{{"case", KindKeyword, "case", false, 0, false}, {"for jx-10", KindCompatibility, "fits jx-10", false, 1, false},
 				{"for jx-12", KindCompatibility, "fits jx-12", false, 1, false}}},
+		{name: "either before the first", query: "either black or navy shirt", reason: "\"either\" only opens the choice: it is filler, where it was a stray word",
+			want: []alt{{"black", KindColour, "black", false, 1, false}, {"navy", KindColour, "navy", false, 1, false}, {"shirt", KindProductType, "shirt", false, 0, false}}},
 		{name: "kinds differ", query: "navy or cotton shirt",
 			reason: "a colour and a material are no choice between values of one kind",
 			want:   []alt{{"navy", KindColour, "navy", false, 0, false}, {"cotton", KindMaterial, "cotton", false, 0, false}, {"shirt", KindProductType, "shirt", false, 0, false}}},
