@@ -23,8 +23,10 @@ func ExactMessage(n int) string {
 //
 // A query that found some products as typed, fewer than the policy's
 // min_results, is told so ("Only 2 exact matches for …"), not that it
-// found nothing.
-func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
+// found nothing. When the shop carries none of the type asked for
+// (uncarried) and the type was widened, the message says so first:
+// "The shop carries no blazers. Showing jackets."
+func (rw *Rewriter) message(out *Outcome, items []*item, state []int, uncarried bool) string {
 	q := strings.TrimSpace(out.Query)
 	lead := fmt.Sprintf("No exact match for “%s”.", q)
 	if len(out.Steps) > 0 && out.Steps[0].Count > 0 {
@@ -65,6 +67,11 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int) string {
 	for i, it := range items {
 		if it.c.IsHead() && !it.c.Excluded && state[i] == 0 {
 			noun = it.nameList(plural)
+		}
+	}
+	for i, it := range items {
+		if uncarried && it.c.IsHead() && !it.c.Excluded && i < len(state) && state[i] > 0 && it.levels[state[i]].relax.Operator == OpWiden {
+			lead += fmt.Sprintf(" The shop carries no %s.", it.nameList(plural))
 		}
 	}
 	msg := lead + " Showing " + noun

@@ -62,7 +62,7 @@ func TestRescue(t *testing.T) {
 		{name: "type not carried", query: "coir doormat", reason: "the shop has no doormat, and a doormat has no broader type to widen to",
 			count: 0, message: "No results for “coir doormat”. The shop carries no doormats."},
 		{name: "widen product type", query: "chelsea boots", reason: "no chelsea boot; the hiking boot is a boot",
-			count: 1, ops: []string{"widen product_type"}, message: "Showing boots."},
+			count: 1, ops: []string{"widen product_type"}, message: "No exact match for “chelsea boots”. The shop carries no chelsea boots. Showing boots."},
 		{name: "stretch price", query: "rain jacket under $50", reason: "the cheapest is 55.00; a 15% stretch reaches 57.50",
 			count: 1, ops: []string{"widen price"}, message: "up to 57.50 USD"},
 		{name: "widen measure", query: "5x8 rug", reason: "the rug is 5 by 7.5 ft: 8 ft widened by 10% holds 7.5",
@@ -194,6 +194,20 @@ func TestFineThread(t *testing.T) {
 	o = mustRescue(t, some, "m8 fine thread bolt")
 	if ids := planIDs(some, o); !slices.Equal(ids, []string{"BT-3"}) {
 		t.Errorf("dropping the style shows %v, want BT-3\n%s", ids, o.Explanation)
+	}
+}
+
+// A type the shop carries, widened for the other constraints' sake, is
+// not said to be missing; one it carries none of is.
+func TestWidenedTypeMessage(t *testing.T) {
+	ps := []product{{ID: "CB-1", Type: "chelsea boot", Colour: "black", Hex: "#000000"}, {ID: "HB-1", Type: "hiking boot", Colour: "brown", Hex: "#a52a2a"}}
+	o := mustRescue(t, ps, "brown chelsea boots")
+	if got := ops(o); !slices.Equal(got, []string{"widen product_type"}) || strings.Contains(o.Message, "carries no") || !strings.HasSuffix(o.Message, "Showing boots.") {
+		t.Errorf("ops %v, message %q\n%s", got, o.Message, o.Explanation)
+	}
+	o = mustRescue(t, ps[1:], "brown chelsea boots")
+	if want := "No exact match for “brown chelsea boots”. The shop carries no chelsea boots. Showing boots."; o.Message != want {
+		t.Errorf("message %q, want %q", o.Message, want)
 	}
 }
 

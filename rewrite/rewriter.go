@@ -463,7 +463,7 @@ func (rw *Rewriter) settle(s *search, state []int, n int) *Outcome {
 	if out.Exact {
 		out.Explanation = fmt.Sprintf("the query as typed finds %d", n)
 	} else {
-		out.Message = rw.message(out, s.items, state)
+		out.Message = rw.message(out, s.items, state, s.typeUncarried())
 		out.Explanation = s.explain(state)
 	}
 	out.settled = &settled{items: s.items, state: slices.Clone(state), fix: s.fix, laddered: s.laddered}
