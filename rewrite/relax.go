@@ -251,10 +251,16 @@ func without(p Plan, i int) Plan {
 const (
 	costReplace = 0.4
 	costWiden   = 1.5
-	// costWidenType widens a product type to its parent: a little more
-	// than an attribute's widening, since a counter stool of 26 in is
-	// nearer a "28 in counter stool" than a stool of 28 in of any kind.
-	costWidenType = 2.0
+	// costWidenType widens a product type to its parent: more than an
+	// attribute's widening, since a counter stool of 26 in is nearer a
+	// "28 in counter stool" than a stool of 28 in of any kind, and more
+	// than dropping any one firm attribute, however rare (costDropFirm
+	// scaled by rarity reaches 5), since the kind of product is what a
+	// shopper asked for first: "mauve shirt" shows shirts in other
+	// colours before tops in mauve. The type is widened when what must
+	// hold (a hard size, a gauge) finds none of it, or when the shop
+	// carries none.
+	costWidenType = 5.5
 	costDropSoft  = 1.0
 	costDropFirm  = 4.0
 )
