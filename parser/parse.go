@@ -101,6 +101,9 @@ func ParseWith(query string, opts Options) *Result {
 			}
 		}
 	}
+	if len(r.Constraints) == 0 {
+		r.Constraints = nil // none read, as a result with none always says
+	}
 	sort.SliceStable(r.Errors, func(i, j int) bool { return r.Errors[i].Start < r.Errors[j].Start })
 	for _, e := range r.Errors {
 		e.Query = query
@@ -178,6 +181,9 @@ func (p *tagger) tokEnd(i int) int {
 func (p *tagger) run() {
 	p.toks = grammar.Tokens(p.q)
 	p.units = p.segment()
+	// Most units give one constraint; room for them all saves the
+	// copies of growing the slice, the tagger's largest allocation.
+	p.res.Constraints = make([]Constraint, 0, len(p.units)+1)
 	p.choose()
 	p.compounds()
 	p.findHead()
