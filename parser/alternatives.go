@@ -6,14 +6,13 @@ import (
 )
 
 // alternativeKinds are the kinds whose values a shopper may offer as
-// alternatives, any of which will do ("navy or black"). A measure or a
-// price is not among them: "50 or 55 inch" is two points, not the range
-// between them, and whittle writes no constraint that is either of two
-// ranges.
+// alternatives, any of which will do ("navy or black"). Measures are
+// among them when both are points of one dimension and unit ("50 or 55
+// inch tv": either diagonal, not the range between); a price is not.
 var alternativeKinds = map[Kind]bool{
 	KindProductType: true, KindColour: true, KindPattern: true, KindSilhouette: true,
 	KindMaterial: true, KindSize: true, KindAudience: true, KindSpec: true,
-	KindBrand: true, KindPartNumber: true, KindCompatibility: true,
+	KindBrand: true, KindPartNumber: true, KindCompatibility: true, KindMeasure: true,
 }
 
 // alternatives joins into one group (Constraint.OrGroup) the values a
@@ -114,7 +113,8 @@ var audienceJoins = map[string]bool{"and": true, "&": true}
 // joinable reports whether x and y may be alternatives of one group:
 // of one kind that takes alternatives, both excluded or neither, and, for
 // sizes and designations, of one system (a shoe size 8 or a letter size
-// m; "9 or m" is no choice between sizes of one kind).
+// m; "9 or m" is no choice between sizes of one kind), and, for
+// measures, points of one dimension in one unit.
 func joinable(x, y Constraint) bool {
 	if x.Kind != y.Kind || !alternativeKinds[x.Kind] || x.Excluded != y.Excluded {
 		return false
@@ -124,6 +124,9 @@ func joinable(x, y Constraint) bool {
 		return x.Size.System == y.Size.System
 	case x.Spec != nil && y.Spec != nil:
 		return x.Spec.System == y.Spec.System
+	case x.Measure != nil && y.Measure != nil:
+		a, b := x.Measure, y.Measure
+		return a.BaseAmount != nil && b.BaseAmount != nil && a.BaseUnit != "" && a.BaseUnit == b.BaseUnit && a.Dimension == b.Dimension
 	}
 	return true
 }

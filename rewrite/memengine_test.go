@@ -174,7 +174,10 @@ func clauseMatches(pr product, c Clause) bool {
 		return false
 	case "measure":
 		v, ok := pr.Measures[c.Dimension]
-		return ok && within(v)
+		return ok && (within(v) || slices.ContainsFunc(c.Also, func(a Bounds) bool {
+			const eps = 1e-9
+			return (a.Min == nil || v >= *a.Min-eps) && (a.Max == nil || v <= *a.Max+eps)
+		}))
 	case "price":
 		return c.Unit == "USD" && within(pr.Price)
 	case "spec":

@@ -138,7 +138,7 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 			continue
 		}
 		what := m.Text
-		if c.Measure != nil && c.Inferred {
+		if c.Measure != nil && c.Inferred && c.OrGroup == 0 {
 			what = c.Value() // "85 mm", not "85"
 		}
 		s := fmt.Sprintf("%s is not carried%s", what, in)

@@ -34,11 +34,23 @@ type Clause struct {
 	// same unit: an engine with nothing else to rank by can list the
 	// products nearest it first. It does not change what matches.
 	Near *float64 `json:"near,omitempty"`
+	// Also, on a measure, are more ranges in the same unit, any of which
+	// matches as Min and Max do: the alternatives of "50 or 55 inch tv"
+	// are 50 in here and 55 in in Also. A measure matches the clause if
+	// it lies in Min..Max or in any of them.
+	Also []Bounds `json:"also,omitempty"`
 	// Excluded means a product must NOT match the clause.
 	Excluded bool `json:"excluded,omitempty"`
 	// From is the index, in the parsed query, of the constraint the
 	// clause comes from.
 	From int `json:"from"`
+}
+
+// Bounds is a range of a measure, in its clause's unit; either end may
+// be nil.
+type Bounds struct {
+	Min *float64 `json:"min,omitempty"`
+	Max *float64 `json:"max,omitempty"`
 }
 
 // key is the clause written out, for telling plans apart.
@@ -50,6 +62,15 @@ func (c Clause) key() string {
 	}
 	if c.Max != nil {
 		fmt.Fprintf(&b, "<=%g", *c.Max)
+	}
+	for _, a := range c.Also {
+		b.WriteString("|")
+		if a.Min != nil {
+			fmt.Fprintf(&b, ">=%g", *a.Min)
+		}
+		if a.Max != nil {
+			fmt.Fprintf(&b, "<=%g", *a.Max)
+		}
 	}
 	// A price's bounds mean nothing without their currency: 60 USD and
 	// 60 EUR match different products. Near is left out, as it orders

@@ -129,10 +129,14 @@ func (rw *Rewriter) itemClause(it *item) Clause {
 	}
 	cl := rw.exactClause(it.index, it.group[0])
 	for _, m := range it.group[1:] {
-		for _, v := range rw.exactClause(it.index, m).Values {
+		o := rw.exactClause(it.index, m)
+		for _, v := range o.Values {
 			if !slices.Contains(cl.Values, v) {
 				cl.Values = append(cl.Values, v)
 			}
+		}
+		if cl.Field == string(parser.KindMeasure) {
+			cl.Also = append(cl.Also, Bounds{Min: o.Min, Max: o.Max}) // "50 or 55 inch"
 		}
 	}
 	return cl
@@ -286,6 +290,9 @@ func (rw *Rewriter) relaxations(ctx context.Context, it *item, e Effective, with
 	case parser.KindMeasure:
 		for _, w := range rw.widenMeasure(it, e) {
 			add(w.clause, OpWiden, w.detail, w.phrase, costWiden)
+		}
+		if it.group != nil {
+			break // the amounts carried near one of several is no one widening
 		}
 		w, err := rw.widenToCarried(ctx, it, within)
 		if err != nil {
@@ -535,6 +542,9 @@ type widening struct {
 // widenMeasure widens a measure by the policy's tolerance, then to the
 // standard sizes around it, when the policy lists them.
 func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
+	if it.group != nil {
+		return rw.widenMeasures(it, e)
+	}
 	m := it.c.Measure
 	if m == nil || m.BaseUnit == "" || m.BaseAmount == nil {
 		return nil
@@ -601,6 +611,46 @@ func (rw *Rewriter) knownWord(c parser.Constraint) bool {
 		}
 	}
 	return false
+}
+
+// widenMeasures widens each measure of an or-group ("50 or 55 inch")
+// by the policy's tolerance, as widenMeasure widens one: the first in
+// the clause's own bounds, the others in Also. It is nil when the
+// tolerance is 0.
+func (rw *Rewriter) widenMeasures(it *item, e Effective) []widening {
+	t := e.MeasureTolerance
+	if t <= 0 {
+		return nil
+	}
+	cl := rw.itemClause(it)
+	cl.Also = nil
+	count, reaches := it.c.Measure.Quantity == "count", false
+	var amounts []string
+	for i, m := range it.group {
+		v := *m.Measure.BaseAmount
+		lo, hi := v*(1-t), v*(1+t)
+		if i == 0 {
+			cl.Min, cl.Max = &lo, &hi
+		} else {
+			cl.Also = append(cl.Also, Bounds{Min: &lo, Max: &hi})
+		}
+		// A count widened by a tolerance that holds no other whole
+		// number matches what it matched (widenMeasure).
+		reaches = reaches || !count || math.Floor(hi) > v || math.Ceil(lo) < v
+		if count {
+			amounts = append(amounts, strconv.FormatFloat(v, 'f', -1, 64))
+		} else {
+			amounts = append(amounts, strings.TrimSpace(m.Measure.String()))
+		}
+	}
+	if !reaches {
+		return nil
+	}
+	phrase := "about " + orList(amounts)
+	if count {
+		phrase = countPhrase(it.c.Measure.Dimension, phrase)
+	}
+	return []widening{{&cl, fmt.Sprintf("each to ±%g%%", t*100), phrase}}
 }
 
 // replaceTypo reads an unknown word as the likeliest word nearestWords

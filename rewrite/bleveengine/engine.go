@@ -319,7 +319,16 @@ func clauseQuery(c rewrite.Clause) query.Query {
 	case "measure":
 		q := bleve.NewNumericRangeInclusiveQuery(c.Min, c.Max, &t, &t)
 		q.SetField(measureField(c.Dimension))
-		return q
+		if len(c.Also) == 0 {
+			return q
+		}
+		qs := []query.Query{q}
+		for _, a := range c.Also {
+			r := bleve.NewNumericRangeInclusiveQuery(a.Min, a.Max, &t, &t)
+			r.SetField(measureField(c.Dimension))
+			qs = append(qs, r)
+		}
+		return bleve.NewDisjunctionQuery(qs...)
 	case "price":
 		q := bleve.NewNumericRangeInclusiveQuery(c.Min, c.Max, &t, &t)
 		q.SetField(fPrice)

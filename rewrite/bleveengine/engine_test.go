@@ -78,6 +78,8 @@ func TestRescueOnTheIndex(t *testing.T) {
 		{"trail running shoes size 13 or 12", "either size will do, and TR-1 comes in 12", true, 1, nil, ""},
 		{"12 or 14 awg wire", "either gauge will do, and WR-1 is 12 awg", true, 1, nil, ""},
 		{"50mm lens for jx-20 or jx-10", "either model will do, and LN-1 fits the jx-10", true, 1, nil, ""},
+		{"35 or 50 mm lens", "either focal length will do: LN-2 is 35 mm, LN-1 50 mm", true, 2, nil, ""},
+		{"2x4 7.5 or 11 ft", "each length ±10%: 6.75..8.25 ft holds LB-1's 8 ft, 9.9..12.1 ft LB-2's 10 ft", false, 2, []string{"widen measure"}, "about 7.5 ft or 11 ft"},
 		{"sweater not charcoal or black", "neither colour: SW-2 is oatmeal", true, 1, nil, ""},
 		{"merino sweter l", "sweter is read as sweater, so the query is apparel and l a hard letter size: SW-1 is merino in l", false, 1, []string{"replace product_type"}, "Showing sweaters, reading “sweter” as “sweater”."},
 		{"trail runing shoes size 13", "runing is a word of \"trail running shoe\", read as running: the size stays hard and is not carried", false, 0, []string{"replace product_type"},
