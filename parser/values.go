@@ -369,6 +369,9 @@ func (p *tagger) point(k int, q quantity) int {
 	if n, ok := p.suitSize(k, q); ok {
 		return n
 	}
+	if n := p.dimensionWord(k, q); n > 0 {
+		return n
+	}
 	// "3 step ladder", "2 step stool": the steps, which the product
 	// type's own name counts (common practice), not a height.
 	if !q.hasUnit && q.num.integer && q.num.value <= 12 && k+1 < len(p.units) && p.units[k+1].chosen != nil &&
@@ -983,6 +986,60 @@ func (p *tagger) cableStandard() string {
 		return "usb"
 	}
 	return ""
+}
+
+// dimensionWords are the words after a length that name what it
+// measures: "30 inch wide", "72 in tall", "48 in long", "18 in deep".
+var dimensionWords = map[string]string{
+	"wide": "width", "width": "width", "long": "length", "length": "length",
+	"tall": "height", "high": "height", "height": "height", "deep": "depth", "depth": "depth",
+}
+
+// dimensionWord reads a length and the word after it that names its
+// dimension ("bookcase 72 inch tall"): the measure of that dimension,
+// where the word was a stray one and the length took the first slot its
+// range holds, a width. A bare number takes the unit of the head's slot
+// of that dimension ("bookcase 72 tall"), and is read so only when there
+// is one. Not on clothes, whose "32 long" is an inseam or a suit's
+// length. It returns the extra units used, or 0.
+func (p *tagger) dimensionWord(k int, q quantity) int {
+	w, spaced := p.nextWord(k)
+	if w == nil || !spaced || w.entries != nil && !fillerOnly(w) || p.apparel() {
+		return 0
+	}
+	dim, ok := dimensionWords[w.text]
+	if !ok {
+		return 0
+	}
+	if dim == "length" && !p.hasSlot("length") && p.hasSlot("width") {
+		dim = "width" // a desk's long side is its width, and it has no length
+	}
+	u := &p.units[k]
+	if q.hasUnit {
+		if q.unit.Quantity != units.Length {
+			return 0
+		}
+		c := p.measure(u.start, w.end, q, dim, nil, nil, q.unit)
+		c.Evidence = fmt.Sprintf("unit as typed; %q names the %s", w.text, dim)
+		p.add(c)
+		return 1
+	}
+	for _, sl := range p.lex.SlotsOf(p.head) {
+		if sl.Dimension == dim && sl.Quantity == units.Length {
+			c := p.measure(u.start, w.end, quantity{num: q.num, unit: sl.Unit, hasUnit: true}, dim, nil, nil, sl.Unit)
+			c.Inferred = true
+			c.Evidence = fmt.Sprintf("unit %s from product type %s's %s; %q names it", sl.Unit.Symbol, p.head.Name, dim, w.text)
+			p.add(c)
+			return 1
+		}
+	}
+	return 0
+}
+
+// hasSlot reports whether the head product type has a slot of
+// dimension dim.
+func (p *tagger) hasSlot(dim string) bool {
+	return slices.ContainsFunc(p.lex.SlotsOf(p.head), func(s lexicon.Slot) bool { return s.Dimension == dim })
 }
 
 // suitSize reads a suit's chest and length, "42r", "40l", "38 short", on
