@@ -20,9 +20,9 @@ var alternativeKinds = map[Kind]bool{
 // ("navy or black", "size 8 or 9"), a list of them with commas before
 // the "or" ("red, blue or green"), and sizes of one system joined by a
 // slash ("full/queen", "s/m"), the way a size that fits either is
-// written on a label (common practice), and audiences side by side or
-// joined by "and" ("toddler boys", "mens and womens"), since a product
-// is made for one audience. Colours joined by a slash are
+// written on a label (common practice), and a query's audiences
+// ("toddler boys", "mens and womens"), since a product is made for one
+// audience. Colours joined by a slash are
 // not alternatives: "black/white" names one two-tone colourway (common
 // practice).
 //
@@ -79,22 +79,29 @@ func (p *tagger) alternatives() {
 		if x.Kind == KindSize && joinable(x, y) && p.q[x.End:y.Start] == "/" {
 			link(i, i+1)
 		}
-		// Audiences side by side, or joined by "and": a product is made
-		// for one, so "toddler boys" and "mens and womens" ask for
-		// either, where both at once find nothing.
-		if between := strings.TrimSpace(p.q[x.End:y.Start]); x.Kind == KindAudience && joinable(x, y) && (between == "" || between == "/" || audienceJoins[between]) {
-			link(i, i+1)
-		}
-		if x.Kind == KindAudience && i+2 < len(cs) && joinable(x, cs[i+2]) && y.Kind == KindFiller && audienceJoins[strings.ToLower(y.Text)] {
-			link(i, i+2)
+	}
+	// Audiences, wherever they stand: a product is made for one, so
+	// "toddler boys", "mens and womens" and "kids rain boots toddler"
+	// ask for either, where all at once find nothing.
+	for _, excluded := range []bool{false, true} {
+		first := -1
+		for i, c := range cs {
+			if c.Kind != KindAudience || c.Excluded != excluded {
+				continue
+			}
+			if first < 0 {
+				first = i
+				continue
+			}
+			link(first, i)
 		}
 	}
-	if groups == 0 {
+	if groups = p.res.renumber(); groups == 0 {
 		return
 	}
 	for g := 1; g <= groups; g++ {
 		members := p.res.Alternatives(p.res.first(g))
-		text := p.q[cs[members[0]].Start:cs[members[len(members)-1]].End]
+		text := p.res.AlternativesText(members[0])
 		most := cs[members[0]].Strictness
 		for _, m := range members {
 			most = max(most, cs[m].Strictness)
@@ -105,10 +112,6 @@ func (p *tagger) alternatives() {
 		}
 	}
 }
-
-// audienceJoins are the words between two audiences that ask for
-// either of them.
-var audienceJoins = map[string]bool{"and": true, "&": true}
 
 // joinable reports whether x and y may be alternatives of one group:
 // of one kind that takes alternatives, both excluded or neither, and, for
@@ -220,6 +223,55 @@ func (r *Result) Alternatives(i int) []int {
 		}
 	}
 	return out
+}
+
+// renumber numbers the or-groups from 1 in the order of their first
+// members, drops a group of one (its constraint stands alone) and
+// returns how many there are.
+func (r *Result) renumber() int {
+	cs := r.Constraints
+	size := map[int]int{}
+	for _, c := range cs {
+		size[c.OrGroup]++
+	}
+	next, to := 0, map[int]int{}
+	for i := range cs {
+		g := cs[i].OrGroup
+		if g == 0 {
+			continue
+		}
+		if size[g] < 2 {
+			cs[i].OrGroup = 0
+			continue
+		}
+		if to[g] == 0 {
+			next++
+			to[g] = next
+		}
+		cs[i].OrGroup = to[g]
+	}
+	return next
+}
+
+// AlternativesText is what the shopper typed for constraint i and its
+// alternatives: the span from the first to the last ("navy or black",
+// "full/queen") when nothing else stands between them, else their texts
+// joined by "or" ("kids or toddler" for "kids rain boots toddler").
+func (r *Result) AlternativesText(i int) string {
+	alts := r.Alternatives(i)
+	if len(alts) == 0 {
+		return ""
+	}
+	for j := alts[0]; j <= alts[len(alts)-1]; j++ {
+		if c := r.Constraints[j]; c.OrGroup != r.Constraints[i].OrGroup && c.Kind != KindFiller {
+			texts := make([]string, len(alts))
+			for k, a := range alts {
+				texts[k] = r.Constraints[a].Text
+			}
+			return strings.Join(texts, " or ")
+		}
+	}
+	return r.Query[r.Constraints[alts[0]].Start:r.Constraints[alts[len(alts)-1]].End]
 }
 
 // first is the index of the first constraint of group g, or -1.

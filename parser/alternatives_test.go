@@ -74,6 +74,11 @@ func TestAlternatives(t *testing.T) {
 			reason: "\"mens and womens\" asks for either: no boot is made for both",
 			want: []alt{{"mens", KindAudience, "men", false, 1, false}, {"womens", KindAudience, "women", false, 1, false},
 				{"hiking boots", KindProductType, "hiking boot", false, 0, false}}},
+		{name: "audiences apart", query: "kids rain boots yellow toddler", reason: "wherever they stand, two audiences are either: no boot is made for both",
+			want: []alt{{"kids", KindAudience, "kids", false, 1, false}, {"rain boots", KindProductType, "rain boot", false, 0, false},
+				{"yellow", KindColour, "yellow", false, 0, false}, {"toddler", KindAudience, "baby", false, 1, false}}},
+		{name: "audiences excluded", query: "-kids -baby hats", reason: "excluded audiences are one group too: neither",
+			want: []alt{{"-kids", KindAudience, "not kids", true, 1, false}, {"-baby", KindAudience, "not baby", true, 1, false}, {"hats", KindProductType, "hat", false, 0, false}}},
 		{name: "audiences joined by an ampersand", query: "kids & baby hats", reason: "the same with \"&\"",
 			want: []alt{{"kids", KindAudience, "kids", false, 1, false}, {"baby", KindAudience, "baby", false, 1, false},
 				{"hats", KindProductType, "hat", false, 0, false}}},
@@ -135,6 +140,33 @@ func TestResultAlternatives(t *testing.T) {
 			t.Errorf("Alternatives(%d) = %v, want %v", tc.i, got, tc.want)
 		}
 	}
+}
+
+// The text of a group is its span when nothing else stands between its
+// members, else their texts joined by "or".
+func TestAlternativesText(t *testing.T) {
+	for _, tc := range []struct {
+		query string
+		i     int
+		want  string
+	}{{"navy or black shirt", 2, "navy or black"}, {"kids rain boots yellow toddler", 0, "kids or toddler"},
+		{"size 8 or 9 sandals", 0, "size 8 or 9"}, {"navy shirt", 1, "shirt"}, {"navy shirt", 5, ""}} {
+		if got := Parse(tc.query).AlternativesText(tc.i); got != tc.want {
+			t.Errorf("%q: AlternativesText(%d) = %q, want %q", tc.query, tc.i, got, tc.want)
+		}
+	}
+}
+
+// A group cut short by MaxConstraints is numbered again: "kids rain
+// boots toddler", cut after its first two, leaves kids alone.
+func TestAlternativesCutRenumbered(t *testing.T) {
+	r := ParseWith("kids rain boots navy or black toddler", Options{MaxConstraints: 5})
+	for _, c := range r.Constraints {
+		if c.Kind == KindAudience && c.OrGroup != 0 || c.Kind == KindColour && c.OrGroup != 1 {
+			t.Errorf("%s %q in group %d", c.Kind, c.Text, c.OrGroup)
+		}
+	}
+	checkInvariants(t, r.Query, r)
 }
 
 // Cut by MaxConstraints, an alternative whose others were cut stands

@@ -210,3 +210,9 @@ func ExampleResult_Alternatives() {
 	// "shirt": any of ["shirt"]
 	// "size s": any of ["size s" "m"]
 }
+
+func ExampleResult_AlternativesText() {
+	r := parser.Parse("kids rain boots yellow toddler")
+	fmt.Println(r.AlternativesText(0))
+	// Output: kids or toddler
+}

@@ -95,11 +95,7 @@ func ParseWith(query string, opts Options) *Result {
 			Msg: fmt.Sprintf("query has %d constraints; the limit is %d, so the rest from here are not read", len(r.Constraints), max)})
 		r.Constraints = r.Constraints[:max]
 		// An alternative whose others were cut stands alone.
-		for i := range r.Constraints {
-			if r.Constraints[i].OrGroup != 0 && len(r.Alternatives(i)) < 2 {
-				r.Constraints[i].OrGroup = 0
-			}
-		}
+		r.renumber()
 	}
 	if len(r.Constraints) == 0 {
 		r.Constraints = nil // none read, as a result with none always says

@@ -166,7 +166,7 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		slices.Sort(from) // in the query's order
 		var all []string
 		for _, i := range from {
-			all = append(all, clauseText(out.Parsed, i))
+			all = append(all, out.Parsed.AlternativesText(i))
 		}
 		if len(all) > 1 {
 			parts = append(parts, "Nothing carried is all of "+strings.Join(all[:len(all)-1], ", ")+" and "+all[len(all)-1])

@@ -114,7 +114,7 @@ func (rw *Rewriter) newItem(r *parser.Result, i int) *item {
 			it.c.Strictness = max(it.c.Strictness, m.Strictness)
 		}
 		it.c.Start, it.c.End = first.Start, last.End
-		it.c.Text = r.Query[first.Start:last.End]
+		it.c.Text = r.AlternativesText(i)
 	}
 	exact := rw.itemClause(it)
 	it.levels = []level{{clause: &exact}}
@@ -140,16 +140,6 @@ func (rw *Rewriter) itemClause(it *item) Clause {
 		}
 	}
 	return cl
-}
-
-// clauseText is what the shopper typed for constraint i of r: the whole
-// of its or-group ("navy or black"), when it has one.
-func clauseText(r *parser.Result, i int) string {
-	alts := r.Alternatives(i)
-	if len(alts) == 0 {
-		return ""
-	}
-	return r.Query[r.Constraints[alts[0]].Start:r.Constraints[alts[len(alts)-1]].End]
 }
 
 // ladders builds each constraint's states: exact first, then every

@@ -155,6 +155,7 @@ func TestAudiences(t *testing.T) {
 		{"mens pajamas", "a unisex product is filed apart on purpose, and is not a men's (lexicon.AudienceServes)", []string{"PJ-4"}},
 		{"mens and girls pajamas", "two audiences are either: no product is made for both", []string{"PJ-1", "PJ-3", "PJ-4"}},
 		{"-kids pajamas", "an exclusion is of the audience named only", []string{"PJ-2", "PJ-3", "PJ-4", "PJ-5"}},
+		{"kids pajamas for men", "audiences apart are either too", []string{"PJ-1", "PJ-2", "PJ-3", "PJ-4"}},
 	} {
 		t.Run(tc.query, func(t *testing.T) {
 			o := mustRescue(t, pyjamas, tc.query)

@@ -1190,7 +1190,7 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 			continue
 		}
 		rest := Plan{Clauses: append(append([]Clause(nil), hard.Clauses[:i]...), hard.Clauses[i+1:]...)}
-		text := clauseText(s.out.Parsed, cl.From)
+		text := s.out.Parsed.AlternativesText(cl.From)
 		n, err := s.countPlan(rest, nil, fmt.Sprintf("the hard constraints without %q", text))
 		if err != nil || n == 0 {
 			continue
