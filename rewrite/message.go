@@ -138,8 +138,8 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 			continue
 		}
 		what := m.Text
-		if c.Measure != nil && c.Inferred && c.OrGroup == 0 {
-			what = c.Value() // "85 mm", not "85"
+		if c.Measure != nil && c.Inferred && c.OrGroup == 0 && c.Measure.Unit != "" {
+			what = strings.TrimSpace(c.Text) + " " + c.Measure.Unit // "85 mm", not "85"; "3/8 in", not "0.375 in"
 		}
 		s := fmt.Sprintf("%s is not carried%s", what, in)
 		if len(m.Carried) > 0 {

@@ -197,6 +197,11 @@ func TestFineThread(t *testing.T) {
 	if o.Count != 0 {
 		t.Errorf("a shop of coarse M8 bolts only shows %d for a fine thread", o.Count)
 	}
+	// A diameter not carried is named as typed, with the unit inferred:
+	// "3/8 in", not 0.375 in (a bolt's diameter is hard, policy.toml).
+	if o := mustRescue(t, bolts, "bolt 3/8 x 2"); !strings.Contains(o.Message, "3/8 in is not carried in bolts") {
+		t.Errorf("message %q\n%s", o.Message, o.Explanation)
+	}
 	some := []product{bolts[0], bolts[2]}
 	o = mustRescue(t, some, "m8 fine thread bolt")
 	if ids := planIDs(some, o); !slices.Equal(ids, []string{"BT-3"}) {
