@@ -53,7 +53,8 @@ func Parse(query string) *Result {
 //   - A number stuck to a word that is no unit ("1080p", "4k") is one
 //     keyword.
 //   - "m", "s" and "l" are letter sizes only in apparel, footwear and
-//     accessories, and "m" right after a number is metres.
+//     accessories, and "m" right after a number is metres; on an
+//     accessory of no letter sizes (a bag), no size word is a size.
 //   - A fraction written like cable, an even gauge 6 to 18 over 2 to 4
 //     ("12/2"), is a wire gauge with its conductors; another fraction is
 //     never a gauge.

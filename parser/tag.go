@@ -538,7 +538,18 @@ func (p *tagger) apparel() bool {
 // sized reports whether the category's goods come in letter sizes
 // (clothes, shoes, gloves, hats, belts).
 func (p *tagger) sized() bool {
-	return p.apparel() || p.category == "accessories"
+	return p.apparel() || p.category == "accessories" && !p.unsizedAccessory()
+}
+
+// letteredAccessories are the accessories sold in letter sizes (common
+// practice): what is worn and fitted. A bag, a wallet, a watch or an
+// umbrella is not, so "large" and "xl" on one say how big, not a size.
+var letteredAccessories = []string{"hat", "gloves", "mittens", "belt", "helmet", "life jacket", "suspenders", "earmuffs"}
+
+// unsizedAccessory reports whether the head is an accessory that comes
+// in no letter sizes.
+func (p *tagger) unsizedAccessory() bool {
+	return p.category == "accessories" && p.head != nil && !slices.ContainsFunc(letteredAccessories, p.headUnder)
 }
 
 // add appends a constraint, filling in its text and, when Strictness is
@@ -879,6 +890,13 @@ func (p *tagger) letterSize(k int) int {
 		return n
 	}
 	u := &p.units[k]
+	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.unsizedAccessory() {
+		if _, ok := letterSizes[u.text+" "+p.units[k+1].text]; ok {
+			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: p.units[k+1].end, Name: u.text + " " + p.units[k+1].text,
+				Evidence: "a size word on an accessory sold in no letter sizes: how big it is, in the product's words"})
+			return 1
+		}
+	}
 	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.sized() {
 		// Two-word letter sizes: "extra large", "extra small".
 		if v, ok := letterSizes[u.text+" "+p.units[k+1].text]; ok {
@@ -887,6 +905,11 @@ func (p *tagger) letterSize(k int) int {
 		}
 	}
 	if v, ok := letterSizes[u.text]; ok {
+		if p.unsizedAccessory() {
+			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: u.text,
+				Evidence: "a size word on an accessory sold in no letter sizes: how big it is, in the product's words"})
+			return 0
+		}
 		if ambiguousLetters[u.text] && !p.sized() || plusLetters[u.text] && !p.apparel() {
 			return -1
 		}
