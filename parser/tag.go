@@ -538,7 +538,7 @@ func (p *tagger) apparel() bool {
 // sized reports whether the category's goods come in letter sizes
 // (clothes, shoes, gloves, hats, belts).
 func (p *tagger) sized() bool {
-	return p.apparel() || p.category == "accessories" && !p.unsizedAccessory()
+	return p.apparel() || p.category == "accessories" && !p.unsized()
 }
 
 // letteredAccessories are the accessories sold in letter sizes (common
@@ -546,10 +546,19 @@ func (p *tagger) sized() bool {
 // umbrella is not, so "large" and "xl" on one say how big, not a size.
 var letteredAccessories = []string{"hat", "gloves", "mittens", "belt", "helmet", "life jacket", "suspenders", "earmuffs"}
 
-// unsizedAccessory reports whether the head is an accessory that comes
-// in no letter sizes.
-func (p *tagger) unsizedAccessory() bool {
-	return p.category == "accessories" && p.head != nil && !slices.ContainsFunc(letteredAccessories, p.headUnder)
+// sizeWordEvidence is the evidence of a size word ("large", "xl") on a
+// product sold in no letter sizes.
+const sizeWordEvidence = "a size word on a product sold in no letter sizes: how big it is, in the product's words"
+
+// unsized reports whether the head is a product that comes in no
+// letter sizes: one of another category than clothes, shoes and
+// accessories (a mixing bowl, a vase), or an accessory not worn and
+// fitted (a bag). With no head, nothing says.
+func (p *tagger) unsized() bool {
+	if p.head == nil || p.apparel() {
+		return false
+	}
+	return p.category != "accessories" || !slices.ContainsFunc(letteredAccessories, p.headUnder)
 }
 
 // add appends a constraint, filling in its text and, when Strictness is
@@ -890,10 +899,10 @@ func (p *tagger) letterSize(k int) int {
 		return n
 	}
 	u := &p.units[k]
-	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.unsizedAccessory() {
+	if k+1 < len(p.units) && p.units[k+1].kind == uWord && p.unsized() {
 		if _, ok := letterSizes[u.text+" "+p.units[k+1].text]; ok {
 			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: p.units[k+1].end, Name: u.text + " " + p.units[k+1].text,
-				Evidence: "a size word on an accessory sold in no letter sizes: how big it is, in the product's words"})
+				Evidence: sizeWordEvidence})
 			return 1
 		}
 	}
@@ -905,9 +914,9 @@ func (p *tagger) letterSize(k int) int {
 		}
 	}
 	if v, ok := letterSizes[u.text]; ok {
-		if p.unsizedAccessory() {
+		if p.unsized() {
 			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: u.text,
-				Evidence: "a size word on an accessory sold in no letter sizes: how big it is, in the product's words"})
+				Evidence: sizeWordEvidence})
 			return 0
 		}
 		if ambiguousLetters[u.text] && !p.sized() || plusLetters[u.text] && !p.apparel() {

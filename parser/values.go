@@ -347,6 +347,11 @@ func (p *tagger) point(k int, q quantity) int {
 	}
 	if w != nil && !spaced && !q.hasUnit && q.num.integer {
 		// A letter size stuck to a number: "3xl", "2x".
+		if _, ok := letterSizes[q.num.decimal+w.text]; ok && p.unsized() {
+			p.add(Constraint{Kind: KindKeyword, Start: u.start, End: w.end, Name: q.num.decimal + w.text,
+				Evidence: sizeWordEvidence})
+			return 1
+		}
 		if s, ok := letterSizes[q.num.decimal+w.text]; ok && (!plusLetters[s] || p.apparel()) {
 			p.add(Constraint{Kind: KindSize, Start: u.start, End: w.end, Size: &Size{System: "letter", Value: s}, Evidence: "letter size"})
 			return 1
