@@ -51,7 +51,7 @@ const SignalsMinProducts = 578
 
 // generation names the generator's output; an index built by another
 // generation is rebuilt.
-const generation = "3"
+const generation = "4"
 
 func (o *Options) defaults() {
 	if o.Products <= 0 {
