@@ -981,13 +981,13 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 }
 
 // cableStandard is the standard whose grades the head product type is
-// sold by, "hdmi" for an hdmi cable and "usb" for a usb cable; "" for
-// any other.
+// sold by, "hdmi" for an hdmi cable or switch and "usb" for a usb cable,
+// drive or hub; "" for any other.
 func (p *tagger) cableStandard() string {
 	switch {
-	case p.headUnder("hdmi cable"):
+	case p.headUnder("hdmi cable"), p.headUnder("hdmi switch"):
 		return "hdmi"
-	case p.headUnder("usb cable"):
+	case p.headUnder("usb cable"), p.headUnder("usb drive"), p.headUnder("usb hub"):
 		return "usb"
 	}
 	return ""
