@@ -1,8 +1,8 @@
 // Package units knows the units of measure that shoppers type in queries:
 // lengths, masses, volumes (cubic inches, feet and yards among them),
 // power, voltage, current, battery charge, data sizes, time, frequency,
-// grammage (gsm), a lamp's colour temperature (kelvin) and pressure
-// (psi, kPa, MPa).
+// grammage (gsm), a lamp's colour temperature (kelvin), pressure (psi,
+// kPa, MPa) and energy (joules, Wh, kWh).
 //
 // Every unit has a factor to the base unit of its quantity (see [Base]),
 // derived at start-up with exact rational arithmetic from the legal

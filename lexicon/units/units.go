@@ -32,10 +32,13 @@ const (
 	// Pressure, in kilopascals: a pressure washer's or a compressor's
 	// output, a tyre's inflation.
 	Pressure Quantity = "pressure"
+	// Energy, in joules: a surge protector's rating, a power station's
+	// capacity in watt-hours.
+	Energy Quantity = "energy"
 )
 
 // quantities are the quantities in a fixed order.
-var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage, ColourTemperature, Pressure}
+var quantities = []Quantity{Length, Mass, Volume, Power, Voltage, Current, Charge, Data, Time, Frequency, Grammage, ColourTemperature, Pressure, Energy}
 
 // Quantities returns every quantity in a fixed order, in a slice of the
 // caller's own.
@@ -65,7 +68,7 @@ var written = map[string]string{
 	"imp_pt": "imp pt", "imp_qt": "imp qt", "imp_gal": "imp gal", "w": "W", "kw": "kW", "mv": "mV", "v": "V",
 	"kv": "kV", "ma": "mA", "a": "A", "mah": "mAh", "ah": "Ah", "kb": "kB", "mb": "MB", "gb": "GB", "tb": "TB",
 	"pb": "PB", "day": "d", "um": "µm", "hz": "Hz", "khz": "kHz", "mhz": "MHz", "ghz": "GHz",
-	"kelvin": "K", "kpa": "kPa", "mpa": "MPa",
+	"kelvin": "K", "kpa": "kPa", "mpa": "MPa", "j": "J", "wh": "Wh", "kwh": "kWh",
 }
 
 // String returns the symbol as it is usually written: "mm", "in", "mL",
@@ -79,8 +82,8 @@ func (u Unit) String() string {
 }
 
 // Base returns the base unit symbol for q: "mm", "g", "ml", "w", "v", "a",
-// "mah", "gb", "s", "hz", "gsm", "kelvin" or "kpa". It returns "" for an
-// unknown quantity.
+// "mah", "gb", "s", "hz", "gsm", "kelvin", "kpa" or "j". It returns "" for
+// an unknown quantity.
 func Base(q Quantity) string {
 	switch q {
 	case Length:
@@ -109,6 +112,8 @@ func Base(q Quantity) string {
 		return "kelvin"
 	case Pressure:
 		return "kpa"
+	case Energy:
+		return "j"
 	}
 	return ""
 }
@@ -290,6 +295,12 @@ var defs = []def{
 	{"kpa", "kilopascal", Pressure, "1", "", []string{"kpa", "kilopascal", "kilopascals"}},
 	{"psi", "pound per square inch", Pressure, "44482216152605/6451600000000", "kpa", []string{"psi", "lb/in2", "pounds per square inch"}},
 	{"mpa", "megapascal", Pressure, "1000", "kpa", []string{"mpa", "megapascal", "megapascals"}},
+
+	// Energy; base joule. A watt-hour is a watt for 3600 seconds. J alone
+	// is no spelling, as a letter j may be anything; "joules" is.
+	{"j", "joule", Energy, "1", "", []string{"joule", "joules"}},
+	{"wh", "watt-hour", Energy, "3600", "j", []string{"wh", "watt hour", "watt hours", "watt-hour", "watt-hours"}},
+	{"kwh", "kilowatt-hour", Energy, "1000", "wh", []string{"kwh", "kilowatt hour", "kilowatt hours", "kilowatt-hour", "kilowatt-hours"}},
 }
 
 // splitVolume lists the spellings whose meaning depends on the

@@ -122,6 +122,9 @@ var derivedFactors = []struct {
 	{"kelvin", 1, "base unit of colour temperature, the kelvin (SI Brochure)"},
 	{"kpa", 1, "base unit of pressure"},
 	{"mpa", 1000, "SI Brochure, prefix mega: 1 MPa = 1000 kPa"},
+	{"j", 1, "base unit of energy"},
+	{"wh", 3600, "a watt for an hour: 1 W × 3600 s (SI Brochure: W = J/s; the hour of table 8, from memory)"},
+	{"kwh", 3.6e6, "SI Brochure, prefix kilo: 1000 Wh"},
 	{"khz", 1e3, "SI Brochure, prefix kilo"},
 	{"mhz", 1e6, "SI Brochure, prefix mega = 1e6"},
 	{"ghz", 1e9, "SI Brochure, prefix giga = 1e9"},
@@ -185,7 +188,7 @@ var canonicalSymbols = []string{
 	"kb", "mb", "gb", "tb", "pb",
 	"s", "ms", "min", "h", "day",
 	"hz", "khz", "mhz", "ghz", "gsm", "kelvin",
-	"kpa", "mpa", "psi",
+	"kpa", "mpa", "psi", "j", "wh", "kwh",
 }
 
 // TestUnitSetIsCheckedAndComplete makes sure every unit's factor is checked

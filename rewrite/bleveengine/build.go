@@ -68,8 +68,9 @@ type vocabulary struct {
 // size alone (parser.TyreSize); 3 maps the dimensions and designations
 // added with it: a lamp's colour temperature, a pipe's schedule, a
 // socket's drive and size, a roller's nap, a breaker's poles, a battery's
-// cold cranking amps; 4 a pressure (psi) and a saw blade's teeth. An
-// index without the number is layout 1.
+// cold cranking amps; 4 a pressure (psi), an energy (a surge
+// protector's joules, a power station's watt-hours) and a saw blade's
+// teeth. An index without the number is layout 1.
 const layout = 4
 
 // ErrOldLayout is the error Open returns, wrapped, for an index written
