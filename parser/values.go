@@ -1529,6 +1529,12 @@ func (p *tagger) lengths(s single, from, end, first int) {
 				c = p.measure(q.start, qEnd, q, sl.Dimension, nil, nil, sl.Unit)
 				c.Inferred = true
 				c.Evidence = fmt.Sprintf("unit %s from product type %s (%s %s)", sl.Unit, p.head.Name, sl.Dimension, rangeText(sl))
+			} else if other, fits := otherLength(sl, q.num.value); ok && fits {
+				// "4x6 whiteboard": 4 is no whiteboard's width in inches,
+				// but 4 ft is.
+				c = p.measure(q.start, qEnd, q, sl.Dimension, nil, nil, other)
+				c.Inferred = true
+				c.Evidence = fmt.Sprintf("unit %s: %g %s is outside product type %s's %s %s, %g %s within it", other, q.num.value, sl.Unit, p.head.Name, sl.Dimension, rangeText(sl), q.num.value, other)
 			} else {
 				dim := "dimension"
 				if i < len(generic) {
@@ -1540,6 +1546,19 @@ func (p *tagger) lengths(s single, from, end, first int) {
 		}
 		p.add(c)
 	}
+}
+
+// otherLength is feet, when sl writes its range in inches and amount is
+// too small for it in inches but lies in it in feet: "4x6 whiteboard" is
+// 4 by 6 ft. The other way is not taken: a number too large for feet
+// ("rug 120x170") is as likely centimetres as inches.
+func otherLength(sl lexicon.Slot, amount float64) (units.Unit, bool) {
+	if sl.Unit.Symbol != "in" {
+		return units.Unit{}, false
+	}
+	ft := mustUnit("ft")
+	v, err := units.Convert(amount, ft, sl.Unit)
+	return ft, err == nil && sl.Holds(v) && !sl.Holds(amount)
 }
 
 // lengthSlot is the index, among the head product type's length slots,
