@@ -331,6 +331,9 @@ func (t *Tuner) read(q string) *reading {
 	for _, c := range p.Constraints {
 		switch {
 		case c.Excluded:
+		case c.OrGroup != 0:
+			// "navy or black", "50 or 55 inch": no one colour or amount
+			// was asked, so none measures how far a product strayed.
 		case c.Kind == parser.KindColour && r.lab == nil && c.Colour != nil && c.Colour.Lab != nil:
 			r.lab = &colour.Lab{L: c.Colour.Lab[0], A: c.Colour.Lab[1], B: c.Colour.Lab[2]}
 		case c.Kind == parser.KindMeasure && r.amount == 0 && c.Measure != nil && c.Measure.BaseAmount != nil && *c.Measure.BaseAmount > 0:
