@@ -18,18 +18,18 @@ var alternativeKinds = map[Kind]bool{
 // alternatives joins into one group (Constraint.OrGroup) the values a
 // shopper offers as alternatives: values of one kind joined by "or"
 // ("navy or black", "size 8 or 9"), a list of them with commas before
-// the "or" ("red, blue or green"), and sizes of one system joined by a
-// slash ("full/queen", "s/m"), the way a size that fits either is
-// written on a label (common practice), and a query's audiences
-// ("toddler boys", "mens and womens"), since a product is made for one
-// audience. Colours joined by a slash are
-// not alternatives: "black/white" names one two-tone colourway (common
-// practice).
+// the "or" ("red, blue or green"), sizes of one system joined by a slash
+// ("full/queen", "s/m"), the way a size that fits either is written on
+// a label (common practice), and a query's audiences ("toddler boys",
+// "mens and womens"), since a product is made for one audience. Colours
+// joined by a slash are not alternatives: "black/white" names one
+// two-tone colourway (common practice).
 //
 // A number with no unit before "or" takes the unit after it: in "12 or
-// 14 awg" both are gauges (borrowUnit); a code after "or" after a model
-// fitted is a second model ("for jx-10 or jx-12"). An exclusion before "or" covers
-// what follows it, as in English: "not red or blue" is neither.
+// 14 awg" both are gauges (borrowUnit). A code after "or" after a model
+// fitted is a second model ("for jx-10 or jx-12"). An exclusion before
+// "or" covers what follows it, as in English: "not red or blue" is
+// neither.
 func (p *tagger) alternatives() {
 	cs := p.res.Constraints
 	groups := 0

@@ -105,14 +105,16 @@ func (rw *Rewriter) newItem(r *parser.Result, i int) *item {
 	it := &item{index: i, c: r.Constraints[i], solo: -1}
 	if alts := r.Alternatives(i); len(alts) > 1 {
 		first, last := r.Constraints[alts[0]], r.Constraints[alts[len(alts)-1]]
+		most := first.Strictness
 		for _, j := range alts {
 			m := r.Constraints[j]
 			it.group = append(it.group, m)
 			if m.IsHead() {
 				it.c = m
 			}
-			it.c.Strictness = max(it.c.Strictness, m.Strictness)
+			most = max(most, m.Strictness)
 		}
+		it.c.Strictness = most // the strictest of them holds the group
 		it.c.Start, it.c.End = first.Start, last.End
 		it.c.Text = r.AlternativesText(i)
 	}
