@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"slices"
 	"strings"
+	"unicode"
 
 	"github.com/whittle-search/whittle/parser"
 	"github.com/whittle-search/whittle/rewrite/internal/textout"
@@ -139,7 +140,12 @@ func (rw *Rewriter) hardStopMessage(out *Outcome) (string, string) {
 		}
 		what := m.Text
 		if c.Measure != nil && c.Inferred && c.OrGroup == 0 && c.Measure.Unit != "" {
-			what = strings.TrimSpace(c.Text) + " " + c.Measure.Unit // "85 mm", not "85"; "3/8 in", not "0.375 in"
+			// "85 mm", not "85"; "3/8 in", not "0.375 in"; "72 in" for
+			// "72 tall", whose word names the dimension.
+			what = c.Value()
+			if !strings.ContainsFunc(c.Text, unicode.IsLetter) {
+				what = strings.TrimSpace(c.Text) + " " + c.Measure.Unit
+			}
 		}
 		s := fmt.Sprintf("%s is not carried%s", what, in)
 		if len(m.Carried) > 0 {
