@@ -179,6 +179,9 @@ func (p *tagger) value(k int) int {
 	if n, ok := p.vesaPattern(k, k+1, u.start); ok {
 		return n // "400x400 vesa"
 	}
+	if n, ok := p.fertilizerGrade(k); ok {
+		return n // "10-10-10"
+	}
 	if n, ok := p.flotationTyre(k); ok {
 		return n // "33x12.50r20"
 	}
@@ -978,6 +981,35 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	}
 	p.wordMeasure(p.units[k].start, end, q, sym, named.dimension, fmt.Sprintf("a number before %q: %s", w.text, named.what))
 	return used
+}
+
+// npk matches a fertilizer's grade, the shares of nitrogen, phosphate
+// and potash: "10-10-10", "20-5-10" (common practice).
+var npk = regexp.MustCompile(`^\d{1,2}-\d{1,2}-\d{1,2}\b`)
+
+// fertilizerGrade reads a fertilizer's grade at unit k ("fertilizer
+// 10-10-10") as a firm phrase in the product's words, where its numbers
+// were a range and a second number, weights in the fertilizer's slot.
+// It returns the extra units used, and whether it read one.
+func (p *tagger) fertilizerGrade(k int) (int, bool) {
+	if !p.headUnder("fertilizer") {
+		return 0, false
+	}
+	u := &p.units[k]
+	m := npk.FindString(p.q[u.start:])
+	if m == "" {
+		return 0, false
+	}
+	end, last := u.start+len(m), k
+	for last+1 < len(p.units) && p.units[last+1].start < end {
+		last++
+	}
+	if p.units[last].end != end {
+		return 0, false
+	}
+	p.add(Constraint{Kind: KindKeyword, Start: u.start, End: end, Name: m, Strictness: Firm,
+		Evidence: "a fertilizer's grade, its shares of nitrogen, phosphate and potash, matched in the product's words"})
+	return last - k, true
 }
 
 // cableStandard is the standard whose grades the head product type is
