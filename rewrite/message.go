@@ -88,12 +88,13 @@ func (rw *Rewriter) message(out *Outcome, items []*item, state []int, uncarried 
 
 // keptBeside is what a shopper reads of r, a drop, when the plan keeps
 // another constraint of its kind: "black brown boots" with black dropped
-// shows boots "in brown", not "in any colour". It is "" when that one
-// was relaxed too, as its own phrase says what is shown ("in colours
-// close to brown"), and r's own phrase when none is kept.
+// shows boots "in brown", not "in any colour", and a style dropped beside
+// one kept is named ("without “pockets”"), not "in any style". It is ""
+// when that one was relaxed too, as its own phrase says what is shown
+// ("in colours close to brown"), and r's own phrase when none is kept.
 func keptBeside(items []*item, state []int, r Relaxation) string {
 	lead, ok := map[parser.Kind]string{parser.KindColour: "in ", parser.KindMaterial: "in ", parser.KindPattern: "in ",
-		parser.KindSilhouette: "in ", parser.KindBrand: "from "}[r.Kind]
+		parser.KindSilhouette: "", parser.KindBrand: "from "}[r.Kind]
 	if !ok {
 		return r.Phrase
 	}
@@ -109,6 +110,10 @@ func keptBeside(items []*item, state []int, r Relaxation) string {
 	}
 	if len(kept) == 0 {
 		return r.Phrase
+	}
+	if r.Kind == parser.KindSilhouette {
+		// A style is no "in round": the one dropped is named instead.
+		return fmt.Sprintf("without “%s”", strings.ToLower(r.Text))
 	}
 	return lead + strings.Join(kept, " and ")
 }

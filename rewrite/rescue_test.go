@@ -103,6 +103,8 @@ func TestRescue(t *testing.T) {
 			count: 0, message: "size 13 or 14 is not carried in trail running shoes; sizes carried: 7, 8, 9, 10, 11, 12."},
 		{name: "one of two colours dropped", query: "black brown hiking boots", reason: "HB-1 is brown, not black too: black is dropped and brown kept, so the boots shown are in brown, not in any colour",
 			count: 1, ops: []string{"drop colour"}, message: "Showing hiking boots in brown."},
+		{name: "one of two styles dropped", query: "crew hooded sweater", reason: "both sweaters are crew, neither hooded: the style dropped is named, as \"in crew\" is no English",
+			count: 2, ops: []string{"drop silhouette"}, message: "Showing sweaters without “hooded”."},
 		{name: "two colours dropped", query: "navy lavender hiking boots", reason: "no hiking boot is near either colour: both are dropped, and the message says so once",
 			count: 1, ops: []string{"drop colour", "drop colour"}, message: "Showing hiking boots in any colour."},
 		{name: "drop an unknown word", query: "zorblax rain jacket", reason: "the unknown word is dropped; the product type stays: RJ-1 to RJ-4",
@@ -233,6 +235,19 @@ func TestWidenedTypeMessage(t *testing.T) {
 		if got := ops(o); !slices.Equal(got, tc.ops) || o.Message != tc.message {
 			t.Errorf("%s: ops %v, message %q; want %v, %q\n%s", tc.reason, got, o.Message, tc.ops, tc.message, o.Explanation)
 		}
+	}
+}
+
+// A hard stop names what the type asked for carries, and only when it
+// carries none, what the type it widens to carries: trail running shoes
+// in 7 and 8 are named so, not the running shoes' 13 beside them.
+func TestMissingNamesTheTypeAsked(t *testing.T) {
+	ps := []product{{ID: "TR-1", Type: "trail running shoe", Sizes: []string{"7", "8"}}, {ID: "RS-1", Type: "running shoe", Sizes: []string{"13"}}}
+	if o := mustRescue(t, ps, "trail running shoes size 14"); !strings.HasSuffix(o.Message, "sizes carried: 7, 8.") {
+		t.Errorf("message %q\n%s", o.Message, o.Explanation)
+	}
+	if o := mustRescue(t, ps[1:], "trail running shoes size 14"); !strings.HasSuffix(o.Message, "sizes carried: 13.") {
+		t.Errorf("with no trail running shoe: message %q\n%s", o.Message, o.Explanation)
 	}
 }
 

@@ -1197,21 +1197,25 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 		}
 		m := Missing{Constraint: cl.From, Text: text}
 		if cat != nil && slices.Contains(ListedFields, cl.Field) {
-			// Among products of the kind asked for: the head at its
-			// broadest, as the hard constraints were counted, so that a
-			// type the shop carries none of ("cargo pants") names the
-			// sizes of the type it widens to.
-			like := rest
+			// Among products of the kind asked for; when they carry no
+			// value at all (the shop has no "cargo pants"), among those
+			// of the type the head widens to, as the hard constraints
+			// were counted with it, so the sizes of trousers are named.
+			like, wide := rest, rest
 			for _, it := range s.items {
 				if it.c.Kind == parser.KindProductType && !it.c.Excluded {
 					cl := it.levels[0].clause
+					like.Clauses = append(slices.Clone(like.Clauses), *cl)
 					if b := s.broadestHead(); b != nil && it.c.IsHead() {
 						cl = b
 					}
-					like.Clauses = append(slices.Clone(like.Clauses), *cl)
+					wide.Clauses = append(slices.Clone(wide.Clauses), *cl)
 				}
 			}
 			vals, err := cat.Values(ctx, cl.Field, cl.Dimension, like)
+			if err == nil && len(vals) == 0 && wide.Key() != like.Key() {
+				vals, err = cat.Values(ctx, cl.Field, cl.Dimension, wide)
+			}
 			s.fail(err)
 			if err == nil {
 				m.Carried = carried(vals)
