@@ -1075,7 +1075,7 @@ func (p *tagger) sizeAfter(k int) int {
 	}
 	// A suit's length after its chest: "size 40r", "size 42 long", and
 	// "size 40l", whose L came as litres.
-	if c.Size.System == "numeric" && (p.headUnder("suit") || p.headUnder("blazer")) {
+	if c.Size.System == "numeric" && p.tailored() {
 		chest, length, next := c.Size.Value, "", false
 		if n := len(chest); n > 0 && (chest[n-1] == 'l' || chest[n-1] == 's') {
 			chest, length = chest[:n-1], chest[n-1:]

@@ -1079,12 +1079,20 @@ func (p *tagger) hasSlot(dim string) bool {
 	return slices.ContainsFunc(p.lex.SlotsOf(p.head), func(s lexicon.Slot) bool { return s.Dimension == dim })
 }
 
+// tailored reports whether the head is sized by chest and length, as
+// suits are: a suit, a blazer, a peacoat or an overcoat (common
+// practice in menswear).
+func (p *tagger) tailored() bool {
+	return p.headUnder("suit") || p.headUnder("blazer") || p.headUnder("peacoat") || p.headUnder("overcoat")
+}
+
 // suitSize reads a suit's chest and length, "42r", "40l", "38 short", on
 // suits and their jackets (common practice: the chest in inches, then
-// short, regular or long). The L and the S come as litres and seconds.
+// short, regular or long), and on coats tailored like them (tailored).
+// The L and the S come as litres and seconds.
 // It returns the extra units used, and whether it read one.
 func (p *tagger) suitSize(k int, q quantity) (int, bool) {
-	if !q.num.integer || q.num.value < 32 || q.num.value > 62 || !p.headUnder("suit") && !p.headUnder("blazer") {
+	if !q.num.integer || q.num.value < 32 || q.num.value > 62 || !p.tailored() {
 		return 0, false
 	}
 	u := &p.units[k]
