@@ -75,7 +75,7 @@ func (it *item) members() []parser.Constraint {
 	return []parser.Constraint{it.c}
 }
 
-// names joins the canonical names of the item's members with "or"
+// nameList joins the canonical names of the item's members with "or"
 // ("navy or black"), each through f (plural, say) when it is not nil.
 func (it *item) nameList(f func(string) string) string {
 	var names []string
