@@ -1044,14 +1044,18 @@ func (p *tagger) sizeAfter(k int) int {
 			return 0 // "letter size copy paper": the next word is no size
 		}
 	case uItem:
-		if val := v.item.Value; val != nil && val.To != nil && p.headUnder("socks") {
-			// "size 10-13" on socks. What a range that is none reports
-			// is reported when it is read as a value.
+		if val := v.item.Value; val != nil && val.To != nil && (p.headUnder("socks") || p.category == "footwear") {
+			// "size 10-13" on socks, "size 7-8" on shoes. What a range
+			// that is none reports is reported when it is read as a
+			// value.
 			reported := len(p.res.Errors)
 			from, ok1 := p.readSingle(val.From)
 			to, ok2 := p.readSingle(val.To)
 			p.res.Errors = p.res.Errors[:reported]
 			if ok1 && ok2 && p.sockSize(u.start, v.end, from, to) {
+				return 1
+			}
+			if ok1 && ok2 && p.shoeSizes(u.start, v.end, from, to) {
 				return 1
 			}
 			return 0

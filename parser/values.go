@@ -1720,6 +1720,28 @@ func (p *tagger) sockSize(start, end int, from, to single) bool {
 	return true
 }
 
+// shoeSizes reads "size 7-8" on footwear, from start to end, as a run
+// of shoe sizes, "7-8", any size in which will do: a slipper labelled
+// 7-8, or a shoe in 7, 7.5 or 8 (common practice in slippers' sizing;
+// the planner lists the sizes in the run). Both ends are whole or half
+// sizes of at most 20, the second above the first by no more than 3;
+// else it reports false.
+func (p *tagger) shoeSizes(start, end int, from, to single) bool {
+	if len(from.parts) != 1 || len(to.parts) != 1 || from.price || to.price {
+		return false
+	}
+	a, b := from.parts[0], to.parts[0]
+	half := func(q quantity) bool {
+		return !q.hasUnit && q.num.value*2 == math.Trunc(q.num.value*2) && q.num.value > 0 && q.num.value <= 20
+	}
+	if !half(a) || !half(b) || b.num.value <= a.num.value || b.num.value-a.num.value > 3 {
+		return false
+	}
+	p.add(Constraint{Kind: KindSize, Start: start, End: end, Size: &Size{System: "shoe", Value: a.num.decimal + "-" + b.num.decimal},
+		Evidence: "a run of shoe sizes: any size in it"})
+	return true
+}
+
 // forBaby reports whether the query names the baby audience.
 func (p *tagger) forBaby() bool {
 	for i := range p.units {

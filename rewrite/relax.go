@@ -398,7 +398,7 @@ func (rw *Rewriter) exactClause(i int, c parser.Constraint) Clause {
 		cl.Unit = c.Price.Currency
 		cl.Min, cl.Max = decimal(c.Price.Min), decimal(c.Price.Max)
 	case c.Size != nil:
-		cl.Dimension, cl.Values = c.Size.System, []string{c.Size.Value}
+		cl.Dimension, cl.Values = c.Size.System, shoeRun(c.Size)
 	case c.Spec != nil:
 		key, d := c.Spec.Key()
 		cl.Dimension, cl.Values = key, []string{d}
@@ -420,6 +420,27 @@ func (rw *Rewriter) exactClause(i int, c parser.Constraint) Clause {
 		cl.Values = []string{strings.ToLower(c.Text)}
 	}
 	return cl
+}
+
+// shoeRun is the sizes a size asks for: its value, and for a run of
+// shoe sizes ("7-8", as slippers are labelled) each whole and half size
+// in it too, so that a shoe in 7.5 is found as a slipper labelled 7-8
+// is.
+func shoeRun(s *parser.Size) []string {
+	out := []string{s.Value}
+	lo, hi, ok := strings.Cut(s.Value, "-")
+	if s.System != "shoe" || !ok {
+		return out
+	}
+	a, err1 := strconv.ParseFloat(lo, 64)
+	b, err2 := strconv.ParseFloat(hi, 64)
+	if err1 != nil || err2 != nil || b <= a || b-a > 3 {
+		return out
+	}
+	for v := a; v <= b+1e-9; v += 0.5 {
+		out = append(out, strconv.FormatFloat(v, 'f', -1, 64))
+	}
+	return out
 }
 
 func decimal(s *string) *float64 {

@@ -266,6 +266,18 @@ func TestModifierIsNoTypo(t *testing.T) {
 	}
 }
 
+// A run of shoe sizes ("size 7-8") finds a product labelled with the run
+// and one in any whole or half size in it; a size outside it is no
+// answer, as size is hard.
+func TestShoeSizeRun(t *testing.T) {
+	ps := []product{{ID: "SL-1", Type: "slipper", Sizes: []string{"7-8"}}, {ID: "SL-2", Type: "slipper", Sizes: []string{"7.5"}},
+		{ID: "SL-3", Type: "slipper", Sizes: []string{"9"}}}
+	o := mustRescue(t, ps, "slippers size 7-8")
+	if ids := planIDs(ps, o); !o.Exact || !slices.Equal(ids, []string{"SL-1", "SL-2"}) {
+		t.Errorf("the plan finds %v, exact %v\n%s", ids, o.Exact, o.Explanation)
+	}
+}
+
 // A flotation tyre size is a designation, hard, found by its size
 // alone as a metric one is; a tyre of the next size is no answer.
 func TestFlotationTyre(t *testing.T) {
