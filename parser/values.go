@@ -287,12 +287,12 @@ func (p *tagger) point(k int, q quantity) int {
 	if n := p.percent(k, q); n > 0 {
 		return n
 	}
-	// A version after a cable of a standard's grades ("hdmi cable 10 ft
-	// 2.1", "usb cable 3.0"): the grade, as if written after the
-	// standard's name, not a second length of 2.1 ft.
-	if std := p.cableStandard(); std != "" && !q.hasUnit && !q.num.integer && gradeCode.MatchString(std+q.num.decimal) {
+	// A version after a product of a standard's grades ("hdmi cable 10
+	// ft 2.1", "usb flash drive 3.0"): the grade, as if written after the
+	// standard's name, not a second length of 2.1 ft or capacity of 3 GB.
+	if std := p.versionStandard(); std != "" && !q.hasUnit && !q.num.integer && gradeCode.MatchString(std+q.num.decimal) {
 		p.add(Constraint{Kind: KindKeyword, Start: u.start, End: u.end, Name: std + q.num.decimal, Strictness: Firm,
-			Evidence: "a version number on the cable: its " + std + " grade, matched in the product's words"})
+			Evidence: "a version number after a product of the " + std + " standard: its grade, matched in the product's words"})
 		return 0
 	}
 	// An abrasive's grit, "220 grit": a firm phrase in the product's
@@ -1012,10 +1012,10 @@ func (p *tagger) fertilizerGrade(k int) (int, bool) {
 	return last - k, true
 }
 
-// cableStandard is the standard whose grades the head product type is
-// sold by, "hdmi" for an hdmi cable or switch and "usb" for a usb cable,
+// versionStandard is the standard whose versions the head product type
+// is sold by, "hdmi" for an hdmi cable or switch and "usb" for a usb cable,
 // drive or hub; "" for any other.
-func (p *tagger) cableStandard() string {
+func (p *tagger) versionStandard() string {
 	switch {
 	case p.headUnder("hdmi cable"), p.headUnder("hdmi switch"):
 		return "hdmi"
