@@ -320,7 +320,8 @@ func newDefinition() Definition {
 
 // quickQuant builds, without the grammar, the tree the grammar gives for
 // the commonest numeric items: a whole or decimal number with an optional
-// unit ("85", "50mm", "12 ft", "60-inch"), or whole numbers joined by x
+// unit or inch or foot mark ("85", "50mm", "12 ft", "60-inch", `36"`), or
+// whole numbers joined by x
 // with no space ("2x4", "18x18", "2x4x8"), when nothing after the item
 // extends it. TestQuickQuantAgreesWithGrammar checks that it agrees with
 // the grammar wherever it answers.
@@ -340,22 +341,24 @@ func quickQuant(toks []lexer.Token) (*Value, int) {
 	for {
 		start := n
 		n++
-		unit := ""
+		unit, mark := "", ""
 		if u := at(n); u.Type == tyUnit {
 			unit, n = u.Value, n+1
+		} else if u.Type == tyMark {
+			mark, n = u.Value, n+1 // 36", 8'
 		} else if (u.Type == tySpace || u.Type == tyDash) && at(n+1).Type == tyUnit {
 			unit, n = at(n+1).Value, n+2
 		}
 		num := &Num{Pos: pos(start), EndPos: pos(start + 1), Whole: at(start).Value}
-		parts = append(parts, &Quant{Pos: pos(start), EndPos: pos(n), Num: num, Unit: unit})
+		parts = append(parts, &Quant{Pos: pos(start), EndPos: pos(n), Num: num, Unit: unit, Mark: mark})
 		// Another part: "x" stuck between two numbers, no units.
-		if unit == "" && at(n).Value == "x" && at(n+1).Type == tyNumber && len(parts) < 3 {
+		if unit == "" && mark == "" && at(n).Value == "x" && at(n+1).Type == tyNumber && len(parts) < 3 {
 			n++
 			continue
 		}
 		break
 	}
-	if len(parts) > 1 && parts[len(parts)-1].Unit != "" {
+	if last := parts[len(parts)-1]; len(parts) > 1 && (last.Unit != "" || last.Mark != "") {
 		return nil, 0
 	}
 	switch next := at(n); next.Type {
