@@ -320,8 +320,8 @@ func newDefinition() Definition {
 
 // quickQuant builds, without the grammar, the tree the grammar gives for
 // the commonest numeric items: a whole or decimal number with an optional
-// unit or inch or foot mark ("85", "50mm", "12 ft", "60-inch", `36"`), or
-// whole numbers joined by x
+// unit or inch or foot mark ("85", "50mm", "12 ft", "60-inch", `36"`), a
+// fraction with them ("3/4", "1/2 in"), or whole numbers joined by x
 // with no space ("2x4", "18x18", "2x4x8"), when nothing after the item
 // extends it. TestQuickQuantAgreesWithGrammar checks that it agrees with
 // the grammar wherever it answers.
@@ -341,6 +341,12 @@ func quickQuant(toks []lexer.Token) (*Value, int) {
 	for {
 		start := n
 		n++
+		var frac *Frac
+		if len(parts) == 0 && at(n).Type == tySlash && at(n+1).Type == tyNumber {
+			// "3/4", "1/2 in": a fraction, the first part only.
+			frac = &Frac{Pos: pos(start), EndPos: pos(start + 3), Num: at(start).Value, Den: at(start + 2).Value}
+			n += 2
+		}
 		unit, mark := "", ""
 		if u := at(n); u.Type == tyUnit {
 			unit, n = u.Value, n+1
@@ -350,9 +356,12 @@ func quickQuant(toks []lexer.Token) (*Value, int) {
 			unit, n = at(n+1).Value, n+2
 		}
 		num := &Num{Pos: pos(start), EndPos: pos(start + 1), Whole: at(start).Value}
+		if frac != nil {
+			num = &Num{Pos: pos(start), EndPos: pos(start + 3), Only: frac}
+		}
 		parts = append(parts, &Quant{Pos: pos(start), EndPos: pos(n), Num: num, Unit: unit, Mark: mark})
 		// Another part: "x" stuck between two numbers, no units.
-		if unit == "" && mark == "" && at(n).Value == "x" && at(n+1).Type == tyNumber && len(parts) < 3 {
+		if frac == nil && unit == "" && mark == "" && at(n).Value == "x" && at(n+1).Type == tyNumber && len(parts) < 3 {
 			n++
 			continue
 		}

@@ -94,7 +94,8 @@ func TestQuickQuantAgreesWithGrammar(t *testing.T) {
 	for _, q := range []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
 		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m",
 		"2x4", "2x4x8", "18x18 pillow", "2x4x8x10", "2x4 ft", "2x4mm", "2 x 4", "2x4-6", "32x30 jeans", "2x4\"", "2x4 x 6", "1.5x2", "2x4,", "2x4 x",
-		"36\"", "36\" rug", "8' ladder", "24\"w", "24\"x36\"", "3\" candles", "10' x 12'", "5'x8'", "36\" x 48", "2.5\""} {
+		"36\"", "36\" rug", "8' ladder", "24\"w", "24\"x36\"", "3\" candles", "10' x 12'", "5'x8'", "36\" x 48", "2.5\"",
+		"3/4", "1/2 in", "3/4\"", "1/2 x 10", "3/4x10", "12/2 wire", "1/0", "1 1/2", "3/4-10", "1/2/3", "5/8 inch hose", "1/2-13"} {
 		toks := Tokens(q)
 		quick, n := quickQuant(toks)
 		if n == 0 {
