@@ -267,6 +267,9 @@ func ParseItem(toks []lexer.Token) (*Item, int) {
 			it.Tyre, it.Value = n.Tyre, n.Value
 		}
 	case t.Type == tyCur:
+		if v, n := quickPrice(toks); n > 0 {
+			return &Item{Value: v}, n
+		}
 		var v *priceValue
 		if v, end, ok = run(valueParser, toks); ok {
 			it.Value = (*Value)(v)
@@ -389,6 +392,53 @@ func quickQuant(toks []lexer.Token) (*Value, int) {
 	d := &Dims{Pos: pos(0), EndPos: end, Parts: parts}
 	return &Value{Pos: pos(0), EndPos: end, From: &Single{Pos: pos(0), EndPos: end, Dims: d}}, n
 }
+
+// quickPrice is a fast path past participle for the commonest price, a
+// currency sign and a number ("$90", "€ 35"), when nothing after it
+// extends it (a range, a bound word, a unit). It builds the tree
+// valueParser would; TestQuickPriceAgreesWithGrammar checks it.
+func quickPrice(toks []lexer.Token) (*Value, int) {
+	at := func(i int) lexer.Token {
+		if i < len(toks) {
+			return toks[i]
+		}
+		return toks[len(toks)-1]
+	}
+	if at(0).Type != tyCur {
+		return nil, 0
+	}
+	n := 1
+	if at(n).Type == tySpace {
+		n++
+	}
+	if at(n).Type != tyNumber {
+		return nil, 0
+	}
+	num := n
+	n++
+	switch next := at(n); next.Type {
+	case lexer.EOF:
+	case tySpace:
+		switch after := at(n + 1); after.Type {
+		case lexer.EOF, tyPunct:
+		case tyWord:
+			if extenders[after.Value] || priceBounds[after.Value] {
+				return nil, 0
+			}
+		default:
+			return nil, 0
+		}
+	default:
+		return nil, 0
+	}
+	pos := func(i int) lexer.Position { return at(i).Pos }
+	end := pos(n)
+	m := &Money{Pos: pos(0), EndPos: end, Symbol: at(0).Value, Amount: &Amount{Pos: pos(num), EndPos: end, Number: at(num).Value}}
+	return &Value{Pos: pos(0), EndPos: end, From: &Single{Pos: pos(0), EndPos: end, Money: m}}, n
+}
+
+// priceBounds are the words that may bound a price after it.
+var priceBounds = map[string]bool{"or": true, "and": true, "max": true, "min": true, "maximum": true, "minimum": true, "to": true}
 
 // extenders are words that may continue a numeric item after a space.
 var extenders = map[string]bool{

@@ -90,6 +90,33 @@ func TestTokenKinds(t *testing.T) {
 }
 
 // quickQuant answers only where the grammar gives the same tree.
+func TestQuickPriceAgreesWithGrammar(t *testing.T) {
+	answered := 0
+	for _, q := range []string{"$90", "$90 dress", "€ 35", "$1,299", "$19.99 lens", "$90 max", "$20-$30", "$20 to $30", "$90 or less",
+		"$5 usd", "$90,", "£60 shoes", "$ 40", "$90 and up", "$90+", "$90 x", "$90 off"} {
+		toks := Tokens(q)
+		quick, n := quickPrice(toks)
+		if n == 0 {
+			continue
+		}
+		answered++
+		full, end, ok := run(valueParser, toks)
+		if !ok {
+			t.Errorf("%q: quick path answered, grammar did not", q)
+			continue
+		}
+		if diff := cmp.Diff((*Value)(full), quick); diff != "" {
+			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
+		}
+		if qn := toks[n].Pos.Offset; qn != end {
+			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
+		}
+	}
+	if answered < 6 {
+		t.Errorf("the quick path answered %d of the cases; the check checks little", answered)
+	}
+}
+
 func TestQuickQuantAgreesWithGrammar(t *testing.T) {
 	for _, q := range []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
 		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m",
