@@ -281,6 +281,9 @@ func ParseItem(toks []lexer.Token) (*Item, int) {
 	case t.Value == "between":
 		it.Between, end, ok = run(betweenParser, toks)
 	case t.Type == tyOp || itemWords[t.Value]:
+		if c, n := quickCompare(toks); n > 0 {
+			return &Item{Compare: c}, n
+		}
 		if it.Compare, end, ok = run(compareParser, toks); !ok {
 			it.Code, end, ok = run(codeParser, toks)
 		}
@@ -435,6 +438,28 @@ func quickPrice(toks []lexer.Token) (*Value, int) {
 	end := pos(n)
 	m := &Money{Pos: pos(0), EndPos: end, Symbol: at(0).Value, Amount: &Amount{Pos: pos(num), EndPos: end, Number: at(num).Value}}
 	return &Value{Pos: pos(0), EndPos: end, From: &Single{Pos: pos(0), EndPos: end, Money: m}}, n
+}
+
+// quickOps are the comparison words of one word that quickCompare reads.
+var quickOps = map[string]bool{"under": true, "below": true, "over": true, "above": true, "upto": true, "within": true}
+
+// quickCompare is a fast path past participle for a comparison word of
+// one word and a space before a price or a quantity the fast paths read
+// ("under $90", "over 50"). It builds the tree compareParser would;
+// TestQuickCompareAgreesWithGrammar checks it.
+func quickCompare(toks []lexer.Token) (*Compare, int) {
+	if len(toks) < 3 || toks[0].Type != tyWord || !quickOps[toks[0].Value] || toks[1].Type != tySpace {
+		return nil, 0
+	}
+	rest := toks[2:]
+	v, n := quickPrice(rest)
+	if n == 0 {
+		v, n = quickQuant(rest)
+	}
+	if n == 0 || v.To != nil || v.Post != "" {
+		return nil, 0
+	}
+	return &Compare{Pos: toks[0].Pos, EndPos: v.EndPos, Op: toks[0].Value, Val: v.From}, n + 2
 }
 
 // priceBounds are the words that may bound a price after it.

@@ -117,6 +117,33 @@ func TestQuickPriceAgreesWithGrammar(t *testing.T) {
 	}
 }
 
+func TestQuickCompareAgreesWithGrammar(t *testing.T) {
+	answered := 0
+	for _, q := range []string{"under $90", "under $90 dress", "over 50", "below 20 lbs", "under 1k", "under $20-$30", "under £60 shoes",
+		"above 3 ft", "within 5 miles", "under 2x4", "under 90 or less", "upto $40", "over $1,299 tv", "under $5 usd", "under 1/2"} {
+		toks := Tokens(q)
+		quick, n := quickCompare(toks)
+		if n == 0 {
+			continue
+		}
+		answered++
+		full, end, ok := run(compareParser, toks)
+		if !ok {
+			t.Errorf("%q: quick path answered, grammar did not", q)
+			continue
+		}
+		if diff := cmp.Diff(full, quick); diff != "" {
+			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
+		}
+		if qn := toks[n].Pos.Offset; qn != end {
+			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
+		}
+	}
+	if answered < 6 {
+		t.Errorf("the quick path answered %d of the cases; the check checks little", answered)
+	}
+}
+
 func TestQuickQuantAgreesWithGrammar(t *testing.T) {
 	for _, q := range []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
 		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m",
