@@ -376,19 +376,7 @@ func quickQuant(toks []lexer.Token) (*Value, int) {
 	if last := parts[len(parts)-1]; len(parts) > 1 && (last.Unit != "" || last.Mark != "") {
 		return nil, 0
 	}
-	switch next := at(n); next.Type {
-	case lexer.EOF:
-	case tySpace:
-		switch after := at(n + 1); after.Type {
-		case lexer.EOF, tyQuote, tyPunct:
-		case tyWord:
-			if extenders[after.Value] {
-				return nil, 0
-			}
-		default:
-			return nil, 0
-		}
-	default:
+	if !endsHere(at(n), at(n+1), true, extenders) {
 		return nil, 0
 	}
 	end := pos(n)
@@ -419,19 +407,7 @@ func quickPrice(toks []lexer.Token) (*Value, int) {
 	}
 	num := n
 	n++
-	switch next := at(n); next.Type {
-	case lexer.EOF:
-	case tySpace:
-		switch after := at(n + 1); after.Type {
-		case lexer.EOF, tyPunct:
-		case tyWord:
-			if extenders[after.Value] || priceBounds[after.Value] {
-				return nil, 0
-			}
-		default:
-			return nil, 0
-		}
-	default:
+	if !endsHere(at(n), at(n+1), false, extenders) || at(n).Type == tySpace && priceBounds[at(n+1).Value] {
 		return nil, 0
 	}
 	pos := func(i int) lexer.Position { return at(i).Pos }
@@ -460,6 +436,27 @@ func quickCompare(toks []lexer.Token) (*Compare, int) {
 		return nil, 0
 	}
 	return &Compare{Pos: toks[0].Pos, EndPos: v.EndPos, Op: toks[0].Value, Val: v.From}, n + 2
+}
+
+// endsHere reports whether an item the fast paths read ends before next
+// (and after, the token after it): at the end, or before a space and
+// then the end, a punctuation mark, a quote when quote is set, or a word
+// that is none of extend, the words that may continue it.
+func endsHere(next, after lexer.Token, quote bool, extend map[string]bool) bool {
+	switch next.Type {
+	case lexer.EOF:
+		return true
+	case tySpace:
+		switch after.Type {
+		case lexer.EOF, tyPunct:
+			return true
+		case tyQuote:
+			return quote
+		case tyWord:
+			return !extend[after.Value]
+		}
+	}
+	return false
 }
 
 // priceBounds are the words that may bound a price after it.
