@@ -1204,12 +1204,12 @@ func (rw *Rewriter) missing(ctx context.Context, s *search, hard Plan) {
 			like, wide := rest, rest
 			for _, it := range s.items {
 				if it.c.Kind == parser.KindProductType && !it.c.Excluded {
-					cl := it.levels[0].clause
-					like.Clauses = append(slices.Clone(like.Clauses), *cl)
+					typ := it.levels[0].clause
+					like.Clauses = append(slices.Clone(like.Clauses), *typ)
 					if b := s.broadestHead(); b != nil && it.c.IsHead() {
-						cl = b
+						typ = b
 					}
-					wide.Clauses = append(slices.Clone(wide.Clauses), *cl)
+					wide.Clauses = append(slices.Clone(wide.Clauses), *typ)
 				}
 			}
 			vals, err := cat.Values(ctx, cl.Field, cl.Dimension, like)
