@@ -89,83 +89,69 @@ func TestTokenKinds(t *testing.T) {
 	}
 }
 
+// agrees checks a fast path against the grammar it stands in for: on
+// every case it answers, the grammar must give the same tree and end at
+// the same token. It fails too when the fast path answers fewer than
+// least of the cases, as the check would then check little.
+func agrees(t *testing.T, cases []string, least int, quick func([]lexer.Token) (any, int), full func([]lexer.Token) (any, int, bool)) {
+	t.Helper()
+	answered := 0
+	for _, q := range cases {
+		toks := Tokens(q)
+		got, n := quick(toks)
+		if n == 0 {
+			continue
+		}
+		answered++
+		want, end, ok := full(toks)
+		if !ok {
+			t.Errorf("%q: quick path answered, grammar did not", q)
+			continue
+		}
+		if diff := cmp.Diff(want, got); diff != "" {
+			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
+		}
+		if qn := toks[n].Pos.Offset; qn != end {
+			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
+		}
+	}
+	if answered < least {
+		t.Errorf("the quick path answered %d of the cases; the check checks little", answered)
+	}
+}
+
 // quickQuant answers only where the grammar gives the same tree.
-func TestQuickPriceAgreesWithGrammar(t *testing.T) {
-	answered := 0
-	for _, q := range []string{"$90", "$90 dress", "€ 35", "$1,299", "$19.99 lens", "$90 max", "$20-$30", "$20 to $30", "$90 or less",
-		"$5 usd", "$90,", "£60 shoes", "$ 40", "$90 and up", "$90+", "$90 x", "$90 off"} {
-		toks := Tokens(q)
-		quick, n := quickPrice(toks)
-		if n == 0 {
-			continue
-		}
-		answered++
-		full, end, ok := run(valueParser, toks)
-		if !ok {
-			t.Errorf("%q: quick path answered, grammar did not", q)
-			continue
-		}
-		if diff := cmp.Diff((*Value)(full), quick); diff != "" {
-			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
-		}
-		if qn := toks[n].Pos.Offset; qn != end {
-			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
-		}
-	}
-	if answered < 6 {
-		t.Errorf("the quick path answered %d of the cases; the check checks little", answered)
-	}
-}
-
-func TestQuickCompareAgreesWithGrammar(t *testing.T) {
-	answered := 0
-	for _, q := range []string{"under $90", "under $90 dress", "over 50", "below 20 lbs", "under 1k", "under $20-$30", "under £60 shoes",
-		"above 3 ft", "within 5 miles", "under 2x4", "under 90 or less", "upto $40", "over $1,299 tv", "under $5 usd", "under 1/2"} {
-		toks := Tokens(q)
-		quick, n := quickCompare(toks)
-		if n == 0 {
-			continue
-		}
-		answered++
-		full, end, ok := run(compareParser, toks)
-		if !ok {
-			t.Errorf("%q: quick path answered, grammar did not", q)
-			continue
-		}
-		if diff := cmp.Diff(full, quick); diff != "" {
-			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
-		}
-		if qn := toks[n].Pos.Offset; qn != end {
-			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
-		}
-	}
-	if answered < 6 {
-		t.Errorf("the quick path answered %d of the cases; the check checks little", answered)
-	}
-}
-
 func TestQuickQuantAgreesWithGrammar(t *testing.T) {
-	for _, q := range []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
+	agrees(t, []string{"85", "85 lens", "50mm", "50 mm", "60-inch tv", "12 ft long", "3 1/2", "2 x 4", "20 to 30",
 		"5 usd", "5 max", "5$", "5\"", "8w", "12v battery", "3.5 l", "12 r17", "7qt pot", "64gb card", "5 m",
 		"2x4", "2x4x8", "18x18 pillow", "2x4x8x10", "2x4 ft", "2x4mm", "2 x 4", "2x4-6", "32x30 jeans", "2x4\"", "2x4 x 6", "1.5x2", "2x4,", "2x4 x",
 		"36\"", "36\" rug", "8' ladder", "24\"w", "24\"x36\"", "3\" candles", "10' x 12'", "5'x8'", "36\" x 48", "2.5\"",
-		"3/4", "1/2 in", "3/4\"", "1/2 x 10", "3/4x10", "12/2 wire", "1/0", "1 1/2", "3/4-10", "1/2/3", "5/8 inch hose", "1/2-13"} {
-		toks := Tokens(q)
-		quick, n := quickQuant(toks)
-		if n == 0 {
-			continue
-		}
-		var full *numeric
-		full, end, ok := run(numericParser, toks)
-		if !ok || full.Value == nil {
-			t.Errorf("%q: quick path answered, grammar did not", q)
-			continue
-		}
-		if diff := cmp.Diff(full.Value, quick); diff != "" {
-			t.Errorf("%q: quick path differs from grammar (-grammar +quick):\n%s", q, diff)
-		}
-		if qn := toks[n].Pos.Offset; qn != end {
-			t.Errorf("%q: quick path ends at %d, grammar at %d", q, qn, end)
-		}
-	}
+		"3/4", "1/2 in", "3/4\"", "1/2 x 10", "3/4x10", "12/2 wire", "1/0", "1 1/2", "3/4-10", "1/2/3", "5/8 inch hose", "1/2-13"}, 20,
+		func(toks []lexer.Token) (any, int) { v, n := quickQuant(toks); return v, n },
+		func(toks []lexer.Token) (any, int, bool) {
+			full, end, ok := run(numericParser, toks)
+			if !ok || full.Value == nil {
+				return nil, 0, false
+			}
+			return full.Value, end, true
+		})
+}
+
+// quickPrice answers only where the grammar gives the same tree.
+func TestQuickPriceAgreesWithGrammar(t *testing.T) {
+	agrees(t, []string{"$90", "$90 dress", "€ 35", "$1,299", "$19.99 lens", "$90 max", "$20-$30", "$20 to $30", "$90 or less",
+		"$5 usd", "$90,", "£60 shoes", "$ 40", "$90 and up", "$90+", "$90 x", "$90 off"}, 6,
+		func(toks []lexer.Token) (any, int) { v, n := quickPrice(toks); return v, n },
+		func(toks []lexer.Token) (any, int, bool) {
+			full, end, ok := run(valueParser, toks)
+			return (*Value)(full), end, ok
+		})
+}
+
+// quickCompare answers only where the grammar gives the same tree.
+func TestQuickCompareAgreesWithGrammar(t *testing.T) {
+	agrees(t, []string{"under $90", "under $90 dress", "over 50", "below 20 lbs", "under 1k", "under $20-$30", "under £60 shoes",
+		"above 3 ft", "within 5 miles", "under 2x4", "under 90 or less", "upto $40", "over $1,299 tv", "under $5 usd", "under 1/2"}, 6,
+		func(toks []lexer.Token) (any, int) { c, n := quickCompare(toks); return c, n },
+		func(toks []lexer.Token) (any, int, bool) { return run(compareParser, toks) })
 }
