@@ -968,11 +968,7 @@ func (p *tagger) namedMeasure(k int, q quantity) int {
 	if named.holds != nil && !named.holds(amount) {
 		return 0
 	}
-	slotted := named.anywhere || p.head == nil && named.dimension == "drive_size"
-	for _, sl := range p.lex.SlotsOf(p.head) {
-		slotted = slotted || sl.Dimension == named.dimension
-	}
-	if !slotted {
+	if !named.anywhere && !(p.head == nil && named.dimension == "drive_size") && !p.hasSlot(named.dimension) {
 		return 0
 	}
 	sym := named.unit

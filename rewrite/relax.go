@@ -567,7 +567,7 @@ func (rw *Rewriter) widenMeasure(it *item, e Effective) []widening {
 	count := m.Quantity == "count"
 	// A count widened by a tolerance that holds no other whole number
 	// (3 seats ± 10%) matches what it matched, and is not counted.
-	if t := e.MeasureTolerance; t > 0 && (!count || math.Floor(v*(1+t)) > v || math.Ceil(v*(1-t)) < v) {
+	if t := e.MeasureTolerance; t > 0 && (!count || reachesWhole(v, v*(1-t), v*(1+t))) {
 		cl := rw.exactClause(it.index, it.c)
 		lo, hi := v*(1-t), v*(1+t)
 		cl.Min, cl.Max, cl.Near = &lo, &hi, &v
@@ -626,6 +626,13 @@ func (rw *Rewriter) knownWord(c parser.Constraint) bool {
 	return false
 }
 
+// reachesWhole reports whether lo..hi, a count v widened, holds a whole
+// number other than v: 3 seats ± 10% does not, so widening it matches
+// what it matched.
+func reachesWhole(v, lo, hi float64) bool {
+	return math.Floor(hi) > v || math.Ceil(lo) < v
+}
+
 // widenMeasures widens each measure of an or-group ("50 or 55 inch")
 // by the policy's tolerance, as widenMeasure widens one: the first in
 // the clause's own bounds, the others in Also. It is nil when the
@@ -649,7 +656,7 @@ func (rw *Rewriter) widenMeasures(it *item, e Effective) []widening {
 		}
 		// A count widened by a tolerance that holds no other whole
 		// number matches what it matched (widenMeasure).
-		reaches = reaches || !count || math.Floor(hi) > v || math.Ceil(lo) < v
+		reaches = reaches || !count || reachesWhole(v, lo, hi)
 		if count {
 			amounts = append(amounts, strconv.FormatFloat(v, 'f', -1, 64))
 		} else {
